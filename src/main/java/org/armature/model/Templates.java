@@ -1,0 +1,273 @@
+package org.armature.model;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Builds the four ready stages and their variants, laid out on the grid as clean schematics.
+ *
+ * <p>Values are typical figures for generic part classes (see {@link PartKind}); the relay is a
+ * generic 12 V, 400 Ω PCB relay. Every template names the nets {@code pin}, {@code control},
+ * {@code switch}, {@code supply} and {@code gnd} with test points.
+ */
+public final class Templates {
+
+    private Templates() {
+    }
+
+    /** The stage the application opens with: low-side NPN with a freewheeling diode. */
+    public static Stage defaultStage() {
+        return build(StageTemplate.LOW_SIDE_NPN, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT);
+    }
+
+    /** A template with its usual suppressor (a diode; the clamp diode for the Darlington channel). */
+    public static Stage build(StageTemplate template) {
+        return build(template, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT);
+    }
+
+    /**
+     * Builds a template variant.
+     *
+     * @param template which stage
+     * @param suppressor what goes across the coil (for the Darlington channel, {@code DIODE} uses the
+     *     channel's own clamp diode through its common pin and {@code DIODE_ZENER} puts a zener in the
+     *     common line)
+     * @param drive high-side drive variant; ignored by the other templates
+     */
+    public static Stage build(StageTemplate template, Suppressor suppressor, HighSideDrive drive) {
+        Builder b = new Builder();
+        switch (template) {
+            case LOW_SIDE_NPN -> lowSide(b, PartKind.NPN, suppressor);
+            case LOW_SIDE_NMOS -> lowSide(b, PartKind.NMOS, suppressor);
+            case DARLINGTON_CHANNEL -> darlington(b, suppressor);
+            case HIGH_SIDE_PNP -> highSide(b, suppressor, drive);
+            default -> throw new IllegalStateException("unknown template " + template);
+        }
+        String name = template.title() + ", " + suppressor.id().replace('-', ' ')
+                + (template == StageTemplate.HIGH_SIDE_PNP && drive == HighSideDrive.DIRECT ? ", direct drive" : "");
+        return new Stage(name, describe(template, drive), b.parts, b.wires, b.tps, Conditions.DEFAULT);
+    }
+
+    private static String describe(StageTemplate t, HighSideDrive drive) {
+        return switch (t) {
+            case LOW_SIDE_NPN -> "3.3 V logic pin switching a 12 V relay through a low-side NPN.";
+            case LOW_SIDE_NMOS -> "3.3 V logic pin switching a 12 V relay through a logic-level N-MOSFET.";
+            case DARLINGTON_CHANNEL -> "5 V logic pin switching a 12 V relay through one Darlington-array channel.";
+            case HIGH_SIDE_PNP -> drive == HighSideDrive.DIRECT
+                    ? "3.3 V pin driving a high-side PNP directly: it cannot turn off with a 12 V coil supply."
+                    : "3.3 V logic pin switching a 12 V relay through a high-side PNP and an NPN level shift.";
+        };
+    }
+
+    private static void lowSide(Builder b, PartKind switchKind, Suppressor s) {
+        boolean mos = switchKind == PartKind.NMOS;
+        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set("volts", 12).set("tolerancePercent", 10);
+        relay(b, 20, 6);
+        b.wire(20, 0, 20, 4);
+        suppressorAcrossCoil(b, s, 20, 4, 8);
+        b.part("Q1", switchKind, Placement.at(19, 12));
+        b.wire(20, 8, 20, 10);
+        b.part("GND1", PartKind.GROUND, Placement.at(20, 16));
+        b.wire(20, 14, 20, 16);
+        b.part("R1", PartKind.RESISTOR, Placement.at(12, 12).rotated(90)).set("resistanceOhms", mos ? 100 : 1000);
+        b.wire(14, 12, 17, 12);
+        pin33(b, 6, 12);
+        b.wire(8, 12, 10, 12);
+        b.part("R2", PartKind.RESISTOR, Placement.at(15, 16)).set("resistanceOhms", mos ? 100_000 : 10_000);
+        b.wire(15, 12, 15, 14);
+        b.part("GND2", PartKind.GROUND, Placement.at(15, 18));
+        contactSide(b, 20, 6);
+        b.tp("pin", "U1", "out").tp("control", "Q1", mos ? "g" : "b").tp("switch", "Q1", mos ? "d" : "c")
+                .tp("supply", "V1", "p");
+    }
+
+    private static void darlington(Builder b, Suppressor s) {
+        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set("volts", 12).set("tolerancePercent", 10);
+        relay(b, 20, 6);
+        b.wire(20, 0, 20, 4);
+        b.part("U2", PartKind.DARLINGTON, Placement.at(19, 13));
+        b.wire(20, 8, 20, 10);
+        b.part("GND1", PartKind.GROUND, Placement.at(20, 18));
+        b.wire(20, 16, 20, 18);
+        if (s == Suppressor.DIODE) {
+            b.wire(22, 10, 22, 2);
+            b.wire(22, 2, 20, 2);
+        } else if (s == Suppressor.DIODE_ZENER) {
+            // zener in the common line: COM -> zener cathode ... anode -> supply
+            b.part("D2", PartKind.ZENER, Placement.at(22, 5)).set("breakdownVolts", 12);
+            b.wire(22, 10, 22, 7);
+            b.wire(22, 3, 22, 2);
+            b.wire(22, 2, 20, 2);
+        } else {
+            suppressorAcrossCoil(b, s, 20, 4, 8);
+        }
+        b.part("R1", PartKind.RESISTOR, Placement.at(12, 13).rotated(90)).set("resistanceOhms", 100);
+        b.wire(14, 13, 16, 13);
+        b.part("U1", PartKind.DRIVE_PIN, Placement.at(6, 13)).set("highVolts", 5.05).set("outputResistanceOhms", 50)
+                .set("pinCurrentLimitAmps", 0.020).set("packageCurrentLimitAmps", 0.2);
+        b.wire(8, 13, 10, 13);
+        contactSide(b, 20, 6);
+        b.tp("pin", "U1", "out").tp("control", "U2", "in").tp("switch", "U2", "out").tp("supply", "V1", "p");
+    }
+
+    private static void highSide(Builder b, Suppressor s, HighSideDrive drive) {
+        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set("volts", 12).set("tolerancePercent", 10);
+        b.part("Q1", PartKind.PNP, Placement.at(19, 4));
+        b.wire(20, 0, 20, 2);
+        relay(b, 20, 10);
+        b.wire(20, 6, 20, 8);
+        b.part("GND1", PartKind.GROUND, Placement.at(20, 14));
+        b.wire(20, 12, 20, 14);
+        suppressorAcrossCoil(b, s, 20, 8, 12);
+        if (drive == HighSideDrive.DIRECT) {
+            b.part("R2", PartKind.RESISTOR, Placement.at(15, 2)).set("resistanceOhms", 10_000);
+            b.wire(15, 0, 20, 0);
+            b.part("R1", PartKind.RESISTOR, Placement.at(11, 4).rotated(90)).set("resistanceOhms", 2200);
+            b.wire(13, 4, 17, 4);
+            pin33(b, 5, 4);
+            b.wire(7, 4, 9, 4);
+        } else {
+            b.part("R3", PartKind.RESISTOR, Placement.at(15, 2)).set("resistanceOhms", 10_000);
+            b.wire(15, 0, 20, 0);
+            b.part("R4", PartKind.RESISTOR, Placement.at(12, 4).rotated(90)).set("resistanceOhms", 2200);
+            b.wire(14, 4, 17, 4);
+            b.part("Q2", PartKind.NPN, Placement.at(9, 8));
+            b.wire(10, 4, 10, 6);
+            b.part("GND2", PartKind.GROUND, Placement.at(10, 12));
+            b.wire(10, 10, 10, 12);
+            b.part("R1", PartKind.RESISTOR, Placement.at(3, 8).rotated(90)).set("resistanceOhms", 4700);
+            b.wire(5, 8, 7, 8);
+            pin33(b, -3, 8);
+            b.wire(-1, 8, 1, 8);
+            b.part("R2", PartKind.RESISTOR, Placement.at(6, 12)).set("resistanceOhms", 47_000);
+            b.wire(6, 8, 6, 10);
+            b.part("GND3", PartKind.GROUND, Placement.at(6, 14));
+        }
+        contactSide(b, 20, 10);
+        b.tp("pin", "U1", "out").tp("control", "Q1", "b").tp("switch", "Q1", "c").tp("supply", "V1", "p");
+    }
+
+    private static void pin33(Builder b, int x, int y) {
+        b.part("U1", PartKind.DRIVE_PIN, Placement.at(x, y)).set("highVolts", 3.5).set("outputResistanceOhms", 75);
+    }
+
+    private static void relay(Builder b, int x, int y) {
+        b.part("K1", PartKind.RELAY, Placement.at(x, y))
+                .set("ratedVolts", 12).set("coilResistanceOhms", 400)
+                .set("mustOperateVolts", 9.0).set("mustReleaseVolts", 1.2)
+                .set("inductanceReleasedHenries", 1.2).set("inductanceAttractedHenries", 2.4);
+    }
+
+    /** Contact side: a 24 V rail through the normally-open contact to a lamp. */
+    private static void contactSide(Builder b, int coilX, int coilY) {
+        int comX = coilX + 5;
+        int noX = coilX + 6;
+        b.part("V2", PartKind.SUPPLY, Placement.at(comX, coilY - 5)).set("volts", 24).set("tolerancePercent", 10);
+        b.wire(comX, coilY - 5, comX, coilY - 2);
+        b.part("E1", PartKind.LOAD, Placement.at(noX, coilY + 6)).set("resistanceOhms", 48).set("ratedWatts", 12)
+                .option("loadKind", "lamp");
+        b.wire(noX, coilY + 2, noX, coilY + 4);
+        b.part(b.nextRef("GND"), PartKind.GROUND, Placement.at(noX, coilY + 10));
+        b.wire(noX, coilY + 8, noX, coilY + 10);
+    }
+
+    /**
+     * Places the chosen suppressor across a vertical coil at {@code x} from {@code top} (the end at
+     * the higher potential when on) to {@code bottom}.
+     */
+    private static void suppressorAcrossCoil(Builder b, Suppressor s, int x, int top, int bottom) {
+        int mid = (top + bottom) / 2;
+        switch (s) {
+            case NONE -> { }
+            case DIODE -> {
+                b.part("D1", PartKind.DIODE, Placement.at(x - 4, mid).rotated(180));
+                b.wire(x - 4, top, x, top);
+                b.wire(x - 4, bottom, x, bottom);
+            }
+            case TVS -> {
+                b.part("D1", PartKind.TVS, Placement.at(x - 4, mid)).set("breakdownVolts", 24);
+                b.wire(x - 4, top, x, top);
+                b.wire(x - 4, bottom, x, bottom);
+            }
+            case RESISTOR -> {
+                b.part(b.nextRef("R"), PartKind.RESISTOR, Placement.at(x - 4, mid)).set("resistanceOhms", 1200)
+                        .set("powerRatingWatts", 0.5);
+                b.wire(x - 4, top, x, top);
+                b.wire(x - 4, bottom, x, bottom);
+            }
+            case DIODE_ZENER, RC -> {
+                // series pair: lower part vertical at x-6, upper part horizontal one row above the coil top
+                if (s == Suppressor.DIODE_ZENER) {
+                    b.part("D1", PartKind.DIODE, Placement.at(x - 6, mid).rotated(180));
+                    // zener: cathode (left) meets the diode's cathode, anode (right) to the supply end
+                    b.part("D2", PartKind.ZENER, Placement.at(x - 3, top - 2).rotated(90)).set("breakdownVolts", 12);
+                } else {
+                    b.part("C1", PartKind.CAPACITOR, Placement.at(x - 6, mid)).set("capacitanceFarads", 100e-9);
+                    b.part(b.nextRef("R"), PartKind.RESISTOR, Placement.at(x - 3, top - 2).rotated(90))
+                            .set("resistanceOhms", 470).set("powerRatingWatts", 0.5);
+                }
+                b.wire(x - 6, bottom, x, bottom);
+                b.wire(x - 6, top, x - 6, top - 2);
+                b.wire(x - 6, top - 2, x - 5, top - 2);
+                b.wire(x - 1, top - 2, x, top - 2);
+            }
+            default -> throw new IllegalStateException("unknown suppressor " + s);
+        }
+    }
+
+    /** Collects parts, wires and test points while a template is laid out. */
+    private static final class Builder {
+        final List<Part> parts = new ArrayList<>();
+        final List<Wire> wires = new ArrayList<>();
+        final List<TestPoint> tps = new ArrayList<>();
+
+        PartBuilder part(String ref, PartKind kind, Placement placement) {
+            return new PartBuilder(this, parts.size(), Part.of(ref, kind, placement));
+        }
+
+        void wire(int x1, int y1, int x2, int y2) {
+            wires.add(Wire.of(x1, y1, x2, y2));
+        }
+
+        Builder tp(String net, String ref, String pin) {
+            tps.add(new TestPoint(net, ref, pin));
+            return this;
+        }
+
+        String nextRef(String prefix) {
+            for (int i = 1; ; i++) {
+                String c = prefix + i;
+                if (parts.stream().noneMatch(p -> p.ref().equals(c)) && !reserved(c)) {
+                    return c;
+                }
+            }
+        }
+
+        private static boolean reserved(String ref) {
+            // R1..R4 are the drive network's in the templates that use them
+            return ref.equals("R1") || ref.equals("R2") || ref.equals("R3") || ref.equals("R4");
+        }
+    }
+
+    /** Sets values on the part just placed. */
+    private static final class PartBuilder {
+        private final Builder owner;
+        private final int index;
+
+        PartBuilder(Builder owner, int index, Part part) {
+            this.owner = owner;
+            this.index = index;
+            owner.parts.add(part);
+        }
+
+        PartBuilder set(String key, double value) {
+            owner.parts.set(index, owner.parts.get(index).with(key, value));
+            return this;
+        }
+
+        PartBuilder option(String key, String value) {
+            owner.parts.set(index, owner.parts.get(index).withOption(key, value));
+            return this;
+        }
+    }
+}
