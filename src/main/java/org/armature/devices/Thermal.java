@@ -1,23 +1,19 @@
 package org.armature.devices;
 
+import org.armature.units.PhysicalConstants;
+
 /**
- * Thermal voltage and temperature conversions used by the device models.
- * Package-private; it will delegate to {@code org.armature.units.PhysicalConstants} once
- * that class is on this branch.
+ * Thermal voltage and temperature checks used by the device models; delegates to
+ * {@link PhysicalConstants} (exact SI 2019 k and q).
  */
 final class Thermal {
-
-    /** Boltzmann constant, J/K (exact, SI 2019). */
-    private static final double BOLTZMANN_JOULES_PER_KELVIN = 1.380649e-23;
-    /** Elementary charge, C (exact, SI 2019). */
-    private static final double ELEMENTARY_CHARGE_COULOMBS = 1.602176634e-19;
 
     private Thermal() {
     }
 
     /** @return kT/q in volts at the given absolute temperature */
     static double voltage(double temperatureKelvin) {
-        return BOLTZMANN_JOULES_PER_KELVIN * temperatureKelvin / ELEMENTARY_CHARGE_COULOMBS;
+        return PhysicalConstants.thermalVoltage(temperatureKelvin);
     }
 
     /** Throws if the temperature is not a positive finite kelvin value. */
