@@ -7,7 +7,9 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.stream.Stream;
 import org.armature.io.StageFiles;
 import org.armature.model.HighSideDrive;
 import org.armature.model.Part;
@@ -22,11 +24,11 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
 
-/**
- * {@code armature solve}, run in process. Stages are the Darlington-channel template (12 V, 400 Ω
- * relay, 5 V pin), which the DC engine solves at the time of writing.
- */
+/** {@code armature solve}, run in process, on the templates and on the demo documents in {@code examples/}. */
 class SolveCommandTest {
 
     private static final ObjectMapper JSON = new ObjectMapper();
@@ -74,6 +76,54 @@ class SolveCommandTest {
         assertTrue(j.get("switch").get("fullyOn").isBoolean());
         assertTrue(j.get("switch").get("margin").isNumber());
         assertEquals("U2", j.get("switch").get("ref").asText());
+    }
+
+    static Stream<Arguments> exampleStages() {
+        List<Arguments> out = new ArrayList<>();
+        for (String name : List.of("greenhouse-valves", "dust-extractor-interlock", "pool-pump-timer")) {
+            Path f = Path.of("examples", name + ".stage.json");
+            StageDocument doc = StageFiles.open(f);
+            for (int i = 0; i < doc.stages().size(); i++) {
+                out.add(Arguments.of(f, i + 1, doc.stages().get(i).name()));
+            }
+        }
+        return out.stream();
+    }
+
+    @ParameterizedTest(name = "{0} stage {1}")
+    @MethodSource("exampleStages")
+    @DisplayName("every example stage solves; pin high operates the relay, pin low releases it, except the "
+            + "direct-drive comparison, which cannot turn off (common practice, CHECKS.md item 4)")
+    void examplesSolve(Path example, int stage, String name) throws Exception {
+        CliRun high = CliRun.of("solve", example.toString(), "--stage", Integer.toString(stage), "--json",
+                "--pin-state", "high");
+        assertEquals(0, high.status(), high.err());
+        JsonNode h = JSON.readTree(high.out());
+        assertTrue(h.get("converged").asBoolean());
+        assertEquals("operated", h.get("parts").get("K1").get("state").asText(), name);
+        assertTrue(h.get("switch").get("fullyOn").asBoolean(), name);
+        CliRun low = CliRun.of("solve", example.toString(), "--stage", Integer.toString(stage), "--json",
+                "--pin-state", "low");
+        assertEquals(0, low.status(), low.err());
+        String expected = name.startsWith("Direct drive") ? "operated" : "released";
+        assertEquals(expected, JSON.readTree(low.out()).get("parts").get("K1").get("state").asText(), name);
+    }
+
+    @Test
+    @DisplayName("bipolar switches report region, ic, ib, vce, vbe, forcedBeta, power; MOSFETs id, vgs, vds")
+    void switchQuantities() throws Exception {
+        for (StageTemplate t : List.of(StageTemplate.LOW_SIDE_NPN, StageTemplate.HIGH_SIDE_PNP,
+                StageTemplate.LOW_SIDE_NMOS)) {
+            StageFiles.save(StageDocument.of(Templates.build(t)), file);
+            JsonNode q1 = solveJson().get("parts").get("Q1");
+            List<String> keys = t == StageTemplate.LOW_SIDE_NMOS
+                    ? List.of("id", "vgs", "vds", "power")
+                    : List.of("ic", "ib", "vce", "vbe", "forcedBeta", "power");
+            for (String k : keys) {
+                assertTrue(q1.get(k).isNumber(), t + " " + k);
+            }
+            assertTrue(q1.get("region").isTextual(), t.id());
+        }
     }
 
     @Test
