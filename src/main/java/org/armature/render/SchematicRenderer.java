@@ -191,17 +191,26 @@ public final class SchematicRenderer {
         List<String> lines = new ArrayList<>();
         lines.add(p.ref());
         String v = valueText(p);
-        if (!v.isEmpty()) {
+        if (p.kind() == PartKind.RELAY) {
+            // stacked so the label fits between the coil and its contact set
+            lines.addAll(List.of(v.split(", ")));
+        } else if (!v.isEmpty()) {
             lines.add(v);
         }
-        double w = Math.max(DESIGNATOR.width(lines.get(0)), lines.size() > 1 ? VALUE.width(lines.get(1)) : 0) + 2 * PAD;
-        double h = DESIGNATOR.height() + (lines.size() > 1 ? VALUE.height() : 0) + 2 * PAD;
+        double widest = DESIGNATOR.width(lines.get(0));
+        for (int i = 1; i < lines.size(); i++) {
+            widest = Math.max(widest, VALUE.width(lines.get(i)));
+        }
+        double w = widest + 2 * PAD;
+        double h = DESIGNATOR.height() + (lines.size() - 1) * VALUE.height() + 2 * PAD;
         Box bb = PartGeometry.bodies(p).get(0);
         boolean upright = PartGeometry.isUpright(p);
         List<Box> right = List.of(
                 at(bb.maxX() + GAP, bb.centreY() - h / 2, w, h),
                 at(bb.maxX() + GAP, bb.minY() - h * 0.6, w, h),
-                at(bb.maxX() + GAP, bb.maxY() - h * 0.4, w, h));
+                at(bb.maxX() + GAP, bb.maxY() - h * 0.4, w, h),
+                at(bb.maxX() + GAP, bb.maxY() + 0.05, w, h),
+                at(bb.maxX() + GAP, bb.minY() - 0.05 - h, w, h));
         List<Box> left = List.of(
                 at(bb.minX() - GAP - w, bb.centreY() - h / 2, w, h),
                 at(bb.minX() - GAP - w, bb.minY() - h * 0.6, w, h),
@@ -473,9 +482,9 @@ public final class SchematicRenderer {
                 };
                 double y = b.minY() + PAD;
                 pen.text(l.lines().get(0), x, y, DESIGNATOR.anchored(l.align(), TextStyle.VAnchor.TOP), pal.labelInk());
-                if (l.lines().size() > 1) {
-                    pen.text(l.lines().get(1), x, y + DESIGNATOR.height(), VALUE.anchored(l.align(), TextStyle.VAnchor.TOP),
-                            pal.valueInk());
+                for (int i = 1; i < l.lines().size(); i++) {
+                    pen.text(l.lines().get(i), x, y + DESIGNATOR.height() + (i - 1) * VALUE.height(),
+                            VALUE.anchored(l.align(), TextStyle.VAnchor.TOP), pal.valueInk());
                 }
             }
             case TEST_POINT -> {

@@ -109,7 +109,7 @@ class RendererTest {
         RecordingPen pen = new RecordingPen();
         SchematicRenderer.draw(Templates.defaultStage(), Annotations.NONE, RenderOptions.all(), pen);
         List<String> texts = pen.texts();
-        for (String t : List.of("K1", "Q1", "R1", "R2", "D1", "U1", "V1", "V2", "E1", "1 kΩ", "10 kΩ", "+12 V", "12 V, 400 Ω")) {
+        for (String t : List.of("K1", "Q1", "R1", "R2", "D1", "U1", "V1", "V2", "E1", "1 kΩ", "10 kΩ", "+12 V", "400 Ω")) {
             assertEquals(1, texts.stream().filter(t::equals).count(), t);
         }
         assertTrue(texts.contains("HIGH"), "the drive pin shows its level");
