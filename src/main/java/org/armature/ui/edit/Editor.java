@@ -114,7 +114,8 @@ public final class Editor {
     /**
      * The command that moves parts by a grid offset, with the wires attached to their pins following:
      * a wire with both ends on moved pins (or selected) moves along, a wire with one end on a moved
-     * pin stretches if it stays straight, else is re-routed orthogonally from its fixed end.
+     * pin stretches if it stays straight, else is re-routed orthogonally from its fixed end; a moved pin
+     * that touched a pin of a part staying put gets a wire to where it went.
      */
     public EditCommand moveCommand(Set<String> refs, int dx, int dy) {
         List<EditCommand> steps = new ArrayList<>();
@@ -154,6 +155,20 @@ public final class Editor {
         for (int k = changed.size() - 1; k >= 0; k--) {
             int i = changed.get(k);
             steps.add(new EditCommand.RemoveWire(stage.wires().get(i), i));
+        }
+        // a moved pin that sat directly on a pin of a part staying put keeps its connection by a new wire
+        Set<GridPoint> fixedPins = new HashSet<>();
+        for (Part p : stage.parts()) {
+            if (!refs.contains(p.ref())) {
+                for (PinSpec pin : p.kind().pins()) {
+                    fixedPins.add(p.pinPoint(pin.name()));
+                }
+            }
+        }
+        for (GridPoint g : movedPins) {
+            if (fixedPins.contains(g)) {
+                replacements.add(Router.route(after, g, g.plus(dx, dy)));
+            }
         }
         int end = stage.wires().size() - changed.size();
         for (List<Wire> repl : replacements) {

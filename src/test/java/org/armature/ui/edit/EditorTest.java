@@ -96,7 +96,12 @@ class EditorTest {
         GridPoint a = r2.pinPoint("a");
         assertTrue(e.stage().wires().stream().anyMatch(w -> w.from().equals(a) || w.to().equals(a)), "pin a still wired");
         // the base node at (15,12) is still reached
-        assertTrue(e.stage().wires().stream().anyMatch(w -> w.contains(new GridPoint(15, 12)) && w.contains(new GridPoint(15, 12))));
+        assertTrue(e.stage().wires().stream().anyMatch(w -> w.contains(new GridPoint(15, 12))));
+        // template layout: R2's end b sat on GND2's pin at (15,18); a wire now joins them
+        assertEquals(org.armature.model.Connectivity.GROUND,
+                org.armature.model.Connectivity.of(e.stage()).net("R2", "b"));
+        assertEquals(org.armature.model.Connectivity.of(start).net("R2", "a"),
+                org.armature.model.Connectivity.of(e.stage()).net("R2", "a"));
     }
 
     @Test
