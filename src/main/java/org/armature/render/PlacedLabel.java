@@ -1,0 +1,32 @@
+package org.armature.render;
+
+import java.util.List;
+
+/**
+ * A label the renderer has placed: what it says, where its box is (grid units) and what its leader
+ * points at. Boxes of one layout never overlap each other nor any part body.
+ *
+ * @param kind what the label is
+ * @param owner the part designator, net name or pin it belongs to
+ * @param lines its text lines, top to bottom
+ * @param box where it sits, padding included
+ * @param align how the lines are aligned in the box
+ * @param anchorX x of the point the leader runs to; {@code NaN} for labels without a leader
+ * @param anchorY y of the point the leader runs to; {@code NaN} for labels without a leader
+ * @param state verdict state for badges and markers; {@code OK} otherwise
+ */
+public record PlacedLabel(Kind kind, String owner, List<String> lines, Box box, TextStyle.HAnchor align,
+                          double anchorX, double anchorY, Annotations.State state) {
+
+    /** What a label is. */
+    public enum Kind { PART, TEST_POINT, VOLTAGE, CURRENT, BADGE, GAUGE, MARKER }
+
+    public PlacedLabel {
+        lines = List.copyOf(lines);
+    }
+
+    /** True when the label has a leader line to an anchor point. */
+    public boolean hasLeader() {
+        return !Double.isNaN(anchorX);
+    }
+}

@@ -1,0 +1,606 @@
+package org.armature.render;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import org.armature.model.Connectivity;
+import org.armature.model.GridPoint;
+import org.armature.model.Part;
+import org.armature.model.PartKind;
+import org.armature.model.PinRef;
+import org.armature.model.PinSpec;
+import org.armature.model.Stage;
+import org.armature.model.TestPoint;
+import org.armature.model.Wire;
+
+/**
+ * The one drawing of a stage and its readouts, onto any {@link Pen}: the live canvas, each pane of a
+ * comparison and every export use it. It has no side effects besides the pen calls and returns the
+ * {@link Layout} it used.
+ *
+ * <p>Layers are drawn in this fixed order, each only if {@link RenderOptions#draws(Layer)}:
+ * <ol>
+ *   <li>{@link Layer#GRID}: minor lines every grid unit, major lines every
+ *       {@value RenderOptions#GRID_MAJOR_EVERY};</li>
+ *   <li>{@link Layer#WIRES}: segments, then junction dots where three or more ends meet (a pin or a
+ *       wire end counts one, a wire passing through counts two);</li>
+ *   <li>{@link Layer#PARTS}: IEC 60617-style symbols, then open rings on unconnected pins;</li>
+ *   <li>{@link Layer#LABELS}: designator and value beside each part, test point names as small tags;</li>
+ *   <li>{@link Layer#ANNOTATIONS}: node voltage tags, current arrows and tags, verdict badges, relay
+ *       gauges, finding markers;</li>
+ *   <li>{@link Layer#SELECTION}: selection highlight, wires being drawn, rubber band, hovered pin.</li>
+ * </ol>
+ *
+ * <p>Coordinates are grid units; the pen's transform maps them to its device. The label layout
+ * ({@link #layout}) does not depend on the options, so every layer subset of one stage agrees.
+ */
+public final class SchematicRenderer {
+
+    /** Wire line width, grid units. */
+    public static final double WIRE_WIDTH = 0.075;
+    /** Junction dot radius, grid units. */
+    public static final double JUNCTION_RADIUS = 0.15;
+    /** Designator text size, grid units. */
+    public static final double DESIGNATOR_SIZE = 0.62;
+    /** Value text size, grid units. */
+    public static final double VALUE_SIZE = 0.54;
+    /** Tag text size (test points, readouts), grid units. */
+    public static final double TAG_SIZE = 0.48;
+    /** Padding inside label boxes, grid units. */
+    public static final double PAD = 0.1;
+    /** Gap between a part body and its label, grid units. */
+    public static final double GAP = 0.22;
+
+    private static final TextStyle DESIGNATOR = new TextStyle(DESIGNATOR_SIZE, true, TextStyle.HAnchor.START, TextStyle.VAnchor.TOP);
+    private static final TextStyle VALUE = new TextStyle(VALUE_SIZE, false, TextStyle.HAnchor.START, TextStyle.VAnchor.TOP);
+    private static final TextStyle TAG = new TextStyle(TAG_SIZE, false, TextStyle.HAnchor.MIDDLE, TextStyle.VAnchor.MIDDLE);
+    private static final double GAUGE_WIDTH = 4.6;
+    private static final double GAUGE_HEIGHT = 1.75;
+    private static final double MARKER_RADIUS = 0.27;
+
+    private SchematicRenderer() {
+    }
+
+    /**
+     * Draws a stage with its readouts.
+     *
+     * @param stage what to draw
+     * @param annotations readouts to draw over it; {@link Annotations#NONE} for none
+     * @param options colours, layers, selection and previews
+     * @param pen where to draw; only its drawing methods are called, its transform is left as found
+     * @return the layout used (label boxes and extent)
+     */
+    public static Layout draw(Stage stage, Annotations annotations, RenderOptions options, Pen pen) {
+        Layout layout = layout(stage, annotations);
+        Palette pal = options.palette();
+        if (options.draws(Layer.GRID)) {
+            grid(pen, options.gridArea().orElse(layout.extent().inflate(3)), pal);
+        }
+        if (options.draws(Layer.WIRES)) {
+            wires(pen, stage, pal);
+        }
+        if (options.draws(Layer.PARTS)) {
+            parts(pen, stage, pal);
+        }
+        if (options.draws(Layer.LABELS)) {
+            for (PlacedLabel l : layout.labels()) {
+                if (l.kind() == PlacedLabel.Kind.PART || l.kind() == PlacedLabel.Kind.TEST_POINT) {
+                    label(pen, l, pal, annotations);
+                }
+            }
+        }
+        if (options.draws(Layer.ANNOTATIONS)) {
+            currentArrows(pen, stage, annotations, pal);
+            for (PlacedLabel l : layout.labels()) {
+                if (l.kind() != PlacedLabel.Kind.PART && l.kind() != PlacedLabel.Kind.TEST_POINT) {
+                    label(pen, l, pal, annotations);
+                }
+            }
+        }
+        if (options.draws(Layer.SELECTION)) {
+            selection(pen, stage, options, pal);
+        }
+        return layout;
+    }
+
+    /** The label layout of a stage with readouts, without drawing (deterministic). */
+    public static Layout layout(Stage stage, Annotations annotations) {
+        List<Box> bodies = new ArrayList<>();
+        List<double[]> segments = new ArrayList<>();
+        Box extent = null;
+        for (Part p : stage.parts()) {
+            for (Box b : PartGeometry.bodies(p)) {
+                bodies.add(b);
+            }
+            Box bb = PartGeometry.bodyBounds(p);
+            for (PinSpec pin : p.kind().pins()) {
+                GridPoint g = p.pinPoint(pin.name());
+                double[] q = LabelPlacer.nearestOnBox(bb, g.gridX(), g.gridY());
+                segments.add(new double[] {g.gridX(), g.gridY(), q[0], q[1]});
+            }
+            if (p.kind() == PartKind.RELAY) {
+                // the dashed mechanical link between coil and contacts is drawing too
+                Affine f = PartGeometry.frame(p.placement());
+                segments.add(new double[] {f.mapX(0.75, 0), f.mapY(0.75, 0), f.mapX(4.6, 0), f.mapY(4.6, 0)});
+            }
+            extent = extent == null ? PartGeometry.bounds(p) : extent.union(PartGeometry.bounds(p));
+        }
+        for (Wire w : stage.wires()) {
+            segments.add(new double[] {w.from().gridX(), w.from().gridY(), w.to().gridX(), w.to().gridY()});
+            Box wb = Box.spanning(w.from().gridX(), w.from().gridY(), w.to().gridX(), w.to().gridY());
+            extent = extent == null ? wb : extent.union(wb);
+        }
+        if (extent == null) {
+            extent = new Box(0, 0, 10, 10);
+        }
+        LabelPlacer placer = new LabelPlacer(inflated(bodies, 0.04), segments);
+        List<PlacedLabel> labels = new ArrayList<>();
+        for (Part p : stage.parts()) {
+            partLabel(p, placer).ifPresent(labels::add);
+        }
+        for (TestPoint tp : stage.testPoints()) {
+            Optional<Part> part = stage.part(tp.ref());
+            if (part.isEmpty() || part.get().kind().pin(tp.pin()).isEmpty()) {
+                continue;
+            }
+            GridPoint g = part.get().pinPoint(tp.pin());
+            labels.add(tag(PlacedLabel.Kind.TEST_POINT, tp.net(), tp.net(), g.gridX(), g.gridY(), placer,
+                    Annotations.State.OK));
+        }
+        if (!annotations.isEmpty()) {
+            annotationLabels(stage, annotations, placer, labels);
+        }
+        for (PlacedLabel l : labels) {
+            extent = extent.union(l.box());
+        }
+        return new Layout(labels, extent);
+    }
+
+    /** The short value line of a part ("1 kΩ", "+12 V"); empty for kinds that show none. */
+    public static String valueText(Part p) {
+        return switch (p.kind()) {
+            case RESISTOR -> Notation.format(p.value("resistanceOhms"), "Ω");
+            case CAPACITOR -> Notation.format(p.value("capacitanceFarads"), "F");
+            case ZENER, TVS -> Notation.format(p.value("breakdownVolts"), "V");
+            case LED -> Notation.format(p.value("forwardVolts"), "V");
+            case DIODE, GROUND -> "";
+            case NPN, PNP, DARLINGTON -> "hFE ≥ " + Notation.format(p.value("hfeMin"), "");
+            case NMOS -> "VT " + Notation.format(p.value("thresholdVolts"), "V");
+            case RELAY -> Notation.format(p.value("ratedVolts"), "V") + ", " + Notation.format(p.value("coilResistanceOhms"), "Ω");
+            case LOAD -> Notation.format(p.value("ratedWatts"), "W") + " " + p.option("loadKind");
+            case SUPPLY -> {
+                double v = p.value("volts");
+                String sign = p.option("waveform").equals("ac-rms") ? "~" : v > 0 ? "+" : "";
+                yield sign + Notation.format(v, "V");
+            }
+            case DRIVE_PIN -> Notation.format(p.value("highVolts"), "V") + ", " + Notation.format(p.value("outputResistanceOhms"), "Ω");
+        };
+    }
+
+    // ---------------------------------------------------------------- layout
+
+    private static Optional<PlacedLabel> partLabel(Part p, LabelPlacer placer) {
+        if (p.kind() == PartKind.GROUND) {
+            return Optional.empty();
+        }
+        List<String> lines = new ArrayList<>();
+        lines.add(p.ref());
+        String v = valueText(p);
+        if (p.kind() == PartKind.RELAY) {
+            // stacked so the label fits between the coil and its contact set
+            lines.addAll(List.of(v.split(", ")));
+        } else if (!v.isEmpty()) {
+            lines.add(v);
+        }
+        double widest = DESIGNATOR.width(lines.get(0));
+        for (int i = 1; i < lines.size(); i++) {
+            widest = Math.max(widest, VALUE.width(lines.get(i)));
+        }
+        double w = widest + 2 * PAD;
+        double h = DESIGNATOR.height() + (lines.size() - 1) * VALUE.height() + 2 * PAD;
+        Box bb = PartGeometry.bodies(p).get(0);
+        boolean upright = PartGeometry.isUpright(p);
+        List<Box> right = List.of(
+                at(bb.maxX() + GAP, bb.centreY() - h / 2, w, h),
+                at(bb.maxX() + GAP, bb.minY() - h * 0.6, w, h),
+                at(bb.maxX() + GAP, bb.maxY() - h * 0.4, w, h),
+                at(bb.maxX() + GAP, bb.maxY() + 0.05, w, h),
+                at(bb.maxX() + GAP, bb.minY() - 0.05 - h, w, h));
+        List<Box> left = List.of(
+                at(bb.minX() - GAP - w, bb.centreY() - h / 2, w, h),
+                at(bb.minX() - GAP - w, bb.minY() - h * 0.6, w, h),
+                at(bb.minX() - GAP - w, bb.maxY() - h * 0.4, w, h));
+        List<Box> above = List.of(at(bb.centreX() - w / 2, bb.minY() - GAP - h, w, h),
+                at(bb.minX() - GAP - w, bb.minY() - GAP - h, w, h),
+                at(bb.maxX() + GAP, bb.minY() - GAP - h, w, h));
+        List<Box> below = List.of(at(bb.centreX() - w / 2, bb.maxY() + GAP, w, h),
+                at(bb.maxX() + GAP, bb.maxY() + GAP, w, h));
+        List<Box> candidates = new ArrayList<>();
+        if (upright) {
+            candidates.addAll(right);
+            candidates.addAll(left);
+            candidates.addAll(above);
+            candidates.addAll(below);
+        } else {
+            candidates.addAll(above);
+            candidates.addAll(below);
+            candidates.addAll(right);
+            candidates.addAll(left);
+        }
+        Box chosen = placer.choose(candidates)
+                .orElseGet(() -> placer.near(bb.maxX(), bb.centreY(), w, h));
+        TextStyle.HAnchor align = chosen.minX() >= bb.maxX() ? TextStyle.HAnchor.START
+                : chosen.maxX() <= bb.minX() ? TextStyle.HAnchor.END : TextStyle.HAnchor.MIDDLE;
+        return Optional.of(new PlacedLabel(PlacedLabel.Kind.PART, p.ref(), lines, chosen, align, Double.NaN,
+                Double.NaN, Annotations.State.OK));
+    }
+
+    private static void annotationLabels(Stage stage, Annotations a, LabelPlacer placer, List<PlacedLabel> out) {
+        Connectivity c = Connectivity.of(stage);
+        for (Annotations.NodeVoltage nv : a.voltages()) {
+            netAnchor(stage, c, nv.net()).ifPresent(g -> out.add(tag(PlacedLabel.Kind.VOLTAGE, nv.net(),
+                    Notation.format(nv.volts(), "V"), g[0], g[1], placer, Annotations.State.OK)));
+        }
+        for (Annotations.BranchCurrent bc : a.currents()) {
+            currentArrow(stage, bc).ifPresent(arrow -> out.add(tag(PlacedLabel.Kind.CURRENT, bc.pin().toString(),
+                    Notation.format(Math.abs(bc.ampsIntoPin()), "A"), arrow[0], arrow[1], placer, Annotations.State.OK)));
+        }
+        for (Annotations.PartBadge badge : a.badges()) {
+            stage.part(badge.ref()).ifPresent(p -> {
+                Box bb = PartGeometry.bodyBounds(p);
+                out.add(tag(PlacedLabel.Kind.BADGE, badge.ref(), badge.text(), bb.maxX(), bb.centreY(), placer,
+                        badge.state()));
+            });
+        }
+        for (Annotations.RelayGauge g : a.gauges()) {
+            stage.part(g.ref()).ifPresent(p -> {
+                Box coil = PartGeometry.bodies(p).get(0);
+                Box box = placer.near(coil.maxX(), coil.maxY(), GAUGE_WIDTH, GAUGE_HEIGHT);
+                out.add(new PlacedLabel(PlacedLabel.Kind.GAUGE, g.ref(), List.of(gaugeText(g)), box,
+                        TextStyle.HAnchor.START, coil.maxX(), coil.maxY(), gaugeState(g)));
+            });
+        }
+        for (Annotations.FindingMarker m : a.markers()) {
+            stage.part(m.ref()).ifPresent(p -> {
+                Box bb = PartGeometry.bodyBounds(p);
+                double w = 2 * MARKER_RADIUS + (m.text().isEmpty() ? 0 : TAG.width(m.text()) + 0.15) + 2 * PAD;
+                double h = Math.max(2 * MARKER_RADIUS, TAG.height()) + 2 * PAD;
+                Box box = placer.near(bb.maxX(), bb.minY(), w, h);
+                out.add(new PlacedLabel(PlacedLabel.Kind.MARKER, m.ref(), List.of(m.text()), box,
+                        TextStyle.HAnchor.START, bb.maxX(), bb.minY(), m.state()));
+            });
+        }
+    }
+
+    private static PlacedLabel tag(PlacedLabel.Kind kind, String owner, String text, double ax, double ay,
+                                   LabelPlacer placer, Annotations.State state) {
+        double w = TAG.width(text) + 2 * PAD + 0.1;
+        double h = TAG.height() + 2 * PAD;
+        Box box = placer.near(ax, ay, w, h);
+        return new PlacedLabel(kind, owner, List.of(text), box, TextStyle.HAnchor.MIDDLE, ax, ay, state);
+    }
+
+    private static String gaugeText(Annotations.RelayGauge g) {
+        return "coil " + Notation.format(g.coilAmps(), "A");
+    }
+
+    private static Annotations.State gaugeState(Annotations.RelayGauge g) {
+        if (g.coilAmps() >= g.pickUpAmps()) {
+            return Annotations.State.OK;
+        }
+        return g.coilAmps() <= g.dropOutAmps() ? Annotations.State.OK : Annotations.State.WARN;
+    }
+
+    /** Anchor of a net: its test point pin, else a non-ground pin on it, else a wire's midpoint. */
+    private static Optional<double[]> netAnchor(Stage stage, Connectivity c, String net) {
+        for (TestPoint tp : stage.testPoints()) {
+            if (tp.net().equals(net)) {
+                Optional<Part> p = stage.part(tp.ref());
+                if (p.isPresent() && p.get().kind().pin(tp.pin()).isPresent()) {
+                    GridPoint g = p.get().pinPoint(tp.pin());
+                    return Optional.of(new double[] {g.gridX(), g.gridY()});
+                }
+            }
+        }
+        for (PinRef pr : c.pinsOn(net)) {
+            Optional<Part> p = stage.part(pr.ref());
+            if (p.isPresent() && p.get().kind() != PartKind.GROUND) {
+                GridPoint g = p.get().pinPoint(pr.pin());
+                return Optional.of(new double[] {g.gridX(), g.gridY()});
+            }
+        }
+        for (int i = 0; i < stage.wires().size(); i++) {
+            if (c.netOfWire().get(i).equals(net)) {
+                Wire w = stage.wires().get(i);
+                return Optional.of(new double[] {(w.from().gridX() + w.to().gridX()) / 2.0,
+                        (w.from().gridY() + w.to().gridY()) / 2.0});
+            }
+        }
+        return Optional.empty();
+    }
+
+    /**
+     * Where a current arrow goes: {x, y, dx, dy} with (x, y) the arrow's middle and (dx, dy) the unit
+     * direction of the current; on the wire leaving the pin, else on the pin's lead.
+     */
+    private static Optional<double[]> currentArrow(Stage stage, Annotations.BranchCurrent bc) {
+        Optional<Part> part = stage.part(bc.pin().ref());
+        if (part.isEmpty() || part.get().kind().pin(bc.pin().pin()).isEmpty()) {
+            return Optional.empty();
+        }
+        GridPoint g = part.get().pinPoint(bc.pin().pin());
+        double sign = bc.ampsIntoPin() >= 0 ? 1 : -1;
+        for (Wire w : stage.wires()) {
+            if (w.isPoint() || !(w.from().equals(g) || w.to().equals(g))) {
+                continue;
+            }
+            GridPoint other = w.from().equals(g) ? w.to() : w.from();
+            double len = g.manhattan(other);
+            double ux = (other.gridX() - g.gridX()) / len;
+            double uy = (other.gridY() - g.gridY()) / len;
+            double t = Math.min(0.9, len / 2);
+            // current into the pin flows from the far end towards the pin
+            return Optional.of(new double[] {g.gridX() + ux * t, g.gridY() + uy * t, -ux * sign, -uy * sign});
+        }
+        Box bb = PartGeometry.bodyBounds(part.get());
+        double[] q = LabelPlacer.nearestOnBox(bb, g.gridX(), g.gridY());
+        double dx = q[0] - g.gridX();
+        double dy = q[1] - g.gridY();
+        double len = Math.hypot(dx, dy);
+        if (len == 0) {
+            return Optional.of(new double[] {g.gridX(), g.gridY(), 0, sign});
+        }
+        return Optional.of(new double[] {g.gridX() + dx / 2, g.gridY() + dy / 2, dx / len * sign, dy / len * sign});
+    }
+
+    private static Box at(double x, double y, double w, double h) {
+        return new Box(x, y, x + w, y + h);
+    }
+
+    private static List<Box> inflated(List<Box> boxes, double d) {
+        return boxes.stream().map(b -> b.inflate(d)).toList();
+    }
+
+    // ---------------------------------------------------------------- drawing
+
+    private static void grid(Pen pen, Box area, Palette pal) {
+        int x0 = (int) Math.floor(area.minX());
+        int x1 = (int) Math.ceil(area.maxX());
+        int y0 = (int) Math.floor(area.minY());
+        int y1 = (int) Math.ceil(area.maxY());
+        Stroke minor = Stroke.solid(0.03);
+        Stroke major = Stroke.solid(0.045);
+        for (int pass = 0; pass < 2; pass++) {
+            for (int x = x0; x <= x1; x++) {
+                boolean isMajor = Math.floorMod(x, RenderOptions.GRID_MAJOR_EVERY) == 0;
+                if (isMajor == (pass == 1)) {
+                    pen.line(x, y0, x, y1, isMajor ? pal.gridMajor() : pal.gridMinor(), isMajor ? major : minor);
+                }
+            }
+            for (int y = y0; y <= y1; y++) {
+                boolean isMajor = Math.floorMod(y, RenderOptions.GRID_MAJOR_EVERY) == 0;
+                if (isMajor == (pass == 1)) {
+                    pen.line(x0, y, x1, y, isMajor ? pal.gridMajor() : pal.gridMinor(), isMajor ? major : minor);
+                }
+            }
+        }
+    }
+
+    private static void wires(Pen pen, Stage stage, Palette pal) {
+        Stroke s = Stroke.solid(WIRE_WIDTH);
+        for (Wire w : stage.wires()) {
+            if (!w.isPoint()) {
+                pen.line(w.from().gridX(), w.from().gridY(), w.to().gridX(), w.to().gridY(), pal.ink(), s);
+            }
+        }
+        for (GridPoint j : junctions(stage)) {
+            pen.fillCircle(j.gridX(), j.gridY(), JUNCTION_RADIUS, pal.ink());
+        }
+    }
+
+    /**
+     * Grid points where three or more connection ends meet: each pin and each wire end counts one,
+     * each wire passing through the point counts two.
+     */
+    public static Set<GridPoint> junctions(Stage stage) {
+        Map<GridPoint, Integer> ends = new HashMap<>();
+        for (Part p : stage.parts()) {
+            for (PinSpec pin : p.kind().pins()) {
+                ends.merge(p.pinPoint(pin.name()), 1, Integer::sum);
+            }
+        }
+        for (Wire w : stage.wires()) {
+            if (w.isPoint()) {
+                continue;
+            }
+            ends.merge(w.from(), 1, Integer::sum);
+            ends.merge(w.to(), 1, Integer::sum);
+        }
+        Set<GridPoint> out = new HashSet<>();
+        for (Map.Entry<GridPoint, Integer> e : ends.entrySet()) {
+            int n = e.getValue();
+            for (Wire w : stage.wires()) {
+                if (!w.isPoint() && w.contains(e.getKey()) && !w.from().equals(e.getKey()) && !w.to().equals(e.getKey())) {
+                    n += 2;
+                }
+            }
+            if (n >= 3) {
+                out.add(e.getKey());
+            }
+        }
+        return out;
+    }
+
+    private static void parts(Pen pen, Stage stage, Palette pal) {
+        Map<GridPoint, Integer> use = new HashMap<>();
+        for (Part p : stage.parts()) {
+            for (PinSpec pin : p.kind().pins()) {
+                use.merge(p.pinPoint(pin.name()), 1, Integer::sum);
+            }
+        }
+        for (Part p : stage.parts()) {
+            pen.push(PartGeometry.frame(p.placement()));
+            Symbols.draw(pen, p, pal.ink(), pal.paper(), stage.conditions().pinHigh());
+            pen.pop();
+        }
+        Stroke ring = Stroke.solid(0.05);
+        for (Part p : stage.parts()) {
+            for (PinSpec pin : p.kind().pins()) {
+                GridPoint g = p.pinPoint(pin.name());
+                boolean wired = stage.wires().stream().anyMatch(w -> w.contains(g));
+                if (!wired && use.get(g) < 2) {
+                    pen.fillCircle(g.gridX(), g.gridY(), 0.13, pal.paper());
+                    pen.circle(g.gridX(), g.gridY(), 0.13, pal.ink(), ring);
+                }
+            }
+        }
+    }
+
+    private static void currentArrows(Pen pen, Stage stage, Annotations a, Palette pal) {
+        for (Annotations.BranchCurrent bc : a.currents()) {
+            currentArrow(stage, bc).ifPresent(v -> {
+                double half = 0.28;
+                Symbols.arrowHead(pen, v[0] + v[2] * half, v[1] + v[3] * half, v[0] - v[2] * half, v[1] - v[3] * half,
+                        pal.current(), 0.42);
+            });
+        }
+    }
+
+    private static void label(Pen pen, PlacedLabel l, Palette pal, Annotations a) {
+        Box b = l.box();
+        switch (l.kind()) {
+            case PART -> {
+                double x = switch (l.align()) {
+                    case START -> b.minX() + PAD;
+                    case END -> b.maxX() - PAD;
+                    case MIDDLE -> b.centreX();
+                };
+                double y = b.minY() + PAD;
+                pen.text(l.lines().get(0), x, y, DESIGNATOR.anchored(l.align(), TextStyle.VAnchor.TOP), pal.labelInk());
+                for (int i = 1; i < l.lines().size(); i++) {
+                    pen.text(l.lines().get(i), x, y + DESIGNATOR.height() + (i - 1) * VALUE.height(),
+                            VALUE.anchored(l.align(), TextStyle.VAnchor.TOP), pal.valueInk());
+                }
+            }
+            case TEST_POINT -> {
+                leader(pen, l, pal.valueInk(), true);
+                Box inner = b.inflate(-0.04);
+                pen.fillRect(inner, pal.tagFill());
+                pen.strokeRect(inner, pal.valueInk(), new Stroke(0.035, List.of(0.12, 0.08)));
+                pen.text(l.lines().get(0), b.centreX(), b.centreY(), TAG.weight(false), pal.valueInk());
+            }
+            case VOLTAGE, CURRENT -> {
+                Colour accent = l.kind() == PlacedLabel.Kind.VOLTAGE ? pal.voltage() : pal.current();
+                leader(pen, l, accent, l.kind() == PlacedLabel.Kind.VOLTAGE);
+                Box inner = b.inflate(-0.04);
+                pen.fillRect(inner, pal.tagFill());
+                pen.strokeRect(inner, accent, Stroke.solid(0.045));
+                pen.text(l.lines().get(0), b.centreX(), b.centreY(), TAG.weight(true), accent);
+            }
+            case BADGE -> {
+                Colour accent = pal.of(l.state());
+                Box inner = b.inflate(-0.04);
+                pen.fillRect(inner, pal.tagFill().mix(accent, 0.14));
+                leader(pen, l, accent, false);
+                pen.strokeRect(inner, accent, Stroke.solid(0.05));
+                pen.text(l.lines().get(0), b.centreX(), b.centreY(), TAG.weight(true), accent);
+            }
+            case GAUGE -> gauge(pen, l, pal, a);
+            case MARKER -> {
+                Colour accent = pal.of(l.state());
+                leader(pen, l, accent, false);
+                double cx = b.minX() + PAD + MARKER_RADIUS;
+                double cy = b.centreY();
+                pen.fillCircle(cx, cy, MARKER_RADIUS, accent);
+                pen.text("!", cx, cy, TextStyle.centred(0.42).weight(true), pal.tagFill());
+                if (!l.lines().get(0).isEmpty()) {
+                    pen.text(l.lines().get(0), cx + MARKER_RADIUS + 0.12, cy,
+                            TAG.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.MIDDLE).weight(true), accent);
+                }
+            }
+            default -> throw new IllegalStateException("unknown label kind " + l.kind());
+        }
+    }
+
+    private static void leader(Pen pen, PlacedLabel l, Colour colour, boolean dot) {
+        if (!l.hasLeader()) {
+            return;
+        }
+        double[] q = LabelPlacer.nearestOnBox(l.box(), l.anchorX(), l.anchorY());
+        if (Math.hypot(q[0] - l.anchorX(), q[1] - l.anchorY()) > 0.2) {
+            pen.line(l.anchorX(), l.anchorY(), q[0], q[1], colour, Stroke.solid(0.03));
+        }
+        if (dot) {
+            pen.fillCircle(l.anchorX(), l.anchorY(), 0.08, colour);
+        }
+    }
+
+    private static void gauge(Pen pen, PlacedLabel l, Palette pal, Annotations a) {
+        Optional<Annotations.RelayGauge> found = a.gauges().stream().filter(g -> g.ref().equals(l.owner())).findFirst();
+        if (found.isEmpty()) {
+            return;
+        }
+        Annotations.RelayGauge g = found.get();
+        Box b = l.box();
+        Box inner = b.inflate(-0.04);
+        pen.fillRect(inner, pal.tagFill());
+        pen.strokeRect(inner, pal.valueInk(), Stroke.solid(0.03));
+        double x0 = b.minX() + 0.3;
+        double x1 = b.maxX() - 0.3;
+        double full = Math.max(g.pickUpAmps() * 1.35, g.coilAmps() * 1.1);
+        double ty = b.minY() + 0.95;
+        TextStyle small = new TextStyle(0.36, false, TextStyle.HAnchor.MIDDLE, TextStyle.VAnchor.TOP);
+        pen.text(gaugeText(g), b.minX() + 0.25, b.minY() + 0.1,
+                new TextStyle(0.44, true, TextStyle.HAnchor.START, TextStyle.VAnchor.TOP), pal.current());
+        double xd = x0 + (x1 - x0) * g.dropOutAmps() / full;
+        double xp = x0 + (x1 - x0) * g.pickUpAmps() / full;
+        double xc = x0 + (x1 - x0) * Math.min(1, g.coilAmps() / full);
+        pen.line(x0, ty, x1, ty, pal.valueInk(), Stroke.solid(0.05));
+        pen.line(xp, ty, x1, ty, pal.ok(), Stroke.solid(0.14));
+        pen.line(x0, ty, xd, ty, pal.tagFill().mix(pal.valueInk(), 0.45), Stroke.solid(0.14));
+        pen.line(xd, ty - 0.2, xd, ty + 0.2, pal.valueInk(), Stroke.solid(0.05));
+        pen.line(xp, ty - 0.2, xp, ty + 0.2, pal.valueInk(), Stroke.solid(0.05));
+        double ly = ty + 0.28;
+        pen.text("drop-out", xd + 0.1, ly, small.anchored(TextStyle.HAnchor.END, TextStyle.VAnchor.TOP), pal.valueInk());
+        pen.text("pick-up", xp - 0.1, ly, small.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.TOP), pal.valueInk());
+        pen.fillPolygon(new double[] {xc, xc - 0.17, xc + 0.17}, new double[] {ty - 0.02, ty - 0.34, ty - 0.34}, pal.current());
+    }
+
+    private static void selection(Pen pen, Stage stage, RenderOptions o, Palette pal) {
+        Colour sel = pal.selection();
+        for (int i : o.selection().wires()) {
+            if (i >= 0 && i < stage.wires().size()) {
+                Wire w = stage.wires().get(i);
+                pen.line(w.from().gridX(), w.from().gridY(), w.to().gridX(), w.to().gridY(), sel.withAlpha(0.45),
+                        Stroke.solid(0.24));
+            }
+        }
+        for (String ref : o.selection().refs()) {
+            stage.part(ref).ifPresent(p -> {
+                Box b = PartGeometry.bounds(p).inflate(0.3);
+                pen.fillRect(b, sel.withAlpha(0.07));
+                pen.strokeRect(b, sel, Stroke.dashed(0.05, 0.2));
+            });
+        }
+        Stroke preview = Stroke.solid(WIRE_WIDTH * 1.2);
+        for (Wire w : o.previewWires()) {
+            pen.line(w.from().gridX(), w.from().gridY(), w.to().gridX(), w.to().gridY(), sel, preview);
+            pen.fillCircle(w.to().gridX(), w.to().gridY(), 0.1, sel);
+        }
+        o.rubberBand().ifPresent(b -> {
+            pen.fillRect(b, sel.withAlpha(0.08));
+            pen.strokeRect(b, sel, Stroke.dashed(0.04, 0.16));
+        });
+        o.hoverPin().ifPresent(g -> pen.circle(g.gridX(), g.gridY(), 0.32, sel, Stroke.solid(0.06)));
+    }
+
+    /** Label of a layer list for logs and tests ("grid, wires"). */
+    static String names(Set<Layer> layers) {
+        return String.join(", ", layers.stream().map(l -> l.name().toLowerCase(Locale.ROOT)).sorted().toList());
+    }
+}

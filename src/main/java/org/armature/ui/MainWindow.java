@@ -1,0 +1,453 @@
+package org.armature.ui;
+
+import java.io.File;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.function.Consumer;
+import javafx.application.Platform;
+import javafx.geometry.Insets;
+import javafx.geometry.Orientation;
+import javafx.scene.Scene;
+import javafx.scene.control.Alert;
+import javafx.scene.control.Button;
+import javafx.scene.control.ButtonType;
+import javafx.scene.control.CheckMenuItem;
+import javafx.scene.control.Label;
+import javafx.scene.control.Menu;
+import javafx.scene.control.MenuBar;
+import javafx.scene.control.MenuItem;
+import javafx.scene.control.RadioMenuItem;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.SeparatorMenuItem;
+import javafx.scene.control.Slider;
+import javafx.scene.control.TitledPane;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.control.ToolBar;
+import javafx.scene.control.Tooltip;
+import javafx.scene.input.KeyCombination;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.VBox;
+import javafx.stage.FileChooser;
+import javafx.stage.Window;
+import org.armature.io.StageFiles;
+import org.armature.model.HighSideDrive;
+import org.armature.model.StageTemplate;
+import org.armature.model.Suppressor;
+import org.armature.render.Notation;
+import org.armature.render.Palette;
+import org.kordamp.ikonli.javafx.FontIcon;
+
+/**
+ * The editor window: menu bar and tool bar on top, the part palette on the left, the drawing in the
+ * centre, the part sheet above the verdicts on the right, the status bar below. Built around one
+ * {@link EditorViewModel}; everything here only binds and forwards.
+ */
+public final class MainWindow {
+
+    /** Style sheet of the light theme (default; it prints). */
+    public static final String LIGHT_CSS = "/org/armature/assets/css/light.css";
+    /** Style sheet of the dark theme. */
+    public static final String DARK_CSS = "/org/armature/assets/css/dark.css";
+
+    private final EditorViewModel vm;
+    private final BorderPane root = new BorderPane();
+    private final SchematicCanvas canvas;
+    private final PartSheet sheet;
+    private final FindingsPane findings;
+    private final MenuBar menuBar = new MenuBar();
+    private final RecentFiles recent;
+    private final Menu recentMenu = new Menu("Recent");
+    private Scene scene;
+    private boolean syncingAmbient;
+
+    /** Builds the window's content around a view model. */
+    public MainWindow(EditorViewModel vm, RecentFiles recent) {
+        this.vm = vm;
+        this.recent = recent;
+        this.canvas = new SchematicCanvas(vm);
+        this.sheet = new PartSheet(vm);
+        this.findings = new FindingsPane(vm);
+        root.getStyleClass().add("armature-root");
+        VBox top = new VBox(buildMenus(), toolBar());
+        root.setTop(top);
+        PartPalette palette = new PartPalette(vm, Palette.LIGHT);
+        palette.setPrefWidth(64);
+        root.setLeft(palette);
+        root.setCenter(canvas);
+        root.setRight(rightSide());
+        root.setBottom(statusBar());
+    }
+
+    /** A scene of the window with the light theme. */
+    public Scene scene(double width, double height) {
+        scene = new Scene(root, width, height);
+        scene.getStylesheets().add(css(LIGHT_CSS));
+        return scene;
+    }
+
+    /** The root node. */
+    public BorderPane root() {
+        return root;
+    }
+
+    /** The drawing. */
+    public SchematicCanvas canvas() {
+        return canvas;
+    }
+
+    /** The part sheet. */
+    public PartSheet sheet() {
+        return sheet;
+    }
+
+    /** The menu bar. */
+    public MenuBar menuBar() {
+        return menuBar;
+    }
+
+    /** Switches theme: style sheet and drawing palette. */
+    public void setDark(boolean dark) {
+        if (scene != null) {
+            scene.getStylesheets().setAll(css(dark ? DARK_CSS : LIGHT_CSS));
+        }
+        canvas.setPalette(dark ? Palette.DARK : Palette.LIGHT);
+    }
+
+    private static String css(String resource) {
+        var url = MainWindow.class.getResource(resource);
+        if (url == null) {
+            throw new IllegalStateException("missing style sheet " + resource);
+        }
+        return url.toExternalForm();
+    }
+
+    // ------------------------------------------------------------------ menus
+
+    private MenuBar buildMenus() {
+        Menu file = new Menu("File");
+        Menu fromTemplate = new Menu("New from template");
+        for (StageTemplate t : StageTemplate.values()) {
+            Menu m = new Menu(t.title());
+            for (Suppressor s : Suppressor.values()) {
+                MenuItem it = new MenuItem(suppressorTitle(s));
+                it.setId("new-" + t.id() + "-" + s.id());
+                it.setOnAction(e -> confirmDiscard(() -> vm.newFromTemplate(t, s, HighSideDrive.LEVEL_SHIFT)));
+                m.getItems().add(it);
+            }
+            if (t == StageTemplate.HIGH_SIDE_PNP) {
+                MenuItem direct = new MenuItem("Direct drive from the pin (does not turn off)");
+                direct.setId("new-" + t.id() + "-direct");
+                direct.setOnAction(e -> confirmDiscard(() -> vm.newFromTemplate(t, Suppressor.DIODE, HighSideDrive.DIRECT)));
+                m.getItems().addAll(new SeparatorMenuItem(), direct);
+            }
+            fromTemplate.getItems().add(m);
+        }
+        MenuItem open = item("Open…", "Shortcut+O", e -> chooseOpen());
+        MenuItem save = item("Save", "Shortcut+S", e -> save());
+        MenuItem saveAs = item("Save As…", "Shortcut+Shift+S", e -> chooseSaveAs());
+        refreshRecent();
+        MenuItem svg = item("Export SVG…", null, e -> export("svg"));
+        MenuItem png = item("Export PNG…", null, e -> export("png"));
+        MenuItem quit = item("Quit", "Shortcut+Q", e -> confirmDiscard(Platform::exit));
+        file.getItems().addAll(fromTemplate, open, save, saveAs, recentMenu, new SeparatorMenuItem(), svg, png,
+                new SeparatorMenuItem(), quit);
+
+        Menu edit = new Menu("Edit");
+        MenuItem undo = item("Undo", "Shortcut+Z", e -> vm.undo());
+        undo.textProperty().bind(vm.undoLabelProperty());
+        undo.disableProperty().bind(vm.canUndoProperty().not());
+        MenuItem redo = item("Redo", "Shortcut+Y", e -> vm.redo());
+        redo.textProperty().bind(vm.redoLabelProperty());
+        redo.disableProperty().bind(vm.canRedoProperty().not());
+        edit.getItems().addAll(undo, redo, new SeparatorMenuItem(),
+                item("Cut", "Shortcut+X", e -> vm.cut()), item("Copy", "Shortcut+C", e -> vm.copy()),
+                item("Paste", "Shortcut+V", e -> vm.paste()), item("Delete", "Delete", e -> vm.delete()),
+                new SeparatorMenuItem(), item("Rotate", "R", e -> vm.rotate()), item("Mirror", "M", e -> vm.mirror()));
+
+        Menu view = new Menu("View");
+        CheckMenuItem grid = new CheckMenuItem("Grid");
+        grid.setSelected(true);
+        grid.setDisable(true);
+        ToggleGroup theme = new ToggleGroup();
+        RadioMenuItem light = new RadioMenuItem("Light theme");
+        light.setToggleGroup(theme);
+        light.setSelected(true);
+        light.setOnAction(e -> setDark(false));
+        RadioMenuItem dark = new RadioMenuItem("Dark theme");
+        dark.setToggleGroup(theme);
+        dark.setOnAction(e -> setDark(true));
+        Menu readouts = new Menu("Readouts");
+        for (EditorViewModel.ReadoutKind k : EditorViewModel.ReadoutKind.values()) {
+            CheckMenuItem c = new CheckMenuItem(readoutTitle(k));
+            c.setSelected(vm.shownReadoutsProperty().get().contains(k));
+            c.setOnAction(e -> vm.showReadout(k, c.isSelected()));
+            readouts.getItems().add(c);
+        }
+        view.getItems().addAll(item("Zoom in", "Shortcut+EQUALS", e -> canvas.zoomIn()),
+                item("Zoom out", "Shortcut+MINUS", e -> canvas.zoomOut()), item("Fit drawing", "Shortcut+0", e -> canvas.fit()),
+                new SeparatorMenuItem(), readouts, new SeparatorMenuItem(), light, dark);
+
+        Menu help = new Menu("Help");
+        help.getItems().add(item("About Armature", null, e -> about()));
+        menuBar.getMenus().addAll(file, edit, view, help);
+        return menuBar;
+    }
+
+    private static String suppressorTitle(Suppressor s) {
+        return switch (s) {
+            case NONE -> "No suppressor";
+            case DIODE -> "Freewheeling diode";
+            case DIODE_ZENER -> "Diode and zener clamp";
+            case RC -> "RC snubber";
+            case TVS -> "TVS across the coil";
+            case RESISTOR -> "Resistor across the coil";
+        };
+    }
+
+    private static String readoutTitle(EditorViewModel.ReadoutKind k) {
+        return switch (k) {
+            case VOLTAGES -> "Node voltages";
+            case CURRENTS -> "Branch currents";
+            case BADGES -> "Switch verdict";
+            case GAUGES -> "Coil current gauge";
+            case MARKERS -> "Finding markers";
+        };
+    }
+
+    private static MenuItem item(String text, String accel, javafx.event.EventHandler<javafx.event.ActionEvent> h) {
+        MenuItem m = new MenuItem(text);
+        m.setId("menu-" + text.toLowerCase(Locale.ROOT).replaceAll("[^a-z]+", "-").replaceAll("-$", ""));
+        if (accel != null) {
+            m.setAccelerator(KeyCombination.keyCombination(accel));
+        }
+        m.setOnAction(h);
+        return m;
+    }
+
+    private void refreshRecent() {
+        recentMenu.getItems().clear();
+        for (Path p : recent.list()) {
+            MenuItem it = new MenuItem(p.getFileName().toString());
+            it.setOnAction(e -> confirmDiscard(() -> vm.open(p)));
+            recentMenu.getItems().add(it);
+        }
+        recentMenu.setDisable(recentMenu.getItems().isEmpty());
+    }
+
+    // ------------------------------------------------------------------ tool bar
+
+    private ToolBar toolBar() {
+        Button newB = tool("mdi2f-file-plus-outline", "New stage: low-side NPN with a freewheeling diode",
+                () -> confirmDiscard(() -> vm.newFromTemplate(StageTemplate.LOW_SIDE_NPN, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT)));
+        Button openB = tool("mdi2f-folder-open-outline", "Open a stage file", this::chooseOpen);
+        Button saveB = tool("mdi2c-content-save-outline", "Save", this::save);
+        Button undoB = tool("mdi2u-undo", "Undo", vm::undo);
+        undoB.disableProperty().bind(vm.canUndoProperty().not());
+        Button redoB = tool("mdi2r-redo", "Redo", vm::redo);
+        redoB.disableProperty().bind(vm.canRedoProperty().not());
+        Button rotB = tool("mdi2r-rotate-right", "Rotate the selection a quarter turn (R)", vm::rotate);
+        Button mirB = tool("mdi2f-flip-horizontal", "Mirror the selection (M)", vm::mirror);
+        Button fitB = tool("mdi2f-fit-to-page-outline", "Fit the drawing to the window", canvas::fit);
+        ToggleButton pin = new ToggleButton();
+        pin.setId("pin-toggle");
+        pin.getStyleClass().add("pin-toggle");
+        pin.setTooltip(new Tooltip("Drive pin state for the operating point"));
+        Runnable syncPin = () -> {
+            boolean high = vm.stage().conditions().pinHigh();
+            pin.setSelected(high);
+            pin.setText(high ? "Pin HIGH" : "Pin LOW");
+            pin.setGraphic(new FontIcon(high ? "mdi2t-toggle-switch" : "mdi2t-toggle-switch-off-outline"));
+        };
+        syncPin.run();
+        pin.setOnAction(e -> vm.setPinHigh(pin.isSelected()));
+        vm.stageProperty().addListener((o, a, b) -> syncPin.run());
+        Slider ambient = new Slider(-40, 85, vm.stage().conditions().ambientCelsius());
+        ambient.setId("ambient-slider");
+        ambient.setPrefWidth(150);
+        ambient.setMajorTickUnit(25);
+        ambient.setBlockIncrement(5);
+        ambient.setTooltip(new Tooltip("Ambient temperature of the nominal operating point"));
+        Label reading = new Label();
+        reading.getStyleClass().add("reading");
+        reading.setMinWidth(48);
+        Runnable syncAmbient = () -> {
+            syncingAmbient = true;
+            ambient.setValue(vm.stage().conditions().ambientCelsius());
+            reading.setText(Notation.format(vm.stage().conditions().ambientCelsius(), "°C"));
+            syncingAmbient = false;
+        };
+        syncAmbient.run();
+        ambient.valueProperty().addListener((o, a, b) -> {
+            if (!syncingAmbient) {
+                vm.setAmbient(Math.rint(b.doubleValue()));
+            }
+        });
+        vm.stageProperty().addListener((o, a, b) -> syncAmbient.run());
+        Label amb = new Label("Ambient", new FontIcon("mdi2t-thermometer"));
+        Button export = tool("mdi2e-export-variant", "Export the drawing as SVG", () -> export("svg"));
+        ToolBar bar = new ToolBar(newB, openB, saveB, new javafx.scene.control.Separator(Orientation.VERTICAL), undoB, redoB,
+                rotB, mirB, new javafx.scene.control.Separator(Orientation.VERTICAL), pin, amb, ambient, reading,
+                new javafx.scene.control.Separator(Orientation.VERTICAL), fitB, export);
+        bar.getStyleClass().add("main-toolbar");
+        return bar;
+    }
+
+    private static Button tool(String icon, String tip, Runnable action) {
+        Button b = new Button();
+        b.setGraphic(new FontIcon(icon));
+        b.setTooltip(new Tooltip(tip));
+        b.getStyleClass().add("tool-button");
+        b.setOnAction(e -> action.run());
+        return b;
+    }
+
+    // ------------------------------------------------------------------ right side and status
+
+    private Region rightSide() {
+        ScrollPane sheetScroll = new ScrollPane(sheet);
+        sheetScroll.setFitToWidth(true);
+        sheetScroll.setPadding(new Insets(6));
+        TitledPane sheetPane = new TitledPane("Part sheet", sheetScroll);
+        sheetPane.setId("part-sheet-pane");
+        TitledPane verdicts = new TitledPane("Verdicts", findings);
+        verdicts.setId("verdicts-pane");
+        VBox box = new VBox(sheetPane, verdicts);
+        sheetPane.setMaxHeight(Double.MAX_VALUE);
+        VBox.setVgrow(sheetPane, Priority.ALWAYS);
+        box.setPrefWidth(330);
+        box.getStyleClass().add("right-side");
+        return box;
+    }
+
+    private Region statusBar() {
+        Label solver = new Label();
+        solver.setId("status-solver");
+        solver.textProperty().bind(vm.solverStatusProperty());
+        Label message = new Label();
+        message.getStyleClass().add("status-message");
+        message.textProperty().bind(vm.messageProperty());
+        Label name = new Label();
+        name.setId("status-file");
+        Runnable sync = () -> name.setText(vm.fileName() + (vm.dirtyProperty().get() ? "  ● unsaved" : ""));
+        sync.run();
+        vm.fileProperty().addListener((o, a, b) -> sync.run());
+        vm.dirtyProperty().addListener((o, a, b) -> sync.run());
+        Region spacer = new Region();
+        HBox.setHgrow(spacer, Priority.ALWAYS);
+        HBox bar = new HBox(16, solver, message, spacer, name);
+        bar.getStyleClass().add("status-bar");
+        bar.setPadding(new Insets(3, 10, 3, 10));
+        return bar;
+    }
+
+    // ------------------------------------------------------------------ dialogs
+
+    private Window window() {
+        return root.getScene() == null ? null : root.getScene().getWindow();
+    }
+
+    private FileChooser chooser(String title) {
+        FileChooser fc = new FileChooser();
+        fc.setTitle(title);
+        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Stage files", "*" + StageFiles.EXTENSION));
+        return fc;
+    }
+
+    private void chooseOpen() {
+        confirmDiscard(() -> {
+            File f = chooser("Open stage file").showOpenDialog(window());
+            if (f != null && vm.open(f.toPath())) {
+                recent.add(f.toPath());
+                refreshRecent();
+            }
+        });
+    }
+
+    private void save() {
+        if (vm.fileProperty().get().isEmpty()) {
+            chooseSaveAs();
+        } else {
+            vm.save();
+        }
+    }
+
+    private void chooseSaveAs() {
+        FileChooser fc = chooser("Save stage file");
+        fc.setInitialFileName("stage" + StageFiles.EXTENSION);
+        File f = fc.showSaveDialog(window());
+        if (f != null) {
+            Path p = f.getName().endsWith(StageFiles.EXTENSION) ? f.toPath() : Path.of(f.getPath() + StageFiles.EXTENSION);
+            if (vm.saveAs(p)) {
+                recent.add(p);
+                refreshRecent();
+            }
+        }
+    }
+
+    private void export(String kind) {
+        FileChooser fc = new FileChooser();
+        fc.setTitle("Export " + kind.toUpperCase(Locale.ROOT));
+        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter(kind.toUpperCase(Locale.ROOT) + " image", "*." + kind));
+        fc.setInitialFileName(vm.fileName().replace(StageFiles.EXTENSION, "") + "." + kind);
+        File f = fc.showSaveDialog(window());
+        if (f == null) {
+            return;
+        }
+        try {
+            if (kind.equals("svg")) {
+                ImageExport.writeSvg(vm.stage(), vm.annotationsProperty().get(), canvas.palette(), f.toPath());
+            } else {
+                ImageExport.writePng(vm.stage(), vm.annotationsProperty().get(), canvas.palette(), 2, f.toPath());
+            }
+            vm.say("Exported " + f.getName());
+        } catch (java.io.UncheckedIOException ex) {
+            vm.say("Export failed: " + ex.getCause().getMessage());
+        }
+    }
+
+    private void confirmDiscard(Runnable then) {
+        if (!vm.dirtyProperty().get() || window() == null) {
+            then.run();
+            return;
+        }
+        Alert a = new Alert(Alert.AlertType.CONFIRMATION, "The stage has unsaved changes. Discard them?",
+                ButtonType.CANCEL, ButtonType.OK);
+        a.setHeaderText(null);
+        a.initOwner(window());
+        Optional<ButtonType> r = a.showAndWait();
+        if (r.isPresent() && r.get() == ButtonType.OK) {
+            then.run();
+        }
+    }
+
+    private void about() {
+        Alert a = new Alert(Alert.AlertType.INFORMATION);
+        a.setTitle("About Armature");
+        a.setHeaderText("Armature 0.1");
+        a.setContentText("A sandbox for relay driver stages: logic pin, transistor, relay coil and suppressor.\n"
+                + "It reports the checks it ran; it never claims a design is safe.");
+        a.initOwner(window());
+        a.show();
+    }
+
+    /** Runs an action for each menu item, depth first (tests look items up by id). */
+    public void forEachItem(Consumer<MenuItem> action) {
+        for (Menu m : menuBar.getMenus()) {
+            walk(m, action);
+        }
+    }
+
+    private static void walk(MenuItem item, Consumer<MenuItem> action) {
+        action.accept(item);
+        if (item instanceof Menu m) {
+            for (MenuItem c : m.getItems()) {
+                walk(c, action);
+            }
+        }
+    }
+}

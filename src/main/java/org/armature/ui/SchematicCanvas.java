@@ -1,0 +1,404 @@
+package org.armature.ui;
+
+import java.util.EnumSet;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import javafx.scene.canvas.Canvas;
+import javafx.scene.canvas.GraphicsContext;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyEvent;
+import javafx.scene.input.MouseButton;
+import javafx.scene.input.MouseEvent;
+import javafx.scene.input.ScrollEvent;
+import javafx.scene.layout.Region;
+import org.armature.model.GridPoint;
+import org.armature.model.Stage;
+import org.armature.model.Wire;
+import org.armature.render.Affine;
+import org.armature.render.Box;
+import org.armature.render.HitTester;
+import org.armature.render.Layer;
+import org.armature.render.Layout;
+import org.armature.render.Palette;
+import org.armature.render.RenderOptions;
+import org.armature.render.Router;
+import org.armature.render.SchematicRenderer;
+import org.armature.render.Selection;
+import org.armature.render.Snap;
+
+/**
+ * The drawing surface of the editor: three stacked canvases drawn by {@link SchematicRenderer}.
+ *
+ * <p>Layers, bottom to top: (1) paper and {@link Layer#GRID}, redrawn only when the view (zoom, pan,
+ * size, theme) changes; (2) {@link Layer#WIRES}, {@link Layer#PARTS}, {@link Layer#LABELS} and
+ * {@link Layer#ANNOTATIONS}, redrawn when the stage or its readouts change; (3)
+ * {@link Layer#SELECTION} and editing previews, redrawn on every pointer move that changes them.
+ *
+ * <p>Screen coordinates ({@code screenX}) and grid coordinates ({@code gridX}) never mix: the view
+ * transform converts between them, and all hit testing happens in grid units.
+ */
+public final class SchematicCanvas extends Region {
+
+    /** Pixels per grid unit at zoom 1. */
+    public static final double BASE_PIXELS_PER_GRID = 22;
+    /** Zoom limits. */
+    public static final double MIN_ZOOM = 0.3;
+    /** Zoom limits. */
+    public static final double MAX_ZOOM = 4;
+    /** Zoom factor per wheel notch or key press. */
+    public static final double ZOOM_STEP = 1.15;
+    /** Hit tolerance in screen pixels (converted to grid units at the present zoom). */
+    public static final double HIT_PIXELS = 6;
+    /** Snap radius to pins and wire ends, in grid units. */
+    public static final double SNAP_GRID = 0.6;
+
+    private final EditorViewModel vm;
+    private final Canvas gridLayer = new Canvas();
+    private final Canvas drawingLayer = new Canvas();
+    private final Canvas overlayLayer = new Canvas();
+    private Palette palette = Palette.LIGHT;
+    private double zoom = 1;
+    private double offsetX = 40;
+    private double offsetY = 40;
+    private boolean gridDirty = true;
+    private Layout lastLayout;
+
+    private enum Gesture { NONE, MOVE, WIRE, BAND, PAN }
+
+    private Gesture gesture = Gesture.NONE;
+    private double pressScreenX;
+    private double pressScreenY;
+    private GridPoint pressGrid;
+    private GridPoint wireStart;
+    private List<Wire> previewWires = List.of();
+    private Optional<Box> band = Optional.empty();
+    private Optional<GridPoint> hover = Optional.empty();
+    private int dragDx;
+    private int dragDy;
+
+    /** A canvas showing the view model's stage. */
+    public SchematicCanvas(EditorViewModel vm) {
+        this.vm = vm;
+        getStyleClass().add("schematic-canvas");
+        getChildren().addAll(gridLayer, drawingLayer, overlayLayer);
+        setFocusTraversable(true);
+        setMinSize(200, 200);
+        vm.stageProperty().addListener((o, a, b) -> redrawDrawing());
+        vm.previewProperty().addListener((o, a, b) -> redrawDrawing());
+        vm.annotationsProperty().addListener((o, a, b) -> redrawDrawing());
+        vm.selectionProperty().addListener((o, a, b) -> redrawOverlay());
+        addEventHandler(MouseEvent.MOUSE_PRESSED, this::pressed);
+        addEventHandler(MouseEvent.MOUSE_DRAGGED, this::dragged);
+        addEventHandler(MouseEvent.MOUSE_RELEASED, this::released);
+        addEventHandler(MouseEvent.MOUSE_MOVED, this::moved);
+        addEventHandler(ScrollEvent.SCROLL, this::scrolled);
+        addEventHandler(KeyEvent.KEY_PRESSED, this::key);
+    }
+
+    // ------------------------------------------------------------------ view
+
+    /** Pixels per grid unit at the present zoom. */
+    public double scale() {
+        return BASE_PIXELS_PER_GRID * zoom;
+    }
+
+    /** The grid-to-screen transform. */
+    public Affine view() {
+        return new Affine(scale(), 0, offsetX, 0, scale(), offsetY);
+    }
+
+    /** Grid x of a screen x. */
+    public double gridX(double screenX) {
+        return (screenX - offsetX) / scale();
+    }
+
+    /** Grid y of a screen y. */
+    public double gridY(double screenY) {
+        return (screenY - offsetY) / scale();
+    }
+
+    /** The last layout drawn (labels and extent), for tests and tooltips. */
+    public Layout lastLayout() {
+        return lastLayout;
+    }
+
+    /** The canvas with parts, wires, labels and readouts (for snapshots). */
+    public Canvas drawingLayer() {
+        return drawingLayer;
+    }
+
+    /** Uses another palette (theme switch). */
+    public void setPalette(Palette p) {
+        palette = p;
+        gridDirty = true;
+        redrawAll();
+    }
+
+    /** The palette in use. */
+    public Palette palette() {
+        return palette;
+    }
+
+    /** Zooms by a factor about a screen point. */
+    public void zoomAt(double factor, double screenX, double screenY) {
+        double gx = gridX(screenX);
+        double gy = gridY(screenY);
+        zoom = Math.max(MIN_ZOOM, Math.min(MAX_ZOOM, zoom * factor));
+        offsetX = screenX - gx * scale();
+        offsetY = screenY - gy * scale();
+        gridDirty = true;
+        redrawAll();
+    }
+
+    /** Zooms in about the centre. */
+    public void zoomIn() {
+        zoomAt(ZOOM_STEP, getWidth() / 2, getHeight() / 2);
+    }
+
+    /** Zooms out about the centre. */
+    public void zoomOut() {
+        zoomAt(1 / ZOOM_STEP, getWidth() / 2, getHeight() / 2);
+    }
+
+    /** Fits the whole drawing (with labels) into the view. */
+    public void fit() {
+        double w = getWidth();
+        double h = getHeight();
+        if (w <= 0 || h <= 0) {
+            return;
+        }
+        Box e = SchematicRenderer.layout(vm.stage(), vm.annotationsProperty().get()).extent().inflate(1.5);
+        zoom = Math.max(MIN_ZOOM, Math.min(MAX_ZOOM, Math.min(w / e.width(), h / e.height()) / BASE_PIXELS_PER_GRID));
+        offsetX = (w - e.width() * scale()) / 2 - e.minX() * scale();
+        offsetY = (h - e.height() * scale()) / 2 - e.minY() * scale();
+        gridDirty = true;
+        redrawAll();
+    }
+
+    private void pan(double dxScreen, double dyScreen) {
+        offsetX += dxScreen;
+        offsetY += dyScreen;
+        gridDirty = true;
+        redrawAll();
+    }
+
+    @Override
+    protected void layoutChildren() {
+        double w = Math.floor(getWidth());
+        double h = Math.floor(getHeight());
+        for (Canvas c : new Canvas[] {gridLayer, drawingLayer, overlayLayer}) {
+            if (c.getWidth() != w || c.getHeight() != h) {
+                c.setWidth(w);
+                c.setHeight(h);
+                gridDirty = true;
+            }
+        }
+        if (gridDirty) {
+            redrawAll();
+        }
+    }
+
+    private void redrawAll() {
+        redrawGrid();
+        redrawDrawing();
+        redrawOverlay();
+    }
+
+    private RenderOptions options(Set<Layer> layers) {
+        Box visible = Box.spanning(gridX(0), gridY(0), gridX(getWidth()), gridY(getHeight()));
+        return RenderOptions.all().withPalette(palette).withLayers(layers).withGridArea(visible)
+                .withSelection(vm.selectionProperty().get());
+    }
+
+    private void redrawGrid() {
+        if (!gridDirty) {
+            return;
+        }
+        GraphicsContext g = gridLayer.getGraphicsContext2D();
+        g.setFill(FxPen.fx(palette.paper()));
+        g.fillRect(0, 0, gridLayer.getWidth(), gridLayer.getHeight());
+        SchematicRenderer.draw(vm.shownStage(), org.armature.render.Annotations.NONE, options(EnumSet.of(Layer.GRID)),
+                new FxPen(g, view()));
+        gridDirty = false;
+    }
+
+    private void redrawDrawing() {
+        GraphicsContext g = drawingLayer.getGraphicsContext2D();
+        g.clearRect(0, 0, drawingLayer.getWidth(), drawingLayer.getHeight());
+        lastLayout = SchematicRenderer.draw(vm.shownStage(), vm.annotationsProperty().get(),
+                options(EnumSet.of(Layer.WIRES, Layer.PARTS, Layer.LABELS, Layer.ANNOTATIONS)), new FxPen(g, view()));
+    }
+
+    private void redrawOverlay() {
+        GraphicsContext g = overlayLayer.getGraphicsContext2D();
+        g.clearRect(0, 0, overlayLayer.getWidth(), overlayLayer.getHeight());
+        Selection sel = gesture == Gesture.MOVE && dragDx != 0 || gesture == Gesture.MOVE && dragDy != 0
+                ? new Selection(vm.selectionProperty().get().refs(), Set.of()) : vm.selectionProperty().get();
+        RenderOptions o = options(EnumSet.of(Layer.SELECTION)).withSelection(sel).withPreview(previewWires, band, hover);
+        SchematicRenderer.draw(vm.shownStage(), org.armature.render.Annotations.NONE, o, new FxPen(g, view()));
+    }
+
+    // ------------------------------------------------------------------ input
+
+    private void pressed(MouseEvent e) {
+        requestFocus();
+        pressScreenX = e.getX();
+        pressScreenY = e.getY();
+        double gx = gridX(e.getX());
+        double gy = gridY(e.getY());
+        pressGrid = Snap.toGrid(gx, gy);
+        if (e.getButton() == MouseButton.MIDDLE || e.getButton() == MouseButton.SECONDARY) {
+            gesture = Gesture.PAN;
+            return;
+        }
+        if (vm.armedKindProperty().get().isPresent()) {
+            vm.place(vm.armedKindProperty().get().get(), pressGrid);
+            gesture = Gesture.NONE;
+            return;
+        }
+        Stage st = vm.stage();
+        HitTester.Hit hit = HitTester.at(st, gx, gy, HIT_PIXELS / scale());
+        if (hit instanceof HitTester.PinHit pin) {
+            gesture = Gesture.WIRE;
+            wireStart = pin.at();
+            previewWires = List.of();
+        } else if (hit instanceof HitTester.PartHit part) {
+            Selection cur = vm.selectionProperty().get();
+            if (e.isShiftDown() || e.isShortcutDown()) {
+                Set<String> refs = new LinkedHashSet<>(cur.refs());
+                if (!refs.remove(part.ref())) {
+                    refs.add(part.ref());
+                }
+                vm.select(new Selection(refs, cur.wires()));
+            } else if (!cur.refs().contains(part.ref())) {
+                vm.select(Selection.ofPart(part.ref()));
+            }
+            gesture = Gesture.MOVE;
+            dragDx = 0;
+            dragDy = 0;
+        } else if (hit instanceof HitTester.WireHit wire) {
+            vm.select(new Selection(Set.of(), Set.of(wire.index())));
+            gesture = Gesture.NONE;
+        } else {
+            if (!e.isShiftDown()) {
+                vm.select(Selection.EMPTY);
+            }
+            gesture = Gesture.BAND;
+            band = Optional.empty();
+        }
+    }
+
+    private void dragged(MouseEvent e) {
+        double gx = gridX(e.getX());
+        double gy = gridY(e.getY());
+        switch (gesture) {
+            case PAN -> {
+                pan(e.getX() - pressScreenX, e.getY() - pressScreenY);
+                pressScreenX = e.getX();
+                pressScreenY = e.getY();
+            }
+            case MOVE -> {
+                GridPoint now = Snap.toGrid(gx, gy);
+                int dx = now.gridX() - pressGrid.gridX();
+                int dy = now.gridY() - pressGrid.gridY();
+                if (dx != dragDx || dy != dragDy) {
+                    dragDx = dx;
+                    dragDy = dy;
+                    vm.previewMove(dx, dy);
+                    redrawOverlay();
+                }
+            }
+            case WIRE -> {
+                GridPoint end = Snap.toConnectionOrGrid(vm.stage(), gx, gy, SNAP_GRID);
+                previewWires = Router.route(vm.stage(), wireStart, end);
+                hover = Snap.connectionNear(vm.stage(), gx, gy, SNAP_GRID);
+                redrawOverlay();
+            }
+            case BAND -> {
+                band = Optional.of(Box.spanning(gridX(pressScreenX), gridY(pressScreenY), gx, gy));
+                redrawOverlay();
+            }
+            default -> {
+            }
+        }
+    }
+
+    private void released(MouseEvent e) {
+        double gx = gridX(e.getX());
+        double gy = gridY(e.getY());
+        switch (gesture) {
+            case MOVE -> {
+                if (dragDx != 0 || dragDy != 0) {
+                    vm.moveSelection(dragDx, dragDy);
+                } else {
+                    vm.clearPreview();
+                }
+            }
+            case WIRE -> {
+                GridPoint end = Snap.toConnectionOrGrid(vm.stage(), gx, gy, SNAP_GRID);
+                if (!end.equals(wireStart)) {
+                    vm.drawWire(wireStart, end);
+                }
+            }
+            case BAND -> band.ifPresent(b -> {
+                Selection cur = vm.selectionProperty().get();
+                Set<String> refs = new LinkedHashSet<>(e.isShiftDown() ? cur.refs() : Set.of());
+                refs.addAll(HitTester.partsWithin(vm.stage(), b));
+                Set<Integer> wires = new LinkedHashSet<>(e.isShiftDown() ? cur.wires() : Set.of());
+                wires.addAll(HitTester.wiresWithin(vm.stage(), b));
+                vm.select(new Selection(refs, wires));
+            });
+            default -> {
+            }
+        }
+        gesture = Gesture.NONE;
+        previewWires = List.of();
+        band = Optional.empty();
+        dragDx = 0;
+        dragDy = 0;
+        redrawOverlay();
+    }
+
+    private void moved(MouseEvent e) {
+        Optional<GridPoint> h = Snap.connectionNear(vm.stage(), gridX(e.getX()), gridY(e.getY()), HIT_PIXELS / scale());
+        if (!h.equals(hover)) {
+            hover = h;
+            redrawOverlay();
+        }
+    }
+
+    private void scrolled(ScrollEvent e) {
+        if (e.getDeltaY() == 0) {
+            return;
+        }
+        zoomAt(e.getDeltaY() > 0 ? ZOOM_STEP : 1 / ZOOM_STEP, e.getX(), e.getY());
+        e.consume();
+    }
+
+    private void key(KeyEvent e) {
+        KeyCode k = e.getCode();
+        boolean nudge = !vm.selectionProperty().get().refs().isEmpty() && !e.isShortcutDown();
+        switch (k) {
+            case LEFT -> { if (nudge) { vm.moveSelection(-1, 0); } else { pan(scale(), 0); } }
+            case RIGHT -> { if (nudge) { vm.moveSelection(1, 0); } else { pan(-scale(), 0); } }
+            case UP -> { if (nudge) { vm.moveSelection(0, -1); } else { pan(0, scale()); } }
+            case DOWN -> { if (nudge) { vm.moveSelection(0, 1); } else { pan(0, -scale()); } }
+            case R -> vm.rotate();
+            case M -> vm.mirror();
+            case DELETE, BACK_SPACE -> vm.delete();
+            case ESCAPE -> {
+                vm.arm(Optional.empty());
+                vm.select(Selection.EMPTY);
+            }
+            case PLUS, EQUALS, ADD -> zoomIn();
+            case MINUS, SUBTRACT -> zoomOut();
+            case F -> fit();
+            default -> {
+                return;
+            }
+        }
+        e.consume();
+    }
+}

@@ -1,0 +1,63 @@
+package org.armature.ui;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayDeque;
+import java.util.Deque;
+import java.util.List;
+import org.armature.model.Templates;
+import org.armature.render.Annotations;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+
+/** The solve seam of the view model, without the toolkit (JavaFX properties need none). */
+class EditorViewModelTest {
+
+    /** Readouts that tag the coil supply with the R1 value, so a result shows which stage it came from. */
+    private static final ReadoutSource MARKING = st -> new ReadoutSource.Readouts(
+            new Annotations(List.of(new Annotations.NodeVoltage("supply", st.require("R1").value("resistanceOhms"))),
+                    List.of(), List.of(), List.of(), List.of()), "solved");
+
+    @Test
+    @DisplayName("readouts are computed on the solve executor and published through the FX executor")
+    void solvesOffThread() {
+        Deque<Runnable> solves = new ArrayDeque<>();
+        Deque<Runnable> fx = new ArrayDeque<>();
+        EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, MARKING, solves::add, fx::add);
+        assertEquals(Annotations.NONE, vm.annotationsProperty().get(), "nothing before the solve ran");
+        assertEquals(1, solves.size());
+        solves.poll().run();
+        assertTrue(vm.annotationsProperty().get().isEmpty(), "nothing before the FX thread publishes");
+        fx.poll().run();
+        assertEquals(1000, vm.annotationsProperty().get().voltages().get(0).volts(), 1e-12);
+        assertEquals("solved", vm.solverStatusProperty().get());
+    }
+
+    @Test
+    @DisplayName("a result of an older stage that arrives late is dropped")
+    void staleResultDropped() {
+        Deque<Runnable> solves = new ArrayDeque<>();
+        Deque<Runnable> fx = new ArrayDeque<>();
+        EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, MARKING, solves::add, fx::add);
+        vm.setValue("R1", "resistanceOhms", 2200);
+        Runnable old = solves.poll();
+        Runnable fresh = solves.poll();
+        fresh.run();
+        fx.poll().run();
+        old.run();
+        fx.poll().run();
+        assertEquals(2200, vm.annotationsProperty().get().voltages().get(0).volts(), 1e-12);
+    }
+
+    @Test
+    @DisplayName("the View toggles filter readouts without changing the document")
+    void togglesFilter() {
+        EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, MARKING, Runnable::run, Runnable::run);
+        vm.showReadout(EditorViewModel.ReadoutKind.VOLTAGES, false);
+        assertTrue(vm.annotationsProperty().get().voltages().isEmpty());
+        vm.showReadout(EditorViewModel.ReadoutKind.VOLTAGES, true);
+        assertEquals(1, vm.annotationsProperty().get().voltages().size());
+        assertEquals(Templates.defaultStage(), vm.stage());
+    }
+}
