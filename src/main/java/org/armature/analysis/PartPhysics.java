@@ -35,6 +35,11 @@ final class PartPhysics {
         return coil(relay, 1).scaledAtConstantCurrent(voltsAtReference, PhysicalConstants.celsiusToKelvin(celsius));
     }
 
+    /** Mean coil temperature from a measured coil resistance (the resistance method, RC-10), °C. */
+    static double coilCelsiusFromOhms(Part relay, double measuredOhms) {
+        return PhysicalConstants.kelvinToCelsius(coil(relay, 1).temperatureKelvinAt(measuredOhms));
+    }
+
     /** The hFE temperature factor (T/Tnom)^XTB of a bipolar part at a junction temperature (BJ-13). */
     static double gainFactor(Part bjt, double celsius) {
         double xtb = bjt.kind() == PartKind.DARLINGTON ? BjtParams.DEFAULT_BETA_TEMP_EXPONENT

@@ -307,7 +307,7 @@ public final class StageChecks {
             double n = q.kind() == PartKind.DARLINGTON ? q.value("channelCount") : 1;
             double p = Math.max(0, r.powerWatts()) * n;
             double rth = q.value("thermalResistanceKelvinPerWatt");
-            double tj = ta + p * rth;
+            double tj = ThermalBudget.junctionCelsius(ta, p, rth);
             double max = q.value("tjMaxCelsius");
             double pass = max - o.thermalMarginKelvin();
             CheckStatus st = tj <= pass ? CheckStatus.PASS : tj <= max ? CheckStatus.WARN : CheckStatus.FAIL;
@@ -342,14 +342,18 @@ public final class StageChecks {
         }
 
         private Optional<CheckResult> suppressorCurrent(SuppressorEstimate sup, double i0) {
+            // a channel's own clamp diode is rated like its output (from memory); else the diode or zener's peak rating
             Optional<Part> diode = sup.refs().stream().map(stage::require)
-                    .filter(p -> p.kind() == PartKind.DIODE || p.kind() == PartKind.ZENER).findFirst();
+                    .filter(p -> p.kind() == PartKind.DIODE || p.kind() == PartKind.ZENER || p.kind() == PartKind.DARLINGTON)
+                    .findFirst();
             if (diode.isEmpty() || Double.isNaN(i0)) {
                 return Optional.empty();
             }
-            double rating = diode.get().value("maxCurrentAmps");
-            Measure m = rated(i0, rating, diode.get().ref() + " carries the coil current at turn-off, " + amps(i0)
-                    + ", against a peak rating of " + amps(rating) + ".");
+            boolean channel = diode.get().kind() == PartKind.DARLINGTON;
+            double rating = diode.get().value(channel ? "icMaxAmps" : "maxCurrentAmps");
+            Measure m = rated(i0, rating, (channel ? diode.get().ref() + "'s clamp diode" : diode.get().ref())
+                    + " carries the coil current at turn-off, " + amps(i0) + ", against a peak rating of " + amps(rating)
+                    + (channel ? " (taken as the channel's output rating)." : "."));
             return Optional.of(new CheckResult("rating.suppressor-current", m.status(), m.value(), m.limit(), Unit.AMPERE,
                     Map.of(), "largest coil current", "peak suppressor current = coil current at turn-off", m.explanation(),
                     List.of(diode.get().ref())));
