@@ -1,0 +1,74 @@
+package org.armature.netlist;
+
+import java.util.List;
+
+/**
+ * A relay contact: a small resistance when closed, a large one when open, switched by a state slot
+ * (1 = relay operated, 0 = released). A normally-open contact is closed when operated, a
+ * normally-closed one when released. Resistances are from {@link ContactModel}.
+ */
+public final class SwitchedResistor implements Element {
+
+    private final String label;
+    private final int a;
+    private final int b;
+    private final int stateSlot;
+    private final boolean closedWhenOperated;
+    private final ContactModel model;
+
+    /**
+     * @param label designator and contact for messages
+     * @param a node of one contact end
+     * @param b node of the other
+     * @param stateSlot slot holding 1 (operated) or 0 (released)
+     * @param closedWhenOperated true for a normally-open contact
+     * @param model closed and open resistances
+     */
+    public SwitchedResistor(String label, int a, int b, int stateSlot, boolean closedWhenOperated,
+                            ContactModel model) {
+        this.label = label;
+        this.a = a;
+        this.b = b;
+        this.stateSlot = stateSlot;
+        this.closedWhenOperated = closedWhenOperated;
+        this.model = model;
+    }
+
+    /**
+     * @param x a solution (its state slot says whether the relay is operated)
+     * @return resistance in that state, Ω
+     */
+    public double ohms(Solution x) {
+        boolean operated = x.state(stateSlot) > 0.5;
+        return operated == closedWhenOperated ? model.closedOhms() : model.openOhms();
+    }
+
+    /**
+     * @param x a solution
+     * @return current from a to b, A
+     */
+    public double current(Solution x) {
+        return (x.voltage(a) - x.voltage(b)) / ohms(x);
+    }
+
+    @Override
+    public String label() {
+        return label;
+    }
+
+    @Override
+    public int[] terminals() {
+        return new int[] {a, b};
+    }
+
+    @Override
+    public List<int[]> conductingPairs() {
+        return List.of(new int[] {a, b});
+    }
+
+    @Override
+    public boolean stamp(Stamper s, Solution x, StampContext ctx) {
+        s.conductance(a, b, 1.0 / ohms(x));
+        return false;
+    }
+}
