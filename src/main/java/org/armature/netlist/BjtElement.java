@@ -84,7 +84,7 @@ public final class BjtElement implements Element {
     }
 
     /**
-     * Terminal currents at a solution, gmin included (not thread-safe: uses the element's holder).
+     * Terminal currents at a solution, gmin included (thread-safe: uses its own evaluation holder).
      *
      * @param x a solution
      * @param out receives current into the collector, base and emitter, A (length ≥ 3)
@@ -92,9 +92,10 @@ public final class BjtElement implements Element {
     public void terminalCurrents(Solution x, double[] out) {
         double vbe = vbe(x);
         double vbc = vbc(x);
-        bjt.evaluate(vbe, vbc, temperatureKelvin, eval);
-        double ic = eval.collectorAmps() - gminSiemens * vbc;
-        double ib = eval.baseAmps() + gminSiemens * (vbe + vbc);
+        BjtEvaluation ev = new BjtEvaluation();
+        bjt.evaluate(vbe, vbc, temperatureKelvin, ev);
+        double ic = ev.collectorAmps() - gminSiemens * vbc;
+        double ib = ev.baseAmps() + gminSiemens * (vbe + vbc);
         out[0] = ic;
         out[1] = ib;
         out[2] = -(ic + ib);

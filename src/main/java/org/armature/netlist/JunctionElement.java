@@ -60,15 +60,16 @@ public final class JunctionElement implements Element {
 
     /**
      * Current at a solution, evaluated at its exact junction voltage (no limiting), gmin included.
-     * Allocates nothing but is not thread-safe (uses the element's evaluation holder).
+     * Thread-safe: uses its own evaluation holder, not the one of the Newton loop.
      *
      * @param x a solution
      * @return current from anode to cathode, A
      */
     public double current(Solution x) {
         double v = voltage(x);
-        diode.evaluate(v, temperatureKelvin, eval);
-        return eval.currentAmps() + gminSiemens * v;
+        JunctionEvaluation out = new JunctionEvaluation();
+        diode.evaluate(v, temperatureKelvin, out);
+        return out.currentAmps() + gminSiemens * v;
     }
 
     @Override

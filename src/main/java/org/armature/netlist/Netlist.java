@@ -1,0 +1,134 @@
+package org.armature.netlist;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * A flattened circuit ready for modified nodal analysis: nodes, branches, state slots and elements,
+ * and the part networks they came from.
+ *
+ * <p>Unknown vector layout: node voltages {@code 0..nodeCount-1}, then branch currents
+ * {@code nodeCount..nodeCount+branchCount-1}. The structure is immutable; nonlinear elements keep
+ * Newton limiting memory, so a netlist serves one solve at a time.
+ */
+public final class Netlist {
+
+    /** Node index of the reference (ground) node. */
+    public static final int GROUND = -1;
+
+    private final List<String> nodeNames;
+    private final List<String> branchNames;
+    private final double[] initialStates;
+    private final List<Element> elements;
+    private final List<PartNetwork> parts;
+    private final Map<String, Integer> netNodes;
+
+    Netlist(List<String> nodeNames, List<String> branchNames, double[] initialStates, List<Element> elements,
+            List<PartNetwork> parts, Map<String, Integer> netNodes) {
+        this.nodeNames = List.copyOf(nodeNames);
+        this.branchNames = List.copyOf(branchNames);
+        this.initialStates = initialStates.clone();
+        this.elements = List.copyOf(elements);
+        this.parts = List.copyOf(parts);
+        this.netNodes = Collections.unmodifiableMap(new LinkedHashMap<>(netNodes));
+    }
+
+    /** @return number of non-ground nodes */
+    public int nodeCount() {
+        return nodeNames.size();
+    }
+
+    /** @return number of voltage-defined branches */
+    public int branchCount() {
+        return branchNames.size();
+    }
+
+    /** @return number of unknowns, nodes plus branches */
+    public int unknownCount() {
+        return nodeNames.size() + branchNames.size();
+    }
+
+    /** @return number of state slots */
+    public int stateCount() {
+        return initialStates.length;
+    }
+
+    /** @return a fresh copy of the initial state slots */
+    public double[] initialStates() {
+        return initialStates.clone();
+    }
+
+    /** @return all elements in stamping order */
+    public List<Element> elements() {
+        return elements;
+    }
+
+    /** @return the part networks in drawing order (ground symbols included, with no elements) */
+    public List<PartNetwork> parts() {
+        return parts;
+    }
+
+    /**
+     * @param ref a designator
+     * @return that part's network
+     */
+    public Optional<PartNetwork> part(String ref) {
+        return parts.stream().filter(p -> p.ref().equals(ref)).findFirst();
+    }
+
+    /** @return node of every net of the drawing that has a pin, by net name; {@code gnd} maps to {@link #GROUND} */
+    public Map<String, Integer> netNodes() {
+        return netNodes;
+    }
+
+    /**
+     * @param node a node index
+     * @return the net name, or the internal node's name ({@code Q1.b'}), or {@code gnd}
+     */
+    public String nodeName(int node) {
+        return node < 0 ? "gnd" : nodeNames.get(node);
+    }
+
+    /**
+     * @param unknown an unknown index
+     * @return the node name, or "current of V1" for a branch
+     */
+    public String unknownName(int unknown) {
+        if (unknown < nodeNames.size()) {
+            return nodeNames.get(unknown);
+        }
+        return "current of " + branchNames.get(unknown - nodeNames.size());
+    }
+
+    /**
+     * @param node a node index
+     * @return labels of the elements with a terminal on that node
+     */
+    public List<String> elementsAt(int node) {
+        List<String> out = new ArrayList<>();
+        for (Element e : elements) {
+            for (int t : e.terminals()) {
+                if (t == node) {
+                    if (!out.contains(e.label())) {
+                        out.add(e.label());
+                    }
+                    break;
+                }
+            }
+        }
+        return out;
+    }
+
+    /** @return the relays of the netlist */
+    public List<RelayHandle> relays() {
+        List<RelayHandle> out = new ArrayList<>();
+        for (PartNetwork p : parts) {
+            p.relay().ifPresent(out::add);
+        }
+        return out;
+    }
+}

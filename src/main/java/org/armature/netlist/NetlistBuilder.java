@@ -1,0 +1,481 @@
+package org.armature.netlist;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.armature.devices.Bjt;
+import org.armature.devices.BjtParams;
+import org.armature.devices.BjtPolarity;
+import org.armature.devices.Diode;
+import org.armature.devices.DiodeParams;
+import org.armature.devices.GateStepOptions;
+import org.armature.devices.Mosfet;
+import org.armature.devices.MosfetParams;
+import org.armature.model.Connectivity;
+import org.armature.model.Part;
+import org.armature.model.PartKind;
+import org.armature.model.PinRef;
+import org.armature.model.PinSpec;
+import org.armature.model.Stage;
+import org.armature.units.PhysicalConstants;
+
+/**
+ * Builds a {@link Netlist}: either element by element (tests, other analyses) or by flattening a
+ * {@link Stage} with {@link #flatten(Stage, FlattenOptions)}.
+ *
+ * <p>Flattening: one node per net of the drawing that has at least one pin (from
+ * {@link Connectivity}; {@code gnd} is the reference), plus internal nodes for series
+ * resistances. Per kind:
+ * <ul>
+ * <li>drive pin: Thevenin source (level from the pin state, output resistance) to ground, stamped
+ *     as its Norton equivalent; supply: ideal voltage source to ground;</li>
+ * <li>resistor, load: a resistor; capacitor: open at DC;</li>
+ * <li>diode, zener: Shockley junction with breakdown plus series resistance; LED: junction fitted to
+ *     its forward point; TVS: bidirectional clamp plus its dynamic resistance;</li>
+ * <li>NPN, PNP: Ebers–Moll/Gummel–Poon transistor plus RB, RC, RE;</li>
+ * <li>NMOS: Shichman–Hodges channel plus the body diode from source to drain;</li>
+ * <li>Darlington channel: input resistor, two NPNs (the first one's emitter drives the second's
+ *     base, both collectors on the output, the output transistor through its collector
+ *     resistance), a resistor across each base–emitter, and the clamp diode from the output to the
+ *     common pin;</li>
+ * <li>relay: coil resistance between A1 and A2 at the coil temperature, contacts com–no and com–nc
+ *     as small or large resistances switched by the relay state.</li>
+ * </ul>
+ * Every semiconductor sits at the ambient of {@link FlattenOptions}. Parameters hold at 25 °C
+ * (datasheet conditions).
+ */
+public final class NetlistBuilder {
+
+    private static final String GND = Connectivity.GROUND;
+
+    private final List<String> nodeNames = new ArrayList<>();
+    private final Map<String, Integer> nodeByName = new HashMap<>();
+    private final List<String> branchNames = new ArrayList<>();
+    private final List<Double> states = new ArrayList<>();
+    private final List<Element> elements = new ArrayList<>();
+    private final List<PartNetwork> parts = new ArrayList<>();
+    private final Map<String, Integer> netNodes = new LinkedHashMap<>();
+
+    /** An empty builder. */
+    public NetlistBuilder() {
+        netNodes.put(GND, Netlist.GROUND);
+    }
+
+    /**
+     * The node of a name, created on first use; {@code gnd} is {@link Netlist#GROUND}.
+     *
+     * @param name node name
+     * @return node index
+     */
+    public int node(String name) {
+        if (name.equals(GND)) {
+            return Netlist.GROUND;
+        }
+        Integer existing = nodeByName.get(name);
+        if (existing != null) {
+            return existing;
+        }
+        int index = nodeNames.size();
+        nodeNames.add(name);
+        nodeByName.put(name, index);
+        return index;
+    }
+
+    /**
+     * A node that is a net of the drawing (it appears in {@link Netlist#netNodes()}).
+     *
+     * @param net net name
+     * @return node index
+     */
+    public int net(String net) {
+        int n = node(net);
+        netNodes.put(net, n);
+        return n;
+    }
+
+    /**
+     * @param owner label of the element that owns the branch, for messages
+     * @return a new branch number
+     */
+    public int allocateBranch(String owner) {
+        branchNames.add(owner);
+        return branchNames.size() - 1;
+    }
+
+    /**
+     * @param initialValue the slot's value before any solve
+     * @return a new state slot
+     */
+    public int allocateState(double initialValue) {
+        states.add(initialValue);
+        return states.size() - 1;
+    }
+
+    /**
+     * Adds an element that belongs to no part.
+     *
+     * @param e the element
+     * @return this builder
+     */
+    public NetlistBuilder add(Element e) {
+        elements.add(e);
+        return this;
+    }
+
+    /** @return the netlist built so far */
+    public Netlist build() {
+        double[] s = new double[states.size()];
+        for (int i = 0; i < s.length; i++) {
+            s[i] = states.get(i);
+        }
+        return new Netlist(nodeNames, branchNames, s, elements, parts, netNodes);
+    }
+
+    /**
+     * Flattens a stage.
+     *
+     * @param stage the stage
+     * @param options pin state, ambient, initial relay state and model details
+     * @return the netlist
+     */
+    public static Netlist flatten(Stage stage, FlattenOptions options) {
+        return flatten(stage, Connectivity.of(stage), options);
+    }
+
+    /**
+     * Flattens a stage whose connectivity is already known.
+     *
+     * @param stage the stage
+     * @param connectivity its nets
+     * @param options pin state, ambient, initial relay state and model details
+     * @return the netlist
+     */
+    public static Netlist flatten(Stage stage, Connectivity connectivity, FlattenOptions options) {
+        NetlistBuilder b = new NetlistBuilder();
+        // nets with pins, in the connectivity's order so node numbering is stable
+        java.util.Set<String> used = new java.util.HashSet<>(connectivity.netOfPin().values());
+        for (String net : connectivity.nets()) {
+            if (used.contains(net)) {
+                b.net(net);
+            }
+        }
+        for (Part part : stage.parts()) {
+            Map<String, Integer> pins = new LinkedHashMap<>();
+            for (PinSpec pin : part.kind().pins()) {
+                pins.put(pin.name(), b.net(connectivity.netOfPin().get(new PinRef(part.ref(), pin.name()))));
+            }
+            new PartFlattener(b, part, pins, options).flatten();
+        }
+        return b.build();
+    }
+
+    void addPart(PartNetwork p) {
+        parts.add(p);
+        elements.addAll(p.elements());
+    }
+
+    /** Flattens one part. */
+    private static final class PartFlattener {
+        private final NetlistBuilder b;
+        private final Part part;
+        private final Map<String, Integer> pins;
+        private final FlattenOptions o;
+        private final double kelvin;
+        private final List<Element> els = new ArrayList<>();
+
+        PartFlattener(NetlistBuilder b, Part part, Map<String, Integer> pins, FlattenOptions o) {
+            this.b = b;
+            this.part = part;
+            this.pins = pins;
+            this.o = o;
+            this.kelvin = PhysicalConstants.celsiusToKelvin(o.ambientCelsius());
+        }
+
+        private String ref() {
+            return part.ref();
+        }
+
+        private int pin(String name) {
+            return pins.get(name);
+        }
+
+        private double v(String key) {
+            return part.value(key);
+        }
+
+        /** A series resistance from a pin node to a new internal node, or the pin node itself when zero. */
+        private int series(int outer, double ohms, String role) {
+            if (!(ohms > 0)) {
+                return outer;
+            }
+            int inner = b.node(ref() + "." + role);
+            els.add(new Resistor(ref() + " " + role + " resistance", outer, inner, ohms));
+            return inner;
+        }
+
+        private void done(PartNetwork.Reader reader, RelayHandle relay) {
+            b.addPart(new PartNetwork(part, pins, els, reader, relay));
+        }
+
+        void flatten() {
+            switch (part.kind()) {
+                case GROUND -> done(x -> new PartReading(Map.of(), Map.of(), Map.of("g", 0.0), 0.0), null);
+                case SUPPLY -> supply();
+                case DRIVE_PIN -> drivePin();
+                case RESISTOR, LOAD -> resistor();
+                case CAPACITOR -> capacitor();
+                case DIODE, ZENER -> diode(junctionParams());
+                case LED -> diode(DiodeParams.fromForwardPoint(v("forwardVolts"), v("forwardCurrentAmps"),
+                        v("emissionCoefficient"), DiodeParams.DATASHEET_TEMPERATURE_KELVIN));
+                case TVS -> tvs();
+                case NPN -> bjt(BjtPolarity.NPN);
+                case PNP -> bjt(BjtPolarity.PNP);
+                case NMOS -> nmos();
+                case DARLINGTON -> darlington();
+                case RELAY -> relay();
+                default -> throw new IllegalStateException("no netlist model for " + part.kind());
+            }
+        }
+
+        private void supply() {
+            int p = pin("p");
+            int branch = b.allocateBranch(ref());
+            VoltageSource src = new VoltageSource(ref(), p, Netlist.GROUND, branch, v("volts"));
+            els.add(src);
+            done(x -> {
+                double sourced = -x.branchCurrent(branch);
+                double volts = x.voltage(p);
+                return new PartReading(Map.of("current", sourced, "volts", volts, "deliveredPower", volts * sourced),
+                        Map.of(), Map.of("p", -sourced), -volts * sourced);
+            }, null);
+        }
+
+        private void drivePin() {
+            int out = pin("out");
+            double level = o.pinHigh() ? v("highVolts") : v("lowVolts");
+            NortonSource src = new NortonSource(ref(), out, Netlist.GROUND, level, v("outputResistanceOhms"));
+            els.add(src);
+            done(x -> {
+                double i = src.currentOut(x, 1.0);
+                double volts = x.voltage(out);
+                return new PartReading(Map.of("current", i, "volts", volts, "deliveredPower", volts * i),
+                        Map.of(), Map.of("out", -i), -volts * i);
+            }, null);
+        }
+
+        private void resistor() {
+            int a = pin("a");
+            int bb = pin("b");
+            Resistor r = new Resistor(ref(), a, bb, v("resistanceOhms"));
+            els.add(r);
+            done(x -> twoTerminal(x, a, bb, r.current(x), "a", "b"), null);
+        }
+
+        private void capacitor() {
+            int a = pin("a");
+            int bb = pin("b");
+            els.add(new Capacitor(ref(), a, bb, v("capacitanceFarads")));
+            done(x -> twoTerminal(x, a, bb, 0.0, "a", "b"), null);
+        }
+
+        private DiodeParams junctionParams() {
+            return DiodeParams.junction(v("saturationCurrentAmps"), v("emissionCoefficient"))
+                    .withBreakdown(v("breakdownVolts"), v("breakdownCurrentAmps"), v("emissionCoefficient"));
+        }
+
+        private void diode(DiodeParams params) {
+            int a = pin("a");
+            int k = pin("k");
+            double rs = part.kind().param("seriesResistanceOhms").isPresent() ? v("seriesResistanceOhms") : 0.0;
+            int ai = series(a, rs, "series");
+            JunctionElement j = new JunctionElement(ref(), ai, k, new Diode(params), kelvin, o.junctionGminSiemens());
+            els.add(j);
+            done(x -> twoTerminal(x, a, k, j.current(x), "a", "k"), null);
+        }
+
+        private void tvs() {
+            int a = pin("a");
+            int bb = pin("b");
+            int ai = series(a, v("clampResistanceOhms"), "clamp");
+            DiodeParams params = DiodeParams.junction(TVS_LIMITING_SATURATION_AMPS, 1.0)
+                    .asBidirectionalClamp(v("breakdownVolts"), v("breakdownCurrentAmps"), 1.0);
+            JunctionElement j = new JunctionElement(ref(), ai, bb, new Diode(params), kelvin, o.junctionGminSiemens());
+            els.add(j);
+            done(x -> twoTerminal(x, a, bb, j.current(x), "a", "b"), null);
+        }
+
+        private PartReading twoTerminal(Solution x, int a, int bb, double current, String pa, String pb) {
+            double volts = x.voltage(a) - x.voltage(bb);
+            return new PartReading(Map.of("current", current, "voltage", volts, "power", volts * current),
+                    Map.of(), Map.of(pa, current, pb, -current), volts * current);
+        }
+
+        private void bjt(BjtPolarity polarity) {
+            double inf = Double.POSITIVE_INFINITY;
+            BjtParams params = new BjtParams(polarity, v("saturationCurrentAmps"), v("betaForward"), v("betaReverse"),
+                    1.0, 1.0, v("earlyVolts"), inf, v("kneeCurrentAmps"), inf, v("baseResistanceOhms"),
+                    v("collectorResistanceOhms"), v("emitterResistanceOhms"), DiodeParams.PN_JUNCTION_TEMP_EXPONENT,
+                    v("gainTempExponent"), DiodeParams.SILICON_BAND_GAP_ELECTRON_VOLTS,
+                    DiodeParams.DATASHEET_TEMPERATURE_KELVIN);
+            int c = pin("c");
+            int bb = pin("b");
+            int e = pin("e");
+            int ci = series(c, params.collectorResistanceOhms(), "c'");
+            int bi = series(bb, params.baseResistanceOhms(), "b'");
+            int ei = series(e, params.emitterResistanceOhms(), "e'");
+            BjtElement q = new BjtElement(ref(), ci, bi, ei, new Bjt(params), kelvin, o.junctionGminSiemens());
+            els.add(q);
+            double sign = polarity.sign();
+            RegionThresholds rt = o.regions();
+            done(x -> {
+                double[] i = new double[3];
+                q.terminalCurrents(x, i);
+                double ic = sign * i[0];
+                double ib = sign * i[1];
+                double vce = sign * (x.voltage(c) - x.voltage(e));
+                double vbe = sign * (x.voltage(bb) - x.voltage(e));
+                double power = x.voltage(c) * i[0] + x.voltage(bb) * i[1] + x.voltage(e) * i[2];
+                String region = bipolarRegion(sign * q.vbe(x), sign * q.vbc(x), rt);
+                Map<String, Double> qs = new HashMap<>();
+                qs.put("ic", ic);
+                qs.put("ib", ib);
+                qs.put("vce", vce);
+                qs.put("vbe", vbe);
+                qs.put("forcedBeta", ib > 0 ? ic / ib : 0.0);
+                qs.put("power", power);
+                return new PartReading(qs, Map.of("region", region), Map.of("c", i[0], "b", i[1], "e", i[2]), power);
+            }, null);
+        }
+
+        private void nmos() {
+            MosfetParams params = MosfetParams.level1(v("thresholdVolts"), v("transconductanceAmpsPerVoltSquared"),
+                    v("lambdaPerVolt")).withTemperatureScaling(v("thresholdTempcoVoltsPerKelvin"),
+                    MosfetParams.DEFAULT_MOBILITY_TEMP_EXPONENT);
+            int d = pin("d");
+            int g = pin("g");
+            int s = pin("s");
+            Mosfet device = new Mosfet(params);
+            MosfetElement m = new MosfetElement(ref(), d, g, s, device, kelvin, o.junctionGminSiemens(),
+                    GateStepOptions.DEFAULTS);
+            JunctionElement body = new JunctionElement(ref() + " body diode", s, d, new Diode(params.bodyDiode()),
+                    kelvin, o.junctionGminSiemens());
+            els.add(m);
+            els.add(body);
+            double threshold = device.thresholdAt(kelvin);
+            done(x -> {
+                double id = m.drainCurrent(x) - body.current(x);
+                double vgs = x.voltage(g) - x.voltage(s);
+                double vds = x.voltage(d) - x.voltage(s);
+                double power = vds * id;
+                String region = vgs <= threshold ? "cutoff" : (Math.abs(vds) < vgs - threshold ? "triode" : "saturation");
+                return new PartReading(Map.of("id", id, "vgs", vgs, "vds", vds, "power", power),
+                        Map.of("region", region), Map.of("d", id, "g", 0.0, "s", -id), power);
+            }, null);
+        }
+
+        private void darlington() {
+            int in = pin("in");
+            int out = pin("out");
+            int com = pin("com");
+            int e = pin("e");
+            DarlingtonInternals di = o.darlington();
+            BjtParams tp = BjtParams.ebersMoll(BjtPolarity.NPN, v("saturationCurrentAmps"), v("betaForward"),
+                    di.betaReverse());
+            int b1 = b.node(ref() + ".b1");
+            int b2 = b.node(ref() + ".b2");
+            els.add(new Resistor(ref() + " input resistor", in, b1, v("inputResistanceOhms")));
+            els.add(new Resistor(ref() + " Q1 base-emitter resistor", b1, b2, v("firstBaseEmitterOhms")));
+            els.add(new Resistor(ref() + " Q2 base-emitter resistor", b2, e, v("secondBaseEmitterOhms")));
+            BjtElement q1 = new BjtElement(ref() + " Q1", out, b1, b2, new Bjt(tp), kelvin, o.junctionGminSiemens());
+            int c2 = series(out, v("collectorResistanceOhms"), "c2");
+            BjtElement q2 = new BjtElement(ref() + " Q2", c2, b2, e, new Bjt(tp), kelvin, o.junctionGminSiemens());
+            JunctionElement clamp = new JunctionElement(ref() + " clamp diode", out, com,
+                    new Diode(DiodeParams.junction(di.clampSaturationCurrentAmps(), di.clampEmissionCoefficient())),
+                    kelvin, o.junctionGminSiemens());
+            els.add(q1);
+            els.add(q2);
+            els.add(clamp);
+            double rin = v("inputResistanceOhms");
+            RegionThresholds rt = o.regions();
+            done(x -> {
+                double iin = (x.voltage(in) - x.voltage(b1)) / rin;
+                double iclamp = clamp.current(x);
+                double[] i1 = new double[3];
+                double[] i2 = new double[3];
+                q1.terminalCurrents(x, i1);
+                q2.terminalCurrents(x, i2);
+                double ic = i1[0] + i2[0] + iclamp;
+                double ie = -(iin + ic - iclamp);
+                double vce = x.voltage(out) - x.voltage(e);
+                double vin = x.voltage(in) - x.voltage(e);
+                double power = x.voltage(in) * iin + x.voltage(out) * ic + x.voltage(com) * (-iclamp) + x.voltage(e) * ie;
+                String region;
+                if (q2.vbe(x) < rt.junctionOnVolts()) {
+                    region = "cutoff";
+                } else if (q1.vbc(x) >= rt.saturationBaseCollectorVolts()) {
+                    region = "saturation";
+                } else {
+                    region = "active";
+                }
+                return new PartReading(Map.of("ic", ic, "iin", iin, "vce", vce, "vin", vin, "power", power),
+                        Map.of("region", region), Map.of("in", iin, "out", ic, "com", -iclamp, "e", ie), power);
+            }, null);
+        }
+
+        private void relay() {
+            int a1 = pin("a1");
+            int a2 = pin("a2");
+            int com = pin("com");
+            int no = pin("no");
+            int nc = pin("nc");
+            double rRef = v("coilResistanceOhms");
+            int tempSlot = b.allocateState(o.ambientCelsius());
+            int contactSlot = b.allocateState(o.relayOperated() ? 1.0 : 0.0);
+            RelayCoil coil = new RelayCoil(ref(), a1, a2, rRef, v("referenceTemperatureCelsius"), tempSlot);
+            SwitchedResistor toNo = new SwitchedResistor(ref() + " contact com-no", com, no, contactSlot, true, o.contacts());
+            SwitchedResistor toNc = new SwitchedResistor(ref() + " contact com-nc", com, nc, contactSlot, false, o.contacts());
+            els.add(coil);
+            els.add(toNo);
+            els.add(toNc);
+            RelayHandle handle = new RelayHandle(ref(), coil, tempSlot, contactSlot,
+                    v("coilThermalResistanceKelvinPerWatt"), v("mustOperateVolts") / rRef, v("mustReleaseVolts") / rRef);
+            done(x -> {
+                double coilT = x.state(tempSlot);
+                double i = coil.current(x);
+                double vCoil = x.voltage(a1) - x.voltage(a2);
+                double iNo = toNo.current(x);
+                double iNc = toNc.current(x);
+                double power = vCoil * i + (x.voltage(com) - x.voltage(no)) * iNo + (x.voltage(com) - x.voltage(nc)) * iNc;
+                Map<String, Double> qs = new HashMap<>();
+                qs.put("coilCurrent", i);
+                qs.put("coilVoltage", vCoil);
+                qs.put("coilResistance", coil.ohmsAt(coilT));
+                qs.put("coilTemperature", coilT);
+                qs.put("pickUpCurrent", handle.pickUpAmps());
+                qs.put("dropOutCurrent", handle.dropOutAmps());
+                qs.put("power", power);
+                String contacts = x.state(contactSlot) > 0.5 ? "operated" : "released";
+                return new PartReading(qs, Map.of("state", handle.stateFor(i).key(), "contacts", contacts),
+                        Map.of("a1", i, "a2", -i, "com", iNo + iNc, "no", -iNo, "nc", -iNc), power);
+            }, handle);
+        }
+    }
+
+    /**
+     * IS given to a TVS clamp; a bidirectional clamp has no forward term, IS only scales the Newton
+     * limiting (1e-12 A, a silicon junction; from memory).
+     */
+    private static final double TVS_LIMITING_SATURATION_AMPS = 1e-12;
+
+    static String bipolarRegion(double vbe, double vbc, RegionThresholds rt) {
+        if (vbe < rt.junctionOnVolts()) {
+            return "cutoff";
+        }
+        if (vbc >= rt.saturationBaseCollectorVolts()) {
+            return "saturation";
+        }
+        return "active";
+    }
+}

@@ -1,0 +1,62 @@
+package org.armature.solver;
+
+import org.armature.netlist.ContactModel;
+import org.armature.netlist.DarlingtonInternals;
+import org.armature.netlist.FlattenOptions;
+import org.armature.netlist.RegionThresholds;
+
+/**
+ * Everything the DC engine can be tuned by; the defaults suit relay driver stages.
+ *
+ * @param newton Newton iteration limit, damping and tolerances
+ * @param continuation gmin and source stepping
+ * @param relayLoop coil temperature and contact consistency loop
+ * @param junctionGminSiemens conductance across every junction, S (default 1e-12 S)
+ * @param contacts relay contact resistances
+ * @param regions region thresholds of the readouts
+ * @param darlington Darlington-channel internals
+ * @param linearSolver which dense LU to use
+ */
+public record DcOptions(NewtonOptions newton, ContinuationOptions continuation, RelayLoopOptions relayLoop,
+                        double junctionGminSiemens, ContactModel contacts, RegionThresholds regions,
+                        DarlingtonInternals darlington, LinearSolverKind linearSolver) {
+
+    /** The dense LU implementations. */
+    public enum LinearSolverKind {
+        /** {@link DenseLu}: our own, the default (faster at these sizes in the DcBench benchmark). */
+        DENSE_LU,
+        /** {@link EjmlLu}: EJML's LU under the same contract. */
+        EJML
+    }
+
+    /** All defaults. */
+    public static final DcOptions DEFAULT = new DcOptions(NewtonOptions.DEFAULT, ContinuationOptions.DEFAULT,
+            RelayLoopOptions.DEFAULT, FlattenOptions.DEFAULT_JUNCTION_GMIN_SIEMENS, ContactModel.DEFAULT,
+            RegionThresholds.DEFAULT, DarlingtonInternals.DEFAULT, LinearSolverKind.DENSE_LU);
+
+    public DcOptions {
+        if (newton == null || continuation == null || relayLoop == null || contacts == null || regions == null
+                || darlington == null || linearSolver == null) {
+            throw new IllegalArgumentException("DcOptions fields must not be null");
+        }
+    }
+
+    /** @return the same options with other Newton settings */
+    public DcOptions withNewton(NewtonOptions n) {
+        return new DcOptions(n, continuation, relayLoop, junctionGminSiemens, contacts, regions, darlington, linearSolver);
+    }
+
+    /** @return the same options with another linear solver */
+    public DcOptions withLinearSolver(LinearSolverKind kind) {
+        return new DcOptions(newton, continuation, relayLoop, junctionGminSiemens, contacts, regions, darlington, kind);
+    }
+
+    /** @return the same options with other continuation settings */
+    public DcOptions withContinuation(ContinuationOptions c) {
+        return new DcOptions(newton, c, relayLoop, junctionGminSiemens, contacts, regions, darlington, linearSolver);
+    }
+
+    FlattenOptions flattenOptions(boolean pinHigh, double ambientCelsius) {
+        return new FlattenOptions(pinHigh, ambientCelsius, false, junctionGminSiemens, contacts, regions, darlington);
+    }
+}

@@ -1,0 +1,294 @@
+package org.armature.solver;
+
+import java.util.Collections;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
+import org.armature.model.Part;
+import org.armature.model.PartKind;
+import org.armature.netlist.ArraySolution;
+import org.armature.netlist.Netlist;
+import org.armature.netlist.PartNetwork;
+import org.armature.netlist.PartReading;
+import org.armature.netlist.RelayHandle;
+import org.armature.units.EngineeringNotation;
+import org.armature.units.Unit;
+
+/**
+ * An immutable DC operating point of a stage: node voltages, every part's currents, voltages,
+ * power and named quantities, and the switch verdict.
+ *
+ * <p>The snapshot holds its own copy of the solution vector and element states; the per-part maps
+ * are built from it on first access (and then kept), so a solve whose readouts nobody reads costs
+ * almost no allocation. Safe to share between threads.
+ *
+ * <p>Every number is finite: a solve that would produce NaN or infinity throws instead.
+ */
+public final class OperatingPoint {
+
+    /** A relay's contact state came from its coil current, above pick-up or below drop-out. */
+    public static final String CONTACTS_FROM_COIL = "coil-current";
+    /** Coil current between drop-out and pick-up: the caller's previous state was kept. */
+    public static final String CONTACTS_FROM_PREVIOUS = "previous-state";
+    /** Coil current between drop-out and pick-up, no previous state given: released, as after power-up. */
+    public static final String CONTACTS_FROM_POWER_UP = "power-up";
+
+    private final Netlist netlist;
+    private final double[] unknowns;
+    private final double[] states;
+    private final boolean converged;
+    private final int iterations;
+    private final double maxKclResidualAmps;
+    private final boolean pinHigh;
+    private final double ambientCelsius;
+    private final String[] contactsFrom;
+
+    private Map<String, Double> nodeVoltages;
+    private Map<String, PartResult> parts;
+    private Optional<SwitchVerdict> verdict;
+
+    OperatingPoint(Netlist netlist, double[] unknowns, double[] states, boolean converged, int iterations,
+                   double maxKclResidualAmps, boolean pinHigh, double ambientCelsius, String[] contactsFrom) {
+        this.netlist = netlist;
+        this.unknowns = unknowns.clone();
+        this.states = states.clone();
+        this.converged = converged;
+        this.iterations = iterations;
+        this.maxKclResidualAmps = maxKclResidualAmps;
+        this.pinHigh = pinHigh;
+        this.ambientCelsius = ambientCelsius;
+        this.contactsFrom = contactsFrom.clone();
+    }
+
+    /**
+     * @return true when Newton converged and the relay loop (coil temperature, contact state)
+     *     settled within its tolerance; false only when the relay loop did not settle (contacts that
+     *     feed their own coil, for example), never for a Newton failure (that throws)
+     */
+    public boolean converged() {
+        return converged;
+    }
+
+    /** @return Newton iterations (linear solves) spent, over all attempts and relay-loop passes */
+    public int iterations() {
+        return iterations;
+    }
+
+    /** @return largest KCL residual at any node of the final solution, A */
+    public double maxKclResidualAmps() {
+        return maxKclResidualAmps;
+    }
+
+    /** @return the drive pin state solved */
+    public boolean pinHigh() {
+        return pinHigh;
+    }
+
+    /** @return the ambient solved at, °C */
+    public double ambientCelsius() {
+        return ambientCelsius;
+    }
+
+    /** @return voltage of every net of the drawing that has a pin, by net name, V ({@code gnd} is 0) */
+    public synchronized Map<String, Double> nodeVoltages() {
+        if (nodeVoltages == null) {
+            Map<String, Double> m = new TreeMap<>();
+            ArraySolution x = solution();
+            for (Map.Entry<String, Integer> e : netlist.netNodes().entrySet()) {
+                m.put(e.getKey(), x.voltage(e.getValue()));
+            }
+            nodeVoltages = Collections.unmodifiableMap(m);
+        }
+        return nodeVoltages;
+    }
+
+    /**
+     * @param net a net name
+     * @return its voltage, V
+     * @throws IllegalArgumentException if the stage has no such net with a pin
+     */
+    public double voltage(String net) {
+        Double v = nodeVoltages().get(net);
+        if (v == null) {
+            throw new IllegalArgumentException("no net " + net + "; nets are " + nodeVoltages().keySet());
+        }
+        return v;
+    }
+
+    /** @return every part's result, by designator, in drawing order */
+    public synchronized Map<String, PartResult> parts() {
+        if (parts == null) {
+            ArraySolution x = solution();
+            Map<String, PartResult> m = new LinkedHashMap<>();
+            List<RelayHandle> relays = netlist.relays();
+            for (PartNetwork p : netlist.parts()) {
+                PartReading r = p.read(x);
+                Map<String, Double> pinV = new LinkedHashMap<>();
+                for (Map.Entry<String, Integer> e : p.pinNodes().entrySet()) {
+                    pinV.put(e.getKey(), x.voltage(e.getValue()));
+                }
+                Map<String, String> st = r.states();
+                if (p.relay().isPresent()) {
+                    st = new HashMap<>(st);
+                    st.put("contactsFrom", contactsFrom[relays.indexOf(p.relay().get())]);
+                }
+                m.put(p.ref(), new PartResult(p.ref(), p.part().kind(), pinV, r.pinCurrents(), r.powerWatts(),
+                        r.quantities(), st));
+            }
+            parts = Collections.unmodifiableMap(m);
+        }
+        return parts;
+    }
+
+    /**
+     * @param ref a designator
+     * @return that part's result
+     */
+    public Optional<PartResult> part(String ref) {
+        return Optional.ofNullable(parts().get(ref));
+    }
+
+    /**
+     * @param ref a designator
+     * @return that part's result
+     * @throws IllegalArgumentException if there is no such part
+     */
+    public PartResult requirePart(String ref) {
+        return part(ref).orElseThrow(() -> new IllegalArgumentException("no part " + ref));
+    }
+
+    /** @return the state of every relay's contacts as solved, by designator (true = operated) */
+    public Map<String, Boolean> relayOperated() {
+        Map<String, Boolean> m = new TreeMap<>();
+        for (RelayHandle h : netlist.relays()) {
+            m.put(h.ref(), states[h.contactSlot()] > 0.5);
+        }
+        return m;
+    }
+
+    /**
+     * @return the verdict on the switch Q1 (the switch-kind part with a pin on the {@code switch}
+     *     net), empty when the stage has none
+     */
+    public synchronized Optional<SwitchVerdict> switchVerdict() {
+        if (verdict == null) {
+            verdict = computeVerdict();
+        }
+        return verdict;
+    }
+
+    /** @return node names and values of the solution vector, for a start guess */
+    Map<String, Double> unknownsByNodeName() {
+        Map<String, Double> m = new HashMap<>();
+        for (int i = 0; i < netlist.nodeCount(); i++) {
+            m.put(netlist.nodeName(i), unknowns[i]);
+        }
+        return m;
+    }
+
+    Netlist netlist() {
+        return netlist;
+    }
+
+    /** Copies the solution vector into {@code x} when the netlist has the same shape; false otherwise. */
+    boolean copyUnknownsInto(Netlist other, double[] x) {
+        if (other == netlist || (other.unknownCount() == unknowns.length && sameNodes(other))) {
+            System.arraycopy(unknowns, 0, x, 0, unknowns.length);
+            return true;
+        }
+        return false;
+    }
+
+    private boolean sameNodes(Netlist other) {
+        if (other.nodeCount() != netlist.nodeCount()) {
+            return false;
+        }
+        for (int i = 0; i < other.nodeCount(); i++) {
+            if (!other.nodeName(i).equals(netlist.nodeName(i))) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private ArraySolution solution() {
+        return new ArraySolution(netlist.nodeCount(), unknowns, states);
+    }
+
+    private Optional<SwitchVerdict> computeVerdict() {
+        Integer switchNode = netlist.netNodes().get("switch");
+        if (switchNode == null) {
+            return Optional.empty();
+        }
+        for (PartNetwork p : netlist.parts()) {
+            if (p.part().kind().isSwitch() && p.pinNodes().containsValue(switchNode)) {
+                return Optional.of(verdictFor(p.part(), parts().get(p.ref())));
+            }
+        }
+        return Optional.empty();
+    }
+
+    private static String amps(double a) {
+        return EngineeringNotation.format(a, Unit.AMPERE);
+    }
+
+    private static String volts(double v) {
+        return EngineeringNotation.format(v, Unit.VOLT);
+    }
+
+    private static String times(double m) {
+        return String.format(java.util.Locale.ROOT, "×%.2g", m);
+    }
+
+    static SwitchVerdict verdictFor(Part part, PartResult r) {
+        String ref = part.ref();
+        PartKind kind = part.kind();
+        if (kind == PartKind.NMOS) {
+            double vgs = r.quantity("vgs");
+            double id = r.quantity("id");
+            if (r.state("region").equals("cutoff") || !(id > 0)) {
+                return new SwitchVerdict(ref, false, 0.0, ref + " is off: VGS " + volts(vgs) + " is below threshold.");
+            }
+            double thMax = part.value("vgsThMaxVolts");
+            double rdsOn = part.value("rdsOnOhms");
+            double spec = part.value("rdsOnGateVolts");
+            double needed = (spec - thMax) + id * rdsOn / 2.0;
+            if (!(spec > thMax)) {
+                return new SwitchVerdict(ref, false, 0.0, ref + " RDS(on) is stated at VGS " + volts(spec)
+                        + ", not above VGS(th) max " + volts(thMax) + ": the datasheet guarantees no on-state.");
+            }
+            double available = Math.max(0.0, vgs - thMax);
+            double margin = available / needed;
+            boolean on = margin >= 1.0;
+            String reason = on
+                    ? "fully on, " + times(margin) + " margin: gate overdrive " + volts(vgs - thMax)
+                            + " over VGS(th) max against " + volts(needed) + " needed for " + amps(id)
+                            + " at RDS(on) " + EngineeringNotation.format(rdsOn, Unit.OHM) + "."
+                    : "not guaranteed on: gate overdrive " + volts(vgs - thMax) + " over VGS(th) max, "
+                            + volts(needed) + " needed for " + amps(id) + " (RDS(on) is stated at VGS "
+                            + volts(spec) + ").";
+            return new SwitchVerdict(ref, on, margin, reason);
+        }
+        boolean darlington = kind == PartKind.DARLINGTON;
+        double ic = r.quantity("ic");
+        double drive = r.quantity(darlington ? "iin" : "ib");
+        double hfeMin = part.value("hfeMin");
+        if (r.state("region").equals("cutoff") || !(ic > 0) || !(drive > 0)) {
+            return new SwitchVerdict(ref, false, 0.0, ref + " is cut off: " + (darlington ? "input" : "base")
+                    + " current " + amps(Math.max(drive, 0.0)) + ", the coil is not energised.");
+        }
+        double margin = hfeMin * drive / ic;
+        double neededDrive = ic / hfeMin;
+        String driveName = darlington ? "IIN" : "IB";
+        boolean on = margin >= 1.0;
+        String reason = on
+                ? "saturated, " + times(margin) + " margin: hFE(min) " + String.format(java.util.Locale.ROOT, "%.4g", hfeMin)
+                        + " × " + driveName + " " + amps(drive) + " ÷ IC " + amps(ic) + "."
+                : "not saturated: needs " + amps(neededDrive - drive) + " more " + (darlington ? "input" : "base")
+                        + " current (" + driveName + " " + amps(drive) + ", IC/hFE(min) = " + amps(neededDrive) + ").";
+        return new SwitchVerdict(ref, on, margin, reason);
+    }
+}
