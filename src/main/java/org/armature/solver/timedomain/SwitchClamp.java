@@ -14,6 +14,12 @@ import org.armature.netlist.StampContext;
  */
 final class SwitchClamp implements org.armature.netlist.Element {
 
+    /**
+     * A limiter result this close to the proposed voltage is rounding (the limiter works on
+     * v − rating and adds the rating back), not limiting: 1e-12 V, a million times below vntol.
+     */
+    private static final double LIMITER_ROUNDING_VOLTS = 1e-12;
+
     private final String label;
     private final int high;
     private final int low;
@@ -67,6 +73,9 @@ final class SwitchClamp implements org.armature.netlist.Element {
     public boolean stamp(Stamper s, Solution x, StampContext ctx) {
         double v = x.voltage(high) - x.voltage(low);
         double limited = clamp.limitVoltage(v, lastVolts);
+        if (Math.abs(limited - v) <= LIMITER_ROUNDING_VOLTS * Math.max(1, Math.abs(v))) {
+            limited = v;
+        }
         lastVolts = limited;
         clamp.evaluate(limited, eval);
         double g = eval.conductanceSiemens();
@@ -74,6 +83,6 @@ final class SwitchClamp implements org.armature.netlist.Element {
         s.conductance(high, low, g);
         s.current(high, -i0);
         s.current(low, i0);
-        return Math.abs(limited - v) > 0;
+        return limited != v;
     }
 }

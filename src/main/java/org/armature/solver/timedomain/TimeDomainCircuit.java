@@ -41,7 +41,12 @@ final class TimeDomainCircuit {
     String coilRef = "";
     String switchRef = "";
 
+    private final List<String> nodeNames = new ArrayList<>();
+
     TimeDomainCircuit(int nodeCount, int branchCount, double[] initialStates) {
+        for (int i = 0; i < nodeCount; i++) {
+            nodeNames.add("n" + i);
+        }
         this.nodeCount = nodeCount;
         this.branchCount = branchCount;
         this.initialStates = initialStates.clone();
@@ -57,6 +62,15 @@ final class TimeDomainCircuit {
             clamps.add(c);
         }
         return e;
+    }
+
+    /** Names node i (names must be unique). */
+    void nodeName(int i, String name) {
+        nodeNames.set(i, name);
+    }
+
+    String nodeName(int i) {
+        return nodeNames.get(i);
     }
 
     /** Records the voltage of a node under {@code V(name)}. */

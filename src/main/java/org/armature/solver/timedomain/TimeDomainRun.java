@@ -5,7 +5,13 @@ import java.util.List;
 import java.util.TreeMap;
 import org.armature.netlist.ArraySolution;
 import org.armature.netlist.Element;
+import org.armature.netlist.Netlist;
+import org.armature.netlist.NetlistBuilder;
 import org.armature.netlist.StampContext;
+import org.armature.solver.ConvergenceTolerances;
+import org.armature.solver.DenseLu;
+import org.armature.solver.NewtonOptions;
+import org.armature.solver.NewtonSolver;
 
 /**
  * The step loop of one run: DC operating point, then time points under local-truncation-error
@@ -24,10 +30,11 @@ final class TimeDomainRun {
     private final double duration;
     private final StepOptions o;
     private final StepController control;
-    private final StepNewton newton;
+    private final NewtonSolver newtonLow;
+    private final NewtonSolver newtonHigh;
+    private int newtonIterations;
     private final int n;
     private final int stateCount;
-    private final List<Element> elements = new ArrayList<>();
     private final ArraySolution view;
     private final TreeMap<Double, String> breakpoints = new TreeMap<>();
     private final List<TransientEvent> events = new ArrayList<>();
@@ -55,7 +62,11 @@ final class TimeDomainRun {
         this.o = options;
         this.control = new StepController(options);
         this.n = circuit.nodeCount + circuit.branchCount;
-        this.newton = new StepNewton(circuit.nodeCount, circuit.branchCount, options);
+        NewtonOptions no = new NewtonOptions(options.newtonMaxIterations(), MAX_NODE_STEP_VOLTS,
+                new ConvergenceTolerances(options.newtonRelativeTolerance(), options.newtonAbsoluteVolts(),
+                        options.newtonAbsoluteAmps()), DenseLu.DEFAULT_RELATIVE_PIVOT_THRESHOLD);
+        this.newtonLow = new NewtonSolver(netlist(circuit, circuit.driveLow), no);
+        this.newtonHigh = new NewtonSolver(netlist(circuit, circuit.driveHigh), no);
         int s = 0;
         for (Reactive r : circuit.reactives) {
             s += r.stateCount();
@@ -64,6 +75,44 @@ final class TimeDomainRun {
         this.histTimes = new double[4][1];
         this.histStates = new double[4][s];
         this.view = new ArraySolution(circuit.nodeCount, new double[n], new double[0]);
+    }
+
+    /**
+     * Newton damping limit at time points: the predictor (last accepted point) is close, so a large
+     * update is real (a kickback of kilovolts within one step), not a runaway; 1e5 V lies above any
+     * voltage a relay stage can reach.
+     */
+    private static final double MAX_NODE_STEP_VOLTS = 1e5;
+
+    /** The circuit's elements with one drive level, laid out as the circuit says, for the solver's Newton loop. */
+    private static Netlist netlist(TimeDomainCircuit c, List<Element> drive) {
+        NetlistBuilder b = new NetlistBuilder();
+        for (int i = 0; i < c.nodeCount; i++) {
+            int node = b.node(c.nodeName(i));
+            if (node != i) {
+                throw new IllegalStateException("node layout mismatch at " + c.nodeName(i));
+            }
+        }
+        for (int i = 0; i < c.branchCount; i++) {
+            b.allocateBranch("branch " + i);
+        }
+        for (double s : c.initialStates) {
+            b.allocateState(s);
+        }
+        for (Element e : c.common) {
+            b.add(e);
+        }
+        for (Element e : drive) {
+            b.add(e);
+        }
+        return b.build();
+    }
+
+    private boolean newton(double[] trial, StampContext ctx) {
+        NewtonSolver s = highNow ? newtonHigh : newtonLow;
+        boolean ok = s.run(trial, states, ctx, 0);
+        newtonIterations += s.iterations();
+        return ok;
     }
 
     TimeDomainResult run() {
@@ -242,7 +291,7 @@ final class TimeDomainRun {
             }
         }
         return new TimeDomainResult(new Waveform(time, traces, events), internal, accepted, rejected,
-                newton.iterations());
+                newtonIterations);
     }
 
     /** Columns of the internal (metrics) record. */
@@ -292,20 +341,18 @@ final class TimeDomainRun {
     }
 
     private void selectDrive() {
-        elements.clear();
-        elements.addAll(c.common);
-        elements.addAll(highNow ? c.driveHigh : c.driveLow);
+        // the Newton loop of the present level is chosen in newton(); nothing else depends on it
     }
 
     private void operatingPoint() {
         c.step.setDc();
-        boolean ok = newton.solve(elements, x, states, StampContext.DC);
+        boolean ok = newton(x, StampContext.DC);
         if (!ok) {
             // source stepping (CHECKS NM-5): bring the sources up from 10 % in ten steps
             java.util.Arrays.fill(x, 0);
             ok = true;
             for (int i = 1; i <= 10 && ok; i++) {
-                ok = newton.solve(elements, x, states, StampContext.dcScaled(i / 10.0));
+                ok = newton(x, StampContext.dcScaled(i / 10.0));
             }
             if (!ok) {
                 throw new TransientFailureException("no DC operating point", 0, 0);
@@ -319,7 +366,7 @@ final class TimeDomainRun {
             r.phase = operated ? RelayDynamics.Phase.OPERATED : RelayDynamics.Phase.RELEASED;
             if (states[r.contactSlot] != (operated ? 1.0 : 0.0)) {
                 states[r.contactSlot] = operated ? 1.0 : 0.0;
-                if (!newton.solve(elements, x, states, StampContext.DC)) {
+                if (!newton(x, StampContext.DC)) {
                     throw new TransientFailureException("no DC operating point after contact change", 0, 0);
                 }
             }
@@ -329,7 +376,7 @@ final class TimeDomainRun {
     private boolean solve(double[] trial, double time, IntegratorCoefficients k) {
         c.step.set(k);
         StampContext ctx = new StampContext(StampContext.Mode.TRANSIENT, 1.0, time, 1.0 / k.a0(), k.a0());
-        return newton.solve(elements, trial, states, ctx);
+        return newton(trial, ctx);
     }
 
     private double errorRatio(double[] trial, double tNew, IntegratorCoefficients k, double[] newStates) {

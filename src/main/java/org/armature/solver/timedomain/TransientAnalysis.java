@@ -17,6 +17,22 @@ public final class TransientAnalysis {
     }
 
     /**
+     * Runs a stage.
+     *
+     * @param stage the stage (not modified)
+     * @param options drive, window, step control and ambient
+     * @return the waveform, events and metrics
+     * @throws TransientFailureException if the run cannot continue (Newton fails at the smallest step)
+     * @throws org.armature.solver.SolverException if the stage has no DC operating point
+     */
+    public static TransientResult run(org.armature.model.Stage stage, TransientOptions options) {
+        double ambient = Double.isNaN(options.ambientCelsius()) ? stage.conditions().ambientCelsius()
+                : options.ambientCelsius();
+        TimeDomainCircuit c = StageCircuit.build(stage, ambient, options.drive().initialHigh());
+        return run(c, options.drive(), options.durationSeconds(), options.step());
+    }
+
+    /**
      * Runs a prepared circuit (hand-built circuits in tests; stages go through the public entry).
      */
     static TransientResult run(TimeDomainCircuit circuit, DriveWaveform drive, double durationSeconds,
