@@ -383,14 +383,16 @@ public final class NetlistBuilder {
             DarlingtonInternals di = o.darlington();
             BjtParams tp = BjtParams.ebersMoll(BjtPolarity.NPN, v("saturationCurrentAmps"), v("betaForward"),
                     di.betaReverse());
+            BjtParams tp1 = tp.withKneeCurrents(di.driverKneeCurrentAmps(), Double.POSITIVE_INFINITY);
+            BjtParams tp2 = tp.withKneeCurrents(di.outputKneeCurrentAmps(), Double.POSITIVE_INFINITY);
             int b1 = b.node(ref() + ".b1");
             int b2 = b.node(ref() + ".b2");
             els.add(new Resistor(ref() + " input resistor", in, b1, v("inputResistanceOhms")));
             els.add(new Resistor(ref() + " Q1 base-emitter resistor", b1, b2, v("firstBaseEmitterOhms")));
             els.add(new Resistor(ref() + " Q2 base-emitter resistor", b2, e, v("secondBaseEmitterOhms")));
-            BjtElement q1 = new BjtElement(ref() + " Q1", out, b1, b2, new Bjt(tp), kelvin, o.junctionGminSiemens());
+            BjtElement q1 = new BjtElement(ref() + " Q1", out, b1, b2, new Bjt(tp1), kelvin, o.junctionGminSiemens());
             int c2 = series(out, v("collectorResistanceOhms"), "c2");
-            BjtElement q2 = new BjtElement(ref() + " Q2", c2, b2, e, new Bjt(tp), kelvin, o.junctionGminSiemens());
+            BjtElement q2 = new BjtElement(ref() + " Q2", c2, b2, e, new Bjt(tp2), kelvin, o.junctionGminSiemens());
             JunctionElement clamp = new JunctionElement(ref() + " clamp diode", out, com,
                     new Diode(DiodeParams.junction(di.clampSaturationCurrentAmps(), di.clampEmissionCoefficient())),
                     kelvin, o.junctionGminSiemens());
@@ -436,9 +438,11 @@ public final class NetlistBuilder {
             RelayCoil coil = new RelayCoil(ref(), a1, a2, rRef, v("referenceTemperatureCelsius"), tempSlot);
             SwitchedResistor toNo = new SwitchedResistor(ref() + " contact com-no", com, no, contactSlot, true, o.contacts());
             SwitchedResistor toNc = new SwitchedResistor(ref() + " contact com-nc", com, nc, contactSlot, false, o.contacts());
+            Resistor insulation = new Resistor(ref() + " coil-contact insulation", com, a2, o.contacts().insulationOhms());
             els.add(coil);
             els.add(toNo);
             els.add(toNc);
+            els.add(insulation);
             RelayHandle handle = new RelayHandle(ref(), coil, tempSlot, contactSlot,
                     v("coilThermalResistanceKelvinPerWatt"), v("mustOperateVolts") / rRef, v("mustReleaseVolts") / rRef);
             done(x -> {
@@ -447,7 +451,9 @@ public final class NetlistBuilder {
                 double vCoil = x.voltage(a1) - x.voltage(a2);
                 double iNo = toNo.current(x);
                 double iNc = toNc.current(x);
-                double power = vCoil * i + (x.voltage(com) - x.voltage(no)) * iNo + (x.voltage(com) - x.voltage(nc)) * iNc;
+                double iIns = insulation.current(x);
+                double power = vCoil * i + (x.voltage(com) - x.voltage(no)) * iNo + (x.voltage(com) - x.voltage(nc)) * iNc
+                        + (x.voltage(com) - x.voltage(a2)) * iIns;
                 Map<String, Double> qs = new HashMap<>();
                 qs.put("coilCurrent", i);
                 qs.put("coilVoltage", vCoil);
@@ -458,7 +464,7 @@ public final class NetlistBuilder {
                 qs.put("power", power);
                 String contacts = x.state(contactSlot) > 0.5 ? "operated" : "released";
                 return new PartReading(qs, Map.of("state", handle.stateFor(i).key(), "contacts", contacts),
-                        Map.of("a1", i, "a2", -i, "com", iNo + iNc, "no", -iNo, "nc", -iNc), power);
+                        Map.of("a1", i, "a2", -i - iIns, "com", iNo + iNc + iIns, "no", -iNo, "nc", -iNc), power);
             }, handle);
         }
     }

@@ -287,7 +287,7 @@ public final class OperatingPoint {
         String reason = on
                 ? "saturated, " + times(margin) + " margin: hFE(min) " + String.format(java.util.Locale.ROOT, "%.4g", hfeMin)
                         + " × " + driveName + " " + amps(drive) + " ÷ IC " + amps(ic) + "."
-                : "not saturated: needs " + amps(neededDrive - drive) + " more " + (darlington ? "input" : "base")
+                : "not guaranteed saturated at hFE(min): needs " + amps(neededDrive - drive) + " more " + (darlington ? "input" : "base")
                         + " current (" + driveName + " " + amps(drive) + ", IC/hFE(min) = " + amps(neededDrive) + ").";
         return new SwitchVerdict(ref, on, margin, reason);
     }
