@@ -10,7 +10,9 @@ public final class DeviceConvergenceException extends RuntimeException {
 
     private static final long serialVersionUID = 1L;
 
+    /** Iterations performed before giving up. */
     private final int iterations;
+    /** Magnitude of the last Newton step, volts. */
     private final double lastStepVolts;
 
     /**

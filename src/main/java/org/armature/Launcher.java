@@ -1,0 +1,59 @@
+package org.armature;
+
+import java.lang.reflect.InvocationTargetException;
+import java.lang.reflect.Method;
+import org.armature.cli.ArmatureCli;
+
+/**
+ * Main class of the runnable jar. With no arguments it opens the window; with any arguments it runs
+ * the command line ({@link ArmatureCli}) without loading a single JavaFX class, so {@code --help} and
+ * {@code --version} work with no display.
+ *
+ * <p>The window class is found by name ({@value #WINDOW_CLASS}) so that this class, and the command
+ * line, do not link against JavaFX.
+ */
+public final class Launcher {
+
+    /** The JavaFX application class, started by its static {@code main(String[])}. */
+    static final String WINDOW_CLASS = "org.armature.ui.ArmatureApp";
+
+    private Launcher() {
+    }
+
+    /**
+     * Opens the window (no arguments) or runs the command line and exits with its status.
+     *
+     * @param args command-line arguments
+     */
+    public static void main(String[] args) {
+        if (args.length == 0) {
+            int status = openWindow(args);
+            if (status != 0) {
+                System.exit(status);
+            }
+        } else {
+            System.exit(ArmatureCli.run(args));
+        }
+    }
+
+    /** Starts the window; returns 0 once it has closed, or a failure status after saying why. */
+    static int openWindow(String[] args) {
+        Method main;
+        try {
+            main = Class.forName(WINDOW_CLASS).getMethod("main", String[].class);
+        } catch (ClassNotFoundException | NoSuchMethodException | LinkageError e) {
+            return ArmatureCli.windowUnavailable("The window is not part of this build (" + WINDOW_CLASS
+                    + " could not be loaded: " + e.getClass().getSimpleName() + ").");
+        }
+        try {
+            main.invoke(null, (Object) args);
+            return 0;
+        } catch (IllegalAccessException e) {
+            return ArmatureCli.windowUnavailable("The window class cannot be started (" + e.getMessage() + ").");
+        } catch (InvocationTargetException e) {
+            Throwable cause = e.getCause();
+            return ArmatureCli.windowUnavailable("The window could not open: " + cause.getClass().getSimpleName()
+                    + ": " + cause.getMessage() + ".");
+        }
+    }
+}

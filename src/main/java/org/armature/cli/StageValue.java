@@ -1,0 +1,103 @@
+package org.armature.cli;
+
+import org.armature.units.Unit;
+
+/**
+ * The numeric options of {@code armature new}: each sets one parameter of the part that does a job
+ * ({@link StageRole}) in the chosen template. An option whose part is missing from the template, or
+ * whose part has no such parameter (a threshold voltage on an NPN), is a usage error.
+ */
+enum StageValue {
+    SUPPLY("--supply", "VOLTS", Unit.VOLT, StageRole.SUPPLY, "volts",
+            "Coil supply rail V1, volts."),
+    COIL_RATED("--coil-rated-voltage", "VOLTS", Unit.VOLT, StageRole.RELAY, "ratedVolts",
+            "Relay rated coil voltage, volts."),
+    COIL_RESISTANCE("--coil-resistance", "OHMS", Unit.OHM, StageRole.RELAY, "coilResistanceOhms",
+            "Relay coil resistance at the reference temperature, ohms."),
+    COIL_INDUCTANCE("--coil-inductance", "HENRIES", Unit.HENRY, StageRole.RELAY, "inductanceReleasedHenries",
+            "Coil inductance with the armature released, henries."),
+    COIL_INDUCTANCE_ATTRACTED("--coil-inductance-attracted", "HENRIES", Unit.HENRY, StageRole.RELAY,
+            "inductanceAttractedHenries", "Coil inductance with the armature attracted, henries; 0 means constant."),
+    COIL_CAPACITANCE("--coil-capacitance", "FARADS", Unit.FARAD, StageRole.RELAY, "coilCapacitanceFarads",
+            "Coil self-capacitance, farads."),
+    MUST_OPERATE("--must-operate", "VOLTS", Unit.VOLT, StageRole.RELAY, "mustOperateVolts",
+            "Must-operate (pick-up) coil voltage at the reference temperature, volts."),
+    MUST_RELEASE("--must-release", "VOLTS", Unit.VOLT, StageRole.RELAY, "mustReleaseVolts",
+            "Must-release (drop-out) coil voltage at the reference temperature, volts."),
+    COIL_THERMAL("--coil-thermal-resistance", "K/W", Unit.KELVIN_PER_WATT, StageRole.RELAY,
+            "coilThermalResistanceKelvinPerWatt", "Coil temperature rise per watt, K/W; 0 means no self-heating."),
+    REFERENCE_TEMPERATURE("--reference-temperature", "°C", Unit.CELSIUS, StageRole.RELAY,
+            "referenceTemperatureCelsius", "Temperature at which the coil figures hold, °C."),
+    PIN_HIGH("--pin-high", "VOLTS", Unit.VOLT, StageRole.PIN, "highVolts",
+            "Drive pin high level (open circuit), volts."),
+    PIN_LOW("--pin-low", "VOLTS", Unit.VOLT, StageRole.PIN, "lowVolts",
+            "Drive pin low level (open circuit), volts."),
+    PIN_RESISTANCE("--pin-resistance", "OHMS", Unit.OHM, StageRole.PIN, "outputResistanceOhms",
+            "Drive pin output resistance, ohms."),
+    BASE_RESISTOR("--base-resistor", "OHMS", Unit.OHM, StageRole.BASE_RESISTOR, "resistanceOhms",
+            "Base resistor of the switch, or gate resistor of the MOSFET, ohms: R1; R4 (the PNP's) in the "
+                    + "level-shift high side."),
+    PULL_DOWN("--pull-down", "OHMS", Unit.OHM, StageRole.PULL_DOWN, "resistanceOhms",
+            "Base or gate pull-down R2, ohms (low side; the level-shift NPN's in the high side)."),
+    PULL_UP("--pull-up", "OHMS", Unit.OHM, StageRole.PULL_UP, "resistanceOhms",
+            "PNP base-emitter pull-up, ohms (high side: R3 with level shift, R2 with direct drive)."),
+    SHIFT_RESISTOR("--shift-resistor", "OHMS", Unit.OHM, StageRole.SHIFT_RESISTOR, "resistanceOhms",
+            "Level-shift NPN base resistor R1 (pin to Q2), ohms (high side with level shift)."),
+    HFE("--hfe", "GAIN", Unit.RATIO, StageRole.SWITCH, "betaForward",
+            "Model forward gain βF of the switch (each transistor of a Darlington channel)."),
+    HFE_MIN("--hfe-min", "GAIN", Unit.RATIO, StageRole.SWITCH, "hfeMin",
+            "Datasheet minimum hFE of the switch (of the whole Darlington channel)."),
+    VTH("--vth", "VOLTS", Unit.VOLT, StageRole.SWITCH, "thresholdVolts",
+            "MOSFET threshold VT0 (Shichman-Hodges), volts."),
+    KP("--kp", "A/V²", Unit.RATIO, StageRole.SWITCH, "transconductanceAmpsPerVoltSquared",
+            "MOSFET Shichman-Hodges β (KP), A/V²: ID = β/2·(VGS − VT0)² in saturation."),
+    LAMBDA("--lambda", "1/V", Unit.RATIO, StageRole.SWITCH, "lambdaPerVolt",
+            "MOSFET channel-length modulation λ, 1/V."),
+    ZENER_VOLTAGE("--zener-voltage", "VOLTS", Unit.VOLT, StageRole.CLAMP, "breakdownVolts",
+            "Clamp voltage: the zener's VZ (diode-zener) or the TVS breakdown (tvs), volts."),
+    SUPPRESSOR_RESISTANCE("--suppressor-resistance", "OHMS", Unit.OHM, StageRole.SUPPRESSOR_RESISTOR,
+            "resistanceOhms", "Resistor of the rc or resistor suppressor, ohms."),
+    SNUBBER_CAPACITANCE("--snubber-capacitance", "FARADS", Unit.FARAD, StageRole.SNUBBER_CAPACITOR,
+            "capacitanceFarads", "Capacitor of the rc suppressor, farads.");
+
+    private final String optionName;
+    private final String label;
+    private final Unit unit;
+    private final StageRole role;
+    private final String key;
+    private final String description;
+
+    StageValue(String optionName, String label, Unit unit, StageRole role, String key, String description) {
+        this.optionName = optionName;
+        this.label = label;
+        this.unit = unit;
+        this.role = role;
+        this.key = key;
+        this.description = description;
+    }
+
+    String optionName() {
+        return optionName;
+    }
+
+    String label() {
+        return label;
+    }
+
+    Unit unit() {
+        return unit;
+    }
+
+    StageRole role() {
+        return role;
+    }
+
+    /** The parameter key set on the part (a {@link org.armature.model.PartKind} parameter). */
+    String key() {
+        return key;
+    }
+
+    String description() {
+        return description;
+    }
+}

@@ -1,0 +1,352 @@
+package org.armature.io;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.armature.model.Conditions;
+import org.armature.model.GridPoint;
+import org.armature.model.Part;
+import org.armature.model.PartKind;
+import org.armature.model.Placement;
+import org.armature.model.Stage;
+import org.armature.model.StageDocument;
+import org.armature.model.TestPoint;
+import org.armature.model.Wire;
+
+/**
+ * Maps a parsed JSON tree onto the document records, field by field, with the JSON path of every
+ * problem in its message ({@code stages[0].parts[3].at}).
+ */
+final class StageReader {
+
+    private static final Set<String> TOP_FIELDS = Set.of("format", "version", "title", "stages");
+    private static final Set<String> STAGE_FIELDS =
+            Set.of("name", "description", "conditions", "parts", "wires", "testPoints");
+    private static final Set<String> CONDITION_FIELDS =
+            Set.of("pinState", "ambientCelsius", "ambientMinCelsius", "ambientMaxCelsius");
+    private static final Set<String> PART_FIELDS =
+            Set.of("ref", "kind", "at", "rotation", "mirrored", "values", "options");
+    private static final Set<String> TEST_POINT_FIELDS = Set.of("net", "ref", "pin");
+
+    /** Number of integers in a wire: x1, y1, x2, y2. */
+    private static final int WIRE_COORDINATES = 4;
+    /** Rotations are whole quarter turns. */
+    private static final int QUARTER_TURN_DEGREES = 90;
+    /** Absolute zero in degrees Celsius. */
+    private static final double ABSOLUTE_ZERO_CELSIUS = -273.15;
+    /** Longest excerpt of a wrong value quoted in a message. */
+    private static final int EXCERPT_CHARS = 40;
+
+    private StageReader() {
+    }
+
+    static StageDocument read(JsonNode root) {
+        if (!root.isObject()) {
+            throw new StageFileException(StageFileException.WRONG_TYPE,
+                    "A stage file holds one JSON object at the top level, not " + describe(root) + ".");
+        }
+        JsonNode format = root.get("format");
+        if (format == null || !format.isTextual() || !format.textValue().equals(StageJson.FORMAT)) {
+            String found = format == null ? "has no \"format\" field"
+                    : "has \"format\" " + format.toString();
+            throw new StageFileException(StageFileException.UNKNOWN_FORMAT,
+                    "This is not an Armature stage file: it " + found + " where \"" + StageJson.FORMAT
+                            + "\" was expected.");
+        }
+        readVersion(root.get("version"));
+        checkFields(root, TOP_FIELDS, "The file");
+        String title = optionalText(root, "title", "title", "");
+        JsonNode stagesNode = required(root, "stages", "The file");
+        expectArray(stagesNode, "stages");
+        if (stagesNode.isEmpty()) {
+            throw new StageFileException(StageFileException.INVALID_VALUE,
+                    "stages is empty; a stage file holds at least one stage.");
+        }
+        List<Stage> stages = new ArrayList<>();
+        for (int i = 0; i < stagesNode.size(); i++) {
+            stages.add(readStage(stagesNode.get(i), "stages[" + i + "]"));
+        }
+        return new StageDocument(title, stages);
+    }
+
+    private static void readVersion(JsonNode version) {
+        if (version == null) {
+            throw new StageFileException(StageFileException.MISSING_FIELD,
+                    "The file has no \"version\" field; stage files of this program are version "
+                            + StageJson.VERSION + ".");
+        }
+        if (!version.isIntegralNumber() || !version.canConvertToInt() || version.intValue() < 1) {
+            throw new StageFileException(StageFileException.UNKNOWN_VERSION,
+                    "The file's \"version\" is " + version + ", which is not a stage file version; this program reads version "
+                            + StageJson.VERSION + ".");
+        }
+        if (version.intValue() > StageJson.VERSION) {
+            throw new StageFileException(StageFileException.NEWER_VERSION,
+                    "The file was written by a newer Armature (stage file version " + version.intValue()
+                            + "); this program reads up to version " + StageJson.VERSION + ".");
+        }
+    }
+
+    private static Stage readStage(JsonNode node, String path) {
+        expectObject(node, path);
+        checkFields(node, STAGE_FIELDS, path);
+        String name = requiredText(node, "name", path);
+        String description = optionalText(node, "description", path, "");
+        Conditions conditions = node.has("conditions")
+                ? readConditions(node.get("conditions"), path + ".conditions")
+                : Conditions.DEFAULT;
+        JsonNode partsNode = required(node, "parts", path);
+        expectArray(partsNode, path + ".parts");
+        List<Part> parts = new ArrayList<>();
+        for (int i = 0; i < partsNode.size(); i++) {
+            parts.add(readPart(partsNode.get(i), path + ".parts[" + i + "]"));
+        }
+        List<Wire> wires = new ArrayList<>();
+        if (node.has("wires")) {
+            JsonNode wiresNode = node.get("wires");
+            expectArray(wiresNode, path + ".wires");
+            for (int i = 0; i < wiresNode.size(); i++) {
+                wires.add(readWire(wiresNode.get(i), path + ".wires[" + i + "]"));
+            }
+        }
+        List<TestPoint> testPoints = new ArrayList<>();
+        if (node.has("testPoints")) {
+            JsonNode tpNode = node.get("testPoints");
+            expectArray(tpNode, path + ".testPoints");
+            for (int i = 0; i < tpNode.size(); i++) {
+                testPoints.add(readTestPoint(tpNode.get(i), path + ".testPoints[" + i + "]"));
+            }
+        }
+        return new Stage(name, description, parts, wires, testPoints, conditions);
+    }
+
+    private static Conditions readConditions(JsonNode node, String path) {
+        expectObject(node, path);
+        checkFields(node, CONDITION_FIELDS, path);
+        Conditions d = Conditions.DEFAULT;
+        boolean pinHigh = d.pinHigh();
+        if (node.has("pinState")) {
+            String state = text(node.get("pinState"), path + ".pinState");
+            if (state.equals("high") || state.equals("low")) {
+                pinHigh = state.equals("high");
+            } else {
+                throw new StageFileException(StageFileException.INVALID_VALUE,
+                        path + ".pinState is \"" + state + "\"; it must be \"high\" or \"low\".");
+            }
+        }
+        double ambient = optionalNumber(node, "ambientCelsius", path, d.ambientCelsius());
+        double min = optionalNumber(node, "ambientMinCelsius", path, d.ambientMinCelsius());
+        double max = optionalNumber(node, "ambientMaxCelsius", path, d.ambientMaxCelsius());
+        if (!Double.isFinite(ambient) || ambient < ABSOLUTE_ZERO_CELSIUS) {
+            throw new StageFileException(StageFileException.INVALID_VALUE,
+                    path + ".ambientCelsius must be a finite temperature above absolute zero (−273.15 °C).");
+        }
+        if (!(min <= max)) {
+            throw new StageFileException(StageFileException.INVALID_VALUE,
+                    path + ".ambientMinCelsius (" + min + ") must not exceed ambientMaxCelsius (" + max + ").");
+        }
+        return new Conditions(pinHigh, ambient, min, max);
+    }
+
+    private static Part readPart(JsonNode node, String path) {
+        expectObject(node, path);
+        String ref = requiredText(node, "ref", path);
+        if (ref.isBlank()) {
+            throw new StageFileException(StageFileException.INVALID_VALUE, path + ".ref must not be blank.");
+        }
+        String where = path + " (" + ref + ")";
+        checkFields(node, PART_FIELDS, where);
+        String kindId = requiredText(node, "kind", where);
+        PartKind kind = PartKindIds.byId(kindId).orElseThrow(() -> new StageFileException(
+                StageFileException.UNKNOWN_KIND,
+                where + " has kind \"" + kindId + "\", which is not a part kind; the kinds are "
+                        + String.join(", ", PartKindIds.all()) + "."));
+        JsonNode at = required(node, "at", where);
+        if (!at.isArray() || at.size() != 2 || !isInt(at.get(0)) || !isInt(at.get(1))) {
+            throw new StageFileException(StageFileException.WRONG_TYPE,
+                    where + ".at must be two whole numbers [x, y] (grid units), not " + describe(at) + ".");
+        }
+        int rotation = 0;
+        if (node.has("rotation")) {
+            JsonNode r = node.get("rotation");
+            if (!isInt(r)) {
+                throw new StageFileException(StageFileException.WRONG_TYPE,
+                        where + ".rotation must be a whole number of degrees, not " + describe(r) + ".");
+            }
+            rotation = r.intValue();
+            if (rotation % QUARTER_TURN_DEGREES != 0) {
+                throw new StageFileException(StageFileException.INVALID_VALUE,
+                        where + ".rotation is " + rotation + "; it must be 0, 90, 180 or 270 (degrees clockwise).");
+            }
+        }
+        boolean mirrored = false;
+        if (node.has("mirrored")) {
+            JsonNode m = node.get("mirrored");
+            if (!m.isBoolean()) {
+                throw new StageFileException(StageFileException.WRONG_TYPE,
+                        where + ".mirrored must be true or false, not " + describe(m) + ".");
+            }
+            mirrored = m.booleanValue();
+        }
+        Map<String, Double> values = new LinkedHashMap<>();
+        if (node.has("values")) {
+            JsonNode v = node.get("values");
+            expectObject(v, where + ".values");
+            for (Map.Entry<String, JsonNode> e : v.properties()) {
+                values.put(e.getKey(), number(e.getValue(), where + ".values." + e.getKey()));
+            }
+        }
+        Map<String, String> options = new LinkedHashMap<>();
+        if (node.has("options")) {
+            JsonNode o = node.get("options");
+            expectObject(o, where + ".options");
+            for (Map.Entry<String, JsonNode> e : o.properties()) {
+                options.put(e.getKey(), text(e.getValue(), where + ".options." + e.getKey()));
+            }
+        }
+        Placement placement = new Placement(new GridPoint(at.get(0).intValue(), at.get(1).intValue()),
+                rotation, mirrored);
+        return new Part(ref, kind, values, options, placement);
+    }
+
+    private static Wire readWire(JsonNode node, String path) {
+        boolean ok = node.isArray() && node.size() == WIRE_COORDINATES;
+        for (int i = 0; ok && i < WIRE_COORDINATES; i++) {
+            ok = isInt(node.get(i));
+        }
+        if (!ok) {
+            throw new StageFileException(StageFileException.WRONG_TYPE,
+                    path + " must be four whole numbers [x1, y1, x2, y2] (grid units), not " + describe(node) + ".");
+        }
+        int x1 = node.get(0).intValue();
+        int y1 = node.get(1).intValue();
+        int x2 = node.get(2).intValue();
+        int y2 = node.get(3).intValue();
+        if (x1 != x2 && y1 != y2) {
+            throw new StageFileException(StageFileException.INVALID_VALUE,
+                    path + " runs diagonally from (" + x1 + ", " + y1 + ") to (" + x2 + ", " + y2
+                            + "); wires must be horizontal or vertical.");
+        }
+        return Wire.of(x1, y1, x2, y2);
+    }
+
+    private static TestPoint readTestPoint(JsonNode node, String path) {
+        expectObject(node, path);
+        checkFields(node, TEST_POINT_FIELDS, path);
+        String net = requiredText(node, "net", path);
+        String ref = requiredText(node, "ref", path);
+        String pin = requiredText(node, "pin", path);
+        if (!net.matches("[A-Za-z][A-Za-z0-9_\\-]*")) {
+            throw new StageFileException(StageFileException.INVALID_VALUE,
+                    path + ".net is \"" + net + "\"; a net name starts with a letter and uses letters, digits, _ or -.");
+        }
+        return new TestPoint(net, ref, pin);
+    }
+
+    private static void checkFields(JsonNode obj, Set<String> allowed, String where) {
+        for (Map.Entry<String, JsonNode> e : obj.properties()) {
+            String name = e.getKey();
+            if (!allowed.contains(name)) {
+                throw new StageFileException(StageFileException.UNKNOWN_FIELD,
+                        where + " has a field \"" + name + "\" that stage files do not define; the fields are "
+                                + String.join(", ", allowed.stream().sorted().toList()) + ".");
+            }
+        }
+    }
+
+    private static JsonNode required(JsonNode obj, String field, String where) {
+        JsonNode v = obj.get(field);
+        if (v == null) {
+            throw new StageFileException(StageFileException.MISSING_FIELD, where + " has no \"" + field + "\".");
+        }
+        return v;
+    }
+
+    private static String requiredText(JsonNode obj, String field, String where) {
+        return text(required(obj, field, where), where + "." + field);
+    }
+
+    private static String optionalText(JsonNode obj, String field, String path, String fallback) {
+        JsonNode v = obj.get(field);
+        return v == null ? fallback : text(v, path.equals(field) ? field : path + "." + field);
+    }
+
+    private static double optionalNumber(JsonNode obj, String field, String path, double fallback) {
+        JsonNode v = obj.get(field);
+        return v == null ? fallback : number(v, path + "." + field);
+    }
+
+    private static String text(JsonNode v, String path) {
+        if (!v.isTextual()) {
+            throw new StageFileException(StageFileException.WRONG_TYPE,
+                    path + " must be text, not " + describe(v) + ".");
+        }
+        return v.textValue();
+    }
+
+    /** A number, or one of the texts "NaN", "Infinity", "-Infinity" that JSON cannot write as numbers. */
+    private static double number(JsonNode v, String path) {
+        if (v.isNumber()) {
+            return v.doubleValue();
+        }
+        if (v.isTextual()) {
+            switch (v.textValue()) {
+                case StageWriter.NOT_A_NUMBER:
+                    return Double.NaN;
+                case StageWriter.POSITIVE_INFINITY:
+                    return Double.POSITIVE_INFINITY;
+                case StageWriter.NEGATIVE_INFINITY:
+                    return Double.NEGATIVE_INFINITY;
+                default:
+                    break;
+            }
+        }
+        throw new StageFileException(StageFileException.WRONG_TYPE,
+                path + " must be a number (SI units, as the key says), not " + describe(v) + ".");
+    }
+
+    private static boolean isInt(JsonNode v) {
+        return v != null && v.isIntegralNumber() && v.canConvertToInt();
+    }
+
+    private static void expectObject(JsonNode v, String path) {
+        if (!v.isObject()) {
+            throw new StageFileException(StageFileException.WRONG_TYPE,
+                    path + " must be an object {...}, not " + describe(v) + ".");
+        }
+    }
+
+    private static void expectArray(JsonNode v, String path) {
+        if (!v.isArray()) {
+            throw new StageFileException(StageFileException.WRONG_TYPE,
+                    path + " must be a list [...], not " + describe(v) + ".");
+        }
+    }
+
+    /** Plain words for what a node is, with a short excerpt of it. */
+    private static String describe(JsonNode v) {
+        String excerpt = v.toString();
+        if (excerpt.length() > EXCERPT_CHARS) {
+            excerpt = excerpt.substring(0, EXCERPT_CHARS) + "…";
+        }
+        if (v.isTextual()) {
+            return "the text " + excerpt;
+        }
+        if (v.isNumber()) {
+            return "the number " + excerpt;
+        }
+        if (v.isBoolean()) {
+            return excerpt;
+        }
+        if (v.isNull()) {
+            return "null";
+        }
+        if (v.isArray()) {
+            return "the list " + excerpt;
+        }
+        return "the object " + excerpt;
+    }
+}

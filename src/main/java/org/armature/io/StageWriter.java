@@ -1,0 +1,162 @@
+package org.armature.io;
+
+import com.fasterxml.jackson.core.io.JsonStringEncoder;
+import java.util.Iterator;
+import java.util.Map;
+import org.armature.model.Conditions;
+import org.armature.model.Part;
+import org.armature.model.Stage;
+import org.armature.model.StageDocument;
+import org.armature.model.TestPoint;
+import org.armature.model.Wire;
+
+/**
+ * Lays out the text of a stage file by hand: one line per part header, per value, per wire and per
+ * test point, so that files read well and diff by line.
+ *
+ * <p>Numbers are written so that reading them back gives the same {@code double}: whole numbers below
+ * {@value #LARGEST_PLAIN_WHOLE} without a fraction ({@code 12}), others in Java's shortest
+ * round-tripping form with a lower-case exponent ({@code 0.0025}, {@code 1e-14}). Non-finite values,
+ * which JSON numbers cannot hold, become the texts {@code "NaN"}, {@code "Infinity"},
+ * {@code "-Infinity"}, so that a document always saves and nothing typed is lost.
+ */
+final class StageWriter {
+
+    /** Text standing for a value that is not a number. */
+    static final String NOT_A_NUMBER = "NaN";
+    /** Text standing for positive infinity. */
+    static final String POSITIVE_INFINITY = "Infinity";
+    /** Text standing for negative infinity. */
+    static final String NEGATIVE_INFINITY = "-Infinity";
+
+    /**
+     * Whole numbers below this magnitude are written without fraction or exponent; doubles hold every
+     * integer exactly up to 2^53 ≈ 9.007e15, so this keeps the plain form exact.
+     */
+    static final double LARGEST_PLAIN_WHOLE = 1e15;
+
+    private static final String INDENT = "  ";
+
+    private StageWriter() {
+    }
+
+    static String write(StageDocument doc) {
+        StringBuilder b = new StringBuilder();
+        b.append("{\n");
+        b.append(INDENT).append("\"format\": ").append(quote(StageJson.FORMAT)).append(",\n");
+        b.append(INDENT).append("\"version\": ").append(StageJson.VERSION).append(",\n");
+        b.append(INDENT).append("\"title\": ").append(quote(doc.title())).append(",\n");
+        b.append(INDENT).append("\"stages\": [\n");
+        for (int i = 0; i < doc.stages().size(); i++) {
+            stage(b, doc.stages().get(i), INDENT.repeat(2));
+            b.append(i + 1 < doc.stages().size() ? ",\n" : "\n");
+        }
+        b.append(INDENT).append("]\n");
+        b.append("}\n");
+        return b.toString();
+    }
+
+    private static void stage(StringBuilder b, Stage s, String in) {
+        String in1 = in + INDENT;
+        String in2 = in1 + INDENT;
+        b.append(in).append("{\n");
+        b.append(in1).append("\"name\": ").append(quote(s.name())).append(",\n");
+        b.append(in1).append("\"description\": ").append(quote(s.description())).append(",\n");
+        Conditions c = s.conditions();
+        b.append(in1).append("\"conditions\": {\"pinState\": ").append(quote(c.pinHigh() ? "high" : "low"))
+                .append(", \"ambientCelsius\": ").append(number(c.ambientCelsius()))
+                .append(", \"ambientMinCelsius\": ").append(number(c.ambientMinCelsius()))
+                .append(", \"ambientMaxCelsius\": ").append(number(c.ambientMaxCelsius())).append("},\n");
+        b.append(in1).append("\"parts\": [");
+        b.append(s.parts().isEmpty() ? "" : "\n");
+        for (int i = 0; i < s.parts().size(); i++) {
+            part(b, s.parts().get(i), in2);
+            b.append(i + 1 < s.parts().size() ? ",\n" : "\n" + in1);
+        }
+        b.append("],\n");
+        b.append(in1).append("\"wires\": [");
+        b.append(s.wires().isEmpty() ? "" : "\n");
+        for (int i = 0; i < s.wires().size(); i++) {
+            Wire w = s.wires().get(i);
+            b.append(in2).append('[').append(w.from().gridX()).append(", ").append(w.from().gridY()).append(", ")
+                    .append(w.to().gridX()).append(", ").append(w.to().gridY()).append(']');
+            b.append(i + 1 < s.wires().size() ? ",\n" : "\n" + in1);
+        }
+        b.append("],\n");
+        b.append(in1).append("\"testPoints\": [");
+        b.append(s.testPoints().isEmpty() ? "" : "\n");
+        for (int i = 0; i < s.testPoints().size(); i++) {
+            TestPoint t = s.testPoints().get(i);
+            b.append(in2).append("{\"net\": ").append(quote(t.net())).append(", \"ref\": ").append(quote(t.ref()))
+                    .append(", \"pin\": ").append(quote(t.pin())).append('}');
+            b.append(i + 1 < s.testPoints().size() ? ",\n" : "\n" + in1);
+        }
+        b.append("]\n");
+        b.append(in).append('}');
+    }
+
+    private static void part(StringBuilder b, Part p, String in) {
+        String in1 = in + INDENT;
+        b.append(in).append("{\"ref\": ").append(quote(p.ref()))
+                .append(", \"kind\": ").append(quote(PartKindIds.id(p.kind())))
+                .append(", \"at\": [").append(p.placement().origin().gridX()).append(", ")
+                .append(p.placement().origin().gridY()).append(']')
+                .append(", \"rotation\": ").append(p.placement().rotationDegrees())
+                .append(", \"mirrored\": ").append(p.placement().mirrored());
+        if (p.values().isEmpty() && p.options().isEmpty()) {
+            b.append(", \"values\": {}}");
+            return;
+        }
+        b.append(",\n").append(in1).append("\"values\": {");
+        appendMap(b, p.values(), in1, true);
+        b.append('}');
+        if (!p.options().isEmpty()) {
+            b.append(",\n").append(in1).append("\"options\": {");
+            appendMap(b, p.options(), in1, false);
+            b.append('}');
+        }
+        b.append('\n').append(in).append('}');
+    }
+
+    private static void appendMap(StringBuilder b, Map<String, ?> map, String in, boolean numbers) {
+        if (map.isEmpty()) {
+            return;
+        }
+        b.append('\n');
+        for (Iterator<? extends Map.Entry<String, ?>> it = map.entrySet().iterator(); it.hasNext(); ) {
+            Map.Entry<String, ?> e = it.next();
+            b.append(in).append(INDENT).append(quote(e.getKey())).append(": ");
+            b.append(numbers ? number((Double) e.getValue()) : quote((String) e.getValue()));
+            b.append(it.hasNext() ? ",\n" : "\n" + in);
+        }
+    }
+
+    /** A JSON string literal. */
+    static String quote(String s) {
+        return '"' + new String(JsonStringEncoder.getInstance().quoteAsString(s)) + '"';
+    }
+
+    /** A JSON number (or stand-in text for a non-finite value) that reads back as exactly {@code v}. */
+    static String number(double v) {
+        if (Double.isNaN(v)) {
+            return quote(NOT_A_NUMBER);
+        }
+        if (Double.isInfinite(v)) {
+            return quote(v > 0 ? POSITIVE_INFINITY : NEGATIVE_INFINITY);
+        }
+        boolean negativeZero = v == 0 && Double.doubleToRawLongBits(v) != 0;
+        if (v == Math.rint(v) && Math.abs(v) < LARGEST_PLAIN_WHOLE && !negativeZero) {
+            return Long.toString((long) v);
+        }
+        String s = Double.toString(v);
+        int e = s.indexOf('E');
+        if (e < 0) {
+            return s;
+        }
+        String mantissa = s.substring(0, e);
+        if (mantissa.endsWith(".0")) {
+            mantissa = mantissa.substring(0, mantissa.length() - 2);
+        }
+        return mantissa + "e" + s.substring(e + 1);
+    }
+}
