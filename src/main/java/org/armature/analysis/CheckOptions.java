@@ -26,15 +26,19 @@ import java.util.OptionalDouble;
  *     50 V rms, the IEC 61140 ELV band; common practice)
  * @param selvDcVolts contact-side DC above this is beyond safety extra-low voltage (default 120 V
  *     ripple-free, the IEC 61140 ELV band; common practice)
+ * @param useTransient judge the turn-off (peak switch voltage, suppressor current, release time)
+ *     with the transient engine at the largest-current corner (default true); false, or a run that
+ *     fails, falls back to the closed forms of {@link SuppressorEstimate}, and the result says which
  */
 public record CheckOptions(double operateMarginFraction, double releaseMarginFraction, double saturationPassMargin,
                            double ratingUseFraction, double thermalMarginKelvin, double forwardDropVolts,
                            OptionalDouble releaseTimeRequirementSeconds, int monteCarloSamples, long seed,
-                           CornerOptions corners, double selvAcRmsVolts, double selvDcVolts) {
+                           CornerOptions corners, double selvAcRmsVolts, double selvDcVolts,
+                           boolean useTransient) {
 
     /** The defaults named above. */
     public static final CheckOptions DEFAULT = new CheckOptions(0.10, 0.10, 2.0, 0.8, 20, 0.7, OptionalDouble.empty(),
-            0, 1, CornerOptions.DEFAULT, 50, 120);
+            0, 1, CornerOptions.DEFAULT, 50, 120, true);
 
     public CheckOptions {
         if (!(operateMarginFraction >= 0 && releaseMarginFraction >= 0 && releaseMarginFraction < 1)) {
@@ -64,13 +68,27 @@ public record CheckOptions(double operateMarginFraction, double releaseMarginFra
     public CheckOptions withMonteCarlo(int samples, long newSeed) {
         return new CheckOptions(operateMarginFraction, releaseMarginFraction, saturationPassMargin, ratingUseFraction,
                 thermalMarginKelvin, forwardDropVolts, releaseTimeRequirementSeconds, samples, newSeed, corners,
-                selvAcRmsVolts, selvDcVolts);
+                selvAcRmsVolts, selvDcVolts, useTransient);
+    }
+
+    /** The same options with the transient engine on or off for the turn-off checks. */
+    public CheckOptions withTransient(boolean on) {
+        return new CheckOptions(operateMarginFraction, releaseMarginFraction, saturationPassMargin, ratingUseFraction,
+                thermalMarginKelvin, forwardDropVolts, releaseTimeRequirementSeconds, monteCarloSamples, seed, corners,
+                selvAcRmsVolts, selvDcVolts, on);
+    }
+
+    /** The same options with another corner enumeration. */
+    public CheckOptions withCorners(CornerOptions c) {
+        return new CheckOptions(operateMarginFraction, releaseMarginFraction, saturationPassMargin, ratingUseFraction,
+                thermalMarginKelvin, forwardDropVolts, releaseTimeRequirementSeconds, monteCarloSamples, seed, c,
+                selvAcRmsVolts, selvDcVolts, useTransient);
     }
 
     /** The same options with a release-time requirement, seconds. */
     public CheckOptions withReleaseTimeRequirement(double seconds) {
         return new CheckOptions(operateMarginFraction, releaseMarginFraction, saturationPassMargin, ratingUseFraction,
                 thermalMarginKelvin, forwardDropVolts, OptionalDouble.of(seconds), monteCarloSamples, seed, corners,
-                selvAcRmsVolts, selvDcVolts);
+                selvAcRmsVolts, selvDcVolts, useTransient);
     }
 }

@@ -17,6 +17,11 @@ import org.armature.solver.PartResult;
 import org.armature.solver.SolveOptions;
 import org.armature.solver.SolverException;
 import org.armature.solver.SwitchVerdict;
+import org.armature.solver.timedomain.TransientAnalysis;
+import org.armature.solver.timedomain.TransientFailureException;
+import org.armature.solver.timedomain.TransientMetrics;
+import org.armature.solver.timedomain.TransientOptions;
+import org.armature.solver.timedomain.TransientResult;
 import org.armature.units.EngineeringNotation;
 import org.armature.units.Unit;
 
@@ -41,21 +46,23 @@ import org.armature.units.Unit;
  * <tr><td>{@code rating.pin-current}</td><td>largest pin current vs the per-pin limit (GP-1)</td><td>same</td></tr>
  * <tr><td>{@code rating.package-current}</td><td>channels × largest pin current vs the package limit
  *     (GP-x)</td><td>same</td></tr>
- * <tr><td>{@code rating.switch-voltage}</td><td>peak switch voltage at turn-off, static estimate
- *     VS,max + Vc + I0·Rs ({@link SuppressorEstimate}) vs VCEO / VDSS</td><td>same; no suppressor: fail
- *     (SU-0, SU-1)</td></tr>
+ * <tr><td>{@code rating.switch-voltage}</td><td>peak switch voltage at turn-off vs VCEO / VDSS: from
+ *     the transient engine at the largest-current corner (supply max, coil −tol, coldest ambient),
+ *     avalanche = fail; without it the static estimate VS,max + Vc + I0·Rs
+ *     ({@link SuppressorEstimate})</td><td>same; no suppressor: fail (SU-0, SU-1)</td></tr>
  * <tr><td>{@code rating.suppressor-current}</td><td>peak suppressor current (the coil current at
  *     turn-off) vs the diode's or zener's peak rating</td><td>same</td></tr>
  * <tr><td>{@code thermal.switch-junction}</td><td>Tj = Ta + P·RθJA at the hottest variant (TH-1,
  *     TH-5); a Darlington channel's package with its channels on: Ta + n·P·RθJA</td><td>≤ Tj(max) − 20 K /
  *     ≤ Tj(max) / above</td></tr>
- * <tr><td>{@code relay.release-time}</td><td>only with a requirement: coil-current decay from I0 to
- *     drop-out through the suppressor, closed form (CHECKS, suppression), before the armature
- *     moves</td><td>≤ requirement / – / above</td></tr>
+ * <tr><td>{@code relay.release-time}</td><td>only with a requirement: turn-off edge to the contacts
+ *     opening (transient engine); without it the coil-current decay to drop-out through the
+ *     suppressor, closed form (CHECKS, suppression), before the armature moves</td><td>≤ requirement / – / above</td></tr>
  * </table>
  *
  * <p>Other findings: {@code check.not-recognised}, {@code check.not-solved} (a variant the engine
- * could not solve, named), and the safety cautions {@code caution.above-selv},
+ * could not solve, named), {@code check.transient-failed} (INFO: the turn-off fell back to the
+ * closed forms), and the safety cautions {@code caution.above-selv},
  * {@code caution.creepage-clearance}, {@code caution.fusing}, {@code caution.enclosure},
  * {@code caution.qualified-installation} when a contact-side supply is above safety extra-low
  * voltage (more than 50 V AC rms or 120 V ripple-free DC; IEC 61140 band, common practice). The
@@ -67,6 +74,11 @@ public final class StageChecks {
     public static final List<String> IDS = List.of("relay.operates", "relay.releases", "switch.saturated",
             "rating.switch-current", "rating.pin-current", "rating.package-current", "rating.switch-voltage",
             "rating.suppressor-current", "thermal.switch-junction", "relay.release-time");
+
+    private static final String TRANSIENT = "transient engine: turn-off at the largest-current corner";
+
+    /** Longest turn-off window the checks run, 0.2 s: ten times a small relay's release. */
+    private static final double TRANSIENT_MAX_WINDOW_SECONDS = 0.2;
 
     private static final String STATIC = "static estimate (closed form of CHECKS, suppression); the transient engine"
             + " is not used yet";
@@ -94,6 +106,10 @@ public final class StageChecks {
 
     /** A variant with its two operating points (empty when the engine failed). */
     record Solved(Variant variant, Optional<OperatingPoint> on, Optional<OperatingPoint> off) {
+    }
+
+    /** The turn-off run and the corner it ran at. */
+    record TurnOff(TransientMetrics metrics, Stage stage, Map<String, Double> corner, String cornerText) {
     }
 
     /** One check measured on one variant. */
@@ -159,13 +175,20 @@ public final class StageChecks {
             double i0 = corners.stream().flatMap(s -> s.on().stream())
                     .mapToDouble(op -> Math.abs(op.requirePart(roles.relayRef()).quantity("coilCurrent"))).max().orElse(Double.NaN);
             SuppressorEstimate sup = SuppressorEstimate.of(stage, roles, o.forwardDropVolts());
-            checks.add(switchVoltage(sup, i0));
-            suppressorCurrent(sup, i0).ifPresent(checks::add);
+            Optional<TurnOff> edge = o.useTransient() ? turnOff(sup, i0) : Optional.empty();
+            if (edge.isPresent()) {
+                checks.add(transientSwitchVoltage(edge.get(), sup));
+                transientSuppressorCurrent(edge.get(), sup).ifPresent(checks::add);
+            } else {
+                checks.add(switchVoltage(sup, i0));
+                suppressorCurrent(sup, i0).ifPresent(checks::add);
+            }
             checks.add(worst("thermal.switch-junction", corners, this::junction, Unit.CELSIUS,
                     "Tj = Ta + P·RθJA (TH-1, TH-5)" + (isDarlington() ? ", package total with the channels on" : "")
                             + "; pass ≤ Tj(max) − " + EngineeringNotation.format(o.thermalMarginKelvin(), Unit.KELVIN),
                     List.of(roles.switchRef())));
-            o.releaseTimeRequirementSeconds().ifPresent(req -> checks.add(releaseTime(sup, i0, req)));
+            o.releaseTimeRequirementSeconds().ifPresent(req -> checks.add(edge.isPresent()
+                    ? transientReleaseTime(edge.get(), req) : releaseTime(sup, i0, req)));
             Optional<YieldResult> yield = Optional.empty();
             if (o.monteCarloSamples() > 0) {
                 yield = Optional.of(monteCarlo(corners));
@@ -373,6 +396,92 @@ public final class StageChecks {
                             + amps(drop) + ") in " + EngineeringNotation.format(t, Unit.SECOND) + "; required "
                             + EngineeringNotation.format(requirement, Unit.SECOND) + ".",
                     List.of(k.ref()));
+        }
+
+        // ------------------------------------------------------------------ transient turn-off
+
+        /** The turn-off run at the largest-current corner, if the transient engine manages it. */
+        private Optional<TurnOff> turnOff(SuppressorEstimate sup, double i0) {
+            Map<String, Double> levels = new LinkedHashMap<>();
+            levels.put("supply", 1.0);
+            levels.put("coil-resistance", -1.0);
+            levels.put("ambient", -1.0);
+            Map<String, Double> present = new LinkedHashMap<>();
+            for (Factor f : factors) {
+                if (levels.containsKey(f.id())) {
+                    present.put(f.id(), levels.get(f.id()));
+                }
+            }
+            Stage s = Corners.at(stage, factors, present);
+            Part k = s.require(roles.relayRef());
+            double l = Math.max(k.value("inductanceReleasedHenries"), k.value("inductanceAttractedHenries"));
+            double guess = sup.decaySeconds(k.value("coilResistanceOhms"), l, Double.isNaN(i0) ? 0.03 : i0,
+                    k.value("mustReleaseVolts") / k.value("coilResistanceOhms"));
+            double window = Math.min(TRANSIENT_MAX_WINDOW_SECONDS, Math.max(TransientOptions.DEFAULT_DURATION_SECONDS,
+                    TransientOptions.DEFAULT_EDGE_SECONDS + 3 * (Double.isFinite(guess) ? guess : 0)
+                            + k.value("releaseTimeSeconds") * 2));
+            try {
+                TransientResult r = TransientAnalysis.run(s, TransientOptions.turnOff().withDuration(window));
+                Map<String, Double> corner = new LinkedHashMap<>();
+                List<String> words = new ArrayList<>();
+                for (Factor f : factors) {
+                    if (present.containsKey(f.id())) {
+                        corner.put(f.id(), f.valueAt(present.get(f.id())));
+                        words.add(f.id() + " " + f.describe(present.get(f.id())));
+                    }
+                }
+                return Optional.of(new TurnOff(r.metrics(), s, corner, String.join(", ", words)));
+            } catch (TransientFailureException | SolverException e) {
+                findings.add(new Finding(Severity.INFO, "check.transient-failed", roles.switchRef(), "",
+                        "The transient engine could not run the turn-off (" + e.getMessage()
+                                + "); the turn-off checks use the closed-form estimates."));
+                return Optional.empty();
+            }
+        }
+
+        private CheckResult transientSwitchVoltage(TurnOff t, SuppressorEstimate sup) {
+            Part q = t.stage().require(roles.switchRef());
+            double rating = q.value(q.kind() == PartKind.NMOS ? "vdssVolts" : "vceoVolts");
+            double peak = t.metrics().peakSwitchVolts();
+            Measure m = rated(peak, rating, "Peak switch voltage at turn-off " + volts(peak) + " (" + sup.description()
+                    + ") against " + volts(rating) + ".");
+            CheckStatus st = t.metrics().switchBreakdown() ? CheckStatus.FAIL : m.status();
+            String why = t.metrics().switchBreakdown()
+                    ? "At turn-off the switch reaches its " + volts(rating) + " rating and goes into avalanche, absorbing "
+                            + EngineeringNotation.format(t.metrics().switchEnergyJoules(), Unit.JOULE)
+                            + " (" + sup.description() + ")."
+                    : m.explanation();
+            List<String> refs = new ArrayList<>(List.of(q.ref()));
+            refs.addAll(sup.refs());
+            return new CheckResult("rating.switch-voltage", st, peak, m.limit(), Unit.VOLT, t.corner(), t.cornerText(),
+                    TRANSIENT, why, refs);
+        }
+
+        private Optional<CheckResult> transientSuppressorCurrent(TurnOff t, SuppressorEstimate sup) {
+            Optional<Part> diode = sup.refs().stream().map(stage::require)
+                    .filter(p -> p.kind() == PartKind.DIODE || p.kind() == PartKind.ZENER || p.kind() == PartKind.DARLINGTON)
+                    .findFirst();
+            if (diode.isEmpty()) {
+                return Optional.empty();
+            }
+            boolean channel = diode.get().kind() == PartKind.DARLINGTON;
+            double rating = diode.get().value(channel ? "icMaxAmps" : "maxCurrentAmps");
+            double peak = t.metrics().peakSuppressorAmps();
+            Measure m = rated(peak, rating, "Peak suppressor current " + amps(peak) + " against " + amps(rating)
+                    + (channel ? " (the channel's output rating)." : "."));
+            return Optional.of(new CheckResult("rating.suppressor-current", m.status(), peak, m.limit(), Unit.AMPERE,
+                    t.corner(), t.cornerText(), TRANSIENT, m.explanation(), List.of(diode.get().ref())));
+        }
+
+        private CheckResult transientReleaseTime(TurnOff t, double requirement) {
+            double rt = t.metrics().releaseTimeSeconds();
+            CheckStatus st = Double.isNaN(rt) ? CheckStatus.FAIL : rt <= requirement ? CheckStatus.PASS : CheckStatus.FAIL;
+            String why = Double.isNaN(rt) ? "The contacts had not opened by the end of the run."
+                    : "The contacts open " + EngineeringNotation.format(rt, Unit.SECOND) + " after the turn-off edge (coil"
+                            + " current to drop-out in " + EngineeringNotation.format(t.metrics().decayToReleaseCurrentSeconds(),
+                            Unit.SECOND) + "); required " + EngineeringNotation.format(requirement, Unit.SECOND) + ".";
+            return new CheckResult("relay.release-time", st, rt, requirement, Unit.SECOND, t.corner(), t.cornerText(),
+                    TRANSIENT, why, List.of(roles.relayRef()));
         }
 
         // ------------------------------------------------------------------ worst variant

@@ -27,7 +27,7 @@ class StageChecksTest {
 
     /** Fewer factors so that the unit tests stay quick: supply, ambient, coil, gain, pin (32 corners). */
     private static final CheckOptions QUICK = new CheckOptions(0.10, 0.10, 2.0, 0.8, 20, 0.7, OptionalDouble.empty(), 0,
-            1, new CornerOptions(0, 64, false), 50, 120);
+            1, new CornerOptions(0, 64, false), 50, 120, false);
 
     private static final DcAnalysis DC = new DcAnalysis();
 
@@ -108,6 +108,24 @@ class StageChecksTest {
         CheckResult c = StageChecks.run(stage, o, DC).check("relay.release-time").orElseThrow();
         assertEquals(CheckStatus.FAIL, c.status());
         assertTrue(c.value() > 0.001 && c.value() < 0.05, () -> c.explanation());
+    }
+
+    @Test
+    @DisplayName("with the transient engine: the freewheeling diode holds the switch near VS,max + VF, no avalanche")
+    void transientTurnOff() {
+        CheckOptions o = QUICK.withTransient(true).withReleaseTimeRequirement(0.050);
+        CheckReport r = StageChecks.run(Templates.build(StageTemplate.LOW_SIDE_NPN), o, DC);
+        CheckResult v = r.check("rating.switch-voltage").orElseThrow();
+        assertTrue(v.method().startsWith("transient engine"), v.method());
+        // derived: 13.2 V supply maximum plus about one diode drop
+        assertEquals(13.2 + 0.8, v.value(), 0.4);
+        assertEquals(CheckStatus.PASS, v.status());
+        assertEquals(13.2, v.corner().get("supply"), 1e-9);
+        CheckResult t = r.check("relay.release-time").orElseThrow();
+        assertEquals(CheckStatus.PASS, t.status(), t.explanation());
+        assertTrue(t.value() > 0.002, t.explanation());   // a plain diode slows release (SU-12)
+        CheckResult i = r.check("rating.suppressor-current").orElseThrow();
+        assertTrue(i.value() > 0.020 && i.value() < 0.05, i.explanation());
     }
 
     @ParameterizedTest(name = "contact side {0} V {1}: cautions {2}")
