@@ -34,7 +34,9 @@ public final class ArmatureCli {
      */
     static final List<Supplier<Object>> SUBCOMMANDS = List.of(
             NewCommand::commandLine,
-            SolveCommand::new);
+            SolveCommand::new,
+            CheckCommand::new,
+            SizeCommand::new);
 
     private ArmatureCli() {
     }
