@@ -33,7 +33,8 @@ public final class ArmatureCli {
      * programmatically.
      */
     static final List<Supplier<Object>> SUBCOMMANDS = List.of(
-            NewCommand::commandLine);
+            NewCommand::commandLine,
+            SolveCommand::new);
 
     private ArmatureCli() {
     }

@@ -50,11 +50,11 @@ final class StageReader {
         }
         JsonNode format = root.get("format");
         if (format == null || !format.isTextual() || !format.textValue().equals(StageJson.FORMAT)) {
-            String found = format == null ? "has no \"format\" field"
-                    : "has \"format\" " + format.toString();
+            String expected = "\"" + StageJson.FORMAT + "\"";
+            String found = format == null ? "it has no \"format\": " + expected + " entry"
+                    : "its \"format\" is " + format + ", not " + expected;
             throw new StageFileException(StageFileException.UNKNOWN_FORMAT,
-                    "This is not an Armature stage file: it " + found + " where \"" + StageJson.FORMAT
-                            + "\" was expected.");
+                    "This is not an Armature stage file: " + found + ".");
         }
         readVersion(root.get("version"));
         checkFields(root, TOP_FIELDS, "The file");
@@ -94,7 +94,7 @@ final class StageReader {
         expectObject(node, path);
         checkFields(node, STAGE_FIELDS, path);
         String name = requiredText(node, "name", path);
-        String description = optionalText(node, "description", path, "");
+        String description = optionalText(node, "description", path + ".description", "");
         Conditions conditions = node.has("conditions")
                 ? readConditions(node.get("conditions"), path + ".conditions")
                 : Conditions.DEFAULT;
@@ -269,9 +269,9 @@ final class StageReader {
         return text(required(obj, field, where), where + "." + field);
     }
 
-    private static String optionalText(JsonNode obj, String field, String path, String fallback) {
+    private static String optionalText(JsonNode obj, String field, String fieldPath, String fallback) {
         JsonNode v = obj.get(field);
-        return v == null ? fallback : text(v, path.equals(field) ? field : path + "." + field);
+        return v == null ? fallback : text(v, fieldPath);
     }
 
     private static double optionalNumber(JsonNode obj, String field, String path, double fallback) {
