@@ -35,6 +35,7 @@ public final class ArmatureCli {
     static final List<Supplier<Object>> SUBCOMMANDS = List.of(
             NewCommand::commandLine,
             SolveCommand::new,
+            SimulateCommand::new,
             CheckCommand::new,
             SizeCommand::new);
 
