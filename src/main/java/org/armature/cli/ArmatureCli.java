@@ -34,7 +34,10 @@ public final class ArmatureCli {
      */
     static final List<Supplier<Object>> SUBCOMMANDS = List.of(
             NewCommand::commandLine,
-            SolveCommand::new);
+            SolveCommand::new,
+            SimulateCommand::new,
+            CheckCommand::new,
+            SizeCommand::new);
 
     private ArmatureCli() {
     }
