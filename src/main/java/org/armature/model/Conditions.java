@@ -12,8 +12,8 @@ package org.armature.model;
 public record Conditions(boolean pinHigh, double ambientCelsius, double ambientMinCelsius,
                          double ambientMaxCelsius) {
 
-    /** Defaults: pin high, 25 °C nominal, −20 °C to 60 °C for the corners (typical enclosure range). */
-    public static final Conditions DEFAULT = new Conditions(true, 25, -20, 60);
+    /** Defaults: pin high, 25 °C nominal, −10 °C to 50 °C for the corners (typical indoor enclosure range). */
+    public static final Conditions DEFAULT = new Conditions(true, 25, -10, 50);
 
     public Conditions {
         if (!Double.isFinite(ambientCelsius) || ambientCelsius < -273.15) {

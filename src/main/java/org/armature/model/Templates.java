@@ -61,7 +61,7 @@ public final class Templates {
 
     private static void lowSide(Builder b, PartKind switchKind, Suppressor s) {
         boolean mos = switchKind == PartKind.NMOS;
-        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set("volts", 12).set("tolerancePercent", 10);
+        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set("volts", 12).set("tolerancePercent", 5);
         relay(b, 20, 6);
         b.wire(20, 0, 20, 4);
         suppressorAcrossCoil(b, s, 20, 4, 8);
@@ -82,7 +82,7 @@ public final class Templates {
     }
 
     private static void darlington(Builder b, Suppressor s) {
-        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set("volts", 12).set("tolerancePercent", 10);
+        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set("volts", 12).set("tolerancePercent", 5);
         relay(b, 20, 6);
         b.wire(20, 0, 20, 4);
         b.part("U2", PartKind.DARLINGTON, Placement.at(19, 13));
@@ -111,7 +111,7 @@ public final class Templates {
     }
 
     private static void highSide(Builder b, Suppressor s, HighSideDrive drive) {
-        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set("volts", 12).set("tolerancePercent", 10);
+        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set("volts", 12).set("tolerancePercent", 5);
         b.part("Q1", PartKind.PNP, Placement.at(19, 4));
         b.wire(20, 0, 20, 2);
         relay(b, 20, 10);

@@ -24,7 +24,7 @@ class BaseNetworkSizingTest {
 
     private static Stage textbookNpn(double supplyVolts, double coilOhms, double hfeMin, double vbeSat, double vceSat,
                                      double pinVolts) {
-        return Templates.build(StageTemplate.LOW_SIDE_NPN).withConditions(AT_25)
+        return Fixtures.build(StageTemplate.LOW_SIDE_NPN).withConditions(AT_25)
                 .updatePart("V1", p -> p.with("volts", supplyVolts).with("tolerancePercent", 0))
                 .updatePart("K1", p -> p.with("coilResistanceOhms", coilOhms).with("coilResistanceTolerancePercent", 0)
                         .with("referenceTemperatureCelsius", 25))
@@ -94,7 +94,7 @@ class BaseNetworkSizingTest {
     @Test
     @DisplayName("BJ-18 (derived): 12 V coil of 720 Ω draws 16.7 mA")
     void bj18() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NMOS).withConditions(AT_25)
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NMOS).withConditions(AT_25)
                 .updatePart("V1", p -> p.with("volts", 12).with("tolerancePercent", 0))
                 .updatePart("K1", p -> p.with("coilResistanceOhms", 720).with("coilResistanceTolerancePercent", 0)
                         .with("referenceTemperatureCelsius", 25));
@@ -125,7 +125,7 @@ class BaseNetworkSizingTest {
     @Test
     @DisplayName("BJ-13 (derived, XTB form from memory): hFE(min) 100 at −40 °C is 69.15")
     void gainAtColdest() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN).withConditions(new Conditions(true, 25, -40, 60));
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN).withConditions(new Conditions(true, 25, -40, 60));
         assertEquals(69.15, value(BaseNetworkSizing.size(stage), "hFE(min) at the coldest ambient"), 0.01);
     }
 
@@ -133,14 +133,14 @@ class BaseNetworkSizingTest {
     @DisplayName("RC-6 form (copper law, derived): 400 Ω −10 % at 20 °C is 303.3 Ω at −20 °C")
     void coldCoil() {
         // 360 Ω · (234.5 − 20)/(234.5 + 20) = 303.42 Ω
-        SizingResult r = BaseNetworkSizing.size(Templates.build(StageTemplate.LOW_SIDE_NPN));
+        SizingResult r = BaseNetworkSizing.size(Fixtures.build(StageTemplate.LOW_SIDE_NPN));
         assertEquals(360 * 214.5 / 254.5, value(r, "coil resistance, coldest"), 1e-6);
     }
 
     @Test
     @DisplayName("pull-down rule (stated in SizingOptions): smallest E24 value taking ≤ 10 % of IB, below Voff/Ileak")
     void pullDownRule() {
-        SizingResult r = BaseNetworkSizing.size(Templates.build(StageTemplate.LOW_SIDE_NPN));
+        SizingResult r = BaseNetworkSizing.size(Fixtures.build(StageTemplate.LOW_SIDE_NPN));
         double ib = value(r, "base current");
         double pd = r.suggestion("pull-down").orElseThrow().value();
         assertTrue(0.95 / pd <= 0.1 * ib);
@@ -152,7 +152,7 @@ class BaseNetworkSizingTest {
     @Test
     @DisplayName("MO-6 (common practice): VGS(th) max 3.0 V on a 3.3 V pin, overdrive 0.3 V; RDS(on) at 4.5 V: not guaranteed on")
     void mo6() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NMOS)
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NMOS)
                 .updatePart("Q1", p -> p.with("vgsThMaxVolts", 3.0).with("rdsOnGateVolts", 4.5))
                 .updatePart("U1", p -> p.with("highVolts", 3.3).with("highToleranceVolts", 0)
                         .with("outputResistanceOhms", 0.01));
@@ -166,7 +166,7 @@ class BaseNetworkSizingTest {
     @Test
     @DisplayName("gate resistor rule: smallest E24 value keeping the edge current within the 20 mA pin limit")
     void gateResistor() {
-        SizingResult r = BaseNetworkSizing.size(Templates.build(StageTemplate.LOW_SIDE_NMOS));
+        SizingResult r = BaseNetworkSizing.size(Fixtures.build(StageTemplate.LOW_SIDE_NMOS));
         // derived: (3.5 V / 20 mA − 75 Ω) / 0.95 = 105.3 Ω → 110 Ω (E24 up)
         assertEquals(110, r.suggestion("gate resistor").orElseThrow().value(), 1e-9);
         assertTrue(value(r, "pin current, peak at the edge") <= 0.020);
@@ -180,7 +180,7 @@ class BaseNetworkSizingTest {
             """)
     @DisplayName("DA-5 (derived): Darlington input current (VI − 2·VBE)/2.7 kΩ")
     void da5(double pinVolts, double milliamps) {
-        Stage stage = Templates.build(StageTemplate.DARLINGTON_CHANNEL)
+        Stage stage = Fixtures.build(StageTemplate.DARLINGTON_CHANNEL)
                 .updatePart("R1", p -> p.with("resistanceOhms", 1e-3))
                 .updatePart("U1", p -> p.with("highVolts", pinVolts).with("highToleranceVolts", 0)
                         .with("outputResistanceOhms", 0.01));
@@ -202,7 +202,7 @@ class BaseNetworkSizingTest {
     @Test
     @DisplayName("level-shifted high side: both transistors sized, suggestions for R1–R4")
     void levelShift() {
-        SizingResult r = BaseNetworkSizing.size(Templates.build(StageTemplate.HIGH_SIDE_PNP));
+        SizingResult r = BaseNetworkSizing.size(Fixtures.build(StageTemplate.HIGH_SIDE_PNP));
         Set<String> refs = r.suggestions().stream().map(Suggestion::ref).collect(Collectors.toSet());
         assertEquals(Set.of("R1", "R2", "R3", "R4"), refs);
         assertTrue(r.findings().isEmpty(), () -> r.findings().toString());
@@ -211,10 +211,10 @@ class BaseNetworkSizingTest {
     @Test
     @DisplayName("direct high side and unrecognised stages: a finding, no suggestions")
     void notSizable() {
-        SizingResult direct = BaseNetworkSizing.size(Templates.build(StageTemplate.HIGH_SIDE_PNP,
+        SizingResult direct = BaseNetworkSizing.size(Fixtures.build(StageTemplate.HIGH_SIDE_PNP,
                 org.armature.model.Suppressor.DIODE, org.armature.model.HighSideDrive.DIRECT));
         assertEquals(Set.of("sizing.high-side-direct"), keys(direct));
-        SizingResult none = BaseNetworkSizing.size(Templates.build(StageTemplate.LOW_SIDE_NPN).withoutPart("Q1"));
+        SizingResult none = BaseNetworkSizing.size(Fixtures.build(StageTemplate.LOW_SIDE_NPN).withoutPart("Q1"));
         assertEquals(Set.of("sizing.not-recognised"), keys(none));
         assertTrue(none.suggestions().isEmpty());
     }
@@ -222,7 +222,7 @@ class BaseNetworkSizingTest {
     @Test
     @DisplayName("package budget: 8 channels of 5.3 mA exceed a 40 mA package limit")
     void packageBudget() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN)
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN)
                 .updatePart("U1", p -> p.with("channelCount", 8).with("packageCurrentLimitAmps", 0.040));
         SizingResult r = BaseNetworkSizing.size(stage);
         assertTrue(keys(r).contains("sizing.package-current-over-limit"));

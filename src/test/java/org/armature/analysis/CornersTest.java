@@ -35,7 +35,7 @@ class CornersTest {
     @MethodSource("variants")
     @DisplayName("every template variant has at least 64 distinct corners, each a modified stage")
     void atLeast64Corners(StageTemplate t, Suppressor s, HighSideDrive d) {
-        Stage stage = Templates.build(t, s, d);
+        Stage stage = Fixtures.build(t, s, d);
         CornerPlan plan = Corners.enumerate(stage);
         assertTrue(plan.corners().size() >= 64, () -> plan.factors().toString());
         assertEquals(1 << plan.factors().size(), plan.corners().size());
@@ -44,13 +44,13 @@ class CornersTest {
             assertTrue(seen.add(v.levels()));
             assertEquals(plan.factors().size(), v.levels().size());
         }
-        assertEquals(Templates.build(t, s, d), stage, "nominal stage untouched");
+        assertEquals(Fixtures.build(t, s, d), stage, "nominal stage untouched");
     }
 
     @Test
     @DisplayName("low-side NPN: eight factors, 256 corners, in a stable order")
     void lowSideFactors() {
-        CornerPlan plan = Corners.enumerate(Templates.build(StageTemplate.LOW_SIDE_NPN));
+        CornerPlan plan = Corners.enumerate(Fixtures.build(StageTemplate.LOW_SIDE_NPN));
         assertEquals(List.of("supply", "ambient", "coil-resistance", "gain", "vbe", "pin-level", "resistor:R1",
                 "resistor:R2"), plan.factors().stream().map(Factor::id).toList());
         assertEquals(256, plan.corners().size());
@@ -59,7 +59,7 @@ class CornersTest {
     @Test
     @DisplayName("the stacked operate corner: 10.8 V, 60 °C, 440 Ω, hFE(min) at −20 °C frozen, pin 3.4 V")
     void worstOperateCorner() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN);
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN);
         List<Factor> factors = Corners.factors(stage);
         Stage worst = Corners.at(stage, factors, Map.of("supply", -1.0, "ambient", 1.0, "coil-resistance", 1.0,
                 "gain", -1.0, "pin-level", -1.0));
@@ -75,7 +75,7 @@ class CornersTest {
     @Test
     @DisplayName("gain at +1: (2·200 − 100)·(333.15/298.15)^1.5 (BJ-20 spread 100–300, BJ-13 scaling)")
     void highGain() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN);
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN);
         Factor gain = Corners.factors(stage).stream().filter(f -> f.id().equals("gain")).findFirst().orElseThrow();
         assertEquals(300 * Math.pow(333.15 / 298.15, 1.5), gain.valueAt(1), 1e-9);
     }
@@ -83,7 +83,7 @@ class CornersTest {
     @Test
     @DisplayName("VBE +30 mV divides IS by exp(30 mV / VT(25 °C)) (derived)")
     void vbeSpread() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN);
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN);
         Factor vbe = Corners.factors(stage).stream().filter(f -> f.id().equals("vbe")).findFirst().orElseThrow();
         double is = vbe.apply(stage, 1).require("Q1").value("saturationCurrentAmps");
         assertEquals(1e-14 * Math.exp(-0.030 / 0.0256926), is, 1e-18);     // VT at 25 °C: PC-5
@@ -92,7 +92,7 @@ class CornersTest {
     @Test
     @DisplayName("MOSFET threshold spans 2·VT0 − VGS(th)max to VGS(th)max")
     void threshold() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NMOS);
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NMOS);
         Factor th = Corners.factors(stage).stream().filter(f -> f.id().equals("threshold")).findFirst().orElseThrow();
         assertEquals(1.5, th.valueAt(1), 1e-12);
         assertEquals(0.9, th.valueAt(-1), 1e-12);
@@ -119,7 +119,7 @@ class CornersTest {
     @Test
     @DisplayName("too many resistors: grouped into one weak/strong-drive factor, pull resistors opposite")
     void grouped() {
-        Stage stage = Templates.build(StageTemplate.HIGH_SIDE_PNP, Suppressor.RESISTOR, HighSideDrive.LEVEL_SHIFT);
+        Stage stage = Fixtures.build(StageTemplate.HIGH_SIDE_PNP, Suppressor.RESISTOR, HighSideDrive.LEVEL_SHIFT);
         CornerPlan plan = Corners.enumerate(stage);
         assertTrue(plan.factors().stream().anyMatch(f -> f.id().equals("resistors")));
         assertTrue(plan.corners().size() <= CornerOptions.DEFAULT.maxCorners());
@@ -133,7 +133,7 @@ class CornersTest {
     @Test
     @DisplayName("Monte Carlo: seeded, reproducible, levels in [−1, 1], normal spread σ ≈ 1/3 of the limit")
     void monteCarlo() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN);
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN);
         List<Factor> factors = Corners.factors(stage);
         List<Variant> a = Corners.monteCarlo(stage, factors, 2000, 42);
         List<Variant> b = Corners.monteCarlo(stage, factors, 2000, 42);
@@ -161,7 +161,7 @@ class CornersTest {
     @Test
     @DisplayName("a level outside [−1, 1] is refused")
     void levelRange() {
-        Factor f = Corners.factors(Templates.build(StageTemplate.LOW_SIDE_NPN)).get(0);
-        assertThrows(IllegalArgumentException.class, () -> f.apply(Templates.build(StageTemplate.LOW_SIDE_NPN), 1.5));
+        Factor f = Corners.factors(Fixtures.build(StageTemplate.LOW_SIDE_NPN)).get(0);
+        assertThrows(IllegalArgumentException.class, () -> f.apply(Fixtures.build(StageTemplate.LOW_SIDE_NPN), 1.5));
     }
 }

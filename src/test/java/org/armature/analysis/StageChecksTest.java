@@ -35,7 +35,7 @@ class StageChecksTest {
 
     @BeforeAll
     static void runOnce() {
-        darlington = StageChecks.run(Templates.build(StageTemplate.DARLINGTON_CHANNEL), QUICK, DC);
+        darlington = StageChecks.run(Fixtures.build(StageTemplate.DARLINGTON_CHANNEL), QUICK, DC);
     }
 
     private static Set<String> keys(CheckReport r) {
@@ -81,7 +81,7 @@ class StageChecksTest {
     @Test
     @DisplayName("no suppressor: the switch-voltage rating fails (SU-0) and the topology finding is carried")
     void unsuppressed() {
-        CheckReport r = StageChecks.run(Templates.build(StageTemplate.LOW_SIDE_NPN, Suppressor.NONE,
+        CheckReport r = StageChecks.run(Fixtures.build(StageTemplate.LOW_SIDE_NPN, Suppressor.NONE,
                 HighSideDrive.LEVEL_SHIFT), QUICK, DC);
         CheckResult c = r.check("rating.switch-voltage").orElseThrow();
         assertEquals(CheckStatus.FAIL, c.status());
@@ -93,7 +93,7 @@ class StageChecksTest {
     @Test
     @DisplayName("saturation at the low-gain corner uses hFE(min) at the coldest ambient (BJ-13 × BJ-19 rule)")
     void saturationAtLowGain() {
-        CheckReport r = StageChecks.run(Templates.build(StageTemplate.LOW_SIDE_NPN, Suppressor.NONE,
+        CheckReport r = StageChecks.run(Fixtures.build(StageTemplate.LOW_SIDE_NPN, Suppressor.NONE,
                 HighSideDrive.LEVEL_SHIFT), QUICK, DC);
         CheckResult c = r.check("switch.saturated").orElseThrow();
         assertEquals(100 * Math.pow(253.15 / 298.15, 1.5), c.corner().get("gain"), 1e-6);
@@ -103,7 +103,7 @@ class StageChecksTest {
     @Test
     @DisplayName("release-time requirement: decay to drop-out through the clamp diode, closed form (SU-7 form)")
     void releaseTime() {
-        Stage stage = Templates.build(StageTemplate.DARLINGTON_CHANNEL);
+        Stage stage = Fixtures.build(StageTemplate.DARLINGTON_CHANNEL);
         CheckOptions o = QUICK.withReleaseTimeRequirement(0.001);
         CheckResult c = StageChecks.run(stage, o, DC).check("relay.release-time").orElseThrow();
         assertEquals(CheckStatus.FAIL, c.status());
@@ -114,7 +114,7 @@ class StageChecksTest {
     @DisplayName("with the transient engine: the freewheeling diode holds the switch near VS,max + VF, no avalanche")
     void transientTurnOff() {
         CheckOptions o = QUICK.withTransient(true).withReleaseTimeRequirement(0.050);
-        CheckReport r = StageChecks.run(Templates.build(StageTemplate.LOW_SIDE_NPN), o, DC);
+        CheckReport r = StageChecks.run(Fixtures.build(StageTemplate.LOW_SIDE_NPN), o, DC);
         CheckResult v = r.check("rating.switch-voltage").orElseThrow();
         assertTrue(v.method().startsWith("transient engine"), v.method());
         // derived: 13.2 V supply maximum plus about one diode drop
@@ -137,7 +137,7 @@ class StageChecksTest {
             """)
     @DisplayName("safety cautions above SELV (> 50 V AC rms or > 120 V DC, IEC 61140 band; common practice)")
     void cautions(double volts, String waveform, boolean expected) {
-        Stage stage = Templates.build(StageTemplate.DARLINGTON_CHANNEL).updatePart("V2",
+        Stage stage = Fixtures.build(StageTemplate.DARLINGTON_CHANNEL).updatePart("V2",
                 p -> p.with("volts", volts).with("tolerancePercent", 0).withOption("waveform", waveform));
         CheckReport r = StageChecks.run(stage, QUICK, DC);
         Set<String> k = keys(r);
@@ -151,7 +151,7 @@ class StageChecksTest {
     @Test
     @DisplayName("Monte Carlo: the same seed gives the same yield; culprits only counted for failures")
     void monteCarloReproducible() {
-        Stage stage = Templates.build(StageTemplate.DARLINGTON_CHANNEL);
+        Stage stage = Fixtures.build(StageTemplate.DARLINGTON_CHANNEL);
         YieldResult a = StageChecks.run(stage, QUICK.withMonteCarlo(60, 11), DC).yield().orElseThrow();
         YieldResult b = StageChecks.run(stage, QUICK.withMonteCarlo(60, 11), DC).yield().orElseThrow();
         assertEquals(a, b);
@@ -164,7 +164,7 @@ class StageChecksTest {
     @Test
     @DisplayName("a cold, low supply makes the Monte Carlo yield fall and names the supply among the culprits")
     void lowSupplyCulprit() {
-        Stage stage = Templates.build(StageTemplate.DARLINGTON_CHANNEL)
+        Stage stage = Fixtures.build(StageTemplate.DARLINGTON_CHANNEL)
                 .updatePart("V1", p -> p.with("volts", 10.2).with("tolerancePercent", 10))
                 .withConditions(new Conditions(true, 25, 20, 30));
         YieldResult y = StageChecks.run(stage, QUICK.withMonteCarlo(80, 5), DC).yield().orElseThrow();
@@ -175,7 +175,7 @@ class StageChecksTest {
     static List<Stage> allVariants() {
         return TopologyCheckTest.variants().map(a -> {
             Object[] x = a.get();
-            return Templates.build((StageTemplate) x[0], (Suppressor) x[1], (HighSideDrive) x[2]);
+            return Fixtures.build((StageTemplate) x[0], (Suppressor) x[1], (HighSideDrive) x[2]);
         }).toList();
     }
 
@@ -196,7 +196,7 @@ class StageChecksTest {
     @Test
     @DisplayName("an unrecognised stage: no checks, one finding")
     void unrecognised() {
-        CheckReport r = StageChecks.run(Templates.build(StageTemplate.LOW_SIDE_NPN).withoutPart("Q1"), QUICK, DC);
+        CheckReport r = StageChecks.run(Fixtures.build(StageTemplate.LOW_SIDE_NPN).withoutPart("Q1"), QUICK, DC);
         assertTrue(r.checks().isEmpty());
         assertTrue(keys(r).contains("check.not-recognised"));
     }

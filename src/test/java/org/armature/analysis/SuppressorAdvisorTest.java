@@ -48,7 +48,7 @@ class SuppressorAdvisorTest {
     @Test
     @DisplayName("ranking, closed form: clamps above the supply release fastest, the plain diode is slowest (SU-12, SU-16)")
     void ranking() {
-        SuppressorAdvisor.Ranking r = SuppressorAdvisor.rank(Templates.build(StageTemplate.LOW_SIDE_NPN),
+        SuppressorAdvisor.Ranking r = SuppressorAdvisor.rank(Fixtures.build(StageTemplate.LOW_SIDE_NPN),
                 CLOSED.withReleaseRequirement(0.006));
         List<Suppressor> order = r.ranked().stream().map(SuppressorAdvisor.Candidate::suppressor).toList();
         assertEquals(Suppressor.DIODE, order.get(order.size() - 1));
@@ -66,7 +66,7 @@ class SuppressorAdvisorTest {
     @Test
     @DisplayName("a 30 V switch leaves 10.8 V of clamp: the zener drops to 10 V and no TVS fits")
     void lowRating() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN).updatePart("Q1", p -> p.with("vceoVolts", 30));
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN).updatePart("Q1", p -> p.with("vceoVolts", 30));
         SuppressorAdvisor.Ranking r = SuppressorAdvisor.rank(stage, CLOSED);
         assertEquals(10, r.proposedZenerVolts(), 1e-12);           // E24 below 0.8·30 − 13.2 − 0.7 = 10.1 V
         assertTrue(Double.isNaN(r.proposedTvsVolts()));
@@ -81,7 +81,7 @@ class SuppressorAdvisorTest {
     @Test
     @DisplayName("with the transient engine: the plain diode's release time and peak, and the method named")
     void transientDiode() {
-        SuppressorAdvisor.Ranking r = SuppressorAdvisor.rank(Templates.build(StageTemplate.LOW_SIDE_NPN),
+        SuppressorAdvisor.Ranking r = SuppressorAdvisor.rank(Fixtures.build(StageTemplate.LOW_SIDE_NPN),
                 SuppressorAdvisor.Options.DEFAULT.withCandidates(List.of(Suppressor.DIODE)));
         SuppressorAdvisor.Candidate c = r.ranked().get(0);
         assertTrue(c.method().startsWith("transient engine"), c.method());
@@ -92,7 +92,7 @@ class SuppressorAdvisorTest {
     @Test
     @DisplayName("unrecognised stage: nothing ranked, one finding")
     void unrecognised() {
-        SuppressorAdvisor.Ranking r = SuppressorAdvisor.rank(Templates.build(StageTemplate.LOW_SIDE_NPN).withoutPart("K1"));
+        SuppressorAdvisor.Ranking r = SuppressorAdvisor.rank(Fixtures.build(StageTemplate.LOW_SIDE_NPN).withoutPart("K1"));
         assertTrue(r.ranked().isEmpty());
         assertEquals("suppressor.not-recognised", r.findings().get(0).key());
     }

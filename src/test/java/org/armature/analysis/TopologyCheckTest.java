@@ -53,7 +53,7 @@ class TopologyCheckTest {
     @MethodSource("variants")
     @DisplayName("every template variant is recognised and clean but for the expected findings")
     void templatesAreRecognisedAndClean(StageTemplate t, Suppressor s, HighSideDrive d) {
-        Stage stage = Templates.build(t, s, d);
+        Stage stage = Fixtures.build(t, s, d);
         StageRoles roles = TopologyCheck.recognise(stage).orElseThrow();
         assertEquals(t.name(), roles.topology().name(), "topology");
         Set<String> expected = new java.util.HashSet<>();
@@ -77,7 +77,7 @@ class TopologyCheckTest {
     @Test
     @DisplayName("low-side NPN roles: R1 is the base resistor, R2 the pull-down, D1 the suppressor")
     void lowSideRoles() {
-        StageRoles roles = TopologyCheck.recognise(Templates.build(StageTemplate.LOW_SIDE_NPN)).orElseThrow();
+        StageRoles roles = TopologyCheck.recognise(Fixtures.build(StageTemplate.LOW_SIDE_NPN)).orElseThrow();
         assertEquals("Q1", roles.switchRef());
         assertEquals("K1", roles.relayRef());
         assertEquals(Optional.of("R1"), roles.inputResistorRef());
@@ -91,7 +91,7 @@ class TopologyCheckTest {
     @Test
     @DisplayName("high side with level shift: Q2 shifts, R3 pulls Q1 up, R4 limits Q1's base current")
     void levelShiftRoles() {
-        StageRoles roles = TopologyCheck.recognise(Templates.build(StageTemplate.HIGH_SIDE_PNP)).orElseThrow();
+        StageRoles roles = TopologyCheck.recognise(Fixtures.build(StageTemplate.HIGH_SIDE_PNP)).orElseThrow();
         assertEquals(Optional.of("Q2"), roles.levelShiftRef());
         assertEquals("Q2", roles.inputRef());
         assertEquals(Optional.of("R3"), roles.switchPullUpRef());
@@ -104,7 +104,7 @@ class TopologyCheckTest {
     @MethodSource("pullDownRemovals")
     @DisplayName("removing the pull-down (or PNP pull-up) leaves a floating base or gate, naming the transistor")
     void removedPullIsFloating(StageTemplate t, String removed, String floating) {
-        Stage stage = Templates.build(t).withoutPart(removed);
+        Stage stage = Fixtures.build(t).withoutPart(removed);
         TopologyIssue i = issue(stage, "topology.floating-control").orElseThrow();
         assertEquals(floating, i.finding().ref());
         assertEquals(Severity.WARNING, i.finding().severity());
@@ -123,7 +123,7 @@ class TopologyCheckTest {
     @MethodSource("diodeTemplates")
     @DisplayName("a freewheeling diode rotated by 180° conducts when the stage turns on: reversed, naming D1")
     void rotatedDiodeIsReversed(StageTemplate t) {
-        Stage stage = Templates.build(t, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT).updatePart("D1",
+        Stage stage = Fixtures.build(t, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT).updatePart("D1",
                 p -> p.withPlacement(p.placement().rotated(p.placement().rotationDegrees() + 180)));
         TopologyIssue i = issue(stage, "topology.suppressor-reversed").orElseThrow();
         assertEquals("D1", i.finding().ref());
@@ -139,7 +139,7 @@ class TopologyCheckTest {
     @Test
     @DisplayName("diode + zener with the diode turned round: both junctions forward, reversed")
     void diodeZenerReversed() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN, Suppressor.DIODE_ZENER, HighSideDrive.LEVEL_SHIFT)
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN, Suppressor.DIODE_ZENER, HighSideDrive.LEVEL_SHIFT)
                 .updatePart("D1", p -> p.withPlacement(p.placement().rotated(0)));
         assertEquals(Set.of("topology.suppressor-reversed"), problemKeys(stage));
         assertEquals(List.of("D2", "D1", "K1"), issue(stage, "topology.suppressor-reversed").orElseThrow().refs());
@@ -148,7 +148,7 @@ class TopologyCheckTest {
     @Test
     @DisplayName("a 12 V zener alone across a 12 V ±10 % coil breaks down in the on state (derived: 12 V < 13.2 V)")
     void zenerBelowSupplyConducts() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN).updatePart("D1",
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN).updatePart("D1",
                 p -> new Part("D1", PartKind.ZENER, java.util.Map.of("breakdownVolts", 12.0), java.util.Map.of(),
                         p.placement()));
         assertEquals(Set.of("topology.suppressor-conducts"), problemKeys(stage));
@@ -159,7 +159,7 @@ class TopologyCheckTest {
     @Test
     @DisplayName("a 12 V TVS across a 12 V ±10 % coil conducts when on; the template's 24 V one does not")
     void lowTvsConducts() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN, Suppressor.TVS, HighSideDrive.LEVEL_SHIFT)
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN, Suppressor.TVS, HighSideDrive.LEVEL_SHIFT)
                 .updatePart("D1", p -> p.with("breakdownVolts", 12));
         assertEquals(Set.of("topology.suppressor-conducts"), problemKeys(stage));
     }
@@ -167,7 +167,7 @@ class TopologyCheckTest {
     @Test
     @DisplayName("a direct-driven high side with a pin above the supply's maximum can turn off")
     void directHighSideFromHighPinIsFine() {
-        Stage stage = Templates.build(StageTemplate.HIGH_SIDE_PNP, Suppressor.DIODE, HighSideDrive.DIRECT)
+        Stage stage = Fixtures.build(StageTemplate.HIGH_SIDE_PNP, Suppressor.DIODE, HighSideDrive.DIRECT)
                 .updatePart("U1", p -> p.with("highVolts", 13.5));
         assertEquals(Set.of(), problemKeys(stage));
         Stage lower = stage.updatePart("U1", p -> p.with("highVolts", 12.6));
@@ -178,18 +178,18 @@ class TopologyCheckTest {
     @Test
     @DisplayName("no coil supply: an error naming the relay")
     void coilSupplyMissing() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN).withoutPart("V1");
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN).withoutPart("V1");
         TopologyIssue i = issue(stage, "topology.coil-supply-missing").orElseThrow();
         assertEquals("K1", i.finding().ref());
         assertEquals(Severity.ERROR, i.finding().severity());
-        Stage high = Templates.build(StageTemplate.HIGH_SIDE_PNP).withoutPart("V1");
+        Stage high = Fixtures.build(StageTemplate.HIGH_SIDE_PNP).withoutPart("V1");
         assertEquals("Q1", issue(high, "topology.coil-supply-missing").orElseThrow().finding().ref());
     }
 
     @Test
     @DisplayName("no contact-side supply: the contact side is unpowered, naming K1 and the load")
     void contactSideUnpowered() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN).withoutPart("V2");
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN).withoutPart("V2");
         TopologyIssue i = issue(stage, "topology.contact-side-unpowered").orElseThrow();
         assertEquals(List.of("K1", "E1"), i.refs());
         assertTrue(TopologyCheck.recognise(stage).orElseThrow().contactSupplyRefs().isEmpty());
@@ -198,7 +198,7 @@ class TopologyCheckTest {
     @Test
     @DisplayName("contacts with nothing wired: only an INFO")
     void contactsUnused() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN).withoutPart("V2").withoutPart("E1");
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN).withoutPart("V2").withoutPart("E1");
         assertTrue(TopologyCheck.check(stage).stream()
                 .anyMatch(f -> f.key().equals("topology.contacts-unused") && f.severity() == Severity.INFO));
         assertEquals(Set.of(), problemKeys(stage));
@@ -207,10 +207,10 @@ class TopologyCheckTest {
     @Test
     @DisplayName("no relay, or no switch on the coil: not a recognised driver stage")
     void notRecognised() {
-        Stage noRelay = Templates.build(StageTemplate.LOW_SIDE_NPN).withoutPart("K1");
+        Stage noRelay = Fixtures.build(StageTemplate.LOW_SIDE_NPN).withoutPart("K1");
         assertEquals(Set.of("topology.not-recognised"), problemKeys(noRelay));
         assertTrue(TopologyCheck.recognise(noRelay).isEmpty());
-        Stage noSwitch = Templates.build(StageTemplate.LOW_SIDE_NPN).withoutPart("Q1");
+        Stage noSwitch = Fixtures.build(StageTemplate.LOW_SIDE_NPN).withoutPart("Q1");
         assertEquals(Set.of("topology.not-recognised"), problemKeys(noSwitch));
         assertEquals("K1", issue(noSwitch, "topology.not-recognised").orElseThrow().finding().ref());
     }
@@ -218,7 +218,7 @@ class TopologyCheckTest {
     @Test
     @DisplayName("no base resistor: the pin drives the base junction directly")
     void noBaseResistor() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN).withoutPart("R1").withWire(org.armature.model.Wire.of(10, 12, 14, 12));
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN).withoutPart("R1").withWire(org.armature.model.Wire.of(10, 12, 14, 12));
         assertTrue(problemKeys(stage).contains("topology.no-base-resistor"), () -> problemKeys(stage).toString());
         assertEquals(List.of("Q1", "U1"), issue(stage, "topology.no-base-resistor").orElseThrow().refs());
     }
@@ -226,14 +226,14 @@ class TopologyCheckTest {
     @Test
     @DisplayName("no drive pin: a warning on the switch")
     void noDrivePin() {
-        Stage stage = Templates.build(StageTemplate.LOW_SIDE_NMOS).withoutPart("U1");
+        Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NMOS).withoutPart("U1");
         assertEquals("Q1", issue(stage, "topology.no-drive-pin").orElseThrow().finding().ref());
     }
 
     @Test
     @DisplayName("Darlington common pin on ground holds the relay on: miswired")
     void darlingtonCommonOnGround() {
-        Stage base = Templates.build(StageTemplate.DARLINGTON_CHANNEL, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT);
+        Stage base = Fixtures.build(StageTemplate.DARLINGTON_CHANNEL, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT);
         List<org.armature.model.Wire> wires = new ArrayList<>(base.wires());
         wires.remove(org.armature.model.Wire.of(22, 10, 22, 2));
         wires.remove(org.armature.model.Wire.of(22, 2, 20, 2));
@@ -250,7 +250,7 @@ class TopologyCheckTest {
             StageTemplate t = StageTemplate.values()[rnd.nextInt(StageTemplate.values().length)];
             Suppressor s = Suppressor.values()[rnd.nextInt(Suppressor.values().length)];
             HighSideDrive d = HighSideDrive.values()[rnd.nextInt(2)];
-            Stage stage = Templates.build(t, s, d);
+            Stage stage = Fixtures.build(t, s, d);
             int edits = 1 + rnd.nextInt(3);
             for (int e = 0; e < edits; e++) {
                 Part p = stage.parts().get(rnd.nextInt(stage.parts().size()));
