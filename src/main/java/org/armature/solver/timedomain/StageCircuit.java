@@ -1,0 +1,287 @@
+package org.armature.solver.timedomain;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.IdentityHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.armature.devices.BreakdownClamp;
+import org.armature.model.Part;
+import org.armature.model.PartKind;
+import org.armature.model.Stage;
+import org.armature.netlist.Capacitor;
+import org.armature.netlist.Element;
+import org.armature.netlist.FlattenOptions;
+import org.armature.netlist.Netlist;
+import org.armature.netlist.NetlistBuilder;
+import org.armature.netlist.PartNetwork;
+import org.armature.netlist.RelayCoil;
+import org.armature.netlist.RelayHandle;
+import org.armature.netlist.Resistor;
+import org.armature.solver.DcAnalysis;
+import org.armature.solver.OperatingPoint;
+import org.armature.solver.SolveOptions;
+
+/**
+ * Turns a stage into a {@link TimeDomainCircuit}: the solver's netlist of each drive level, with the
+ * reactive parts given the run's integration formula, the coil's inductance, self-capacitance and
+ * core loss added, and a breakdown clamp across the switch.
+ */
+final class StageCircuit {
+
+    private StageCircuit() {
+    }
+
+    static TimeDomainCircuit build(Stage stage, double ambientCelsius, boolean initialHigh) {
+        OperatingPoint op = new DcAnalysis().solve(stage,
+                SolveOptions.DEFAULT.withPinHigh(initialHigh).withAmbient(ambientCelsius));
+        Map<String, Boolean> operated = op.relayOperated();
+        boolean anyOperated = operated.values().stream().anyMatch(Boolean::booleanValue);
+        FlattenOptions fo = FlattenOptions.of(initialHigh, ambientCelsius).withRelayOperated(anyOperated);
+        Netlist here = NetlistBuilder.flatten(stage, fo);
+        Netlist other = NetlistBuilder.flatten(stage, fo.withPinHigh(!initialHigh));
+        Netlist low = initialHigh ? other : here;
+        Netlist high = initialHigh ? here : other;
+        double[] states = here.initialStates();
+        for (RelayHandle r : here.relays()) {
+            states[r.contactSlot()] = operated.getOrDefault(r.ref(), false) ? 1.0 : 0.0;
+            Double t = op.requirePart(r.ref()).quantities().get("coilTemperature");
+            if (t != null) {
+                states[r.temperatureSlot()] = t;
+            }
+        }
+        TimeDomainCircuit c = new TimeDomainCircuit(here.nodeCount(), here.branchCount(), states);
+        for (int i = 0; i < here.nodeCount(); i++) {
+            c.nodeName(i, here.nodeName(i));
+        }
+        for (Map.Entry<String, Integer> e : here.netNodes().entrySet()) {
+            if (e.getValue() >= 0) {
+                c.node(e.getKey(), e.getValue());
+            }
+        }
+        Set<Element> inParts = java.util.Collections.newSetFromMap(new IdentityHashMap<>());
+        Map<String, TransientCapacitor> caps = new java.util.HashMap<>();
+        TransientCoil firstCoil = null;
+        PartNetwork relayNet = null;
+        for (PartNetwork p : low.parts()) {
+            inParts.addAll(p.elements());
+            if (p.part().kind() == PartKind.DRIVE_PIN) {
+                c.driveLow.addAll(p.elements());
+                c.driveHigh.addAll(high.part(p.ref()).orElseThrow().elements());
+                continue;
+            }
+            PartNetwork pHere = here.part(p.ref()).orElseThrow();
+            for (Element e : pHere.elements()) {
+                if (e instanceof Capacitor cap) {
+                    int[] t = cap.terminals();
+                    caps.put(p.ref(), c.add(new TransientCapacitor(cap.label(), t[0], t[1], cap.farads(), c.step)));
+                } else if (e instanceof RelayCoil coil) {
+                    TransientCoil tc = addCoil(c, p.part(), coil, states, here);
+                    if (firstCoil == null) {
+                        firstCoil = tc;
+                        relayNet = pHere;
+                    }
+                } else {
+                    c.add(e);
+                }
+            }
+        }
+        inParts.addAll(here.parts().stream().flatMap(p -> p.elements().stream()).toList());
+        for (Element e : here.elements()) {
+            if (!inParts.contains(e)) {
+                c.add(e);
+            }
+        }
+        if (firstCoil != null) {
+            roles(c, here, relayNet, firstCoil, caps);
+        }
+        return c;
+    }
+
+    private static TransientCoil addCoil(TimeDomainCircuit c, Part relay, RelayCoil coil, double[] states,
+                                         Netlist net) {
+        int a1 = coil.terminals()[0];
+        int a2 = coil.terminals()[1];
+        double ohms = coil.ohmsAt(states[coil.temperatureSlot()]);
+        double rRef = relay.value("coilResistanceOhms");
+        double lRel = relay.value("inductanceReleasedHenries");
+        RelayHandle handle = net.relays().stream().filter(h -> h.ref().equals(relay.ref())).findFirst().orElseThrow();
+        boolean operated = states[handle.contactSlot()] > 0.5;
+        TransientCoil tc = c.add(new TransientCoil(relay.ref(), a1, a2, ohms, lRel, lRel, c.step));
+        double cap = relay.value("coilCapacitanceFarads");
+        if (cap > 0) {
+            c.add(new TransientCapacitor(relay.ref() + " self-capacitance", a1, a2, cap, c.step));
+        }
+        double core = relay.value("coreLossOhms");
+        if (core > 0) {
+            c.add(new Resistor(relay.ref() + " core loss", a1, a2, core));
+        }
+        double pickUp = handle.pickUpAmps();
+        double dropOut = handle.dropOutAmps();
+        double tau = lRel / rRef;
+        double rated = relay.value("ratedVolts") / rRef;
+        double rise = pickUp < rated ? tau * Math.log(rated / (rated - pickUp)) : 0;
+        double operateTransit = Math.max(0, relay.value("operateTimeSeconds") - rise);
+        double releaseTransit = relay.value("releaseTimeSeconds");
+        c.relays.add(new RelayDynamics(relay.ref(), tc, handle.contactSlot(), pickUp, dropOut, operateTransit,
+                releaseTransit, relay.value("travelMetres"), operated));
+        return tc;
+    }
+
+    /** Part whose pins are the switch's high and low terminals, with the rating of its breakdown. */
+    private record SwitchPins(String high, String low, String rating) {
+    }
+
+    private static SwitchPins switchPins(PartKind k) {
+        return switch (k) {
+            case NPN -> new SwitchPins("c", "e", "vceoVolts");
+            case PNP -> new SwitchPins("e", "c", "vceoVolts");
+            case NMOS -> new SwitchPins("d", "s", "vdssVolts");
+            case DARLINGTON -> new SwitchPins("out", "e", "vceoVolts");
+            default -> throw new IllegalArgumentException("not a switch: " + k);
+        };
+    }
+
+    private static void roles(TimeDomainCircuit c, Netlist net, PartNetwork relay, TransientCoil coil,
+                              Map<String, TransientCapacitor> caps) {
+        int a1 = coil.a1();
+        int a2 = coil.a2();
+        double ohms = coil.ohms();
+        double core = relay.part().value("coreLossOhms");
+        c.coilRef = relay.ref();
+        c.coilCurrent = new Probe(Waveform.COIL_CURRENT, "A", coil::current);
+        c.coilVoltage = new Probe("coil voltage", "V", x -> x.voltage(a1) - x.voltage(a2));
+        c.coilLossPower = new Probe("coil loss", "W", x -> {
+            double i = coil.current(x);
+            double v = x.voltage(a1) - x.voltage(a2);
+            return ohms * i * i + (core > 0 ? v * v / core : 0);
+        });
+        c.dropOutAmps = c.relays.get(0).dropOutAmps;
+        c.storedEnergyHenries = coil.henries();
+        // the switch that carries the coil current: the first switch part touching a coil net
+        PartNetwork sw = null;
+        for (PartNetwork p : net.parts()) {
+            if (p.part().kind().isSwitch() && (p.pinNodes().containsValue(a1) || p.pinNodes().containsValue(a2))) {
+                sw = p;
+                break;
+            }
+        }
+        if (sw != null) {
+            SwitchPins pins = switchPins(sw.part().kind());
+            int hi = sw.pinNodes().get(pins.high());
+            int lo = sw.pinNodes().get(pins.low());
+            SwitchClamp clamp = c.add(new SwitchClamp(sw.ref() + " breakdown", hi, lo,
+                    BreakdownClamp.atRating(sw.part().value(pins.rating()))));
+            PartNetwork swFinal = sw;
+            c.switchRef = sw.ref();
+            c.switchVoltage = new Probe("switch voltage", "V", x -> x.voltage(hi) - x.voltage(lo));
+            c.switchPower = new Probe("switch power", "W",
+                    x -> swFinal.read(x).powerWatts() + (x.voltage(hi) - x.voltage(lo)) * clamp.current(x));
+            c.probes.add(new Probe("I(" + sw.ref() + ")", "A",
+                    x -> swFinal.read(x).pinCurrents().get(pins.high()) + clamp.current(x)));
+        }
+        List<PartNetwork> chain = suppressorParts(net, a1, a2);
+        List<Probe> powers = new ArrayList<>();
+        for (PartNetwork p : chain) {
+            TransientCapacitor cap = caps.get(p.ref());
+            if (cap != null) {
+                int pa = p.pinNodes().get("a");
+                int pb = p.pinNodes().get("b");
+                powers.add(new Probe("", "W", x -> (x.voltage(pa) - x.voltage(pb)) * cap.current(x)));
+            } else {
+                powers.add(new Probe("", "W", x -> p.read(x).powerWatts()));
+            }
+        }
+        if (!chain.isEmpty()) {
+            c.suppressorPower = new Probe("suppressor power", "W", x -> {
+                double sum = 0;
+                for (Probe pr : powers) {
+                    sum += pr.reader().applyAsDouble(x);
+                }
+                return sum;
+            });
+            PartNetwork first = chain.get(0);
+            TransientCapacitor cap = caps.get(first.ref());
+            String pin = first.part().kind().pins().get(0).name();
+            c.suppressorCurrent = new Probe("suppressor current", "A",
+                    x -> cap != null ? cap.current(x) : first.read(x).pinCurrents().get(pin));
+        }
+        // part currents of two-terminal parts, first pin to second
+        for (PartNetwork p : net.parts()) {
+            PartKind k = p.part().kind();
+            if (k == PartKind.RESISTOR || k == PartKind.DIODE || k == PartKind.ZENER || k == PartKind.TVS
+                    || k == PartKind.LED || k == PartKind.LOAD || k == PartKind.CAPACITOR) {
+                TransientCapacitor cap = caps.get(p.ref());
+                String pin = k.pins().get(0).name();
+                c.probes.add(new Probe("I(" + p.ref() + ")", "A",
+                        x -> cap != null ? cap.current(x) : p.read(x).pinCurrents().get(pin)));
+            }
+        }
+    }
+
+    /**
+     * The suppressor parts: parts of a suppressor kind on a chain from one coil net to the other
+     * whose inner nets join only suppressor parts (two per net).
+     */
+    static List<PartNetwork> suppressorParts(Netlist net, int a1, int a2) {
+        List<PartNetwork> out = new ArrayList<>();
+        Set<String> seen = new HashSet<>();
+        for (PartNetwork start : net.parts()) {
+            if (!start.part().kind().isSuppressorKind() || seen.contains(start.ref())) {
+                continue;
+            }
+            for (int end : List.of(a1, a2)) {
+                if (!start.pinNodes().containsValue(end)) {
+                    continue;
+                }
+                List<PartNetwork> chain = new ArrayList<>();
+                PartNetwork p = start;
+                int from = end;
+                int target = end == a1 ? a2 : a1;
+                boolean ok = false;
+                for (int guard = 0; guard < 8 && p != null; guard++) {
+                    chain.add(p);
+                    int to = otherNode(p, from);
+                    if (to == target) {
+                        ok = true;
+                        break;
+                    }
+                    if (to == a1 || to == a2 || to == Netlist.GROUND) {
+                        break;
+                    }
+                    PartNetwork next = null;
+                    int count = 0;
+                    for (PartNetwork q : net.parts()) {
+                        if (q != p && q.pinNodes().containsValue(to)) {
+                            count++;
+                            next = q;
+                        }
+                    }
+                    if (count != 1 || !next.part().kind().isSuppressorKind() || chain.contains(next)) {
+                        break;
+                    }
+                    from = to;
+                    p = next;
+                }
+                if (ok) {
+                    for (PartNetwork q : chain) {
+                        if (seen.add(q.ref())) {
+                            out.add(q);
+                        }
+                    }
+                }
+            }
+        }
+        return out;
+    }
+
+    private static int otherNode(PartNetwork p, int node) {
+        for (int n : p.pinNodes().values()) {
+            if (n != node) {
+                return n;
+            }
+        }
+        return node;
+    }
+}

@@ -1,0 +1,511 @@
+package org.armature.solver.timedomain;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.TreeMap;
+import org.armature.netlist.ArraySolution;
+import org.armature.netlist.Element;
+import org.armature.netlist.Netlist;
+import org.armature.netlist.NetlistBuilder;
+import org.armature.netlist.StampContext;
+import org.armature.solver.ConvergenceTolerances;
+import org.armature.solver.DenseLu;
+import org.armature.solver.NewtonOptions;
+import org.armature.solver.NewtonSolver;
+
+/**
+ * The step loop of one run: DC operating point, then time points under local-truncation-error
+ * control (CHECKS NM-9, NM-10), a time point on every breakpoint (drive edges, ends of armature
+ * transit) with a backward-Euler restart after each (NM-7), and relay thresholds located in time by
+ * {@link EventLocator} within {@link StepOptions#eventTimeToleranceSeconds()}.
+ *
+ * <p>Single use: construct, {@link #run()}, read the result.
+ */
+final class TimeDomainRun {
+
+    private static final String DRIVE = "drive";
+
+    private final TimeDomainCircuit c;
+    private final DriveWaveform drive;
+    private final double duration;
+    private final StepOptions o;
+    private final StepController control;
+    private final NewtonSolver newtonLow;
+    private final NewtonSolver newtonHigh;
+    private int newtonIterations;
+    private final int n;
+    private final int stateCount;
+    private final ArraySolution view;
+    private final TreeMap<Double, String> breakpoints = new TreeMap<>();
+    private final List<TransientEvent> events = new ArrayList<>();
+
+    private final List<Double> times = new ArrayList<>();
+    private final List<double[]> samples = new ArrayList<>();
+    private final List<double[]> internals = new ArrayList<>();
+
+    private double[] x;
+    private double[] states;
+    private final double[][] histTimes;
+    private final double[][] histStates;
+    private int histCount;
+    private int accepted;
+    private int rejected;
+    private boolean highNow;
+
+    TimeDomainRun(TimeDomainCircuit circuit, DriveWaveform drive, double durationSeconds, StepOptions options) {
+        if (!(durationSeconds > 0) || !Double.isFinite(durationSeconds)) {
+            throw new IllegalArgumentException("durationSeconds must be positive, was " + durationSeconds);
+        }
+        this.c = circuit;
+        this.drive = drive;
+        this.duration = durationSeconds;
+        this.o = options;
+        this.control = new StepController(options);
+        this.n = circuit.nodeCount + circuit.branchCount;
+        NewtonOptions no = new NewtonOptions(options.newtonMaxIterations(), MAX_NODE_STEP_VOLTS,
+                new ConvergenceTolerances(options.newtonRelativeTolerance(), options.newtonAbsoluteVolts(),
+                        options.newtonAbsoluteAmps()), DenseLu.DEFAULT_RELATIVE_PIVOT_THRESHOLD);
+        this.newtonLow = new NewtonSolver(netlist(circuit, circuit.driveLow), no);
+        this.newtonHigh = new NewtonSolver(netlist(circuit, circuit.driveHigh), no);
+        int s = 0;
+        for (Reactive r : circuit.reactives) {
+            s += r.stateCount();
+        }
+        this.stateCount = s;
+        this.histTimes = new double[4][1];
+        this.histStates = new double[4][s];
+        this.view = new ArraySolution(circuit.nodeCount, new double[n], new double[0]);
+    }
+
+    /**
+     * Newton damping limit at time points: the predictor (last accepted point) is close, so a large
+     * update is real (a kickback of kilovolts within one step), not a runaway; 1e5 V lies above any
+     * voltage a relay stage can reach.
+     */
+    private static final double MAX_NODE_STEP_VOLTS = 1e5;
+
+    /** The circuit's elements with one drive level, laid out as the circuit says, for the solver's Newton loop. */
+    private static Netlist netlist(TimeDomainCircuit c, List<Element> drive) {
+        NetlistBuilder b = new NetlistBuilder();
+        for (int i = 0; i < c.nodeCount; i++) {
+            int node = b.node(c.nodeName(i));
+            if (node != i) {
+                throw new IllegalStateException("node layout mismatch at " + c.nodeName(i));
+            }
+        }
+        for (int i = 0; i < c.branchCount; i++) {
+            b.allocateBranch("branch " + i);
+        }
+        for (double s : c.initialStates) {
+            b.allocateState(s);
+        }
+        for (Element e : c.common) {
+            b.add(e);
+        }
+        for (Element e : drive) {
+            b.add(e);
+        }
+        return b.build();
+    }
+
+    private boolean newton(double[] trial, StampContext ctx) {
+        NewtonSolver s = highNow ? newtonHigh : newtonLow;
+        boolean ok = s.run(trial, states, ctx, 0);
+        newtonIterations += s.iterations();
+        return ok;
+    }
+
+    TimeDomainResult run() {
+        states = c.initialStates.clone();
+        x = new double[n];
+        highNow = drive.initialHigh();
+        selectDrive();
+        operatingPoint();
+        for (double e : drive.edgeTimes()) {
+            if (e < duration) {
+                breakpoints.put(e, DRIVE);
+            }
+        }
+        breakpoints.put(duration, "end");
+        double t = 0;
+        view.bind(x, states);
+        for (Reactive r : c.reactives) {
+            r.initialise(view);
+        }
+        record(0, x);
+        pushHistory(0, true);
+        double h = o.firstStepSeconds();
+        double hPrev = h;
+        double maxStep = o.maxStepFraction() * duration;
+        if (breakpoints.containsKey(0.0)) {
+            handleBreakpoints(0);
+        }
+        double[] trial = new double[n];
+        double[] newStates = new double[stateCount];
+        double[] gOld = new double[c.relays.size()];
+        int steps = 0;
+        while (t < duration) {
+            if (++steps > o.maxSteps()) {
+                throw new TransientFailureException("step budget exhausted", t, h);
+            }
+            double tb = breakpoints.ceilingKey(Math.nextUp(t));
+            double hTry = Math.min(h, maxStep);
+            if (t + hTry >= tb - 0.1 * hTry) {
+                hTry = tb - t;
+            }
+            IntegrationMethod method;
+            boolean checkError;
+            if (histCount < 2) {
+                method = IntegrationMethod.BACKWARD_EULER;
+                checkError = false;
+                hTry = Math.min(hTry, o.firstStepSeconds());
+            } else if (histCount < o.method().order() + 2) {
+                method = IntegrationMethod.BACKWARD_EULER;
+                checkError = true;
+            } else {
+                method = o.method();
+                checkError = true;
+            }
+            IntegratorCoefficients k = IntegratorCoefficients.of(method, hTry, hPrev);
+            System.arraycopy(x, 0, trial, 0, n);
+            if (!solve(trial, t + hTry, k)) {
+                rejected++;
+                h = hTry * o.newtonFailureShrinkFactor();
+                if (h < o.minStepSeconds()) {
+                    throw new TransientFailureException("Newton did not converge", t, hTry);
+                }
+                continue;
+            }
+            double ratio = 0;
+            if (checkError) {
+                ratio = errorRatio(trial, t + hTry, k, newStates);
+                if (!control.accept(ratio)) {
+                    rejected++;
+                    h = control.propose(hTry, ratio, method.order());
+                    if (h < o.minStepSeconds()) {
+                        throw new TransientFailureException("step fell below minStepSeconds", t, h);
+                    }
+                    continue;
+                }
+            }
+            // relay thresholds: locate the earliest crossing inside the step
+            view.bind(x, states);
+            int crossing = -1;
+            double earliest = Double.POSITIVE_INFINITY;
+            for (int i = 0; i < c.relays.size(); i++) {
+                RelayDynamics r = c.relays.get(i);
+                gOld[i] = r.eventFunction(coilCurrentCommitted(r));
+            }
+            view.bind(trial, states);
+            for (int i = 0; i < c.relays.size(); i++) {
+                RelayDynamics r = c.relays.get(i);
+                double gNew = r.eventFunction(r.coil.current(view));
+                if (gOld[i] < 0 && gNew >= 0) {
+                    double est = t + hTry * (-gOld[i]) / (gNew - gOld[i]);
+                    if (est < earliest) {
+                        earliest = est;
+                        crossing = i;
+                    }
+                }
+            }
+            if (crossing >= 0 && hTry > o.eventTimeToleranceSeconds()) {
+                RelayDynamics r = c.relays.get(crossing);
+                view.bind(trial, states);
+                EventLocator loc = new EventLocator(t, gOld[crossing], t + hTry, r.eventFunction(r.coil.current(view)),
+                        o.eventTimeToleranceSeconds());
+                double[] best = trial.clone();
+                IntegratorCoefficients bestK = k;
+                double[] probe = new double[n];
+                int guard = 0;
+                while (!loc.located() && guard++ < 60) {
+                    double tt = loc.nextTrial();
+                    IntegratorCoefficients kk = IntegratorCoefficients.of(method, tt - t, hPrev);
+                    System.arraycopy(x, 0, probe, 0, n);
+                    if (!solve(probe, tt, kk)) {
+                        break;
+                    }
+                    view.bind(probe, states);
+                    double g = r.eventFunction(r.coil.current(view));
+                    loc.update(tt, g);
+                    if (loc.eventTime() == tt) {
+                        System.arraycopy(probe, 0, best, 0, n);
+                        bestK = kk;
+                    }
+                }
+                hTry = loc.eventTime() - t;
+                k = bestK;
+                System.arraycopy(best, 0, trial, 0, n);
+                c.step.set(k);
+            } else {
+                crossing = -1;
+            }
+            // accept
+            double tNew = t + hTry;
+            record(tNew, trial);
+            view.bind(trial, states);
+            for (Reactive r : c.reactives) {
+                r.commit(view);
+            }
+            System.arraycopy(trial, 0, x, 0, n);
+            t = tNew;
+            accepted++;
+            hPrev = hTry;
+            pushHistory(t, false);
+            h = checkError ? control.propose(hTry, ratio, method.order()) : hTry * o.maxGrowthFactor();
+            if (crossing >= 0) {
+                RelayDynamics r = c.relays.get(crossing);
+                boolean wasAttracted = r.headingAttracted();
+                double arrival = r.reverse(t);
+                events.add(new TransientEvent(t, wasAttracted ? TransientEvent.DROP_OUT : TransientEvent.PICK_UP, r.ref));
+                String key = "relay:" + crossing;
+                breakpoints.values().removeIf(v -> v.equals(key));
+                if (arrival <= t) {
+                    arrive(crossing, t);
+                    restart();
+                    h = o.firstStepSeconds();
+                } else if (arrival < duration) {
+                    breakpoints.put(arrival, key);
+                }
+            }
+            if (breakpoints.containsKey(t) && t < duration) {
+                handleBreakpoints(t);
+                h = o.firstStepSeconds();
+            }
+        }
+        List<Trace> traces = new ArrayList<>();
+        double[] time = times.stream().mapToDouble(Double::doubleValue).toArray();
+        List<String> names = traceNames();
+        List<String> units = traceUnits();
+        for (int j = 0; j < names.size(); j++) {
+            double[] col = new double[samples.size()];
+            for (int i = 0; i < col.length; i++) {
+                col[i] = samples.get(i)[j];
+            }
+            traces.add(new Trace(names.get(j), units.get(j), col));
+        }
+        double[][] internal = new double[INTERNALS][samples.size()];
+        for (int i = 0; i < samples.size(); i++) {
+            double[] row = internals.get(i);
+            for (int j = 0; j < INTERNALS; j++) {
+                internal[j][i] = row[j];
+            }
+        }
+        return new TimeDomainResult(new Waveform(time, traces, events), internal, accepted, rejected,
+                newtonIterations);
+    }
+
+    /** Columns of the internal (metrics) record. */
+    static final int COIL_I = 0;
+    static final int COIL_V = 1;
+    static final int SWITCH_V = 2;
+    static final int SWITCH_P = 3;
+    static final int SUPP_P = 4;
+    static final int SUPP_I = 5;
+    static final int COIL_LOSS_P = 6;
+    static final int INTERNALS = 7;
+
+    private double coilCurrentCommitted(RelayDynamics r) {
+        return samples.isEmpty() ? 0 : r.coil.lambdaNow() / r.coil.henries();
+    }
+
+    private void handleBreakpoints(double t) {
+        String what = breakpoints.remove(t);
+        if (what == null) {
+            return;
+        }
+        if (what.equals(DRIVE)) {
+            highNow = !highNow;
+            selectDrive();
+            events.add(new TransientEvent(t, highNow ? TransientEvent.DRIVE_HIGH : TransientEvent.DRIVE_LOW, ""));
+        } else if (what.startsWith("relay:")) {
+            arrive(Integer.parseInt(what.substring(6)), t);
+        }
+        // a drive edge and a transit end may coincide
+        if (breakpoints.containsKey(t)) {
+            handleBreakpoints(t);
+            return;
+        }
+        restart();
+    }
+
+    private void arrive(int index, double t) {
+        RelayDynamics r = c.relays.get(index);
+        boolean attracted = r.arrive();
+        states[r.contactSlot] = attracted ? 1.0 : 0.0;
+        events.add(new TransientEvent(t, attracted ? TransientEvent.CONTACTS_CLOSED : TransientEvent.CONTACTS_OPEN, r.ref));
+    }
+
+    private void restart() {
+        histCount = 0;
+        pushHistory(times.get(times.size() - 1), true);
+    }
+
+    private void selectDrive() {
+        // the Newton loop of the present level is chosen in newton(); nothing else depends on it
+    }
+
+    private void operatingPoint() {
+        c.step.setDc();
+        boolean ok = newton(x, StampContext.DC);
+        if (!ok) {
+            // source stepping (CHECKS NM-5): bring the sources up from 10 % in ten steps
+            java.util.Arrays.fill(x, 0);
+            ok = true;
+            for (int i = 1; i <= 10 && ok; i++) {
+                ok = newton(x, StampContext.dcScaled(i / 10.0));
+            }
+            if (!ok) {
+                throw new TransientFailureException("no DC operating point", 0, 0);
+            }
+        }
+        // contacts consistent with the coil current; the hysteresis band keeps the initial state
+        view.bind(x, states);
+        for (RelayDynamics r : c.relays) {
+            double i = Math.abs(r.coil.current(view));
+            boolean operated = i >= r.pickUpAmps || (i > r.dropOutAmps && r.phase == RelayDynamics.Phase.OPERATED);
+            r.phase = operated ? RelayDynamics.Phase.OPERATED : RelayDynamics.Phase.RELEASED;
+            if (states[r.contactSlot] != (operated ? 1.0 : 0.0)) {
+                states[r.contactSlot] = operated ? 1.0 : 0.0;
+                if (!newton(x, StampContext.DC)) {
+                    throw new TransientFailureException("no DC operating point after contact change", 0, 0);
+                }
+            }
+        }
+    }
+
+    private boolean solve(double[] trial, double time, IntegratorCoefficients k) {
+        c.step.set(k);
+        StampContext ctx = new StampContext(StampContext.Mode.TRANSIENT, 1.0, time, 1.0 / k.a0(), k.a0());
+        return newton(trial, ctx);
+    }
+
+    private double errorRatio(double[] trial, double tNew, IntegratorCoefficients k, double[] newStates) {
+        view.bind(trial, states);
+        int off = 0;
+        for (Reactive r : c.reactives) {
+            r.states(view, newStates, off);
+            off += r.stateCount();
+        }
+        int p = k.method().order();
+        double[] ts = new double[p + 2];
+        double[] vs = new double[p + 2];
+        ts[0] = tNew;
+        for (int j = 1; j < p + 2; j++) {
+            ts[j] = histTimes[j - 1][0];
+        }
+        double worst = 0;
+        off = 0;
+        for (Reactive r : c.reactives) {
+            for (int s = 0; s < r.stateCount(); s++) {
+                int idx = off + s;
+                vs[0] = newStates[idx];
+                for (int j = 1; j < p + 2; j++) {
+                    vs[j] = histStates[j - 1][idx];
+                }
+                double e = TruncationError.estimate(k, ts, vs);
+                double abs = switch (r.unit(s)) {
+                    case VOLTS -> o.absoluteVoltsTolerance();
+                    case AMPS -> o.absoluteAmpsTolerance();
+                    case METRES -> o.absoluteMetresTolerance();
+                };
+                worst = Math.max(worst, TruncationError.ratio(e, vs[0], vs[1], o.relativeTolerance(), abs));
+            }
+            off += r.stateCount();
+        }
+        return worst;
+    }
+
+    private void pushHistory(double t, boolean reset) {
+        if (reset) {
+            histCount = 0;
+        }
+        double[] tRow = histTimes[3];
+        double[] sRow = histStates[3];
+        for (int j = 3; j > 0; j--) {
+            histTimes[j] = histTimes[j - 1];
+            histStates[j] = histStates[j - 1];
+        }
+        histTimes[0] = tRow;
+        histStates[0] = sRow;
+        tRow[0] = t;
+        view.bind(x, states);
+        int off = 0;
+        for (Reactive r : c.reactives) {
+            r.states(view, sRow, off);
+            off += r.stateCount();
+        }
+        histCount = Math.min(4, histCount + 1);
+    }
+
+    private List<String> traceNames() {
+        List<String> names = new ArrayList<>();
+        for (String node : c.namedNodes.keySet()) {
+            names.add("V(" + node + ")");
+        }
+        for (Probe p : c.probes) {
+            names.add(p.name());
+        }
+        if (c.coilCurrent != null) {
+            names.add(Waveform.COIL_CURRENT);
+        }
+        if (!c.relays.isEmpty()) {
+            names.add(Waveform.ARMATURE_POSITION);
+            names.add(Waveform.CONTACT_STATE);
+        }
+        return names;
+    }
+
+    private List<String> traceUnits() {
+        List<String> units = new ArrayList<>();
+        for (int i = 0; i < c.namedNodes.size(); i++) {
+            units.add("V");
+        }
+        for (Probe p : c.probes) {
+            units.add(p.unit());
+        }
+        if (c.coilCurrent != null) {
+            units.add("A");
+        }
+        if (!c.relays.isEmpty()) {
+            units.add("m");
+            units.add("1");
+        }
+        return units;
+    }
+
+    private void record(double t, double[] solution) {
+        view.bind(solution, states);
+        times.add(t);
+        double[] row = new double[c.namedNodes.size() + c.probes.size() + (c.coilCurrent == null ? 0 : 1)
+                + (c.relays.isEmpty() ? 0 : 2)];
+        int j = 0;
+        for (int node : c.namedNodes.values()) {
+            row[j++] = view.voltage(node);
+        }
+        for (Probe p : c.probes) {
+            row[j++] = p.reader().applyAsDouble(view);
+        }
+        if (c.coilCurrent != null) {
+            row[j++] = c.coilCurrent.reader().applyAsDouble(view);
+        }
+        if (!c.relays.isEmpty()) {
+            RelayDynamics r = c.relays.get(0);
+            row[j++] = r.position(t);
+            row[j] = states[r.contactSlot];
+        }
+        samples.add(row);
+        double[] in = new double[INTERNALS];
+        in[COIL_I] = read(c.coilCurrent);
+        in[COIL_V] = read(c.coilVoltage);
+        in[SWITCH_V] = read(c.switchVoltage);
+        in[SWITCH_P] = read(c.switchPower);
+        in[SUPP_P] = read(c.suppressorPower);
+        in[SUPP_I] = read(c.suppressorCurrent);
+        in[COIL_LOSS_P] = read(c.coilLossPower);
+        internals.add(in);
+    }
+
+    private double read(Probe p) {
+        return p == null ? Double.NaN : p.reader().applyAsDouble(view);
+    }
+}
