@@ -1,0 +1,644 @@
+package org.armature.analysis;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.function.Function;
+import org.armature.model.Finding;
+import org.armature.model.Part;
+import org.armature.model.PartKind;
+import org.armature.model.Severity;
+import org.armature.model.Stage;
+import org.armature.solver.DcAnalysis;
+import org.armature.solver.OperatingPoint;
+import org.armature.solver.PartResult;
+import org.armature.solver.SolveOptions;
+import org.armature.solver.SolverException;
+import org.armature.solver.SwitchVerdict;
+import org.armature.solver.timedomain.TransientAnalysis;
+import org.armature.solver.timedomain.TransientFailureException;
+import org.armature.solver.timedomain.TransientMetrics;
+import org.armature.solver.timedomain.TransientOptions;
+import org.armature.solver.timedomain.TransientResult;
+import org.armature.units.EngineeringNotation;
+import org.armature.units.Unit;
+
+/**
+ * The checks of a stage: every corner of its toleranced parameters ({@link Corners}) is solved
+ * with the pin high and with the pin low by the DC engine, each check is judged at its worst
+ * variant, and an optional seeded Monte Carlo run estimates the yield.
+ *
+ * <table>
+ * <caption>check ids</caption>
+ * <tr><th>id</th><th>judged</th><th>pass / warn / fail</th></tr>
+ * <tr><td>{@code relay.operates}</td><td>coil voltage, pin high, vs must-operate moved to the
+ *     solved coil temperature, V_mo·R(T)/R(Tref) (RC-7, RC-9); worst over the corners (minimum
+ *     supply, hottest coil with self-heating, coil +tol, minimum gain frozen at the coldest ambient,
+ *     lowest pin level)</td><td>≥ 110 % (RC-18) / ≥ 100 % / below</td></tr>
+ * <tr><td>{@code relay.releases}</td><td>coil voltage, pin low (leakage at the hottest corner), vs
+ *     must-release at the coil temperature</td><td>≤ 90 % (RC-18) / ≤ 100 % / above</td></tr>
+ * <tr><td>{@code switch.saturated}</td><td>bipolar: βF(corner)·IB/IC, the gain of the corner
+ *     (hFE(min) at the coldest ambient at the low-gain corners); MOSFET and Darlington: the DC
+ *     engine's switch verdict margin (MO-6)</td><td>≥ 2 / ≥ 1 / below</td></tr>
+ * <tr><td>{@code rating.switch-current}</td><td>largest IC or ID vs IC max / ID max</td><td>≤ 80 % / ≤ 100 % / above</td></tr>
+ * <tr><td>{@code rating.pin-current}</td><td>largest pin current vs the per-pin limit (GP-1)</td><td>same</td></tr>
+ * <tr><td>{@code rating.package-current}</td><td>channels × largest pin current vs the package limit
+ *     (GP-x)</td><td>same</td></tr>
+ * <tr><td>{@code rating.switch-voltage}</td><td>peak switch voltage at turn-off vs VCEO / VDSS: from
+ *     the transient engine at the largest-current corner (supply max, coil −tol, coldest ambient),
+ *     avalanche = fail; without it the static estimate VS,max + Vc + I0·Rs
+ *     ({@link SuppressorEstimate})</td><td>same; no suppressor: fail (SU-0, SU-1)</td></tr>
+ * <tr><td>{@code rating.suppressor-current}</td><td>peak suppressor current (the coil current at
+ *     turn-off) vs the diode's or zener's peak rating</td><td>same</td></tr>
+ * <tr><td>{@code thermal.switch-junction}</td><td>Tj = Ta + P·RθJA at the hottest variant (TH-1,
+ *     TH-5); a Darlington channel's package with its channels on: Ta + n·P·RθJA</td><td>≤ Tj(max) − 20 K /
+ *     ≤ Tj(max) / above</td></tr>
+ * <tr><td>{@code relay.release-time}</td><td>only with a requirement: turn-off edge to the contacts
+ *     opening (transient engine); without it the coil-current decay to drop-out through the
+ *     suppressor, closed form (CHECKS, suppression), before the armature moves</td><td>≤ requirement / – / above</td></tr>
+ * </table>
+ *
+ * <p>Other findings: {@code check.not-recognised}, {@code check.not-solved} (a variant the engine
+ * could not solve, named), {@code check.transient-failed} (INFO: the turn-off fell back to the
+ * closed forms), and the safety cautions {@code caution.above-selv},
+ * {@code caution.creepage-clearance}, {@code caution.fusing}, {@code caution.enclosure},
+ * {@code caution.qualified-installation} when a contact-side supply is above safety extra-low
+ * voltage (more than 50 V AC rms or 120 V ripple-free DC; IEC 61140 band, common practice). The
+ * checks never call a design safe: they report what ran.
+ */
+public final class StageChecks {
+
+    /** The ids, in report order. */
+    public static final List<String> IDS = List.of("relay.operates", "relay.releases", "switch.saturated",
+            "rating.switch-current", "rating.pin-current", "rating.package-current", "rating.switch-voltage",
+            "rating.suppressor-current", "thermal.switch-junction", "relay.release-time");
+
+    private static final String TRANSIENT = "transient engine: turn-off at the largest-current corner";
+
+    /** Longest turn-off window the checks run, 0.2 s: ten times a small relay's release. */
+    private static final double TRANSIENT_MAX_WINDOW_SECONDS = 0.2;
+
+    private static final String STATIC = "static estimate (closed form of CHECKS, suppression); the transient engine"
+            + " is not used yet";
+
+    private StageChecks() {
+    }
+
+    /** The checks with the default options and a default DC engine. */
+    public static CheckReport run(Stage stage) {
+        return run(stage, CheckOptions.DEFAULT, new DcAnalysis());
+    }
+
+    /**
+     * Runs every check.
+     *
+     * @param stage the nominal stage; not modified
+     * @param options limits, margins, Monte Carlo size
+     * @param dc the DC engine to solve with
+     * @return the verdicts and findings; never throws for a stage the editor can hold (an engine
+     *     failure becomes a {@code check.not-solved} finding)
+     */
+    public static CheckReport run(Stage stage, CheckOptions options, DcAnalysis dc) {
+        return new Run(stage, options, dc).run();
+    }
+
+    /** A variant with its two operating points (empty when the engine failed). */
+    record Solved(Variant variant, Optional<OperatingPoint> on, Optional<OperatingPoint> off) {
+    }
+
+    /** The turn-off run and the corner it ran at. */
+    record TurnOff(TransientMetrics metrics, Stage stage, Map<String, Double> corner, String cornerText) {
+    }
+
+    /** One check measured on one variant. */
+    record Measure(double value, double limit, CheckStatus status, double margin, String explanation) {
+    }
+
+    /** One check run. */
+    private static final class Run {
+        private final Stage stage;
+        private final CheckOptions o;
+        private final DcAnalysis dc;
+        private final List<Finding> findings = new ArrayList<>();
+        private StageRoles roles;
+        private List<Factor> factors;
+        private Optional<OperatingPoint> nominalOn = Optional.empty();
+        private Optional<OperatingPoint> nominalOff = Optional.empty();
+
+        Run(Stage stage, CheckOptions options, DcAnalysis dc) {
+            this.stage = stage;
+            this.o = options;
+            this.dc = dc;
+        }
+
+        CheckReport run() {
+            TopologyReport topo = TopologyCheck.analyse(stage);
+            topo.findings().stream().filter(f -> f.severity() != Severity.INFO).forEach(findings::add);
+            cautions(topo);
+            if (topo.roles().isEmpty() || topo.roles().get().coilSupplyRef().isEmpty()) {
+                findings.add(new Finding(Severity.WARNING, "check.not-recognised", "", "",
+                        "The checks need one of the four driver stages with a coil supply; none ran."));
+                return new CheckReport(List.of(), Optional.empty(), findings, 0);
+            }
+            roles = topo.roles().get();
+            CornerPlan plan = Corners.enumerate(stage, o.corners());
+            factors = plan.factors();
+            nominalOn = solve(stage, true, Optional.empty(), "the nominal stage");
+            nominalOff = solve(stage, false, Optional.empty(), "the nominal stage");
+            List<Solved> corners = new ArrayList<>(plan.corners().size());
+            for (Variant v : plan.corners()) {
+                corners.add(solveVariant(v, "corner " + v.index()));
+            }
+            List<CheckResult> checks = new ArrayList<>();
+            checks.add(worst("relay.operates", corners, this::operates, Unit.VOLT,
+                    "coil voltage (pin high) vs (1 + " + pct(o.operateMarginFraction()) + ") × must-operate at the coil"
+                            + " temperature, V_mo·R(T)/R(Tref) (RC-7, RC-9, RC-18); DC engine over every corner",
+                    List.of(roles.relayRef())));
+            checks.add(worst("relay.releases", corners, this::releases, Unit.VOLT,
+                    "coil voltage (pin low) vs (1 − " + pct(o.releaseMarginFraction()) + ") × must-release at the coil"
+                            + " temperature (RC-18); DC engine over every corner", List.of(roles.relayRef())));
+            checks.add(worst("switch.saturated", corners, this::saturated, Unit.RATIO,
+                    "bipolar βF·IB/IC with the corner's gain; MOSFET and Darlington: the DC engine's switch verdict"
+                            + " margin; pass ≥ " + ratio(o.saturationPassMargin()), List.of(roles.switchRef())));
+            checks.add(worst("rating.switch-current", corners, this::switchCurrent, Unit.AMPERE,
+                    "largest switch current vs its rating; pass ≤ " + pct(o.ratingUseFraction()) + " of it",
+                    List.of(roles.switchRef())));
+            roles.drivePinRef().ifPresent(pin -> {
+                checks.add(worst("rating.pin-current", corners, this::pinCurrent, Unit.AMPERE,
+                        "largest pin current vs the per-pin limit (GP-1); pass ≤ " + pct(o.ratingUseFraction()),
+                        List.of(pin)));
+                checks.add(worst("rating.package-current", corners, this::packageCurrent, Unit.AMPERE,
+                        "channels × largest pin current vs the package limit (GP-x)", List.of(pin)));
+            });
+            double i0 = corners.stream().flatMap(s -> s.on().stream())
+                    .mapToDouble(op -> Math.abs(op.requirePart(roles.relayRef()).quantity("coilCurrent"))).max().orElse(Double.NaN);
+            SuppressorEstimate sup = SuppressorEstimate.of(stage, roles, o.forwardDropVolts());
+            Optional<TurnOff> edge = o.useTransient() ? turnOff(sup, i0) : Optional.empty();
+            if (edge.isPresent()) {
+                checks.add(transientSwitchVoltage(edge.get(), sup));
+                transientSuppressorCurrent(edge.get(), sup).ifPresent(checks::add);
+            } else {
+                checks.add(switchVoltage(sup, i0));
+                suppressorCurrent(sup, i0).ifPresent(checks::add);
+            }
+            checks.add(worst("thermal.switch-junction", corners, this::junction, Unit.CELSIUS,
+                    "Tj = Ta + P·RθJA (TH-1, TH-5)" + (isDarlington() ? ", package total with the channels on" : "")
+                            + "; pass ≤ Tj(max) − " + EngineeringNotation.format(o.thermalMarginKelvin(), Unit.KELVIN),
+                    List.of(roles.switchRef())));
+            o.releaseTimeRequirementSeconds().ifPresent(req -> checks.add(edge.isPresent()
+                    ? transientReleaseTime(edge.get(), req) : releaseTime(sup, i0, req)));
+            Optional<YieldResult> yield = Optional.empty();
+            if (o.monteCarloSamples() > 0) {
+                yield = Optional.of(monteCarlo(corners));
+            }
+            return new CheckReport(checks, yield, findings, corners.size());
+        }
+
+        // ------------------------------------------------------------------ solving
+
+        private Solved solveVariant(Variant v, String what) {
+            Optional<OperatingPoint> on = solve(v.stage(), true, nominalOn, what);
+            Optional<OperatingPoint> off = solve(v.stage(), false, nominalOff, what);
+            return new Solved(v, on, off);
+        }
+
+        private Optional<OperatingPoint> solve(Stage s, boolean pinHigh, Optional<OperatingPoint> start, String what) {
+            SolveOptions so = SolveOptions.DEFAULT.withPinHigh(pinHigh);
+            if (start.isPresent()) {
+                so = so.withStart(start.get());
+            }
+            try {
+                return Optional.of(dc.solve(s, so));
+            } catch (SolverException e) {
+                if (findings.stream().noneMatch(f -> f.key().equals("check.not-solved"))) {
+                    findings.add(new Finding(Severity.WARNING, "check.not-solved", roles == null ? "" : roles.switchRef(), "",
+                            "The DC engine could not solve " + what + " with the pin " + (pinHigh ? "high" : "low") + ": "
+                                    + e.getMessage() + " Checks that need it are judged on the variants that solved."));
+                }
+                return Optional.empty();
+            }
+        }
+
+        // ------------------------------------------------------------------ per-variant measures
+
+        private Optional<Measure> operates(Solved s) {
+            if (s.on().isEmpty()) {
+                return Optional.empty();
+            }
+            Part k = s.variant().stage().require(roles.relayRef());
+            PartResult r = s.on().get().requirePart(roles.relayRef());
+            double v = Math.abs(r.quantity("coilVoltage"));
+            double t = r.quantity("coilTemperature");
+            double mo = PartPhysics.coilVoltsAt(k, k.value("mustOperateVolts"), t);
+            double limit = mo * (1 + o.operateMarginFraction());
+            CheckStatus st = v >= limit ? CheckStatus.PASS : v >= mo ? CheckStatus.WARN : CheckStatus.FAIL;
+            return Optional.of(new Measure(v, limit, st, v / mo - 1,
+                    "Coil voltage " + volts(v) + " at a coil temperature of " + celsius(t) + ", where must-operate is "
+                            + volts(mo) + " (" + pct(v / mo) + " of it; " + pct(1 + o.operateMarginFraction())
+                            + " wanted)."));
+        }
+
+        private Optional<Measure> releases(Solved s) {
+            if (s.off().isEmpty()) {
+                return Optional.empty();
+            }
+            Part k = s.variant().stage().require(roles.relayRef());
+            PartResult r = s.off().get().requirePart(roles.relayRef());
+            double v = Math.abs(r.quantity("coilVoltage"));
+            double t = r.quantity("coilTemperature");
+            double mr = PartPhysics.coilVoltsAt(k, k.value("mustReleaseVolts"), t);
+            double limit = mr * (1 - o.releaseMarginFraction());
+            CheckStatus st = v <= limit ? CheckStatus.PASS : v <= mr ? CheckStatus.WARN : CheckStatus.FAIL;
+            return Optional.of(new Measure(v, limit, st, 1 - v / mr,
+                    "With the pin low the coil sees " + volts(v) + "; must-release at " + celsius(t) + " is " + volts(mr)
+                            + " (" + pct(1 - o.releaseMarginFraction()) + " of it allowed)."));
+        }
+
+        private Optional<Measure> saturated(Solved s) {
+            if (s.on().isEmpty()) {
+                return Optional.empty();
+            }
+            Part q = s.variant().stage().require(roles.switchRef());
+            PartResult r = s.on().get().requirePart(roles.switchRef());
+            double margin;
+            String why;
+            if (q.kind() == PartKind.NPN || q.kind() == PartKind.PNP) {
+                double ic = r.quantity("ic");
+                double ib = r.quantity("ib");
+                double beta = q.value("betaForward");
+                margin = ic > 0 && ib > 0 ? beta * ib / ic : 0;
+                why = "gain " + ratio(beta) + " × IB " + amps(ib) + " ÷ IC " + amps(ic) + " = ×" + ratio(margin) + ".";
+            } else {
+                Optional<SwitchVerdict> v = s.on().get().switchVerdict();
+                margin = v.map(SwitchVerdict::margin).orElse(0.0);
+                why = v.map(SwitchVerdict::reason).orElse("no switch verdict");
+            }
+            CheckStatus st = margin >= o.saturationPassMargin() ? CheckStatus.PASS : margin >= 1 ? CheckStatus.WARN
+                    : CheckStatus.FAIL;
+            return Optional.of(new Measure(margin, o.saturationPassMargin(), st, margin - 1, why));
+        }
+
+        private Optional<Measure> switchCurrent(Solved s) {
+            if (s.on().isEmpty()) {
+                return Optional.empty();
+            }
+            Part q = s.variant().stage().require(roles.switchRef());
+            PartResult r = s.on().get().requirePart(roles.switchRef());
+            double i = Math.abs(r.quantity(q.kind() == PartKind.NMOS ? "id" : "ic"));
+            double rating = q.value(q.kind() == PartKind.NMOS ? "idMaxAmps" : "icMaxAmps");
+            return Optional.of(rated(i, rating, amps(i) + " against a rating of " + amps(rating) + "."));
+        }
+
+        private Optional<Measure> pinCurrent(Solved s) {
+            if (s.on().isEmpty()) {
+                return Optional.empty();
+            }
+            String pin = roles.drivePinRef().orElseThrow();
+            double i = Math.abs(s.on().get().requirePart(pin).quantity("current"));
+            double limit = s.variant().stage().require(pin).value("pinCurrentLimitAmps");
+            return Optional.of(rated(i, limit, "The pin sources " + amps(i) + "; its limit is " + amps(limit) + "."));
+        }
+
+        private Optional<Measure> packageCurrent(Solved s) {
+            if (s.on().isEmpty()) {
+                return Optional.empty();
+            }
+            String pin = roles.drivePinRef().orElseThrow();
+            Part u = s.variant().stage().require(pin);
+            double n = u.value("channelCount");
+            double i = n * Math.abs(s.on().get().requirePart(pin).quantity("current"));
+            double limit = u.value("packageCurrentLimitAmps");
+            return Optional.of(rated(i, limit, ratio(n) + " channels draw " + amps(i) + " from the package; its limit is "
+                    + amps(limit) + "."));
+        }
+
+        private Measure rated(double value, double rating, String why) {
+            double pass = rating * o.ratingUseFraction();
+            CheckStatus st = value <= pass ? CheckStatus.PASS : value <= rating ? CheckStatus.WARN : CheckStatus.FAIL;
+            return new Measure(value, pass, st, 1 - value / rating, why);
+        }
+
+        private Optional<Measure> junction(Solved s) {
+            if (s.on().isEmpty()) {
+                return Optional.empty();
+            }
+            Part q = s.variant().stage().require(roles.switchRef());
+            PartResult r = s.on().get().requirePart(roles.switchRef());
+            double ta = s.variant().stage().conditions().ambientCelsius();
+            double n = q.kind() == PartKind.DARLINGTON ? q.value("channelCount") : 1;
+            double p = Math.max(0, r.powerWatts()) * n;
+            double rth = q.value("thermalResistanceKelvinPerWatt");
+            double tj = ThermalBudget.junctionCelsius(ta, p, rth);
+            double max = q.value("tjMaxCelsius");
+            double pass = max - o.thermalMarginKelvin();
+            CheckStatus st = tj <= pass ? CheckStatus.PASS : tj <= max ? CheckStatus.WARN : CheckStatus.FAIL;
+            return Optional.of(new Measure(tj, pass, st, (max - tj) / Math.max(1e-9, max - ta),
+                    "Tj = " + celsius(ta) + " + " + EngineeringNotation.format(p, Unit.WATT) + " × "
+                            + EngineeringNotation.format(rth, Unit.KELVIN_PER_WATT) + " = " + celsius(tj) + "; Tj(max) "
+                            + celsius(max) + "."));
+        }
+
+        // ------------------------------------------------------------------ static estimates
+
+        private CheckResult switchVoltage(SuppressorEstimate sup, double i0) {
+            Part q = stage.require(roles.switchRef());
+            Part v = stage.require(roles.coilSupplyRef().orElseThrow());
+            double vs = PartPhysics.supplyMax(v);
+            double rating = q.value(q.kind() == PartKind.NMOS ? "vdssVolts" : "vceoVolts");
+            List<String> refs = new ArrayList<>(List.of(q.ref()));
+            refs.addAll(sup.refs());
+            if (!sup.clamps()) {
+                return new CheckResult("rating.switch-voltage", CheckStatus.FAIL, Double.POSITIVE_INFINITY,
+                        rating * o.ratingUseFraction(), Unit.VOLT, Map.of(), "", STATIC,
+                        "Nothing clamps the coil: at turn-off the switch sees several hundred volts (SU-0; 1000–1500 V"
+                                + " for an unsuppressed 12 V relay, SU-1), far above its " + volts(rating) + " rating.",
+                        refs);
+            }
+            double peak = sup.peakSwitchVolts(vs, Double.isNaN(i0) ? 0 : i0);
+            Measure m = rated(peak, rating, "Peak switch voltage VS,max + Vc + I0·Rs = " + volts(vs) + " + "
+                    + volts(sup.clampVolts()) + (sup.seriesOhms() > 0 ? " + " + amps(i0) + " × " + BaseNetworkSizing.ohms(sup.seriesOhms()) : "")
+                    + " = " + volts(peak) + " (" + sup.description() + ") against " + volts(rating) + ".");
+            return new CheckResult("rating.switch-voltage", m.status(), m.value(), m.limit(), Unit.VOLT, Map.of(),
+                    "supply at its maximum, largest coil current", STATIC, m.explanation(), refs);
+        }
+
+        private Optional<CheckResult> suppressorCurrent(SuppressorEstimate sup, double i0) {
+            // a channel's own clamp diode is rated like its output (from memory); else the diode or zener's peak rating
+            Optional<Part> diode = sup.refs().stream().map(stage::require)
+                    .filter(p -> p.kind() == PartKind.DIODE || p.kind() == PartKind.ZENER || p.kind() == PartKind.DARLINGTON)
+                    .findFirst();
+            if (diode.isEmpty() || Double.isNaN(i0)) {
+                return Optional.empty();
+            }
+            boolean channel = diode.get().kind() == PartKind.DARLINGTON;
+            double rating = diode.get().value(channel ? "icMaxAmps" : "maxCurrentAmps");
+            Measure m = rated(i0, rating, (channel ? diode.get().ref() + "'s clamp diode" : diode.get().ref())
+                    + " carries the coil current at turn-off, " + amps(i0) + ", against a peak rating of " + amps(rating)
+                    + (channel ? " (taken as the channel's output rating)." : "."));
+            return Optional.of(new CheckResult("rating.suppressor-current", m.status(), m.value(), m.limit(), Unit.AMPERE,
+                    Map.of(), "largest coil current", "peak suppressor current = coil current at turn-off", m.explanation(),
+                    List.of(diode.get().ref())));
+        }
+
+        private CheckResult releaseTime(SuppressorEstimate sup, double i0, double requirement) {
+            Part k = stage.require(roles.relayRef());
+            double l = k.value("inductanceAttractedHenries") > 0 ? k.value("inductanceAttractedHenries")
+                    : k.value("inductanceReleasedHenries");
+            double r = k.value("coilResistanceOhms");
+            double drop = k.value("mustReleaseVolts") / r;
+            double t = Double.isNaN(i0) ? Double.NaN : sup.decaySeconds(r, l, i0, drop);
+            CheckStatus st = t <= requirement ? CheckStatus.PASS : CheckStatus.FAIL;
+            return new CheckResult("relay.release-time", st, t, requirement, Unit.SECOND, Map.of(),
+                    "largest coil current, nominal coil", STATIC + "; the armature's own release time comes on top",
+                    "Through " + sup.description() + " the coil current falls from " + amps(i0) + " to drop-out ("
+                            + amps(drop) + ") in " + EngineeringNotation.format(t, Unit.SECOND) + "; required "
+                            + EngineeringNotation.format(requirement, Unit.SECOND) + ".",
+                    List.of(k.ref()));
+        }
+
+        // ------------------------------------------------------------------ transient turn-off
+
+        /** The turn-off run at the largest-current corner, if the transient engine manages it. */
+        private Optional<TurnOff> turnOff(SuppressorEstimate sup, double i0) {
+            Map<String, Double> levels = new LinkedHashMap<>();
+            levels.put("supply", 1.0);
+            levels.put("coil-resistance", -1.0);
+            levels.put("ambient", -1.0);
+            Map<String, Double> present = new LinkedHashMap<>();
+            for (Factor f : factors) {
+                if (levels.containsKey(f.id())) {
+                    present.put(f.id(), levels.get(f.id()));
+                }
+            }
+            Stage s = Corners.at(stage, factors, present);
+            Part k = s.require(roles.relayRef());
+            double l = Math.max(k.value("inductanceReleasedHenries"), k.value("inductanceAttractedHenries"));
+            double guess = sup.decaySeconds(k.value("coilResistanceOhms"), l, Double.isNaN(i0) ? 0.03 : i0,
+                    k.value("mustReleaseVolts") / k.value("coilResistanceOhms"));
+            double window = Math.min(TRANSIENT_MAX_WINDOW_SECONDS, Math.max(TransientOptions.DEFAULT_DURATION_SECONDS,
+                    TransientOptions.DEFAULT_EDGE_SECONDS + 3 * (Double.isFinite(guess) ? guess : 0)
+                            + k.value("releaseTimeSeconds") * 2));
+            try {
+                TransientResult r = TransientAnalysis.run(s, TransientOptions.turnOff().withDuration(window));
+                Map<String, Double> corner = new LinkedHashMap<>();
+                List<String> words = new ArrayList<>();
+                for (Factor f : factors) {
+                    if (present.containsKey(f.id())) {
+                        corner.put(f.id(), f.valueAt(present.get(f.id())));
+                        words.add(f.id() + " " + f.describe(present.get(f.id())));
+                    }
+                }
+                return Optional.of(new TurnOff(r.metrics(), s, corner, String.join(", ", words)));
+            } catch (TransientFailureException | SolverException e) {
+                findings.add(new Finding(Severity.INFO, "check.transient-failed", roles.switchRef(), "",
+                        "The transient engine could not run the turn-off (" + e.getMessage()
+                                + "); the turn-off checks use the closed-form estimates."));
+                return Optional.empty();
+            }
+        }
+
+        private CheckResult transientSwitchVoltage(TurnOff t, SuppressorEstimate sup) {
+            Part q = t.stage().require(roles.switchRef());
+            double rating = q.value(q.kind() == PartKind.NMOS ? "vdssVolts" : "vceoVolts");
+            double peak = t.metrics().peakSwitchVolts();
+            Measure m = rated(peak, rating, "Peak switch voltage at turn-off " + volts(peak) + " (" + sup.description()
+                    + ") against " + volts(rating) + ".");
+            CheckStatus st = t.metrics().switchBreakdown() ? CheckStatus.FAIL : m.status();
+            String why = t.metrics().switchBreakdown()
+                    ? "At turn-off the switch reaches its " + volts(rating) + " rating and goes into avalanche, absorbing "
+                            + EngineeringNotation.format(t.metrics().switchEnergyJoules(), Unit.JOULE)
+                            + " (" + sup.description() + ")."
+                    : m.explanation();
+            List<String> refs = new ArrayList<>(List.of(q.ref()));
+            refs.addAll(sup.refs());
+            return new CheckResult("rating.switch-voltage", st, peak, m.limit(), Unit.VOLT, t.corner(), t.cornerText(),
+                    TRANSIENT, why, refs);
+        }
+
+        private Optional<CheckResult> transientSuppressorCurrent(TurnOff t, SuppressorEstimate sup) {
+            Optional<Part> diode = sup.refs().stream().map(stage::require)
+                    .filter(p -> p.kind() == PartKind.DIODE || p.kind() == PartKind.ZENER || p.kind() == PartKind.DARLINGTON)
+                    .findFirst();
+            if (diode.isEmpty()) {
+                return Optional.empty();
+            }
+            boolean channel = diode.get().kind() == PartKind.DARLINGTON;
+            double rating = diode.get().value(channel ? "icMaxAmps" : "maxCurrentAmps");
+            double peak = t.metrics().peakSuppressorAmps();
+            Measure m = rated(peak, rating, "Peak suppressor current " + amps(peak) + " against " + amps(rating)
+                    + (channel ? " (the channel's output rating)." : "."));
+            return Optional.of(new CheckResult("rating.suppressor-current", m.status(), peak, m.limit(), Unit.AMPERE,
+                    t.corner(), t.cornerText(), TRANSIENT, m.explanation(), List.of(diode.get().ref())));
+        }
+
+        private CheckResult transientReleaseTime(TurnOff t, double requirement) {
+            double rt = t.metrics().releaseTimeSeconds();
+            CheckStatus st = Double.isNaN(rt) ? CheckStatus.FAIL : rt <= requirement ? CheckStatus.PASS : CheckStatus.FAIL;
+            String why = Double.isNaN(rt) ? "The contacts had not opened by the end of the run."
+                    : "The contacts open " + EngineeringNotation.format(rt, Unit.SECOND) + " after the turn-off edge (coil"
+                            + " current to drop-out in " + EngineeringNotation.format(t.metrics().decayToReleaseCurrentSeconds(),
+                            Unit.SECOND) + "); required " + EngineeringNotation.format(requirement, Unit.SECOND) + ".";
+            return new CheckResult("relay.release-time", st, rt, requirement, Unit.SECOND, t.corner(), t.cornerText(),
+                    TRANSIENT, why, List.of(roles.relayRef()));
+        }
+
+        // ------------------------------------------------------------------ worst variant
+
+        private CheckResult worst(String id, List<Solved> variants, Function<Solved, Optional<Measure>> measure,
+                                  Unit unit, String method, List<String> refs) {
+            Measure worst = null;
+            Solved at = null;
+            int judged = 0;
+            for (Solved s : variants) {
+                Optional<Measure> m = measure.apply(s);
+                if (m.isEmpty()) {
+                    continue;
+                }
+                judged++;
+                if (worst == null || m.get().margin() < worst.margin()) {
+                    worst = m.get();
+                    at = s;
+                }
+            }
+            if (worst == null) {
+                return new CheckResult(id, CheckStatus.WARN, Double.NaN, Double.NaN, unit, Map.of(), "", method,
+                        "Not judged: the DC engine solved none of the corners.", refs);
+            }
+            Map<String, Double> corner = new LinkedHashMap<>();
+            List<String> words = new ArrayList<>();
+            for (Factor f : factors) {
+                double level = at.variant().level(f.id());
+                corner.put(f.id(), f.valueAt(level));
+                words.add(f.id() + " " + f.describe(level));
+            }
+            String note = judged < variants.size() ? " (" + judged + " of " + variants.size() + " corners solved)" : "";
+            return new CheckResult(id, worst.status(), worst.value(), worst.limit(), unit, corner,
+                    String.join(", ", words), method, worst.explanation() + note, refs);
+        }
+
+        // ------------------------------------------------------------------ Monte Carlo
+
+        private YieldResult monteCarlo(List<Solved> corners) {
+            List<Function<Solved, Optional<Measure>>> functional = List.of(this::operates, this::releases, this::saturated);
+            // main effect of each factor on each functional check's margin, from the corners
+            double[][] effect = new double[functional.size()][factors.size()];
+            for (int c = 0; c < functional.size(); c++) {
+                double[] hi = new double[factors.size()];
+                double[] lo = new double[factors.size()];
+                int[] nHi = new int[factors.size()];
+                int[] nLo = new int[factors.size()];
+                for (Solved s : corners) {
+                    Optional<Measure> m = functional.get(c).apply(s);
+                    if (m.isEmpty()) {
+                        continue;
+                    }
+                    for (int j = 0; j < factors.size(); j++) {
+                        if (s.variant().level(factors.get(j).id()) > 0) {
+                            hi[j] += m.get().margin();
+                            nHi[j]++;
+                        } else {
+                            lo[j] += m.get().margin();
+                            nLo[j]++;
+                        }
+                    }
+                }
+                for (int j = 0; j < factors.size(); j++) {
+                    effect[c][j] = nHi[j] > 0 && nLo[j] > 0 ? hi[j] / nHi[j] - lo[j] / nLo[j] : 0;
+                }
+            }
+            List<Variant> samples = Corners.monteCarlo(stage, factors, o.monteCarloSamples(), o.seed());
+            int passed = 0;
+            int unsolved = 0;
+            Map<String, Integer> culprits = new LinkedHashMap<>();
+            for (Variant v : samples) {
+                Solved s = solveVariant(v, "Monte Carlo sample " + v.index());
+                if (s.on().isEmpty() || s.off().isEmpty()) {
+                    unsolved++;
+                    continue;
+                }
+                int failing = -1;
+                for (int c = 0; c < functional.size() && failing < 0; c++) {
+                    Optional<Measure> m = functional.get(c).apply(s);
+                    if (m.isPresent() && m.get().status() == CheckStatus.FAIL) {
+                        failing = c;
+                    }
+                }
+                if (failing < 0) {
+                    passed++;
+                    continue;
+                }
+                int best = -1;
+                double most = 0;
+                for (int j = 0; j < factors.size(); j++) {
+                    double contribution = effect[failing][j] * v.level(factors.get(j).id()) / 2;
+                    if (contribution < most) {
+                        most = contribution;
+                        best = j;
+                    }
+                }
+                if (best >= 0) {
+                    culprits.merge(factors.get(best).id(), 1, Integer::sum);
+                }
+            }
+            Optional<String> top = culprits.entrySet().stream().max(Map.Entry.comparingByValue()).map(Map.Entry::getKey);
+            return new YieldResult(samples.size(), o.seed(), passed, unsolved, culprits, top);
+        }
+
+        // ------------------------------------------------------------------ safety
+
+        private void cautions(TopologyReport topo) {
+            List<String> supplies = topo.roles().map(StageRoles::contactSupplyRefs).orElse(List.of());
+            for (String ref : supplies) {
+                Part v = stage.require(ref);
+                boolean ac = v.option("waveform").equals("ac-rms");
+                double volts = Math.abs(v.value("volts")) * (1 + v.value("tolerancePercent") / 100);
+                double limit = ac ? o.selvAcRmsVolts() : o.selvDcVolts();
+                if (volts <= limit) {
+                    continue;
+                }
+                String what = volts(volts) + (ac ? " AC rms" : " DC");
+                caution("caution.above-selv", ref, "The contact side (" + ref + ", up to " + what + ") is above safety"
+                        + " extra-low voltage (" + volts(limit) + (ac ? " AC rms" : " ripple-free DC") + "): these checks"
+                        + " judge the coil drive only and say nothing about the safety of the contact circuit.");
+                caution("caution.creepage-clearance", ref, "Keep the creepage and clearance distances between the"
+                        + " contact circuit and the logic side that the working voltage and pollution degree require.");
+                caution("caution.fusing", ref, "Fuse the contact circuit for its load and wiring.");
+                caution("caution.enclosure", ref, "Put live contact-side parts in an enclosure that keeps fingers and"
+                        + " tools out.");
+                caution("caution.qualified-installation", ref, "Have the installation done and checked by a qualified"
+                        + " person, following local electrical codes and licensed practice.");
+                return;
+            }
+        }
+
+        private void caution(String key, String ref, String message) {
+            findings.add(new Finding(Severity.WARNING, key, ref, "", message));
+        }
+
+        private boolean isDarlington() {
+            return roles.topology() == DriverTopology.DARLINGTON_CHANNEL;
+        }
+    }
+
+    static String volts(double v) {
+        return EngineeringNotation.format(v, Unit.VOLT);
+    }
+
+    static String amps(double v) {
+        return EngineeringNotation.format(v, Unit.AMPERE);
+    }
+
+    static String celsius(double v) {
+        return EngineeringNotation.format(v, Unit.CELSIUS);
+    }
+
+    static String ratio(double v) {
+        return EngineeringNotation.format(v, Unit.RATIO);
+    }
+
+    static String pct(double fraction) {
+        return EngineeringNotation.format(fraction * 100, Unit.PERCENT);
+    }
+}

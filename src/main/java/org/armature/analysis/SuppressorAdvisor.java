@@ -1,0 +1,259 @@
+package org.armature.analysis;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import org.armature.model.Finding;
+import org.armature.model.HighSideDrive;
+import org.armature.model.Part;
+import org.armature.model.PartKind;
+import org.armature.model.Severity;
+import org.armature.model.Stage;
+import org.armature.model.StageTemplate;
+import org.armature.model.Suppressor;
+import org.armature.model.Templates;
+import org.armature.solver.SolverException;
+import org.armature.solver.timedomain.TransientAnalysis;
+import org.armature.solver.timedomain.TransientFailureException;
+import org.armature.solver.timedomain.TransientMetrics;
+import org.armature.solver.timedomain.TransientOptions;
+import org.armature.units.ESeries;
+
+/**
+ * Ranks coil suppressors for a stage by release time and peak switch voltage, and proposes the
+ * zener and TVS voltages (CHECKS "beyond the hand calculation" 1; SU-12, SU-15, SU-16).
+ *
+ * <p>Rules: the clamp may add at most Vc,max = f·Vrating − VS,max across the switch (f the
+ * {@link Options#ratingUseFraction()}, default 80 %). The zener is about the supply voltage (SU-15):
+ * the E24 value nearest VS, lowered to the largest E24 value with VZ + VF ≤ Vc,max when that is
+ * exceeded. A TVS across the coil must never conduct in the on state: the smallest E24 breakdown
+ * at or above 1.1·VS,max, and at most Vc,max. A resistor across the coil is taken equal to the coil
+ * resistance (peak ≈ 2·VS).
+ *
+ * <p>Each candidate is the stage's template built with that suppressor, every other part keeping the
+ * stage's values, at the largest-current corner (supply max, coil −tol, coldest ambient). With the
+ * transient engine the figures are its peak switch voltage and its release time (turn-off edge to
+ * the contacts opening); without it, or when a run fails, the closed forms of
+ * {@link SuppressorEstimate} (coil-current decay to drop-out through a constant clamp, before the
+ * armature moves). Each candidate says which was used.
+ */
+public final class SuppressorAdvisor {
+
+    /** A TVS's breakdown sits at least this factor above the supply's maximum (common practice). */
+    public static final double TVS_HEADROOM = 1.1;
+
+    private SuppressorAdvisor() {
+    }
+
+    /**
+     * What to rank and how.
+     *
+     * @param releaseRequirementSeconds the user's release-time requirement, if any
+     * @param useTransient use the transient engine (default true)
+     * @param ratingUseFraction share of the switch's voltage rating the peak may reach (default 0.8)
+     * @param forwardDropVolts diode drop in the closed forms (default 0.7 V)
+     * @param candidates the suppressors to compare (default diode, diode + zener, TVS, resistor)
+     */
+    public record Options(OptionalDouble releaseRequirementSeconds, boolean useTransient, double ratingUseFraction,
+                          double forwardDropVolts, List<Suppressor> candidates) {
+
+        /** The defaults named above. */
+        public static final Options DEFAULT = new Options(OptionalDouble.empty(), true, 0.8, 0.7,
+                List.of(Suppressor.DIODE, Suppressor.DIODE_ZENER, Suppressor.TVS, Suppressor.RESISTOR));
+
+        public Options {
+            if (releaseRequirementSeconds == null || candidates == null) {
+                throw new IllegalArgumentException("releaseRequirementSeconds and candidates must not be null");
+            }
+            if (!(ratingUseFraction > 0 && ratingUseFraction <= 1) || !(forwardDropVolts > 0)) {
+                throw new IllegalArgumentException("ratingUseFraction must be in (0, 1] and forwardDropVolts positive");
+            }
+            candidates = List.copyOf(candidates);
+        }
+
+        /** The same options with or without the transient engine. */
+        public Options withTransient(boolean on) {
+            return new Options(releaseRequirementSeconds, on, ratingUseFraction, forwardDropVolts, candidates);
+        }
+
+        /** The same options with a release-time requirement, seconds. */
+        public Options withReleaseRequirement(double seconds) {
+            return new Options(OptionalDouble.of(seconds), useTransient, ratingUseFraction, forwardDropVolts, candidates);
+        }
+
+        /** The same options comparing other candidates. */
+        public Options withCandidates(List<Suppressor> list) {
+            return new Options(releaseRequirementSeconds, useTransient, ratingUseFraction, forwardDropVolts, list);
+        }
+    }
+
+    /**
+     * One suppressor option with its figures.
+     *
+     * @param suppressor the kind
+     * @param description plain words ("diode + 12.0 V zener")
+     * @param peakSwitchVolts peak switch voltage at turn-off, V
+     * @param releaseSeconds release figure: the transient engine's release time, or the closed-form
+     *     decay to drop-out (see {@code method}), s
+     * @param withinRating peak at or below the rating times the use fraction, and no avalanche
+     * @param meetsRequirement against the release requirement, when one was given
+     * @param method "transient engine" or "closed form (decay to drop-out before the armature moves)"
+     */
+    public record Candidate(Suppressor suppressor, String description, double peakSwitchVolts, double releaseSeconds,
+                            boolean withinRating, Optional<Boolean> meetsRequirement, String method) {
+    }
+
+    /**
+     * The ranking.
+     *
+     * @param ranked best first: within rating before beyond it, then by release figure
+     * @param proposedZenerVolts the zener voltage proposed (NaN when no zener fits the rating)
+     * @param proposedTvsVolts the TVS breakdown proposed (NaN when none fits)
+     * @param switchRatingVolts the switch's VCEO / VDSS, V
+     * @param findings problems met ({@code suppressor.*})
+     */
+    public record Ranking(List<Candidate> ranked, double proposedZenerVolts, double proposedTvsVolts,
+                          double switchRatingVolts, List<Finding> findings) {
+        public Ranking {
+            ranked = List.copyOf(ranked);
+            findings = List.copyOf(findings);
+        }
+    }
+
+    /** Ranks with the default options. */
+    public static Ranking rank(Stage stage) {
+        return rank(stage, Options.DEFAULT);
+    }
+
+    /**
+     * Ranks the candidates for a stage.
+     *
+     * @param stage the stage; not modified
+     * @param options what to compare and how
+     * @return the ranking; empty with a finding when the stage is not recognised
+     */
+    public static Ranking rank(Stage stage, Options options) {
+        List<Finding> findings = new ArrayList<>();
+        Optional<StageRoles> found = TopologyCheck.recognise(stage);
+        if (found.isEmpty() || found.get().coilSupplyRef().isEmpty()) {
+            findings.add(new Finding(Severity.WARNING, "suppressor.not-recognised", "", "",
+                    "Suppressors can be compared only on one of the four driver stages with a coil supply."));
+            return new Ranking(List.of(), Double.NaN, Double.NaN, Double.NaN, findings);
+        }
+        StageRoles roles = found.get();
+        Part q = stage.require(roles.switchRef());
+        Part v = stage.require(roles.coilSupplyRef().get());
+        Part k = stage.require(roles.relayRef());
+        double rating = q.value(q.kind() == PartKind.NMOS ? "vdssVolts" : "vceoVolts");
+        double vs = Math.abs(v.value("volts"));
+        double vsMax = PartPhysics.supplyMax(v);
+        double clampMax = options.ratingUseFraction() * rating - vsMax;
+        ESeries e24 = ESeries.E24;
+        double vf = options.forwardDropVolts();
+        double zener = Double.NaN;
+        if (clampMax - vf >= 1) {
+            zener = e24.nearest(vs);
+            if (zener + vf > clampMax) {
+                zener = e24.roundDown(clampMax - vf);
+            }
+        } else {
+            findings.add(new Finding(Severity.WARNING, "suppressor.no-zener-fits", q.ref(), "",
+                    "No zener fits: " + BaseNetworkSizing.volts(clampMax) + " of clamp is all the switch's rating leaves"
+                            + " above the supply's maximum."));
+        }
+        double tvs = e24.roundUp(TVS_HEADROOM * vsMax);
+        if (tvs > clampMax) {
+            findings.add(new Finding(Severity.WARNING, "suppressor.no-tvs-fits", q.ref(), "",
+                    "No TVS fits: one that stays off at " + BaseNetworkSizing.volts(vsMax) + " clamps above the "
+                            + BaseNetworkSizing.volts(clampMax) + " the switch's rating leaves."));
+            tvs = Double.NaN;
+        }
+        List<Factor> factors = Corners.factors(stage);
+        Map<String, Double> levels = new LinkedHashMap<>();
+        levels.put("supply", 1.0);
+        levels.put("coil-resistance", -1.0);
+        levels.put("ambient", -1.0);
+        double coilMin = PartPhysics.coilOhms(k, 1 - k.value("coilResistanceTolerancePercent") / 100,
+                stage.conditions().ambientMinCelsius());
+        double i0 = vsMax / coilMin;
+        double henries = k.value("inductanceAttractedHenries") > 0 ? k.value("inductanceAttractedHenries")
+                : k.value("inductanceReleasedHenries");
+        double dropOut = k.value("mustReleaseVolts") / k.value("coilResistanceOhms");
+        List<Candidate> out = new ArrayList<>();
+        for (Suppressor s : options.candidates()) {
+            if ((s == Suppressor.DIODE_ZENER && Double.isNaN(zener)) || (s == Suppressor.TVS && Double.isNaN(tvs))
+                    || s == Suppressor.NONE) {
+                continue;
+            }
+            Stage candidate = Corners.at(build(stage, roles, s, zener, tvs, k.value("coilResistanceOhms")), factors, levels);
+            Optional<StageRoles> cr = TopologyCheck.recognise(candidate);
+            if (cr.isEmpty()) {
+                continue;
+            }
+            SuppressorEstimate est = SuppressorEstimate.of(candidate, cr.get(), vf);
+            double peak = est.peakSwitchVolts(vsMax, i0);
+            double release = est.decaySeconds(k.value("coilResistanceOhms"), henries, i0, dropOut);
+            boolean breakdown = false;
+            String method = "closed form (decay to drop-out through a constant clamp, before the armature moves)";
+            if (options.useTransient()) {
+                try {
+                    double window = Math.min(0.2, Math.max(TransientOptions.DEFAULT_DURATION_SECONDS,
+                            TransientOptions.DEFAULT_EDGE_SECONDS + 3 * release + 2 * k.value("releaseTimeSeconds")));
+                    TransientMetrics m = TransientAnalysis.run(candidate, TransientOptions.turnOff().withDuration(window))
+                            .metrics();
+                    peak = m.peakSwitchVolts();
+                    release = m.releaseTimeSeconds();
+                    breakdown = m.switchBreakdown();
+                    method = "transient engine (turn-off edge to the contacts opening)";
+                } catch (TransientFailureException | SolverException ex) {
+                    method = method + "; the transient run failed: " + ex.getMessage();
+                }
+            }
+            boolean within = !breakdown && peak <= options.ratingUseFraction() * rating;
+            double rel = release;
+            Optional<Boolean> meets = options.releaseRequirementSeconds().isPresent()
+                    ? Optional.of(rel <= options.releaseRequirementSeconds().getAsDouble()) : Optional.empty();
+            out.add(new Candidate(s, est.description(), peak, release, within, meets, method));
+        }
+        out.sort(Comparator.comparing((Candidate c) -> !c.withinRating())
+                .thenComparingDouble(c -> Double.isNaN(c.releaseSeconds()) ? Double.POSITIVE_INFINITY : c.releaseSeconds()));
+        return new Ranking(out, zener, tvs, rating, findings);
+    }
+
+    /**
+     * The stage's template built with another suppressor, every part it shares with the stage (same
+     * designator and kind) keeping the stage's values and options.
+     */
+    static Stage build(Stage stage, StageRoles roles, Suppressor s, double zenerVolts, double tvsVolts, double coilOhms) {
+        StageTemplate t = StageTemplate.valueOf(roles.topology().name());
+        Stage built = Templates.build(t, s, roles.highSideDrive().orElse(HighSideDrive.LEVEL_SHIFT))
+                .withConditions(stage.conditions());
+        final Stage template = built;
+        List<String> fresh = TopologyCheck.recognise(built).map(StageRoles::suppressorRefs).orElse(List.of()).stream()
+                .filter(ref -> template.require(ref).kind().isSuppressorKind()).toList();
+        for (Part p : built.parts()) {
+            if (fresh.contains(p.ref())) {
+                continue;
+            }
+            Optional<Part> old = stage.part(p.ref()).filter(o -> o.kind() == p.kind());
+            if (old.isPresent()) {
+                built = built.withPart(new Part(p.ref(), p.kind(), old.get().values(), old.get().options(), p.placement()));
+            }
+        }
+        for (String ref : fresh) {
+            Part p = built.require(ref);
+            if (p.kind() == PartKind.ZENER && !Double.isNaN(zenerVolts)) {
+                built = built.withPart(p.with("breakdownVolts", zenerVolts));
+            } else if (p.kind() == PartKind.TVS && !Double.isNaN(tvsVolts)) {
+                built = built.withPart(p.with("breakdownVolts", tvsVolts));
+            } else if (p.kind() == PartKind.RESISTOR && s == Suppressor.RESISTOR) {
+                built = built.withPart(p.with("resistanceOhms", coilOhms));
+            }
+        }
+        return built;
+    }
+}

@@ -1,0 +1,23 @@
+package org.armature.analysis;
+
+import java.util.List;
+import java.util.Optional;
+import org.armature.model.Finding;
+
+/**
+ * The result of {@link TopologyCheck#analyse}: the recognised roles, if any, and the issues.
+ *
+ * @param roles what each part does; empty when the stage is not a recognised driver stage
+ * @param issues findings with the parts they concern, in a stable order
+ */
+public record TopologyReport(Optional<StageRoles> roles, List<TopologyIssue> issues) {
+
+    public TopologyReport {
+        issues = List.copyOf(issues);
+    }
+
+    /** The findings alone. */
+    public List<Finding> findings() {
+        return issues.stream().map(TopologyIssue::finding).toList();
+    }
+}
