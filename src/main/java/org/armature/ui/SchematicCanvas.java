@@ -65,7 +65,14 @@ public final class SchematicCanvas extends Region {
     private boolean gridDirty = true;
     private Layout lastLayout;
 
-    private enum Gesture { NONE, MOVE, WIRE, BAND, PAN }
+    /** Screen pixels of vertical drag per preferred-value step when dragging a value label. */
+    public static final double VALUE_DRAG_PIXELS = 8;
+
+    private enum Gesture { NONE, MOVE, WIRE, BAND, PAN, VALUE }
+
+    private Optional<String[]> valueDrag = Optional.empty();
+    private double valueDragY;
+    private java.util.function.LongConsumer repainted = g -> { };
 
     private Gesture gesture = Gesture.NONE;
     private double pressScreenX;
@@ -229,6 +236,43 @@ public final class SchematicCanvas extends Region {
         g.clearRect(0, 0, drawingLayer.getWidth(), drawingLayer.getHeight());
         lastLayout = SchematicRenderer.draw(vm.shownStage(), vm.annotationsProperty().get(),
                 options(EnumSet.of(Layer.WIRES, Layer.PARTS, Layer.LABELS, Layer.ANNOTATIONS)), new FxPen(g, view()));
+        repainted.accept(vm.shownGenerationProperty().get());
+    }
+
+    /**
+     * Called at the end of every repaint of the drawing layer with the generation of the readouts
+     * painted ({@link EditorViewModel#shownGenerationProperty()}): the hook of latency probes.
+     */
+    public void setOnRepainted(java.util.function.LongConsumer listener) {
+        repainted = listener == null ? g -> { } : listener;
+    }
+
+    /**
+     * The part value label under a screen point that can be stepped through preferred values:
+     * {designator, parameter key}. Resistors and capacitors have one.
+     */
+    public Optional<String[]> steppableValueAt(double screenX, double screenY) {
+        if (lastLayout == null) {
+            return Optional.empty();
+        }
+        double gx = gridX(screenX);
+        double gy = gridY(screenY);
+        for (org.armature.render.PlacedLabel l : lastLayout.labels(org.armature.render.PlacedLabel.Kind.PART)) {
+            if (l.box().contains(gx, gy)) {
+                Optional<org.armature.model.Part> p = vm.stage().part(l.owner());
+                if (p.isPresent()) {
+                    String key = switch (p.get().kind()) {
+                        case RESISTOR -> "resistanceOhms";
+                        case CAPACITOR -> "capacitanceFarads";
+                        default -> "";
+                    };
+                    if (!key.isEmpty()) {
+                        return Optional.of(new String[] {l.owner(), key});
+                    }
+                }
+            }
+        }
+        return Optional.empty();
     }
 
     private void redrawOverlay() {
@@ -256,6 +300,13 @@ public final class SchematicCanvas extends Region {
         if (vm.armedKindProperty().get().isPresent()) {
             vm.place(vm.armedKindProperty().get().get(), pressGrid);
             gesture = Gesture.NONE;
+            return;
+        }
+        valueDrag = steppableValueAt(e.getX(), e.getY());
+        if (valueDrag.isPresent()) {
+            vm.select(Selection.ofPart(valueDrag.get()[0]));
+            gesture = Gesture.VALUE;
+            valueDragY = e.getY();
             return;
         }
         Stage st = vm.stage();
@@ -320,6 +371,13 @@ public final class SchematicCanvas extends Region {
                 band = Optional.of(Box.spanning(gridX(pressScreenX), gridY(pressScreenY), gx, gy));
                 redrawOverlay();
             }
+            case VALUE -> valueDrag.ifPresent(v -> {
+                int steps = (int) ((valueDragY - e.getY()) / VALUE_DRAG_PIXELS);
+                if (steps != 0) {
+                    valueDragY -= steps * VALUE_DRAG_PIXELS;
+                    vm.stepPreferred(v[0], v[1], steps);
+                }
+            });
             default -> {
             }
         }
@@ -362,6 +420,7 @@ public final class SchematicCanvas extends Region {
     }
 
     private void moved(MouseEvent e) {
+        setCursor(steppableValueAt(e.getX(), e.getY()).isPresent() ? javafx.scene.Cursor.V_RESIZE : null);
         Optional<GridPoint> h = Snap.connectionNear(vm.stage(), gridX(e.getX()), gridY(e.getY()), HIT_PIXELS / scale());
         if (!h.equals(hover)) {
             hover = h;
@@ -371,6 +430,12 @@ public final class SchematicCanvas extends Region {
 
     private void scrolled(ScrollEvent e) {
         if (e.getDeltaY() == 0) {
+            return;
+        }
+        Optional<String[]> v = steppableValueAt(e.getX(), e.getY());
+        if (v.isPresent()) {
+            vm.stepPreferred(v.get()[0], v.get()[1], e.getDeltaY() > 0 ? 1 : -1);
+            e.consume();
             return;
         }
         zoomAt(e.getDeltaY() > 0 ? ZOOM_STEP : 1 / ZOOM_STEP, e.getX(), e.getY());
