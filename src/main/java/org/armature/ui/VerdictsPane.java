@@ -50,7 +50,8 @@ public final class VerdictsPane extends VBox {
         placeholder.getStyleClass().add("sheet-description");
         checks.setId("checks-list");
         checks.setPlaceholder(placeholder);
-        checks.setPrefHeight(300);
+        checks.setPrefHeight(360);
+        findings.list().setPrefHeight(120);
         checks.setCellFactory(v -> new CheckCell());
         checks.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
             if (b != null) {
@@ -143,19 +144,20 @@ public final class VerdictsPane extends VBox {
             HBox.setHgrow(gap, Priority.ALWAYS);
             Label nums = new Label(numbers(c));
             nums.getStyleClass().add("check-numbers");
-            HBox top = new HBox(6, icon, id, gap, nums, st);
+            HBox top = new HBox(6, icon, id, gap, st);
             Label why = new Label(c.explanation());
             why.setWrapText(true);
             why.getStyleClass().add("check-explanation");
-            VBox box = new VBox(2, top, why);
+            VBox box = new VBox(2, top, nums, why);
             if (!c.cornerText().isEmpty()) {
                 Label corner = new Label("at " + c.cornerText());
                 corner.setWrapText(true);
                 corner.getStyleClass().add("check-corner");
                 box.getChildren().add(corner);
             }
-            box.setMaxWidth(290);
-            why.setMaxWidth(290);
+            box.setMaxWidth(280);
+            box.setPrefWidth(280);
+            why.setMaxWidth(280);
             setText(null);
             setGraphic(box);
             setPrefWidth(0);
