@@ -13,6 +13,7 @@ import org.armature.devices.DiodeParams;
 import org.armature.devices.GateStepOptions;
 import org.armature.devices.Mosfet;
 import org.armature.devices.MosfetParams;
+import org.armature.devices.RelayThresholds;
 import org.armature.model.Connectivity;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
@@ -444,7 +445,8 @@ public final class NetlistBuilder {
             els.add(toNc);
             els.add(insulation);
             RelayHandle handle = new RelayHandle(ref(), coil, tempSlot, contactSlot,
-                    v("coilThermalResistanceKelvinPerWatt"), v("mustOperateVolts") / rRef, v("mustReleaseVolts") / rRef);
+                    v("coilThermalResistanceKelvinPerWatt"),
+                    RelayThresholds.fromVolts(v("mustOperateVolts"), v("mustReleaseVolts"), rRef));
             done(x -> {
                 double coilT = x.state(tempSlot);
                 double i = coil.current(x);

@@ -1,22 +1,21 @@
 package org.armature.netlist;
 
 import java.util.List;
+import org.armature.devices.CoilResistance;
+import org.armature.units.PhysicalConstants;
 
 /**
  * The DC model of a relay coil: its copper resistance at the coil temperature held in a state
- * slot, R(T) = R_ref·(234.5 + T)/(234.5 + T_ref) with temperatures in °C (copper's
- * zero-resistance intercept −234.5 °C, IEC 60028). The inductance is a short at DC.
+ * slot, from the devices package's {@link CoilResistance#copper} law,
+ * R(T) = R_ref·(234.5 + T)/(234.5 + T_ref) with temperatures in °C (copper's zero-resistance
+ * intercept −234.5 °C, IEC 60028). The inductance is a short at DC.
  */
 public final class RelayCoil implements Element {
-
-    /** Copper's zero-resistance intercept, °C (IEC 60028 via handbook tables; CHECKS.md PC-7). */
-    public static final double COPPER_INTERCEPT_CELSIUS = 234.5;
 
     private final String label;
     private final int a1;
     private final int a2;
-    private final double referenceOhms;
-    private final double referenceCelsius;
+    private final CoilResistance copper;
     private final int temperatureSlot;
 
     /**
@@ -35,8 +34,7 @@ public final class RelayCoil implements Element {
         this.label = label;
         this.a1 = a1;
         this.a2 = a2;
-        this.referenceOhms = referenceOhms;
-        this.referenceCelsius = referenceCelsius;
+        this.copper = CoilResistance.copper(referenceOhms, PhysicalConstants.celsiusToKelvin(referenceCelsius));
         this.temperatureSlot = temperatureSlot;
     }
 
@@ -45,8 +43,7 @@ public final class RelayCoil implements Element {
      * @return coil resistance at that temperature, Ω
      */
     public double ohmsAt(double coilCelsius) {
-        return referenceOhms * (COPPER_INTERCEPT_CELSIUS + coilCelsius)
-                / (COPPER_INTERCEPT_CELSIUS + referenceCelsius);
+        return copper.resistanceOhms(PhysicalConstants.celsiusToKelvin(coilCelsius));
     }
 
     /** @return the state slot of the coil temperature (°C) */

@@ -1,5 +1,7 @@
 package org.armature.netlist;
 
+import org.armature.devices.RelayThresholds;
+
 /**
  * What the DC engine needs to know about one relay of a netlist: its coil element, the state slots
  * of coil temperature (°C) and contact state (1 operated, 0 released), the thermal resistance for
@@ -15,11 +17,20 @@ package org.armature.netlist;
  * @param temperatureSlot state slot of the coil temperature, °C
  * @param contactSlot state slot of the contact state, 1 operated / 0 released
  * @param thermalResistanceKelvinPerWatt coil temperature rise per watt of coil power, K/W, ≥ 0
- * @param pickUpAmps coil current at which every sample operates, A
- * @param dropOutAmps coil current at which every sample releases, A
+ * @param thresholds pick-up and drop-out currents ({@link RelayThresholds} of the devices package)
  */
 public record RelayHandle(String ref, RelayCoil coil, int temperatureSlot, int contactSlot,
-                          double thermalResistanceKelvinPerWatt, double pickUpAmps, double dropOutAmps) {
+                          double thermalResistanceKelvinPerWatt, RelayThresholds thresholds) {
+
+    /** @return coil current at which every sample operates, A */
+    public double pickUpAmps() {
+        return thresholds.pickUpAmps();
+    }
+
+    /** @return coil current at which every sample releases, A */
+    public double dropOutAmps() {
+        return thresholds.dropOutAmps();
+    }
 
     /** The relay's armature state implied by a coil current. */
     public enum State {
@@ -47,13 +58,10 @@ public record RelayHandle(String ref, RelayCoil coil, int temperatureSlot, int c
      * @return the state that current implies
      */
     public State stateFor(double coilAmps) {
-        double i = Math.abs(coilAmps);
-        if (i >= pickUpAmps) {
-            return State.OPERATED;
-        }
-        if (i <= dropOutAmps) {
-            return State.RELEASED;
-        }
-        return State.EITHER;
+        return switch (thresholds.classify(coilAmps)) {
+            case OPERATED -> State.OPERATED;
+            case RELEASED -> State.RELEASED;
+            case EITHER -> State.EITHER;
+        };
     }
 }
