@@ -34,7 +34,8 @@ public final class ArmatureCli {
      */
     static final List<Supplier<Object>> SUBCOMMANDS = List.of(
             NewCommand::commandLine,
-            SolveCommand::new);
+            SolveCommand::new,
+            SimulateCommand::new);
 
     private ArmatureCli() {
     }

@@ -48,6 +48,12 @@ final class TimeDomainRun {
     private final double[][] histTimes;
     private final double[][] histStates;
     private int histCount;
+    /**
+     * Largest magnitude of each state so far: the relative tolerance applies to it, so that a
+     * ringing or decaying state is held to a fraction of its own amplitude, not of its momentary
+     * value near a zero crossing (common practice).
+     */
+    private final double[] stateScale;
     private int accepted;
     private int rejected;
     private boolean highNow;
@@ -74,6 +80,7 @@ final class TimeDomainRun {
         this.stateCount = s;
         this.histTimes = new double[4][1];
         this.histStates = new double[4][s];
+        this.stateScale = new double[s];
         this.view = new ArraySolution(circuit.nodeCount, new double[n], new double[0]);
     }
 
@@ -133,7 +140,8 @@ final class TimeDomainRun {
             r.initialise(view);
         }
         record(0, x);
-        pushHistory(0, true);
+        histCount = 0;
+        pushHistory(0, statesAt(x, new double[stateCount]));
         double h = o.firstStepSeconds();
         double hPrev = h;
         double maxStep = o.maxStepFraction() * duration;
@@ -242,6 +250,7 @@ final class TimeDomainRun {
             // accept
             double tNew = t + hTry;
             record(tNew, trial);
+            statesAt(trial, newStates);
             view.bind(trial, states);
             for (Reactive r : c.reactives) {
                 r.commit(view);
@@ -250,7 +259,7 @@ final class TimeDomainRun {
             t = tNew;
             accepted++;
             hPrev = hTry;
-            pushHistory(t, false);
+            pushHistory(t, newStates);
             h = checkError ? control.propose(hTry, ratio, method.order()) : hTry * o.maxGrowthFactor();
             if (crossing >= 0) {
                 RelayDynamics r = c.relays.get(crossing);
@@ -336,8 +345,8 @@ final class TimeDomainRun {
     }
 
     private void restart() {
-        histCount = 0;
-        pushHistory(times.get(times.size() - 1), true);
+        // the last accepted point stays as the only history point: values are continuous, derivatives are not
+        histCount = 1;
     }
 
     private void selectDrive() {
@@ -408,17 +417,16 @@ final class TimeDomainRun {
                     case AMPS -> o.absoluteAmpsTolerance();
                     case METRES -> o.absoluteMetresTolerance();
                 };
-                worst = Math.max(worst, TruncationError.ratio(e, vs[0], vs[1], o.relativeTolerance(), abs));
+                double scale = Math.max(stateScale[idx], Math.abs(vs[0]));
+                worst = Math.max(worst, TruncationError.ratio(e, scale, vs[1], o.relativeTolerance(), abs));
             }
             off += r.stateCount();
         }
         return worst;
     }
 
-    private void pushHistory(double t, boolean reset) {
-        if (reset) {
-            histCount = 0;
-        }
+    /** Pushes the states of the point just accepted, read before its commit (the coil reads its history). */
+    private void pushHistory(double t, double[] stateVector) {
         double[] tRow = histTimes[3];
         double[] sRow = histStates[3];
         for (int j = 3; j > 0; j--) {
@@ -428,13 +436,21 @@ final class TimeDomainRun {
         histTimes[0] = tRow;
         histStates[0] = sRow;
         tRow[0] = t;
-        view.bind(x, states);
-        int off = 0;
-        for (Reactive r : c.reactives) {
-            r.states(view, sRow, off);
-            off += r.stateCount();
+        System.arraycopy(stateVector, 0, sRow, 0, stateCount);
+        for (int i = 0; i < stateCount; i++) {
+            stateScale[i] = Math.max(stateScale[i], Math.abs(stateVector[i]));
         }
         histCount = Math.min(4, histCount + 1);
+    }
+
+    private double[] statesAt(double[] solution, double[] out) {
+        view.bind(solution, states);
+        int off = 0;
+        for (Reactive r : c.reactives) {
+            r.states(view, out, off);
+            off += r.stateCount();
+        }
+        return out;
     }
 
     private List<String> traceNames() {

@@ -1,0 +1,34 @@
+/**
+ * Time-domain (transient) analysis of a relay driver stage: the edges.
+ *
+ * <p>Entry point {@link org.armature.solver.timedomain.TransientAnalysis#run(org.armature.model.Stage,
+ * org.armature.solver.timedomain.TransientOptions)}; the result is an immutable
+ * {@link org.armature.solver.timedomain.TransientResult}: a {@link org.armature.solver.timedomain.Waveform}
+ * (named traces, located events) and {@link org.armature.solver.timedomain.TransientMetrics}.
+ *
+ * <p>Methods. Reactive elements become companion models of a linear multistep formula
+ * ({@link org.armature.solver.timedomain.Companion}): backward Euler and the trapezoidal rule
+ * (G. Dahlquist, "A special stability problem for linear multistep methods", BIT 3, 1963) and the
+ * variable-step second-order backward differentiation formula (C. W. Gear, <i>Numerical Initial
+ * Value Problems in Ordinary Differential Equations</i>, Prentice-Hall, 1971). The one-step
+ * TR-BDF2 scheme (R. E. Bank, W. M. Coughran, W. Fichtner, E. H. Grosse, D. J. Rose, R. K. Smith,
+ * "Transient simulation of silicon devices and circuits", IEEE Trans. CAD 4, 1985) is the
+ * published alternative to the backward-Euler restart used here; it is not implemented. Each time
+ * point is solved by the solver package's Newton loop on the modified nodal equations (Ho, Ruehli
+ * and Brennan, IEEE Trans. CAS-22, 1975). The local truncation error is estimated from divided
+ * differences of the accepted history (CHECKS NM-9) and the step follows
+ * h_new = h·0.9·(tol/|E|)^(1/(p+1)) (NM-10). Every drive edge and every end of armature transit is
+ * a time point, and the integration restarts with backward Euler after it, because the trapezoidal
+ * rule's one-step factor tends to −1 for steps long against a time constant (NM-7). Relay pick-up
+ * and drop-out are located in time by Illinois regula falsi
+ * ({@link org.armature.solver.timedomain.EventLocator}).
+ *
+ * <p>Choosing the tolerances ({@link org.armature.solver.timedomain.StepOptions}): the relative
+ * tolerance (default 1e-3) applies to the largest magnitude each state has reached, so a decaying or
+ * ringing quantity is held to a fraction of its own amplitude. Local control bounds the error per
+ * step, not the accumulated phase of a long ring: for tens of ring periods of an unsuppressed coil
+ * use 1e-5 (about 1 % of the amplitude after 30 periods). Decay and release figures of suppressed
+ * coils are within 0.1 % of their closed forms at the default. The Newton test is kept a thousand
+ * times tighter than the error tolerance so iteration error does not pollute the estimate.
+ */
+package org.armature.solver.timedomain;
