@@ -386,7 +386,8 @@ public final class BaseNetworkSizing {
             pinBudget(pin, iPin, "pin current, largest", "Ipin = (V0 − 2·VBE) / (Rout + Rext + Rin)");
             double limit = pin.value("pinCurrentLimitAmps");
             if (iPin > limit) {
-                double add = o.series().roundUp(Math.max(1e-3, (nominal.openCircuitVolts() - vbe2) / limit - rin
+                double smallest = PartKind.RESISTOR.param("resistanceOhms").orElseThrow().min();
+                double add = o.series().roundUp(Math.max(smallest, (nominal.openCircuitVolts() - vbe2) / limit - rin
                         - nominal.outputResistanceOhms()));
                 suggestions.add(new Suggestion(r.inputResistorRef().orElse("R1"), "resistanceOhms", add,
                         o.series().tolerancePercent(), "input resistor", "smallest value keeping the pin within its limit"));

@@ -29,7 +29,7 @@ public record SizingOptions(BaseDriveRule baseDrive, ESeries series, double pull
 
     /** The defaults named above. */
     public static final SizingOptions DEFAULT = new SizingOptions(new BaseDriveRule.ForcedBeta(10), ESeries.E24,
-            0.1, 0.2, 1e-6, 100e-9, 0.01, 10, 0.7);
+            0.1, 0.2, 1e-6, 1e-7, 0.01, 10, 0.7);
 
     public SizingOptions {
         if (baseDrive == null) {

@@ -113,6 +113,10 @@ public final class StageChecks {
     }
 
     /** One check measured on one variant. */
+    /**
+     * @param margin how far inside the absolute limit, in the check's own terms (a ratio minus one, or
+     *     kelvin for the junction): only compared between variants of the same check, to find the worst
+     */
     record Measure(double value, double limit, CheckStatus status, double margin, String explanation) {
     }
 
@@ -334,7 +338,7 @@ public final class StageChecks {
             double max = q.value("tjMaxCelsius");
             double pass = max - o.thermalMarginKelvin();
             CheckStatus st = tj <= pass ? CheckStatus.PASS : tj <= max ? CheckStatus.WARN : CheckStatus.FAIL;
-            return Optional.of(new Measure(tj, pass, st, (max - tj) / Math.max(1e-9, max - ta),
+            return Optional.of(new Measure(tj, pass, st, max - tj,
                     "Tj = " + celsius(ta) + " + " + EngineeringNotation.format(p, Unit.WATT) + " × "
                             + EngineeringNotation.format(rth, Unit.KELVIN_PER_WATT) + " = " + celsius(tj) + "; Tj(max) "
                             + celsius(max) + "."));

@@ -46,6 +46,12 @@ public final class SuppressorAdvisor {
     /** A TVS's breakdown sits at least this factor above the supply's maximum (common practice). */
     public static final double TVS_HEADROOM = 1.1;
 
+    /** The lowest zener voltage proposed, 2.4 V: the bottom of the usual zener range (common practice). */
+    public static final double MIN_ZENER_VOLTS = 2.4;
+
+    /** Longest turn-off window run per candidate, 0.2 s: ten times a small relay's release. */
+    public static final double MAX_WINDOW_SECONDS = 0.2;
+
     private SuppressorAdvisor() {
     }
 
@@ -155,7 +161,7 @@ public final class SuppressorAdvisor {
         ESeries e24 = ESeries.E24;
         double vf = options.forwardDropVolts();
         double zener = Double.NaN;
-        if (clampMax - vf >= 1) {
+        if (clampMax - vf >= MIN_ZENER_VOLTS) {
             zener = e24.nearest(vs);
             if (zener + vf > clampMax) {
                 zener = e24.roundDown(clampMax - vf);
@@ -201,7 +207,7 @@ public final class SuppressorAdvisor {
             String method = "closed form (decay to drop-out through a constant clamp, before the armature moves)";
             if (options.useTransient()) {
                 try {
-                    double window = Math.min(0.2, Math.max(TransientOptions.DEFAULT_DURATION_SECONDS,
+                    double window = Math.min(MAX_WINDOW_SECONDS, Math.max(TransientOptions.DEFAULT_DURATION_SECONDS,
                             TransientOptions.DEFAULT_EDGE_SECONDS + 3 * release + 2 * k.value("releaseTimeSeconds")));
                     TransientMetrics m = TransientAnalysis.run(candidate, TransientOptions.turnOff().withDuration(window))
                             .metrics();

@@ -1,10 +1,28 @@
 /**
- * Judging a stage: the topology check, the sizing assistant, corner and Monte Carlo runs, and the
- * checks with their verdicts.
+ * Judging a stage: the topology check, the sizing assistant, corner and Monte Carlo runs, the
+ * checks with their verdicts, and the suppressor ranking.
  *
- * <p>{@link org.armature.analysis.TopologyCheck} recognises which of the four driver stages was
- * drawn from connectivity alone and explains problems with stable finding keys. Everything here
- * returns findings or result records and never throws for bad user data; a value the checks cannot
- * judge is reported, not guessed.
+ * <p>Entry points, each returning immutable results and never throwing for bad user data:
+ * <ul>
+ * <li>{@link org.armature.analysis.TopologyCheck#check} / {@link org.armature.analysis.TopologyCheck#analyse}:
+ *     which of the four driver stages was drawn ({@link org.armature.analysis.StageRoles}) and the
+ *     problems with stable {@code topology.*} keys, from connectivity alone;</li>
+ * <li>{@link org.armature.analysis.BaseNetworkSizing#size}: the drive network values and the
+ *     calculation as {@link org.armature.analysis.SizingStep}s, with the rules of
+ *     {@link org.armature.analysis.SizingOptions};</li>
+ * <li>{@link org.armature.analysis.Corners}: the toleranced parameters as
+ *     {@link org.armature.analysis.Factor}s, every corner and seeded Monte Carlo samples, each a
+ *     what-if copy of the document ({@link org.armature.analysis.Variant}); the solver never knows
+ *     about corners;</li>
+ * <li>{@link org.armature.analysis.StageChecks#run}: every check at its worst corner with the DC
+ *     engine (and the transient engine for the turn-off), the yield, and the safety cautions; ids in
+ *     the table of {@link org.armature.analysis.StageChecks};</li>
+ * <li>{@link org.armature.analysis.SuppressorAdvisor#rank}: suppressors by release time and peak
+ *     switch voltage, with zener and TVS voltages proposed.</li>
+ * </ul>
+ *
+ * <p>Device equations (copper coil law, gain temperature factor, the pin's Thevenin source) come
+ * from {@code devices}; operating points and waveforms from {@code solver}. Hand calculations here
+ * are the ones an engineer writes down, and each cites its CHECKS label.
  */
 package org.armature.analysis;

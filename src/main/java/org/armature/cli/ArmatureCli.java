@@ -35,7 +35,9 @@ public final class ArmatureCli {
     static final List<Supplier<Object>> SUBCOMMANDS = List.of(
             NewCommand::commandLine,
             SolveCommand::new,
-            SimulateCommand::new);
+            SimulateCommand::new,
+            CheckCommand::new,
+            SizeCommand::new);
 
     private ArmatureCli() {
     }

@@ -1,0 +1,261 @@
+package org.armature.cli;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.armature.analysis.CheckOptions;
+import org.armature.analysis.CheckReport;
+import org.armature.analysis.CheckResult;
+import org.armature.analysis.StageChecks;
+import org.armature.analysis.TopologyCheck;
+import org.armature.analysis.YieldResult;
+import org.armature.io.StageFiles;
+import org.armature.model.Conditions;
+import org.armature.model.Finding;
+import org.armature.model.Severity;
+import org.armature.model.Stage;
+import org.armature.model.Validator;
+import org.armature.solver.DcAnalysis;
+import org.armature.units.EngineeringNotation;
+import org.armature.units.Unit;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code armature check FILE}: the verdicts of {@link StageChecks} over every corner, with an
+ * optional seeded Monte Carlo yield. With {@code --json}, exactly one JSON object:
+ *
+ * <pre>{@code
+ * {"stage": "...",
+ *  "checks": [{"id": "relay.operates", "status": "pass|warn|fail", "value": 10.7, "limit": 12.4, "unit": "V",
+ *              "corner": {"supply": 10.8, "ambient": 60, ...}, "explanation": "...", "method": "...",
+ *              "refs": ["K1"]}, ...],
+ *  "yield": 0.97,
+ *  "monteCarlo": {"samples": 1000, "seed": 1, "passed": 970, "unsolved": 0, "culprits": {"supply": 30},
+ *                 "topCulprit": "supply"},
+ *  "findings": [{"severity": "warning", "key": "...", "ref": "...", "message": "..."}],
+ *  "corners": 256}
+ * }</pre>
+ * Values are SI; a value that is not finite (an unclamped coil) is {@code null}; {@code yield} and
+ * {@code monteCarlo} are {@code null} without {@code --monte-carlo}. A failing verdict is a result,
+ * not a command failure: the exit status is 0 whenever the checks ran.
+ */
+@Command(name = "check", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Check a stage at every corner of its tolerances: relay operates and releases, switch "
+                + "saturated, ratings, thermal; optionally a Monte Carlo yield. Reports the checks that ran; it "
+                + "never calls a design safe."})
+final class CheckCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "Stage file to check.")
+    Path file;
+
+    @Option(names = "--json", description = "Print exactly one JSON object (SI units) instead of a report.")
+    boolean json;
+
+    @Option(names = "--stage", paramLabel = "N|NAME",
+            description = "Which stage of the file: its number from 1, or its name (default 1).")
+    String stageSelector;
+
+    @Option(names = "--supply-tolerance", paramLabel = "PCT", converter = Percent.class,
+            description = "Coil supply tolerance, ± percent (default: as stored in the file).")
+    Double supplyTolerance;
+
+    @Option(names = "--ambient-min", paramLabel = "°C", converter = QuantityConverter.Celsius.class,
+            description = "Coldest ambient of the corners, °C (default: as stored).")
+    Double ambientMin;
+
+    @Option(names = "--ambient-max", paramLabel = "°C", converter = QuantityConverter.Celsius.class,
+            description = "Hottest ambient of the corners, °C (default: as stored).")
+    Double ambientMax;
+
+    @Option(names = "--monte-carlo", paramLabel = "N", description = "Monte Carlo samples for a yield estimate.")
+    Integer monteCarlo;
+
+    @Option(names = "--seed", paramLabel = "S", description = "Seed of the Monte Carlo sampler (default 1).")
+    long seed = 1;
+
+    @Option(names = "--release-time", paramLabel = "SECONDS", converter = Seconds.class,
+            description = "Release-time requirement (for example 10m), checked at turn-off.")
+    Double releaseTime;
+
+    @Option(names = "--no-transient",
+            description = "Judge the turn-off with the closed-form estimates instead of the transient engine.")
+    boolean noTransient;
+
+    private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    @Override
+    public Integer call() {
+        CommandLine cl = spec.commandLine();
+        if (monteCarlo != null && monteCarlo < 0) {
+            throw new CommandLine.ParameterException(cl, "--monte-carlo must not be negative.");
+        }
+        if (supplyTolerance != null && !(supplyTolerance >= 0 && supplyTolerance <= 50)) {
+            throw new CommandLine.ParameterException(cl, "--supply-tolerance must lie from 0 to 50 %.");
+        }
+        Stage stage = StageSelection.select(StageFiles.open(file), stageSelector, file, cl);
+        stage = withOverrides(stage, cl);
+        List<String> errors = Validator.validate(stage).stream()
+                .filter(f -> f.severity() == Severity.ERROR).map(Finding::message).toList();
+        if (!errors.isEmpty()) {
+            throw new CommandFailedException("Stage \"" + stage.name() + "\" cannot be checked: "
+                    + String.join(" ", errors));
+        }
+        CheckOptions options = CheckOptions.DEFAULT.withTransient(!noTransient);
+        if (monteCarlo != null) {
+            options = options.withMonteCarlo(monteCarlo, seed);
+        }
+        if (releaseTime != null) {
+            options = options.withReleaseTimeRequirement(releaseTime);
+        }
+        CheckReport report = StageChecks.run(stage, options, new DcAnalysis());
+        PrintWriter out = cl.getOut();
+        out.print(json ? json(stage, report) : text(stage, report));
+        out.flush();
+        return CommandLine.ExitCode.OK;
+    }
+
+    private Stage withOverrides(Stage stage, CommandLine cl) {
+        Stage s = stage;
+        if (supplyTolerance != null) {
+            String supply = TopologyCheck.recognise(s).flatMap(r -> r.coilSupplyRef())
+                    .orElseThrow(() -> new CommandFailedException("Stage \"" + stage.name()
+                            + "\" has no coil supply to give a tolerance."));
+            double tol = supplyTolerance;
+            s = s.updatePart(supply, p -> p.with("tolerancePercent", tol));
+        }
+        if (ambientMin != null || ambientMax != null) {
+            Conditions c = s.conditions();
+            double min = ambientMin != null ? ambientMin : c.ambientMinCelsius();
+            double max = ambientMax != null ? ambientMax : c.ambientMaxCelsius();
+            if (!(min <= max)) {
+                throw new CommandLine.ParameterException(cl, "--ambient-min must not exceed --ambient-max.");
+            }
+            double nominal = Math.min(max, Math.max(min, c.ambientCelsius()));
+            s = s.withConditions(new Conditions(c.pinHigh(), nominal, min, max));
+        }
+        return s;
+    }
+
+    /** The report as one JSON object (see the class comment). */
+    static String json(Stage stage, CheckReport report) {
+        ObjectNode root = JSON.createObjectNode();
+        root.put("stage", stage.name());
+        ArrayNode checks = root.putArray("checks");
+        for (CheckResult c : report.checks()) {
+            ObjectNode n = checks.addObject();
+            n.put("id", c.id());
+            n.put("status", c.status().word());
+            number(n, "value", c.value());
+            number(n, "limit", c.limit());
+            n.put("unit", c.unit().symbol());
+            ObjectNode corner = n.putObject("corner");
+            c.corner().forEach((k, v) -> number(corner, k, v));
+            n.put("explanation", c.explanation());
+            n.put("method", c.method());
+            ArrayNode refs = n.putArray("refs");
+            c.refs().forEach(refs::add);
+        }
+        if (report.yield().isPresent()) {
+            YieldResult y = report.yield().get();
+            root.put("yield", y.yield());
+            ObjectNode mc = root.putObject("monteCarlo");
+            mc.put("samples", y.samples());
+            mc.put("seed", y.seed());
+            mc.put("passed", y.passed());
+            mc.put("unsolved", y.unsolved());
+            ObjectNode culprits = mc.putObject("culprits");
+            y.culpritCounts().forEach(culprits::put);
+            if (y.topCulprit().isPresent()) {
+                mc.put("topCulprit", y.topCulprit().get());
+            } else {
+                mc.putNull("topCulprit");
+            }
+        } else {
+            root.putNull("yield");
+            root.putNull("monteCarlo");
+        }
+        ArrayNode findings = root.putArray("findings");
+        for (Finding f : report.findings()) {
+            ObjectNode n = findings.addObject();
+            n.put("severity", f.severity().name().toLowerCase(Locale.ROOT));
+            n.put("key", f.key());
+            n.put("ref", f.ref());
+            n.put("message", f.message());
+        }
+        root.put("corners", report.cornerCount());
+        try {
+            return JSON.writeValueAsString(root) + System.lineSeparator();
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("a tree of plain values always serialises", e);
+        }
+    }
+
+    private static void number(ObjectNode n, String key, double v) {
+        if (Double.isFinite(v)) {
+            n.put(key, v);
+        } else {
+            n.putNull(key);
+        }
+    }
+
+    /** The report as readable text. */
+    static String text(Stage stage, CheckReport report) {
+        StringBuilder b = new StringBuilder();
+        String nl = System.lineSeparator();
+        b.append("Checks of stage \"").append(stage.name()).append("\" over ").append(report.cornerCount())
+                .append(" corners").append(nl).append(nl);
+        for (CheckResult c : report.checks()) {
+            b.append(String.format(Locale.ROOT, "  %-4s  %-26s %12s  (limit %s)%n", c.status().name(), c.id(),
+                    EngineeringNotation.format(c.value(), c.unit()), EngineeringNotation.format(c.limit(), c.unit())));
+            b.append("        ").append(c.explanation()).append(nl);
+            if (!c.cornerText().isEmpty()) {
+                b.append("        at ").append(c.cornerText()).append(nl);
+            }
+        }
+        report.yield().ifPresent(y -> {
+            b.append(nl).append("Monte Carlo: ").append(y.passed()).append(" of ").append(y.samples())
+                    .append(" samples work (yield ").append(EngineeringNotation.format(100 * y.yield(), Unit.PERCENT))
+                    .append(", seed ").append(y.seed()).append(")");
+            y.topCulprit().ifPresent(t -> b.append("; most often behind a failure: ").append(t));
+            b.append('.').append(nl);
+        });
+        if (!report.findings().isEmpty()) {
+            b.append(nl).append("Findings").append(nl);
+            for (Finding f : report.findings()) {
+                b.append("  ").append(f.severity().name().toLowerCase(Locale.ROOT)).append(' ').append(f.key())
+                        .append(f.ref().isEmpty() ? "" : " (" + f.ref() + ")").append(": ").append(f.message()).append(nl);
+            }
+        }
+        b.append(nl).append("These are the checks that ran; they do not show that the design is safe.").append(nl);
+        return b.toString();
+    }
+
+    /** Percent, for annotated options. */
+    static final class Percent extends QuantityConverter {
+        Percent() {
+            super(Unit.PERCENT);
+        }
+    }
+
+    /** Seconds, for annotated options. */
+    static final class Seconds extends QuantityConverter {
+        Seconds() {
+            super(Unit.SECOND);
+        }
+    }
+}
