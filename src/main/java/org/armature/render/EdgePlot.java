@@ -26,7 +26,7 @@ import org.armature.solver.timedomain.Waveform;
 public final class EdgePlot {
 
     /** Left margin for the strip titles, pen units. */
-    public static final double TITLE_WIDTH = 118;
+    public static final double TITLE_WIDTH = 150;
     /** Right margin, pen units. */
     public static final double RIGHT_MARGIN = 14;
     /** Height of the time axis below the strips, pen units. */
@@ -105,7 +105,7 @@ public final class EdgePlot {
         List<Channel> ch = new ArrayList<>();
         w.trace(Waveform.COIL_CURRENT).ifPresent(t -> ch.add(new Channel("coil current", "A", 1, "A", t.values(), false)));
         switchVolts(stage, w).ifPresent(v -> ch.add(new Channel("switch voltage", "V", 1, "V", v, false)));
-        w.trace(Waveform.ARMATURE_POSITION).ifPresent(t -> ch.add(new Channel("armature travel", "m", 1e3, "mm",
+        w.trace(Waveform.ARMATURE_POSITION).ifPresent(t -> ch.add(new Channel("armature travel", "m", 1, "m",
                 t.values(), false)));
         w.trace(Waveform.CONTACT_STATE).ifPresent(t -> ch.add(new Channel("contacts", "", 1, "", t.values(), true)));
         return new Plot(w.time(), ch, w.events());
@@ -212,7 +212,8 @@ public final class EdgePlot {
                 pen.line(x0, zeroY, x1, zeroY, pal.gridMajor(), Stroke.solid(0.8));
             }
             pen.strokeRect(strip, pal.gridMajor().mix(pal.valueInk(), 0.3), frame);
-            pen.text(c.title(), 8, sy0 + 2, title, pal.labelInk());
+            pen.text(c.title(), 8, (sy0 + sy1) / 2, title.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.MIDDLE),
+                    pal.labelInk());
             String hiText = c.binary() ? "closed" : axisText(hi, c.displayUnit());
             String loText = c.binary() ? "open" : axisText(lo, c.displayUnit());
             pen.text(hiText, x0 - 6, sy0 + TEXT_SIZE * 0.6, small, pal.valueInk());
@@ -306,7 +307,7 @@ public final class EdgePlot {
             pen.line(x, y, x, y + 4, pal.valueInk(), Stroke.solid(1));
             pen.text(String.format(Locale.ROOT, "%.3g", ms), x, y + 5, tick, pal.valueInk());
         }
-        pen.text("ms", x0 - 6, y + 5, tick.anchored(TextStyle.HAnchor.END, TextStyle.VAnchor.TOP), pal.valueInk());
+        pen.text("time, ms", x0 - 22, y + 5, tick.anchored(TextStyle.HAnchor.END, TextStyle.VAnchor.TOP), pal.valueInk());
     }
 
     private static void cursor(Pen pen, Plot plot, double t, double x0, double x1, double top, double bottom,

@@ -17,6 +17,11 @@ public final class ArmatureApp extends Application {
     /** Quiet time after the last edit before the checks and edges run again, ms. */
     public static final long ANALYSIS_SETTLE_MILLIS = 350;
 
+    /** System property choosing the theme at start-up: {@code dark} or anything else for light. */
+    public static final String THEME_PROPERTY = "armature.theme";
+    /** System property that opens the edges drawer at start-up when {@code true}. */
+    public static final String EDGES_PROPERTY = "armature.edges";
+
     private ExecutorService solver;
     private ExecutorService analyses;
 
@@ -48,6 +53,13 @@ public final class ArmatureApp extends Application {
         title.run();
         vm.fileProperty().addListener((o, a, b) -> title.run());
         vm.dirtyProperty().addListener((o, a, b) -> title.run());
+        // start-up options for looking at the window (screenshots, demonstrations)
+        if ("dark".equals(System.getProperty(THEME_PROPERTY))) {
+            w.setDark(true);
+        }
+        if (Boolean.getBoolean(EDGES_PROPERTY)) {
+            w.edgesDrawer().setExpanded(true);
+        }
         primary.show();
         Platform.runLater(w.canvas()::fit);
     }

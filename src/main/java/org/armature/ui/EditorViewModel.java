@@ -63,6 +63,8 @@ public final class EditorViewModel {
     private Annotations rawAnnotations = Annotations.NONE;
     private List<Finding> validation = List.of();
     private List<Finding> solveFindings = List.of();
+    private Stage coilSupplyOf;
+    private Optional<String> coilSupplyRef = Optional.empty();
 
     private final ReadOnlyObjectWrapper<Stage> stage = new ReadOnlyObjectWrapper<>(this, "stage");
     private final ReadOnlyObjectWrapper<Optional<Stage>> preview = new ReadOnlyObjectWrapper<>(this, "preview", Optional.empty());
@@ -432,8 +434,12 @@ public final class EditorViewModel {
      */
     public Optional<Part> coilSupply() {
         Stage st = editor.stage();
-        Optional<String> ref = TopologyCheck.recognise(st).flatMap(StageRoles::coilSupplyRef);
-        return ref.flatMap(st::part).or(() -> st.firstOfKind(PartKind.SUPPLY));
+        if (coilSupplyOf != st) {
+            Optional<String> ref = TopologyCheck.recognise(st).flatMap(StageRoles::coilSupplyRef);
+            coilSupplyRef = ref.or(() -> st.firstOfKind(PartKind.SUPPLY).map(Part::ref));
+            coilSupplyOf = st;
+        }
+        return coilSupplyRef.flatMap(st::part);
     }
 
     /** Sets the coil supply's voltage; slider drags merge into one step. No supply: nothing. */

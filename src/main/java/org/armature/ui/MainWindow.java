@@ -59,6 +59,7 @@ public final class MainWindow {
     private final SchematicCanvas canvas;
     private final PartSheet sheet;
     private final VerdictsPane verdicts;
+    private final PartPalette palette;
     private final EdgesPane edges;
     private final TitledPane edgesDrawer;
     private final MenuBar menuBar = new MenuBar();
@@ -85,7 +86,7 @@ public final class MainWindow {
         root.getStyleClass().add("armature-root");
         VBox top = new VBox(buildMenus(), toolBar());
         root.setTop(top);
-        PartPalette palette = new PartPalette(vm, Palette.LIGHT);
+        palette = new PartPalette(vm, Palette.LIGHT);
         palette.setPrefWidth(64);
         root.setLeft(palette);
         root.setCenter(canvas);
@@ -145,6 +146,7 @@ public final class MainWindow {
         }
         canvas.setPalette(dark ? Palette.DARK : Palette.LIGHT);
         edges.setPalette(dark ? Palette.DARK : Palette.LIGHT);
+        palette.setColours(dark ? Palette.DARK : Palette.LIGHT);
     }
 
     private static String css(String resource) {
@@ -294,6 +296,9 @@ public final class MainWindow {
         pin.setTooltip(new Tooltip("Drive pin state for the operating point"));
         Runnable syncPin = () -> {
             boolean high = vm.stage().conditions().pinHigh();
+            if (pin.getGraphic() != null && pin.isSelected() == high) {
+                return;
+            }
             pin.setSelected(high);
             pin.setText(high ? "Pin HIGH" : "Pin LOW");
             pin.setGraphic(new FontIcon(high ? "mdi2t-toggle-switch" : "mdi2t-toggle-switch-off-outline"));
@@ -393,6 +398,7 @@ public final class MainWindow {
         ScrollPane verdictScroll = new ScrollPane(verdicts);
         verdictScroll.setFitToWidth(true);
         verdictScroll.setPadding(new Insets(6));
+        verdictScroll.setPrefViewportHeight(340);
         TitledPane verdictPane = new TitledPane("Verdicts", verdictScroll);
         verdictPane.setId("verdicts-pane");
         VBox box = new VBox(sheetPane, verdictPane);

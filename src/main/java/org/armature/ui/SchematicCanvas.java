@@ -72,6 +72,7 @@ public final class SchematicCanvas extends Region {
 
     private Optional<String[]> valueDrag = Optional.empty();
     private double valueDragY;
+    private long lastRepaintNanos;
     private java.util.function.LongConsumer repainted = g -> { };
 
     private Gesture gesture = Gesture.NONE;
@@ -92,9 +93,22 @@ public final class SchematicCanvas extends Region {
         getChildren().addAll(gridLayer, drawingLayer, overlayLayer);
         setFocusTraversable(true);
         setMinSize(200, 200);
-        vm.stageProperty().addListener((o, a, b) -> redrawDrawing());
+        vm.stageProperty().addListener((o, a, b) -> {
+            // a change of values only (a slider step) is drawn with its readouts, which follow at once:
+            // one repaint per edit instead of two
+            if (a == null || b == null || !sameDrawing(a, b)) {
+                redrawDrawing();
+            }
+        });
         vm.previewProperty().addListener((o, a, b) -> redrawDrawing());
-        vm.annotationsProperty().addListener((o, a, b) -> redrawDrawing());
+        // a published solve sets the annotations, then the generation: draw once, on the generation;
+        // a View toggle changes only the annotations
+        vm.annotationsProperty().addListener((o, a, b) -> {
+            if (vm.shownGenerationProperty().get() == vm.requestedGeneration()) {
+                redrawDrawing();
+            }
+        });
+        vm.shownGenerationProperty().addListener((o, a, b) -> redrawDrawing());
         vm.selectionProperty().addListener((o, a, b) -> redrawOverlay());
         addEventHandler(MouseEvent.MOUSE_PRESSED, this::pressed);
         addEventHandler(MouseEvent.MOUSE_DRAGGED, this::dragged);
@@ -102,6 +116,22 @@ public final class SchematicCanvas extends Region {
         addEventHandler(MouseEvent.MOUSE_MOVED, this::moved);
         addEventHandler(ScrollEvent.SCROLL, this::scrolled);
         addEventHandler(KeyEvent.KEY_PRESSED, this::key);
+    }
+
+    /** True when two stages draw the same but for values and conditions (same parts, places and wires). */
+    static boolean sameDrawing(Stage a, Stage b) {
+        if (a.parts().size() != b.parts().size() || !a.wires().equals(b.wires())
+                || !a.testPoints().equals(b.testPoints())) {
+            return false;
+        }
+        for (int i = 0; i < a.parts().size(); i++) {
+            var pa = a.parts().get(i);
+            var pb = b.parts().get(i);
+            if (!pa.ref().equals(pb.ref()) || pa.kind() != pb.kind() || !pa.placement().equals(pb.placement())) {
+                return false;
+            }
+        }
+        return true;
     }
 
     // ------------------------------------------------------------------ view
@@ -231,11 +261,18 @@ public final class SchematicCanvas extends Region {
         gridDirty = false;
     }
 
+    /** Time the last repaint of the drawing layer took on the FX thread, ns (issuing the draw calls). */
+    public long lastRepaintNanos() {
+        return lastRepaintNanos;
+    }
+
     private void redrawDrawing() {
+        long start = System.nanoTime();
         GraphicsContext g = drawingLayer.getGraphicsContext2D();
         g.clearRect(0, 0, drawingLayer.getWidth(), drawingLayer.getHeight());
         lastLayout = SchematicRenderer.draw(vm.shownStage(), vm.annotationsProperty().get(),
                 options(EnumSet.of(Layer.WIRES, Layer.PARTS, Layer.LABELS, Layer.ANNOTATIONS)), new FxPen(g, view()));
+        lastRepaintNanos = System.nanoTime() - start;
         repainted.accept(vm.shownGenerationProperty().get());
     }
 
