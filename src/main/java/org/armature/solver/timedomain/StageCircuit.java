@@ -184,14 +184,11 @@ final class StageCircuit {
         List<PartNetwork> chain = suppressorParts(net, a1, a2);
         List<Probe> powers = new ArrayList<>();
         for (PartNetwork p : chain) {
-            TransientCapacitor cap = caps.get(p.ref());
-            if (cap != null) {
-                int pa = p.pinNodes().get("a");
-                int pb = p.pinNodes().get("b");
-                powers.add(new Probe("", "W", x -> (x.voltage(pa) - x.voltage(pb)) * cap.current(x)));
-            } else {
-                powers.add(new Probe("", "W", x -> p.read(x).powerWatts()));
-            }
+            List<Integer> nodes = List.copyOf(p.pinNodes().values());
+            int pa = nodes.get(0);
+            int pb = nodes.get(1);
+            java.util.function.ToDoubleFunction<org.armature.netlist.Solution> i = twoTerminalCurrent(p, caps);
+            powers.add(new Probe("", "W", x -> (x.voltage(pa) - x.voltage(pb)) * i.applyAsDouble(x)));
         }
         if (!chain.isEmpty()) {
             c.suppressorPower = new Probe("suppressor power", "W", x -> {
@@ -201,23 +198,45 @@ final class StageCircuit {
                 }
                 return sum;
             });
-            PartNetwork first = chain.get(0);
-            TransientCapacitor cap = caps.get(first.ref());
-            String pin = first.part().kind().pins().get(0).name();
-            c.suppressorCurrent = new Probe("suppressor current", "A",
-                    x -> cap != null ? cap.current(x) : first.read(x).pinCurrents().get(pin));
+            c.suppressorCurrent = new Probe("suppressor current", "A", twoTerminalCurrent(chain.get(0), caps));
         }
         // part currents of two-terminal parts, first pin to second
         for (PartNetwork p : net.parts()) {
             PartKind k = p.part().kind();
             if (k == PartKind.RESISTOR || k == PartKind.DIODE || k == PartKind.ZENER || k == PartKind.TVS
                     || k == PartKind.LED || k == PartKind.LOAD || k == PartKind.CAPACITOR) {
-                TransientCapacitor cap = caps.get(p.ref());
-                String pin = k.pins().get(0).name();
-                c.probes.add(new Probe("I(" + p.ref() + ")", "A",
-                        x -> cap != null ? cap.current(x) : p.read(x).pinCurrents().get(pin)));
+                c.probes.add(new Probe("I(" + p.ref() + ")", "A", twoTerminalCurrent(p, caps)));
             }
         }
+    }
+
+    /**
+     * Current from the first pin to the second of a two-terminal part, read straight from its
+     * element (a resistor, or the junction of a diode whose series resistance carries the same
+     * current); a full {@link PartNetwork#read} for anything else. Part readings build maps, and
+     * at every time point that cost more than the solve.
+     */
+    private static java.util.function.ToDoubleFunction<org.armature.netlist.Solution> twoTerminalCurrent(
+            PartNetwork p, Map<String, TransientCapacitor> caps) {
+        TransientCapacitor cap = caps.get(p.ref());
+        if (cap != null) {
+            return cap::current;
+        }
+        List<Element> els = p.elements();
+        for (Element e : els) {
+            if (e instanceof org.armature.netlist.JunctionElement j && j.terminals()[0] != j.terminals()[1]) {
+                int first = p.pinNodes().get(p.part().kind().pins().get(0).name());
+                // the junction's anode is on the first pin's side for a diode, zener, LED and TVS
+                boolean forward = j.terminals()[0] == first || els.size() > 1;
+                return forward ? j::current : x -> -j.current(x);
+            }
+        }
+        if (els.size() == 1 && els.get(0) instanceof Resistor r) {
+            boolean forward = r.terminals()[0] == p.pinNodes().get(p.part().kind().pins().get(0).name());
+            return forward ? r::current : x -> -r.current(x);
+        }
+        String pin = p.part().kind().pins().get(0).name();
+        return x -> p.read(x).pinCurrents().get(pin);
     }
 
     /**
