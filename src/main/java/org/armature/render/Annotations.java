@@ -86,8 +86,15 @@ public record Annotations(List<NodeVoltage> voltages, List<BranchCurrent> curren
      * @param coilAmps present coil current (magnitude)
      * @param dropOutAmps current below which the relay is sure to release
      * @param pickUpAmps current above which the relay is sure to operate, above dropOutAmps
+     * @param operated the contacts' state as solved (between the thresholds it depends on history)
      */
-    public record RelayGauge(String ref, double coilAmps, double dropOutAmps, double pickUpAmps) {
+    public record RelayGauge(String ref, double coilAmps, double dropOutAmps, double pickUpAmps, boolean operated) {
+
+        /** A gauge whose contact state follows from the current alone (operated at or above pick-up). */
+        public RelayGauge(String ref, double coilAmps, double dropOutAmps, double pickUpAmps) {
+            this(ref, coilAmps, dropOutAmps, pickUpAmps, coilAmps >= pickUpAmps);
+        }
+
         public RelayGauge {
             if (ref == null) {
                 throw new IllegalArgumentException("ref must not be null");

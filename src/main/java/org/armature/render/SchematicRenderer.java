@@ -59,7 +59,7 @@ public final class SchematicRenderer {
     private static final TextStyle DESIGNATOR = new TextStyle(DESIGNATOR_SIZE, true, TextStyle.HAnchor.START, TextStyle.VAnchor.TOP);
     private static final TextStyle VALUE = new TextStyle(VALUE_SIZE, false, TextStyle.HAnchor.START, TextStyle.VAnchor.TOP);
     private static final TextStyle TAG = new TextStyle(TAG_SIZE, false, TextStyle.HAnchor.MIDDLE, TextStyle.VAnchor.MIDDLE);
-    private static final double GAUGE_WIDTH = 4.6;
+    private static final double GAUGE_WIDTH = 5.8;
     private static final double GAUGE_HEIGHT = 1.75;
     private static final double MARKER_RADIUS = 0.27;
 
@@ -557,6 +557,9 @@ public final class SchematicRenderer {
         TextStyle small = new TextStyle(0.36, false, TextStyle.HAnchor.MIDDLE, TextStyle.VAnchor.TOP);
         pen.text(gaugeText(g), b.minX() + 0.25, b.minY() + 0.1,
                 new TextStyle(0.44, true, TextStyle.HAnchor.START, TextStyle.VAnchor.TOP), pal.current());
+        pen.text(g.operated() ? "operated" : "released", b.maxX() - 0.25, b.minY() + 0.12,
+                new TextStyle(0.4, true, TextStyle.HAnchor.END, TextStyle.VAnchor.TOP),
+                g.operated() ? pal.ok() : pal.valueInk());
         double xd = x0 + (x1 - x0) * g.dropOutAmps() / full;
         double xp = x0 + (x1 - x0) * g.pickUpAmps() / full;
         double xc = x0 + (x1 - x0) * Math.min(1, g.coilAmps() / full);

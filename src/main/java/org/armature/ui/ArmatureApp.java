@@ -9,11 +9,21 @@ import org.armature.model.Templates;
 
 /**
  * The desktop application: opens the editor window on the default example stage, with no file.
- * Readouts are computed on one background thread and published on the FX thread.
+ * Readouts are computed by the DC engine on one background thread and published on the FX thread;
+ * the checks and edges run on a second, low-priority thread once edits settle.
  */
 public final class ArmatureApp extends Application {
 
+    /** Quiet time after the last edit before the checks and edges run again, ms. */
+    public static final long ANALYSIS_SETTLE_MILLIS = 350;
+
+    /** System property choosing the theme at start-up: {@code dark} or anything else for light. */
+    public static final String THEME_PROPERTY = "armature.theme";
+    /** System property that opens the edges drawer at start-up when {@code true}. */
+    public static final String EDGES_PROPERTY = "armature.edges";
+
     private ExecutorService solver;
+    private ExecutorService analyses;
 
     /** Starts the JavaFX application (the jar's launcher calls this by reflection). */
     public static void main(String[] args) {
@@ -27,14 +37,29 @@ public final class ArmatureApp extends Application {
             t.setDaemon(true);
             return t;
         });
-        EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, ReadoutSource.NONE,
-                solver, Platform::runLater);
+        analyses = Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, "armature-analyses");
+            t.setDaemon(true);
+            t.setPriority(Thread.MIN_PRIORITY);
+            return t;
+        });
+        Analyses slow = new Analyses(Analyses.engineVerdicts(), Analyses.engineEdges(), analyses,
+                ANALYSIS_SETTLE_MILLIS);
+        EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, new EngineReadouts(),
+                solver, Platform::runLater, slow);
         MainWindow w = new MainWindow(vm, new RecentFiles());
         primary.setScene(w.scene(1560, 960));
         Runnable title = () -> primary.setTitle("Armature — " + vm.fileName() + (vm.dirtyProperty().get() ? " ●" : ""));
         title.run();
         vm.fileProperty().addListener((o, a, b) -> title.run());
         vm.dirtyProperty().addListener((o, a, b) -> title.run());
+        // start-up options for looking at the window (screenshots, demonstrations)
+        if ("dark".equals(System.getProperty(THEME_PROPERTY))) {
+            w.setDark(true);
+        }
+        if (Boolean.getBoolean(EDGES_PROPERTY)) {
+            w.edgesDrawer().setExpanded(true);
+        }
         primary.show();
         Platform.runLater(w.canvas()::fit);
     }
@@ -43,6 +68,9 @@ public final class ArmatureApp extends Application {
     public void stop() {
         if (solver != null) {
             solver.shutdownNow();
+        }
+        if (analyses != null) {
+            analyses.shutdownNow();
         }
     }
 }

@@ -1,6 +1,7 @@
 package org.armature.ui;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Optional;
@@ -12,11 +13,16 @@ import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
+import org.armature.analysis.StageRoles;
+import org.armature.analysis.Suggestion;
+import org.armature.analysis.TopologyCheck;
 import org.armature.io.StageFileException;
 import org.armature.model.Finding;
 import org.armature.model.GridPoint;
 import org.armature.model.HighSideDrive;
+import org.armature.model.Part;
 import org.armature.model.PartKind;
+import org.armature.model.Severity;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
 import org.armature.model.StageTemplate;
@@ -32,9 +38,12 @@ import org.armature.ui.edit.Editor;
  * The editor window's state and actions. Views bind to the read-only properties and call the action
  * methods; every document change goes through the {@link Editor}'s commands.
  *
- * <p>Readouts are computed by the {@link ReadoutSource} on the injected solve executor; the result is
- * handed back through the FX executor and dropped if the stage changed meanwhile. The application
- * passes a background executor and {@code Platform::runLater}; tests pass same-thread executors.
+ * <p>Readouts are computed by the {@link ReadoutSource} on the injected solve executor, through a
+ * {@link LatestWins}: while one solve runs, further edits only replace the one waiting, so a slider
+ * drag never builds a backlog and the FX thread never waits. The result is handed back through the
+ * FX executor and dropped if the stage changed meanwhile. The verdicts and edges ({@link Analyses})
+ * run the same way on their own executor, debounced. The application passes background executors
+ * and {@code Platform::runLater}; tests pass same-thread or hand-stepped executors.
  */
 public final class EditorViewModel {
 
@@ -44,10 +53,18 @@ public final class EditorViewModel {
     private final Editor editor;
     private final DocumentStore store;
     private final ReadoutSource readouts;
-    private final Executor solveExecutor;
     private final Executor fxExecutor;
+    private final LatestWins solves;
+    private final Analyses analyses;
+    private final LatestWins verdictRuns;
+    private final LatestWins edgeRuns;
     private StageDocument document;
     private long generation;
+    private Annotations rawAnnotations = Annotations.NONE;
+    private List<Finding> validation = List.of();
+    private List<Finding> solveFindings = List.of();
+    private Stage coilSupplyOf;
+    private Optional<String> coilSupplyRef = Optional.empty();
 
     private final ReadOnlyObjectWrapper<Stage> stage = new ReadOnlyObjectWrapper<>(this, "stage");
     private final ReadOnlyObjectWrapper<Optional<Stage>> preview = new ReadOnlyObjectWrapper<>(this, "preview", Optional.empty());
@@ -65,6 +82,13 @@ public final class EditorViewModel {
     private final ReadOnlyStringWrapper redoLabel = new ReadOnlyStringWrapper(this, "redoLabel", "Redo");
     private final ReadOnlyStringWrapper solverStatus = new ReadOnlyStringWrapper(this, "solverStatus", "");
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "");
+    private final javafx.beans.property.ReadOnlyLongWrapper shownGeneration =
+            new javafx.beans.property.ReadOnlyLongWrapper(this, "shownGeneration", 0);
+    private final ReadOnlyObjectWrapper<Analyses.Verdicts> verdicts =
+            new ReadOnlyObjectWrapper<>(this, "verdicts", Analyses.Verdicts.NONE);
+    private final ReadOnlyObjectWrapper<Analyses.Edges> edges = new ReadOnlyObjectWrapper<>(this, "edges", Analyses.Edges.NONE);
+    private final ReadOnlyBooleanWrapper verdictsRunning = new ReadOnlyBooleanWrapper(this, "verdictsRunning");
+    private final ReadOnlyBooleanWrapper edgesRunning = new ReadOnlyBooleanWrapper(this, "edgesRunning");
     private Editor.Clip clipboard = new Editor.Clip(List.of(), List.of());
 
     /**
@@ -76,11 +100,27 @@ public final class EditorViewModel {
      */
     public EditorViewModel(Stage initial, DocumentStore store, ReadoutSource readouts, Executor solveExecutor,
                            Executor fxExecutor) {
+        this(initial, store, readouts, solveExecutor, fxExecutor, Analyses.NONE);
+    }
+
+    /**
+     * @param initial the stage shown first (untitled, clean)
+     * @param store stage file access
+     * @param readouts where readouts come from
+     * @param solveExecutor runs {@link ReadoutSource#compute}; never the FX thread in the application
+     * @param fxExecutor publishes results on the FX thread ({@code Platform::runLater})
+     * @param analyses verdicts and edges, run after edits settle; {@link Analyses#NONE} for none
+     */
+    public EditorViewModel(Stage initial, DocumentStore store, ReadoutSource readouts, Executor solveExecutor,
+                           Executor fxExecutor, Analyses analyses) {
         this.editor = new Editor(initial);
         this.store = store;
         this.readouts = readouts;
-        this.solveExecutor = solveExecutor;
         this.fxExecutor = fxExecutor;
+        this.solves = new LatestWins(solveExecutor);
+        this.analyses = analyses;
+        this.verdictRuns = new LatestWins(analyses.executor(), analyses.settleMillis());
+        this.edgeRuns = new LatestWins(analyses.executor(), analyses.settleMillis());
         this.document = StageDocument.of(initial);
         refresh();
     }
@@ -170,6 +210,40 @@ public final class EditorViewModel {
     /** The last message for the user (a failed save, an export written). */
     public ReadOnlyStringProperty messageProperty() {
         return message.getReadOnlyProperty();
+    }
+
+    /**
+     * The generation of the readouts shown: each edit (and each readout toggle) makes a new one; the
+     * annotations property carries those of this generation. Latency probes compare it with
+     * {@link #requestedGeneration()}.
+     */
+    public javafx.beans.property.ReadOnlyLongProperty shownGenerationProperty() {
+        return shownGeneration.getReadOnlyProperty();
+    }
+
+    /** The generation of the last solve asked for. */
+    public long requestedGeneration() {
+        return generation;
+    }
+
+    /** The verdicts of the present stage (the last finished run; may lag behind edits). */
+    public ReadOnlyObjectProperty<Analyses.Verdicts> verdictsProperty() {
+        return verdicts.getReadOnlyProperty();
+    }
+
+    /** The edges of the present stage (the last finished run; may lag behind edits). */
+    public ReadOnlyObjectProperty<Analyses.Edges> edgesProperty() {
+        return edges.getReadOnlyProperty();
+    }
+
+    /** True while the checks of a newer stage are being run. */
+    public ReadOnlyBooleanProperty verdictsRunningProperty() {
+        return verdictsRunning.getReadOnlyProperty();
+    }
+
+    /** True while the edges of a newer stage are being run. */
+    public ReadOnlyBooleanProperty edgesRunningProperty() {
+        return edgesRunning.getReadOnlyProperty();
     }
 
     /** The file name for the title and status bar ("untitled" before the first save). */
@@ -355,6 +429,39 @@ public final class EditorViewModel {
         refresh();
     }
 
+    /**
+     * The coil supply: the supply the topology check finds feeding the coil, else the first supply.
+     */
+    public Optional<Part> coilSupply() {
+        Stage st = editor.stage();
+        if (coilSupplyOf != st) {
+            Optional<String> ref = TopologyCheck.recognise(st).flatMap(StageRoles::coilSupplyRef);
+            coilSupplyRef = ref.or(() -> st.firstOfKind(PartKind.SUPPLY).map(Part::ref));
+            coilSupplyOf = st;
+        }
+        return coilSupplyRef.flatMap(st::part);
+    }
+
+    /** Sets the coil supply's voltage; slider drags merge into one step. No supply: nothing. */
+    public void setSupplyVolts(double volts) {
+        coilSupply().ifPresent(p -> {
+            editor.setValueMerging(p.ref(), "volts", volts, "supply:" + p.ref());
+            refresh();
+        });
+    }
+
+    /** Writes the sizing assistant's proposals back as one undoable step. */
+    public void applySuggestions(List<Suggestion> suggestions) {
+        List<Editor.ValueChange> changes = new ArrayList<>();
+        for (Suggestion s : suggestions) {
+            if (editor.stage().part(s.ref()).isPresent()) {
+                changes.add(new Editor.ValueChange(s.ref(), s.paramKey(), s.value()));
+            }
+        }
+        editor.setValues("Size base network", changes);
+        refresh();
+    }
+
     /** Executes a prepared command. */
     public void execute(EditCommand c) {
         editor.execute(c);
@@ -371,7 +478,7 @@ public final class EditorViewModel {
             s.remove(kind);
         }
         shownReadouts.set(Set.copyOf(s));
-        requestReadouts();
+        annotations.set(filter(rawAnnotations, shownReadouts.get()));
     }
 
     /** Sets the user message (views report export results through it). */
@@ -382,6 +489,7 @@ public final class EditorViewModel {
     // ------------------------------------------------------------------ internals
 
     private void refresh() {
+        Stage before = stage.get();
         stage.set(editor.stage());
         selection.set(editor.selection());
         dirty.set(editor.history().isDirty());
@@ -389,22 +497,71 @@ public final class EditorViewModel {
         canRedo.set(editor.history().canRedo());
         undoLabel.set(editor.history().undoLabel().map(l -> "Undo " + l).orElse("Undo"));
         redoLabel.set(editor.history().redoLabel().map(l -> "Redo " + l).orElse("Redo"));
-        findings.set(Validator.validate(editor.stage()));
-        requestReadouts();
+        validation = Validator.validate(editor.stage());
+        publishFindings();
+        if (before == null || !before.equals(editor.stage())) {
+            requestReadouts();
+            requestAnalyses();
+        }
+    }
+
+    private void publishFindings() {
+        List<Finding> all = new ArrayList<>(validation);
+        for (Finding f : solveFindings) {
+            if (!all.contains(f)) {
+                all.add(f);
+            }
+        }
+        findings.set(List.copyOf(all));
     }
 
     private void requestReadouts() {
         long gen = ++generation;
         Stage s = editor.stage();
-        Set<ReadoutKind> shown = shownReadouts.get();
-        solverStatus.set("Solving…");
-        solveExecutor.execute(() -> {
+        if (rawAnnotations.isEmpty()) {
+            solverStatus.set("Solving…");
+        }
+        solves.submit(() -> {
             ReadoutSource.Readouts r = readouts.compute(s);
-            Annotations filtered = filter(r.annotations(), shown);
             fxExecutor.execute(() -> {
                 if (gen == generation) {
-                    annotations.set(filtered);
+                    rawAnnotations = r.annotations();
+                    solveFindings = r.findings();
+                    annotations.set(filter(rawAnnotations, shownReadouts.get()));
                     solverStatus.set(r.status());
+                    publishFindings();
+                    shownGeneration.set(gen);
+                }
+            });
+        });
+    }
+
+    private void requestAnalyses() {
+        if (!analyses.active()) {
+            return;
+        }
+        long gen = generation;
+        Stage s = editor.stage();
+        boolean solvable = validation.stream().noneMatch(f -> f.severity() == Severity.ERROR);
+        verdictsRunning.set(true);
+        edgesRunning.set(true);
+        verdictRuns.submit(() -> {
+            Analyses.Verdicts v = solvable ? analyses.verdicts().compute(s)
+                    : new Analyses.Verdicts(Optional.empty(), "Not judged: the stage has errors");
+            fxExecutor.execute(() -> {
+                if (gen == generation) {
+                    verdicts.set(v);
+                    verdictsRunning.set(false);
+                }
+            });
+        });
+        edgeRuns.submit(() -> {
+            Analyses.Edges e = solvable ? analyses.edges().compute(s)
+                    : new Analyses.Edges(Optional.empty(), Optional.empty(), "Not run: the stage has errors");
+            fxExecutor.execute(() -> {
+                if (gen == generation) {
+                    edges.set(e);
+                    edgesRunning.set(false);
                 }
             });
         });

@@ -77,7 +77,13 @@ public final class FxPen extends DevicePen {
 
     @Override
     protected void deviceText(String text, double x, double y, TextStyle style, Colour colour) {
-        gc.setFont(Font.font(FONT_FAMILY, style.bold() ? FontWeight.BOLD : FontWeight.NORMAL, style.size()));
+        // a font lookup per label costs more than drawing it; a repaint uses a handful of sizes
+        Font font = fonts.computeIfAbsent(style.bold() ? -style.size() : style.size(),
+                k -> Font.font(FONT_FAMILY, style.bold() ? FontWeight.BOLD : FontWeight.NORMAL, style.size()));
+        if (font != lastFont) {
+            gc.setFont(font);
+            lastFont = font;
+        }
         gc.setFill(fx(colour));
         gc.setTextAlign(switch (style.hAnchor()) {
             case START -> TextAlignment.LEFT;
@@ -92,6 +98,9 @@ public final class FxPen extends DevicePen {
         });
         gc.fillText(text, x, y);
     }
+
+    private final java.util.Map<Double, Font> fonts = new java.util.HashMap<>();
+    private Font lastFont;
 
     private void setStroke(Colour colour, Stroke stroke) {
         gc.setStroke(fx(colour));

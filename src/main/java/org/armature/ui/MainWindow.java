@@ -58,12 +58,21 @@ public final class MainWindow {
     private final BorderPane root = new BorderPane();
     private final SchematicCanvas canvas;
     private final PartSheet sheet;
-    private final FindingsPane findings;
+    private final VerdictsPane verdicts;
+    private final PartPalette palette;
+    private final EdgesPane edges;
+    private final TitledPane edgesDrawer;
     private final MenuBar menuBar = new MenuBar();
     private final RecentFiles recent;
     private final Menu recentMenu = new Menu("Recent");
     private Scene scene;
     private boolean syncingAmbient;
+    private boolean syncingSupply;
+
+    /** Range of the supply slider, V: a 3.3 V rail up to a 36 V one (the stages this tool is for). */
+    public static final double SUPPLY_MIN_VOLTS = 3;
+    /** Range of the supply slider, V. */
+    public static final double SUPPLY_MAX_VOLTS = 36;
 
     /** Builds the window's content around a view model. */
     public MainWindow(EditorViewModel vm, RecentFiles recent) {
@@ -71,16 +80,36 @@ public final class MainWindow {
         this.recent = recent;
         this.canvas = new SchematicCanvas(vm);
         this.sheet = new PartSheet(vm);
-        this.findings = new FindingsPane(vm);
+        this.verdicts = new VerdictsPane(vm);
+        this.edges = new EdgesPane(vm);
+        this.edgesDrawer = new TitledPane("Edges: turn-on and turn-off", edges);
         root.getStyleClass().add("armature-root");
         VBox top = new VBox(buildMenus(), toolBar());
         root.setTop(top);
-        PartPalette palette = new PartPalette(vm, Palette.LIGHT);
+        palette = new PartPalette(vm, Palette.LIGHT);
         palette.setPrefWidth(64);
         root.setLeft(palette);
         root.setCenter(canvas);
         root.setRight(rightSide());
-        root.setBottom(statusBar());
+        edgesDrawer.setId("edges-drawer");
+        edgesDrawer.setExpanded(false);
+        edges.setPrefHeight(270);
+        root.setBottom(new VBox(edgesDrawer, statusBar()));
+    }
+
+    /** The verdicts panel. */
+    public VerdictsPane verdicts() {
+        return verdicts;
+    }
+
+    /** The edges drawer's content. */
+    public EdgesPane edges() {
+        return edges;
+    }
+
+    /** The edges drawer (collapsible). */
+    public TitledPane edgesDrawer() {
+        return edgesDrawer;
     }
 
     /** A scene of the window with the light theme. */
@@ -116,6 +145,8 @@ public final class MainWindow {
             scene.getStylesheets().setAll(css(dark ? DARK_CSS : LIGHT_CSS));
         }
         canvas.setPalette(dark ? Palette.DARK : Palette.LIGHT);
+        edges.setPalette(dark ? Palette.DARK : Palette.LIGHT);
+        palette.setColours(dark ? Palette.DARK : Palette.LIGHT);
     }
 
     private static String css(String resource) {
@@ -192,9 +223,15 @@ public final class MainWindow {
                 item("Zoom out", "Shortcut+MINUS", e -> canvas.zoomOut()), item("Fit drawing", "Shortcut+0", e -> canvas.fit()),
                 new SeparatorMenuItem(), readouts, new SeparatorMenuItem(), light, dark);
 
+        Menu tools = new Menu("Tools");
+        MenuItem size = item("Size base network…", null, e -> sizeBaseNetwork());
+        size.setId("menu-size-base-network");
+        MenuItem showEdges = item("Show edges", "Shortcut+E", e -> edgesDrawer.setExpanded(true));
+        tools.getItems().addAll(size, showEdges);
+
         Menu help = new Menu("Help");
         help.getItems().add(item("About Armature", null, e -> about()));
-        menuBar.getMenus().addAll(file, edit, view, help);
+        menuBar.getMenus().addAll(file, edit, view, tools, help);
         return menuBar;
     }
 
@@ -259,6 +296,9 @@ public final class MainWindow {
         pin.setTooltip(new Tooltip("Drive pin state for the operating point"));
         Runnable syncPin = () -> {
             boolean high = vm.stage().conditions().pinHigh();
+            if (pin.getGraphic() != null && pin.isSelected() == high) {
+                return;
+            }
             pin.setSelected(high);
             pin.setText(high ? "Pin HIGH" : "Pin LOW");
             pin.setGraphic(new FontIcon(high ? "mdi2t-toggle-switch" : "mdi2t-toggle-switch-off-outline"));
@@ -289,12 +329,53 @@ public final class MainWindow {
         });
         vm.stageProperty().addListener((o, a, b) -> syncAmbient.run());
         Label amb = new Label("Ambient", new FontIcon("mdi2t-thermometer"));
+        Slider supply = new Slider(SUPPLY_MIN_VOLTS, SUPPLY_MAX_VOLTS, supplyVolts());
+        supply.setId("supply-slider");
+        supply.setPrefWidth(150);
+        supply.setBlockIncrement(0.5);
+        supply.setTooltip(new Tooltip("Coil supply voltage of the nominal operating point"));
+        Label supplyReading = new Label();
+        supplyReading.setId("supply-reading");
+        supplyReading.getStyleClass().add("reading");
+        supplyReading.setMinWidth(52);
+        Runnable syncSupply = () -> {
+            syncingSupply = true;
+            boolean has = vm.coilSupply().isPresent();
+            supply.setDisable(!has);
+            supply.setValue(supplyVolts());
+            supplyReading.setText(has ? Notation.format(supplyVolts(), "V") : "–");
+            syncingSupply = false;
+        };
+        syncSupply.run();
+        supply.valueProperty().addListener((o, a, b) -> {
+            if (!syncingSupply) {
+                vm.setSupplyVolts(Math.rint(b.doubleValue() * 10) / 10);
+            }
+        });
+        vm.stageProperty().addListener((o, a, b) -> syncSupply.run());
+        Label sup = new Label("Supply", new FontIcon("mdi2f-flash-outline"));
         Button export = tool("mdi2e-export-variant", "Export the drawing as SVG", () -> export("svg"));
+        Button edgesB = tool("mdi2w-waveform", "Show the edges: turn-on and turn-off waveforms",
+                () -> edgesDrawer.setExpanded(!edgesDrawer.isExpanded()));
+        edgesB.setId("edges-button");
         ToolBar bar = new ToolBar(newB, openB, saveB, new javafx.scene.control.Separator(Orientation.VERTICAL), undoB, redoB,
-                rotB, mirB, new javafx.scene.control.Separator(Orientation.VERTICAL), pin, amb, ambient, reading,
-                new javafx.scene.control.Separator(Orientation.VERTICAL), fitB, export);
+                rotB, mirB, new javafx.scene.control.Separator(Orientation.VERTICAL), pin, amb, ambient, reading, sup, supply,
+                supplyReading,
+                new javafx.scene.control.Separator(Orientation.VERTICAL), edgesB, fitB, export);
         bar.getStyleClass().add("main-toolbar");
         return bar;
+    }
+
+    private double supplyVolts() {
+        return vm.coilSupply().map(p -> p.value("volts")).orElse(12.0);
+    }
+
+    private void sizeBaseNetwork() {
+        var d = SizingDialog.dialog(vm);
+        if (window() != null) {
+            d.initOwner(window());
+        }
+        d.show();
     }
 
     private static Button tool(String icon, String tip, Runnable action) {
@@ -314,9 +395,13 @@ public final class MainWindow {
         sheetScroll.setPadding(new Insets(6));
         TitledPane sheetPane = new TitledPane("Part sheet", sheetScroll);
         sheetPane.setId("part-sheet-pane");
-        TitledPane verdicts = new TitledPane("Verdicts", findings);
-        verdicts.setId("verdicts-pane");
-        VBox box = new VBox(sheetPane, verdicts);
+        ScrollPane verdictScroll = new ScrollPane(verdicts);
+        verdictScroll.setFitToWidth(true);
+        verdictScroll.setPadding(new Insets(6));
+        verdictScroll.setPrefViewportHeight(340);
+        TitledPane verdictPane = new TitledPane("Verdicts", verdictScroll);
+        verdictPane.setId("verdicts-pane");
+        VBox box = new VBox(sheetPane, verdictPane);
         sheetPane.setMaxHeight(Double.MAX_VALUE);
         VBox.setVgrow(sheetPane, Priority.ALWAYS);
         box.setPrefWidth(330);

@@ -67,6 +67,15 @@ public final class PartPalette extends ScrollPane {
         setHbarPolicy(ScrollBarPolicy.NEVER);
     }
 
+    /** Redraws the icons in other colours (theme switch). */
+    public void setColours(Palette colours) {
+        for (javafx.scene.Node n : column.getChildren()) {
+            if (n instanceof ToggleButton b && b.getUserData() instanceof PartKind k) {
+                b.setGraphic(icon(k, colours));
+            }
+        }
+    }
+
     /** The symbol of a kind drawn into a small canvas. */
     public static Canvas icon(PartKind kind, Palette colours) {
         Canvas c = new Canvas(ICON_PIXELS, ICON_PIXELS);

@@ -60,9 +60,18 @@ public final class PartSheet extends VBox {
         rebuild();
     }
 
+    private Optional<Part> lastPart = Optional.empty();
+    private int lastSelectionSize = -1;
+
     private void rebuild() {
         var refs = vm.selectionProperty().get().refs();
         Optional<Part> part = refs.size() == 1 ? vm.stage().part(refs.iterator().next()) : Optional.empty();
+        // an edit elsewhere (a slider drag) leaves the sheet as it is: rebuilding costs a frame
+        if (part.equals(lastPart) && refs.size() == lastSelectionSize) {
+            return;
+        }
+        lastPart = part;
+        lastSelectionSize = refs.size();
         grid.getChildren().clear();
         shownRef = part.map(Part::ref);
         if (part.isEmpty()) {

@@ -1,5 +1,7 @@
 package org.armature.ui;
 
+import java.util.List;
+import org.armature.model.Finding;
 import org.armature.model.Stage;
 import org.armature.render.Annotations;
 
@@ -8,12 +10,31 @@ import org.armature.render.Annotations;
  * {@link #compute(Stage)} on its solve executor (never on the FX thread) and publishes the result
  * on the FX thread. Implementations solve the stage's operating point and turn it into
  * {@link Annotations} (node voltages, branch currents, the switch verdict badge, the coil gauge).
+ * {@link EngineReadouts} is the one over the DC engine.
  */
 @FunctionalInterface
 public interface ReadoutSource {
 
-    /** Readouts and a status line for the status bar. */
-    record Readouts(Annotations annotations, String status) {
+    /**
+     * Readouts, a status line for the status bar and findings for the verdicts panel.
+     *
+     * @param annotations what to draw on the schematic
+     * @param status one plain sentence ("Converged in 12 iterations, largest KCL residual 3.1 pA")
+     * @param findings topology findings and solver failures, never a stack trace
+     */
+    record Readouts(Annotations annotations, String status, List<Finding> findings) {
+
+        public Readouts {
+            if (annotations == null || status == null) {
+                throw new IllegalArgumentException("readouts need annotations and a status");
+            }
+            findings = List.copyOf(findings);
+        }
+
+        /** Readouts without findings. */
+        public Readouts(Annotations annotations, String status) {
+            this(annotations, status, List.of());
+        }
     }
 
     /** Computes the readouts of a stage; may take a while; must not touch the scene graph. */

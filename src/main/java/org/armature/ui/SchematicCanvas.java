@@ -65,7 +65,15 @@ public final class SchematicCanvas extends Region {
     private boolean gridDirty = true;
     private Layout lastLayout;
 
-    private enum Gesture { NONE, MOVE, WIRE, BAND, PAN }
+    /** Screen pixels of vertical drag per preferred-value step when dragging a value label. */
+    public static final double VALUE_DRAG_PIXELS = 8;
+
+    private enum Gesture { NONE, MOVE, WIRE, BAND, PAN, VALUE }
+
+    private Optional<String[]> valueDrag = Optional.empty();
+    private double valueDragY;
+    private long lastRepaintNanos;
+    private java.util.function.LongConsumer repainted = g -> { };
 
     private Gesture gesture = Gesture.NONE;
     private double pressScreenX;
@@ -85,9 +93,22 @@ public final class SchematicCanvas extends Region {
         getChildren().addAll(gridLayer, drawingLayer, overlayLayer);
         setFocusTraversable(true);
         setMinSize(200, 200);
-        vm.stageProperty().addListener((o, a, b) -> redrawDrawing());
+        vm.stageProperty().addListener((o, a, b) -> {
+            // a change of values only (a slider step) is drawn with its readouts, which follow at once:
+            // one repaint per edit instead of two
+            if (a == null || b == null || !sameDrawing(a, b)) {
+                redrawDrawing();
+            }
+        });
         vm.previewProperty().addListener((o, a, b) -> redrawDrawing());
-        vm.annotationsProperty().addListener((o, a, b) -> redrawDrawing());
+        // a published solve sets the annotations, then the generation: draw once, on the generation;
+        // a View toggle changes only the annotations
+        vm.annotationsProperty().addListener((o, a, b) -> {
+            if (vm.shownGenerationProperty().get() == vm.requestedGeneration()) {
+                redrawDrawing();
+            }
+        });
+        vm.shownGenerationProperty().addListener((o, a, b) -> redrawDrawing());
         vm.selectionProperty().addListener((o, a, b) -> redrawOverlay());
         addEventHandler(MouseEvent.MOUSE_PRESSED, this::pressed);
         addEventHandler(MouseEvent.MOUSE_DRAGGED, this::dragged);
@@ -95,6 +116,22 @@ public final class SchematicCanvas extends Region {
         addEventHandler(MouseEvent.MOUSE_MOVED, this::moved);
         addEventHandler(ScrollEvent.SCROLL, this::scrolled);
         addEventHandler(KeyEvent.KEY_PRESSED, this::key);
+    }
+
+    /** True when two stages draw the same but for values and conditions (same parts, places and wires). */
+    static boolean sameDrawing(Stage a, Stage b) {
+        if (a.parts().size() != b.parts().size() || !a.wires().equals(b.wires())
+                || !a.testPoints().equals(b.testPoints())) {
+            return false;
+        }
+        for (int i = 0; i < a.parts().size(); i++) {
+            var pa = a.parts().get(i);
+            var pb = b.parts().get(i);
+            if (!pa.ref().equals(pb.ref()) || pa.kind() != pb.kind() || !pa.placement().equals(pb.placement())) {
+                return false;
+            }
+        }
+        return true;
     }
 
     // ------------------------------------------------------------------ view
@@ -224,11 +261,55 @@ public final class SchematicCanvas extends Region {
         gridDirty = false;
     }
 
+    /** Time the last repaint of the drawing layer took on the FX thread, ns (issuing the draw calls). */
+    public long lastRepaintNanos() {
+        return lastRepaintNanos;
+    }
+
     private void redrawDrawing() {
+        long start = System.nanoTime();
         GraphicsContext g = drawingLayer.getGraphicsContext2D();
         g.clearRect(0, 0, drawingLayer.getWidth(), drawingLayer.getHeight());
         lastLayout = SchematicRenderer.draw(vm.shownStage(), vm.annotationsProperty().get(),
                 options(EnumSet.of(Layer.WIRES, Layer.PARTS, Layer.LABELS, Layer.ANNOTATIONS)), new FxPen(g, view()));
+        lastRepaintNanos = System.nanoTime() - start;
+        repainted.accept(vm.shownGenerationProperty().get());
+    }
+
+    /**
+     * Called at the end of every repaint of the drawing layer with the generation of the readouts
+     * painted ({@link EditorViewModel#shownGenerationProperty()}): the hook of latency probes.
+     */
+    public void setOnRepainted(java.util.function.LongConsumer listener) {
+        repainted = listener == null ? g -> { } : listener;
+    }
+
+    /**
+     * The part value label under a screen point that can be stepped through preferred values:
+     * {designator, parameter key}. Resistors and capacitors have one.
+     */
+    public Optional<String[]> steppableValueAt(double screenX, double screenY) {
+        if (lastLayout == null) {
+            return Optional.empty();
+        }
+        double gx = gridX(screenX);
+        double gy = gridY(screenY);
+        for (org.armature.render.PlacedLabel l : lastLayout.labels(org.armature.render.PlacedLabel.Kind.PART)) {
+            if (l.box().contains(gx, gy)) {
+                Optional<org.armature.model.Part> p = vm.stage().part(l.owner());
+                if (p.isPresent()) {
+                    String key = switch (p.get().kind()) {
+                        case RESISTOR -> "resistanceOhms";
+                        case CAPACITOR -> "capacitanceFarads";
+                        default -> "";
+                    };
+                    if (!key.isEmpty()) {
+                        return Optional.of(new String[] {l.owner(), key});
+                    }
+                }
+            }
+        }
+        return Optional.empty();
     }
 
     private void redrawOverlay() {
@@ -256,6 +337,13 @@ public final class SchematicCanvas extends Region {
         if (vm.armedKindProperty().get().isPresent()) {
             vm.place(vm.armedKindProperty().get().get(), pressGrid);
             gesture = Gesture.NONE;
+            return;
+        }
+        valueDrag = steppableValueAt(e.getX(), e.getY());
+        if (valueDrag.isPresent()) {
+            vm.select(Selection.ofPart(valueDrag.get()[0]));
+            gesture = Gesture.VALUE;
+            valueDragY = e.getY();
             return;
         }
         Stage st = vm.stage();
@@ -320,6 +408,13 @@ public final class SchematicCanvas extends Region {
                 band = Optional.of(Box.spanning(gridX(pressScreenX), gridY(pressScreenY), gx, gy));
                 redrawOverlay();
             }
+            case VALUE -> valueDrag.ifPresent(v -> {
+                int steps = (int) ((valueDragY - e.getY()) / VALUE_DRAG_PIXELS);
+                if (steps != 0) {
+                    valueDragY -= steps * VALUE_DRAG_PIXELS;
+                    vm.stepPreferred(v[0], v[1], steps);
+                }
+            });
             default -> {
             }
         }
@@ -362,6 +457,7 @@ public final class SchematicCanvas extends Region {
     }
 
     private void moved(MouseEvent e) {
+        setCursor(steppableValueAt(e.getX(), e.getY()).isPresent() ? javafx.scene.Cursor.V_RESIZE : null);
         Optional<GridPoint> h = Snap.connectionNear(vm.stage(), gridX(e.getX()), gridY(e.getY()), HIT_PIXELS / scale());
         if (!h.equals(hover)) {
             hover = h;
@@ -371,6 +467,12 @@ public final class SchematicCanvas extends Region {
 
     private void scrolled(ScrollEvent e) {
         if (e.getDeltaY() == 0) {
+            return;
+        }
+        Optional<String[]> v = steppableValueAt(e.getX(), e.getY());
+        if (v.isPresent()) {
+            vm.stepPreferred(v.get()[0], v.get()[1], e.getDeltaY() > 0 ? 1 : -1);
+            e.consume();
             return;
         }
         zoomAt(e.getDeltaY() > 0 ? ZOOM_STEP : 1 / ZOOM_STEP, e.getX(), e.getY());

@@ -35,19 +35,43 @@ class EditorViewModelTest {
     }
 
     @Test
-    @DisplayName("a result of an older stage that arrives late is dropped")
+    @DisplayName("a result of an older stage that is published after a newer edit is dropped")
     void staleResultDropped() {
         Deque<Runnable> solves = new ArrayDeque<>();
         Deque<Runnable> fx = new ArrayDeque<>();
         EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, MARKING, solves::add, fx::add);
+        solves.poll().run();
+        Runnable old = fx.poll();
         vm.setValue("R1", "resistanceOhms", 2200);
-        Runnable old = solves.poll();
-        Runnable fresh = solves.poll();
-        fresh.run();
-        fx.poll().run();
         old.run();
+        assertTrue(vm.annotationsProperty().get().isEmpty(), "the 1 kΩ result came after the 2.2 kΩ edit: dropped");
+        solves.poll().run();
         fx.poll().run();
         assertEquals(2200, vm.annotationsProperty().get().voltages().get(0).volts(), 1e-12);
+    }
+
+    @Test
+    @DisplayName("a drag of 50 steps while the solver is busy costs one more solve, of the latest stage")
+    void dragCoalesces() {
+        Deque<Runnable> solves = new ArrayDeque<>();
+        Deque<Runnable> fx = new ArrayDeque<>();
+        java.util.List<Double> solved = new java.util.ArrayList<>();
+        ReadoutSource counting = st -> {
+            solved.add(st.require("R1").value("resistanceOhms"));
+            return MARKING.compute(st);
+        };
+        EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, counting, solves::add, fx::add);
+        for (int i = 1; i <= 50; i++) {
+            vm.setValue("R1", "resistanceOhms", 1000 + i);
+        }
+        assertEquals(1, solves.size(), "one drain task for the whole burst");
+        solves.poll().run();
+        assertEquals(java.util.List.of(1050.0), solved, "only the latest stage is solved");
+        while (!fx.isEmpty()) {
+            fx.poll().run();
+        }
+        assertEquals(1050, vm.annotationsProperty().get().voltages().get(0).volts(), 1e-12);
+        assertEquals(vm.requestedGeneration(), vm.shownGenerationProperty().get());
     }
 
     @Test

@@ -280,6 +280,57 @@ public final class Editor {
                 OptionalDouble.of(value), Optional.empty()));
     }
 
+    /**
+     * Sets a parameter as one step of a continuous gesture (a slider drag, a value drag on the
+     * canvas): consecutive changes with the same merge key become one undo step.
+     */
+    public void setValueMerging(String ref, String key, double value, String mergeKey) {
+        Part p = stage.require(ref);
+        Double old = p.values().get(key);
+        if (old != null && old == value) {
+            return;
+        }
+        execute(new EditCommand.SetValue(ref, key, old == null ? OptionalDouble.empty() : OptionalDouble.of(old),
+                OptionalDouble.of(value), Optional.of(mergeKey)));
+    }
+
+    /**
+     * Sets several parameters as one undoable step (the sizing assistant's Apply). Values already in
+     * place are left out; nothing is recorded when none changes.
+     *
+     * @param label words for the Undo menu
+     * @param changes designator, parameter key and new value of each change
+     */
+    public void setValues(String label, List<ValueChange> changes) {
+        List<EditCommand> steps = new ArrayList<>();
+        Stage s = stage;
+        for (ValueChange c : changes) {
+            Part p = s.require(c.ref());
+            Double old = p.values().get(c.key());
+            if (old != null && old == c.value()) {
+                continue;
+            }
+            EditCommand step = new EditCommand.SetValue(c.ref(), c.key(),
+                    old == null ? OptionalDouble.empty() : OptionalDouble.of(old), OptionalDouble.of(c.value()),
+                    Optional.empty());
+            steps.add(step);
+            s = step.apply(s);
+        }
+        if (!steps.isEmpty()) {
+            execute(EditCommand.Compound.of(label, steps));
+        }
+    }
+
+    /**
+     * One parameter change of {@link #setValues}.
+     *
+     * @param ref designator
+     * @param key parameter key
+     * @param value new value, SI units
+     */
+    public record ValueChange(String ref, String key, double value) {
+    }
+
     /** Steps a parameter through the E24 series; consecutive steps of one field merge. */
     public void stepPreferred(String ref, String key, int steps) {
         Part p = stage.require(ref);

@@ -1,0 +1,166 @@
+package org.armature.ui;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import java.util.LinkedHashSet;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ListView;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.VBox;
+import org.armature.analysis.CheckReport;
+import org.armature.analysis.CheckResult;
+import org.armature.model.Finding;
+import org.armature.render.Selection;
+import org.armature.units.EngineeringNotation;
+import org.armature.units.Unit;
+import org.kordamp.ikonli.javafx.FontIcon;
+
+/**
+ * The verdicts panel: the safety cautions first (prominent, whenever the contact side is above
+ * safety extra-low voltage), then the corner checks with pass / warn / fail and their numbers
+ * (value against limit with the unit, the worst corner, the explanation), then the findings of
+ * validation, topology and the solver. Clicking a check selects the parts it concerns, which the
+ * canvas highlights.
+ */
+public final class VerdictsPane extends VBox {
+
+    /** Prefix of the safety caution finding keys. */
+    public static final String CAUTION_PREFIX = "caution.";
+
+    private final ListView<CheckResult> checks = new ListView<>();
+    private final FindingsPane findings;
+    private final VBox cautions = new VBox(4);
+    private final Label status = new Label();
+
+    /** A panel following the view model's verdicts and findings. */
+    public VerdictsPane(EditorViewModel vm) {
+        getStyleClass().add("verdicts");
+        setSpacing(6);
+        findings = new FindingsPane(vm);
+        cautions.getStyleClass().add("caution-box");
+        cautions.setId("cautions");
+        status.getStyleClass().add("sheet-description");
+        status.setWrapText(true);
+        Label placeholder = new Label("The corner checks appear here after the stage is solved.");
+        placeholder.setWrapText(true);
+        placeholder.getStyleClass().add("sheet-description");
+        checks.setId("checks-list");
+        checks.setPlaceholder(placeholder);
+        checks.setPrefHeight(360);
+        findings.list().setPrefHeight(120);
+        checks.setCellFactory(v -> new CheckCell());
+        checks.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            if (b != null) {
+                vm.select(new Selection(new LinkedHashSet<>(b.refs()), Set.of()));
+            }
+        });
+        Runnable sync = () -> show(vm.verdictsProperty().get(), vm.verdictsRunningProperty().get());
+        vm.verdictsProperty().addListener((o, a, b) -> sync.run());
+        vm.verdictsRunningProperty().addListener((o, a, b) -> sync.run());
+        sync.run();
+        VBox.setVgrow(checks, Priority.ALWAYS);
+        getChildren().addAll(cautions, status, checks, findings);
+    }
+
+    /** The list of checks (tests). */
+    public ListView<CheckResult> checks() {
+        return checks;
+    }
+
+    /** The findings list (tests). */
+    public FindingsPane findings() {
+        return findings;
+    }
+
+    /** The caution box; visible only when the report carries safety cautions. */
+    public VBox cautions() {
+        return cautions;
+    }
+
+    private void show(Analyses.Verdicts v, boolean running) {
+        List<CheckResult> list = v.report().map(CheckReport::checks).orElse(List.of());
+        checks.getItems().setAll(list);
+        List<Finding> caution = v.report().map(r -> r.findings().stream()
+                .filter(f -> f.key().startsWith(CAUTION_PREFIX)).toList()).orElse(List.of());
+        cautions.getChildren().clear();
+        if (!caution.isEmpty()) {
+            Label head = new Label("Mains or high voltage on the contacts", new FontIcon("mdi2f-flash-alert"));
+            head.getStyleClass().add("caution-title");
+            cautions.getChildren().add(head);
+            for (Finding f : caution) {
+                Label l = new Label(f.message());
+                l.setWrapText(true);
+                l.getStyleClass().add("caution-text");
+                cautions.getChildren().add(l);
+            }
+        }
+        cautions.setVisible(!caution.isEmpty());
+        cautions.setManaged(!caution.isEmpty());
+        String overall = v.report().map(r -> "Overall " + r.overall().word() + " · " + v.status()).orElse(v.status());
+        status.setText(running ? "Judging the corners…" + (overall.isEmpty() ? "" : "  (shown: " + overall + ")") : overall);
+    }
+
+    /** Value against limit: "10.7 V against 12.4 V". */
+    static String numbers(CheckResult c) {
+        if (Double.isNaN(c.value())) {
+            return "not judged";
+        }
+        return format(c.value(), c.unit()) + " against " + format(c.limit(), c.unit());
+    }
+
+    private static String format(double v, Unit u) {
+        if (u == Unit.RATIO) {
+            return "×" + String.format(Locale.ROOT, "%.3g", v);
+        }
+        return EngineeringNotation.format(v, u);
+    }
+
+    /** One check: status icon, id and numbers on the first line, corner and explanation below. */
+    private static final class CheckCell extends ListCell<CheckResult> {
+        @Override
+        protected void updateItem(CheckResult c, boolean isEmpty) {
+            super.updateItem(c, isEmpty);
+            if (isEmpty || c == null) {
+                setText(null);
+                setGraphic(null);
+                return;
+            }
+            String word = c.status().word();
+            FontIcon icon = new FontIcon(switch (c.status()) {
+                case PASS -> "mdi2c-check-circle";
+                case WARN -> "mdi2a-alert";
+                case FAIL -> "mdi2c-close-octagon";
+            });
+            icon.getStyleClass().add("verdict-" + word);
+            Label id = new Label(c.id());
+            id.getStyleClass().add("check-id");
+            Label st = new Label(word);
+            st.getStyleClass().addAll("verdict-word", "verdict-" + word);
+            Region gap = new Region();
+            HBox.setHgrow(gap, Priority.ALWAYS);
+            Label nums = new Label(numbers(c));
+            nums.getStyleClass().add("check-numbers");
+            HBox top = new HBox(6, icon, id, gap, st);
+            Label why = new Label(c.explanation());
+            why.setWrapText(true);
+            why.getStyleClass().add("check-explanation");
+            VBox box = new VBox(2, top, nums, why);
+            if (!c.cornerText().isEmpty()) {
+                Label corner = new Label("at " + c.cornerText());
+                corner.setWrapText(true);
+                corner.getStyleClass().add("check-corner");
+                box.getChildren().add(corner);
+            }
+            box.setMaxWidth(280);
+            box.setPrefWidth(280);
+            why.setMaxWidth(280);
+            setText(null);
+            setGraphic(box);
+            setPrefWidth(0);
+        }
+    }
+}

@@ -1,0 +1,80 @@
+package org.armature.bench;
+
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import org.armature.analysis.TopologyCheck;
+import org.armature.model.Finding;
+import org.armature.model.HighSideDrive;
+import org.armature.model.Stage;
+import org.armature.model.StageTemplate;
+import org.armature.model.Suppressor;
+import org.armature.model.Templates;
+import org.armature.render.Annotations;
+import org.armature.render.Layout;
+import org.armature.render.ReadoutBuilder;
+import org.armature.render.RecordingPen;
+import org.armature.render.RenderOptions;
+import org.armature.render.SchematicRenderer;
+import org.armature.solver.DcAnalysis;
+import org.armature.solver.OperatingPoint;
+import org.armature.ui.edit.Editor;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Measurement;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.Threads;
+import org.openjdk.jmh.annotations.Warmup;
+
+/**
+ * The headless path of one live edit, per template: an edit command through the editor (an ambient
+ * slider step, alternating 25 °C and 26 °C, merged as a drag), the DC solve, the topology check,
+ * {@link ReadoutBuilder} and {@link SchematicRenderer} onto a recording pen. This is everything
+ * between an input event and the canvas's draw calls except the toolkit's own painting. Target:
+ * well inside the 16 ms frame at the 99th percentile (sample mode gives the percentiles).
+ *
+ * <p>Run: {@code mvn -B test-compile exec:exec -Dbench.args="ReadoutLatencyBench -f 1 -wi 2 -i 3"}.
+ */
+@State(Scope.Benchmark)
+@BenchmarkMode(Mode.SampleTime)
+@OutputTimeUnit(TimeUnit.MILLISECONDS)
+@Threads(1)
+@Fork(1)
+@Warmup(iterations = 2, time = 3)
+@Measurement(iterations = 3, time = 3)
+public class ReadoutLatencyBench {
+
+    /** The template edited. */
+    @Param({"LOW_SIDE_NPN", "LOW_SIDE_NMOS", "DARLINGTON_CHANNEL", "HIGH_SIDE_PNP"})
+    public String template;
+
+    private Editor editor;
+    private DcAnalysis dc;
+    private int step;
+
+    /** Builds the stage and warms the engine's compiled netlist. */
+    @Setup
+    public void setUp() {
+        Stage s = Templates.build(StageTemplate.valueOf(template), Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT);
+        editor = new Editor(s);
+        dc = new DcAnalysis();
+        dc.solve(s);
+    }
+
+    /** One edit to painted readouts (recorded draw calls). */
+    @Benchmark
+    public Layout editSolveBuildRender() {
+        editor.setAmbient(25 + (step++ & 1));
+        Stage s = editor.stage();
+        OperatingPoint op = dc.solve(s);
+        List<Finding> findings = TopologyCheck.check(s);
+        Annotations a = ReadoutBuilder.build(s, op, findings);
+        RecordingPen pen = new RecordingPen();
+        return SchematicRenderer.draw(s, a, RenderOptions.all(), pen);
+    }
+}
