@@ -40,9 +40,9 @@ import org.armature.units.PhysicalConstants;
  * <li>NPN, PNP: Ebers–Moll/Gummel–Poon transistor plus RB, RC, RE;</li>
  * <li>NMOS: Shichman–Hodges channel plus the body diode from source to drain;</li>
  * <li>Darlington channel: input resistor, two NPNs (the first one's emitter drives the second's
- *     base, both collectors on the output, the output transistor through its collector
- *     resistance), a resistor across each base–emitter, and the clamp diode from the output to the
- *     common pin;</li>
+ *     base, both collectors joined and reaching the output through the output transistor's
+ *     collector resistance), a resistor across each base–emitter, and the clamp diode from the
+ *     output to the common pin;</li>
  * <li>relay: coil resistance between A1 and A2 at the coil temperature, contacts com–no and com–nc
  *     as small or large resistances switched by the relay state.</li>
  * </ul>
@@ -524,8 +524,10 @@ public final class NetlistBuilder {
             els.add(new Resistor(ref() + " input resistor", in, b1, v("inputResistanceOhms")));
             els.add(new Resistor(ref() + " Q1 base-emitter resistor", b1, b2, v("firstBaseEmitterOhms")));
             els.add(new Resistor(ref() + " Q2 base-emitter resistor", b2, e, v("secondBaseEmitterOhms")));
-            BjtElement q1 = new BjtElement(ref() + " Q1", out, b1, b2, new Bjt(tp1), kelvin, o.junctionGminSiemens());
+            // the output resistance is the collector lead both transistors share (joined collectors
+            // behind it): VCE(sat) = IC·R + VCE(sat) of Q1 + VBE of Q2, the shape of array datasheets
             int c2 = series(out, v("collectorResistanceOhms"), "c2");
+            BjtElement q1 = new BjtElement(ref() + " Q1", c2, b1, b2, new Bjt(tp1), kelvin, o.junctionGminSiemens());
             BjtElement q2 = new BjtElement(ref() + " Q2", c2, b2, e, new Bjt(tp2), kelvin, o.junctionGminSiemens());
             JunctionElement clamp = new JunctionElement(ref() + " clamp diode", out, com,
                     new Diode(DiodeParams.junction(di.clampSaturationCurrentAmps(), di.clampEmissionCoefficient())),
