@@ -30,6 +30,8 @@ public final class BjtElement implements Element {
     private final BjtEvaluation eval = new BjtEvaluation();
     private double lastVbe;
     private double lastVbc;
+    private boolean coldBe;
+    private boolean coldBc;
 
     /**
      * @param label designator for messages
@@ -125,14 +127,35 @@ public final class BjtElement implements Element {
     public void begin(Solution start) {
         lastVbe = vbe(start);
         lastVbc = vbc(start);
+        coldBe = false;
+        coldBc = false;
+    }
+
+    @Override
+    public void beginCold(Solution start) {
+        begin(start);
+        coldBe = true;
+        coldBc = true;
     }
 
     @Override
     public boolean stamp(Stamper s, Solution x, StampContext ctx) {
         double vbe = vbe(x);
         double vbc = vbc(x);
-        double vbeL = sign * Junctions.limitJunction(sign * vbe, sign * lastVbe, forwardNvt, forwardCritical);
-        double vbcL = sign * Junctions.limitJunction(sign * vbc, sign * lastVbc, reverseNvt, reverseCritical);
+        double vbeL;
+        if (coldBe && sign * vbe > forwardCritical) {
+            vbeL = sign * forwardCritical;
+            coldBe = false;
+        } else {
+            vbeL = sign * Junctions.limitJunction(sign * vbe, sign * lastVbe, forwardNvt, forwardCritical);
+        }
+        double vbcL;
+        if (coldBc && sign * vbc > reverseCritical) {
+            vbcL = sign * reverseCritical;
+            coldBc = false;
+        } else {
+            vbcL = sign * Junctions.limitJunction(sign * vbc, sign * lastVbc, reverseNvt, reverseCritical);
+        }
         lastVbe = vbeL;
         lastVbc = vbcL;
         bjt.evaluate(vbeL, vbcL, temperatureKelvin, eval);

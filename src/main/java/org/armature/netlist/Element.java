@@ -46,6 +46,20 @@ public interface Element {
     }
 
     /**
+     * Resets the limiting memory for a cold start (no earlier solution, usually all 0 V), after the
+     * initial-junction mode of Nagel's simulator (ERL M520, 1975): like {@link #begin}, and in
+     * addition a junction that a Newton step first pushes above its critical voltage is linearised
+     * at that critical voltage, a typical forward voltage (the junction's current there is about
+     * nVT/√2 ≈ 18 mA), instead of being crept up from 0 V by the ordinary limiting. Junctions that
+     * the circuit's DC paths never forward-bias are untouched. The default is {@link #begin}.
+     *
+     * @param start the start iterate
+     */
+    default void beginCold(Solution start) {
+        begin(start);
+    }
+
+    /**
      * Stamps the element linearised at the iterate {@code x}.
      *
      * @param s where to stamp

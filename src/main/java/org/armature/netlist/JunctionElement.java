@@ -26,7 +26,9 @@ public final class JunctionElement implements Element {
     private final double temperatureKelvin;
     private final double gminSiemens;
     private final JunctionEvaluation eval = new JunctionEvaluation();
+    private final double coldVolts;
     private double lastVolts;
+    private boolean cold;
 
     /**
      * @param label designator for messages
@@ -44,6 +46,8 @@ public final class JunctionElement implements Element {
         this.diode = diode;
         this.temperatureKelvin = temperatureKelvin;
         this.gminSiemens = gminSiemens;
+        this.coldVolts = diode.params().bidirectional() ? Double.POSITIVE_INFINITY
+                : diode.criticalVoltageAt(temperatureKelvin);
     }
 
     /** @return the device */
@@ -101,12 +105,26 @@ public final class JunctionElement implements Element {
     @Override
     public void begin(Solution start) {
         lastVolts = voltage(start);
+        cold = false;
+    }
+
+    /** A bidirectional clamp has no forward junction: its cold start is {@link #begin}. */
+    @Override
+    public void beginCold(Solution start) {
+        begin(start);
+        cold = true;
     }
 
     @Override
     public boolean stamp(Stamper s, Solution x, StampContext ctx) {
         double v = voltage(x);
-        double vl = diode.limitVoltage(v, lastVolts, temperatureKelvin);
+        double vl;
+        if (cold && v > coldVolts) {
+            vl = coldVolts;
+            cold = false;
+        } else {
+            vl = diode.limitVoltage(v, lastVolts, temperatureKelvin);
+        }
         if (Math.abs(vl - v) <= LIMITER_ROUNDING_VOLTS) {
             // the breakdown limiter maps v through (−v − BV) and back: rounding, not limiting
             vl = v;

@@ -23,7 +23,10 @@ public final class MosfetElement implements Element {
     private final double gminSiemens;
     private final GateStepOptions gateStep;
     private final MosfetEvaluation eval = new MosfetEvaluation();
+    private final double threshold;
     private double lastVgs;
+    private double lastVds;
+    private boolean coldGate;
 
     /**
      * @param label designator for messages
@@ -45,6 +48,7 @@ public final class MosfetElement implements Element {
         this.temperatureKelvin = temperatureKelvin;
         this.gminSiemens = gminSiemens;
         this.gateStep = gateStep;
+        this.threshold = mosfet.thresholdAt(temperatureKelvin);
     }
 
     /** @return the device */
@@ -94,22 +98,74 @@ public final class MosfetElement implements Element {
     @Override
     public void begin(Solution start) {
         lastVgs = start.voltage(g) - start.voltage(s);
+        lastVds = start.voltage(d) - start.voltage(s);
+        coldGate = false;
+    }
+
+    /**
+     * Cold start: the first time a Newton step takes the gate above threshold, the step is taken
+     * whole instead of landing just above threshold. A gate is driven through resistors from a
+     * source, so the first linear solve puts it near its final voltage; landing it at threshold
+     * while the drain still sits at the supply linearises the channel far from its real current and
+     * throws the drain below ground for several iterations.
+     */
+    @Override
+    public void beginCold(Solution start) {
+        begin(start);
+        coldGate = true;
     }
 
     @Override
     public boolean stamp(Stamper st, Solution x, StampContext ctx) {
         double vgs = x.voltage(g) - x.voltage(s);
         double vds = x.voltage(d) - x.voltage(s);
-        double vgsL = mosfet.limitGateStep(vgs, lastVgs, temperatureKelvin, gateStep);
+        double vgsL;
+        if (coldGate && vgs > threshold) {
+            vgsL = vgs;
+            coldGate = false;
+        } else {
+            vgsL = mosfet.limitGateStep(vgs, lastVgs, temperatureKelvin, gateStep);
+        }
         lastVgs = vgsL;
-        mosfet.evaluate(vgsL, vds, temperatureKelvin, eval);
+        double vdsL = limitDrainSource(vds, lastVds);
+        lastVds = vdsL;
+        mosfet.evaluate(vgsL, vdsL, temperatureKelvin, eval);
         double gm = eval.gmSiemens();
         double gds = eval.gdsSiemens();
         st.transconductance(d, s, g, s, gm);
         st.conductance(d, s, gds + gminSiemens);
-        double ieq = eval.drainAmps() - gm * vgsL - gds * vds;
+        double ieq = eval.drainAmps() - gm * vgsL - gds * vdsL;
         st.current(d, -ieq);
         st.current(s, ieq);
-        return vgsL != vgs;
+        return vgsL != vgs || vdsL != vds;
     }
+
+    /**
+     * Drain–source step limiting, the classic rule of the MOS models of the Berkeley simulation
+     * work that followed Nagel (ERL M520, 1975): from a drain–source voltage of at least 3.5 V a
+     * fall is stopped at 2 V and a rise at 3·v + 2 V; from below 3.5 V a rise is stopped at 4 V and
+     * a fall at −0.5 V. A channel switching on with its drain still at the supply is thus linearised
+     * near the triode region instead of at a saturation current the load cannot carry (which throws
+     * the drain tens of volts below ground and into the body diode).
+     */
+    static double limitDrainSource(double vNew, double vOld) {
+        if (vOld >= VDS_HIGH_VOLTS) {
+            if (vNew > vOld) {
+                return Math.min(vNew, VDS_RISE_FACTOR * vOld + VDS_RISE_OFFSET_VOLTS);
+            }
+            return vNew < VDS_HIGH_VOLTS ? Math.max(vNew, VDS_FALL_STOP_VOLTS) : vNew;
+        }
+        if (vNew > vOld) {
+            return Math.min(vNew, VDS_LOW_RISE_STOP_VOLTS);
+        }
+        return Math.max(vNew, VDS_LOW_FALL_STOP_VOLTS);
+    }
+
+    /** Constants of {@link #limitDrainSource} (the classic values), V or dimensionless. */
+    private static final double VDS_HIGH_VOLTS = 3.5;
+    private static final double VDS_RISE_FACTOR = 3.0;
+    private static final double VDS_RISE_OFFSET_VOLTS = 2.0;
+    private static final double VDS_FALL_STOP_VOLTS = 2.0;
+    private static final double VDS_LOW_RISE_STOP_VOLTS = 4.0;
+    private static final double VDS_LOW_FALL_STOP_VOLTS = -0.5;
 }

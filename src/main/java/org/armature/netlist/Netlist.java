@@ -1,7 +1,9 @@
 package org.armature.netlist;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Collections;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -26,6 +28,7 @@ public final class Netlist {
     private final List<Element> elements;
     private final List<PartNetwork> parts;
     private final Map<String, Integer> netNodes;
+    private final Map<String, Integer> nodeIndex;
 
     Netlist(List<String> nodeNames, List<String> branchNames, double[] initialStates, List<Element> elements,
             List<PartNetwork> parts, Map<String, Integer> netNodes) {
@@ -35,6 +38,68 @@ public final class Netlist {
         this.elements = List.copyOf(elements);
         this.parts = List.copyOf(parts);
         this.netNodes = Collections.unmodifiableMap(new LinkedHashMap<>(netNodes));
+        Map<String, Integer> index = new HashMap<>();
+        for (int i = 0; i < this.nodeNames.size(); i++) {
+            index.put(this.nodeNames.get(i), i);
+        }
+        this.nodeIndex = Collections.unmodifiableMap(index);
+    }
+
+    /** A netlist of the same shape as {@code base} with other elements and parts (no copies of the shape). */
+    private Netlist(Netlist base, double[] initialStates, Element[] elements, PartNetwork[] parts) {
+        this.nodeNames = base.nodeNames;
+        this.branchNames = base.branchNames;
+        this.netNodes = base.netNodes;
+        this.nodeIndex = base.nodeIndex;
+        this.initialStates = initialStates;
+        this.elements = Collections.unmodifiableList(Arrays.asList(elements));
+        this.parts = Collections.unmodifiableList(Arrays.asList(parts));
+    }
+
+    /**
+     * The same netlist with some part networks replaced by networks of identical structure.
+     *
+     * @param replacements new part networks by part index ({@code null} = keep)
+     * @param states initial state slots of the result (taken, not copied)
+     */
+    Netlist withParts(PartNetwork[] replacements, double[] states) {
+        Element[] els = elements.toArray(new Element[0]);
+        PartNetwork[] ps = parts.toArray(new PartNetwork[0]);
+        for (int i = 0; i < replacements.length; i++) {
+            PartNetwork r = replacements[i];
+            if (r == null) {
+                continue;
+            }
+            ps[i] = r;
+            List<Element> re = r.elements();
+            for (int k = 0; k < re.size(); k++) {
+                els[r.firstElement() + k] = re.get(k);
+            }
+        }
+        return new Netlist(this, states, els, ps);
+    }
+
+    /**
+     * @param other another netlist
+     * @return true if both have the same unknowns: the same node names in the same order and the
+     *     same branches (so a solution vector of one is a start point of the other)
+     */
+    public boolean sameShape(Netlist other) {
+        return other == this || (other.nodeNames == nodeNames || other.nodeNames.equals(nodeNames))
+                && (other.branchNames == branchNames || other.branchNames.equals(branchNames));
+    }
+
+    /**
+     * @param name a node name (a net or an internal node such as {@code Q1.b'})
+     * @return its index, or {@link #GROUND} for {@code gnd} and for a name the netlist does not have
+     */
+    public int nodeIndex(String name) {
+        Integer i = nodeIndex.get(name);
+        return i == null ? GROUND : i;
+    }
+
+    double initialState(int slot) {
+        return initialStates[slot];
     }
 
     /** @return number of non-ground nodes */

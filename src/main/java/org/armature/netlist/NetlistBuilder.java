@@ -1,10 +1,12 @@
 package org.armature.netlist;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import org.armature.devices.Bjt;
 import org.armature.devices.BjtParams;
 import org.armature.devices.BjtPolarity;
@@ -38,9 +40,9 @@ import org.armature.units.PhysicalConstants;
  * <li>NPN, PNP: Ebers–Moll/Gummel–Poon transistor plus RB, RC, RE;</li>
  * <li>NMOS: Shichman–Hodges channel plus the body diode from source to drain;</li>
  * <li>Darlington channel: input resistor, two NPNs (the first one's emitter drives the second's
- *     base, both collectors on the output, the output transistor through its collector
- *     resistance), a resistor across each base–emitter, and the clamp diode from the output to the
- *     common pin;</li>
+ *     base, both collectors joined and reaching the output through the output transistor's
+ *     collector resistance), a resistor across each base–emitter, and the clamp diode from the
+ *     output to the common pin;</li>
  * <li>relay: coil resistance between A1 and A2 at the coil temperature, contacts com–no and com–nc
  *     as small or large resistances switched by the relay state.</li>
  * </ul>
@@ -59,9 +61,26 @@ public final class NetlistBuilder {
     private final List<PartNetwork> parts = new ArrayList<>();
     private final Map<String, Integer> netNodes = new LinkedHashMap<>();
 
+    /** Re-flattening into an existing numbering ({@link #reflatten}); null when building afresh. */
+    private final Netlist base;
+    private final double[] baseStates;
+    private int patchBranch;
+    private int patchState;
+    private int patchElement;
+    private boolean grew;
+    private PartNetwork patched;
+
     /** An empty builder. */
     public NetlistBuilder() {
         netNodes.put(GND, Netlist.GROUND);
+        this.base = null;
+        this.baseStates = null;
+    }
+
+    /** A builder that re-flattens parts of {@code base} into its numbering, writing state values into {@code states}. */
+    private NetlistBuilder(Netlist base, double[] states) {
+        this.base = base;
+        this.baseStates = states;
     }
 
     /**
@@ -73,6 +92,14 @@ public final class NetlistBuilder {
     public int node(String name) {
         if (name.equals(GND)) {
             return Netlist.GROUND;
+        }
+        if (base != null) {
+            int i = base.nodeIndex(name);
+            if (i == Netlist.GROUND) {
+                grew = true;
+                return base.nodeCount();
+            }
+            return i;
         }
         Integer existing = nodeByName.get(name);
         if (existing != null) {
@@ -92,7 +119,9 @@ public final class NetlistBuilder {
      */
     public int net(String net) {
         int n = node(net);
-        netNodes.put(net, n);
+        if (base == null) {
+            netNodes.put(net, n);
+        }
         return n;
     }
 
@@ -101,6 +130,9 @@ public final class NetlistBuilder {
      * @return a new branch number
      */
     public int allocateBranch(String owner) {
+        if (base != null) {
+            return patchBranch++;
+        }
         branchNames.add(owner);
         return branchNames.size() - 1;
     }
@@ -110,6 +142,14 @@ public final class NetlistBuilder {
      * @return a new state slot
      */
     public int allocateState(double initialValue) {
+        if (base != null) {
+            if (patchState < baseStates.length) {
+                baseStates[patchState] = initialValue;
+            } else {
+                grew = true;
+            }
+            return patchState++;
+        }
         states.add(initialValue);
         return states.size() - 1;
     }
@@ -127,6 +167,9 @@ public final class NetlistBuilder {
 
     /** @return the netlist built so far */
     public Netlist build() {
+        if (base != null) {
+            throw new IllegalStateException("a re-flattening builder does not build");
+        }
         double[] s = new double[states.size()];
         for (int i = 0; i < s.length; i++) {
             s[i] = states.get(i);
@@ -172,7 +215,93 @@ public final class NetlistBuilder {
         return b.build();
     }
 
-    void addPart(PartNetwork p) {
+    /**
+     * Re-flattens some parts of a stage that was flattened into {@code netlist}, keeping its node,
+     * branch and state numbering, so that a value change costs one part's elements instead of a
+     * whole flatten. The stage must have the same topology as the one flattened (the same parts in
+     * the same order with the same kinds, pins and wires); part {@code i} of the stage is part
+     * network {@code i} of the netlist.
+     *
+     * <p>A re-flattened part must have exactly the structure it had: the same element classes on the
+     * same terminals, the same internal nodes, branches and state slots (a series resistance set to
+     * zero removes an internal node, for example). Then the structural checks of the old netlist
+     * still hold for the new one.
+     *
+     * @param netlist the netlist of the earlier flatten
+     * @param stage the stage with new values
+     * @param options flatten options of the new netlist (pin state and ambient may differ)
+     * @param partIndices indices of the parts to re-flatten
+     * @return the netlist with those parts replaced (the others shared), or empty when some part's
+     *     structure would change: then flatten the stage anew
+     */
+    public static Optional<Netlist> reflatten(Netlist netlist, Stage stage, FlattenOptions options, int... partIndices) {
+        List<PartNetwork> old = netlist.parts();
+        if (stage.parts().size() != old.size()) {
+            return Optional.empty();
+        }
+        PartNetwork[] replacements = new PartNetwork[old.size()];
+        double[] states = netlist.initialStates();
+        NetlistBuilder b = new NetlistBuilder(netlist, states);
+        for (int index : partIndices) {
+            if (index < 0 || index >= old.size()) {
+                return Optional.empty();
+            }
+            Part part = stage.parts().get(index);
+            PartNetwork was = old.get(index);
+            if (!part.ref().equals(was.ref()) || part.kind() != was.part().kind()) {
+                return Optional.empty();
+            }
+            b.patchBranch = was.firstBranch();
+            b.patchState = was.firstState();
+            b.patchElement = was.firstElement();
+            b.patched = null;
+            new PartFlattener(b, part, was.pinNodes(), options).flatten();
+            PartNetwork now = b.patched;
+            if (b.grew || now == null || !sameStructure(was, now)) {
+                return Optional.empty();
+            }
+            replacements[index] = now;
+        }
+        return Optional.of(netlist.withParts(replacements, states));
+    }
+
+    private static boolean sameStructure(PartNetwork a, PartNetwork b) {
+        if (a.branchCount() != b.branchCount() || a.stateCount() != b.stateCount()
+                || a.relay().isPresent() != b.relay().isPresent()) {
+            return false;
+        }
+        List<Element> ea = a.elements();
+        List<Element> eb = b.elements();
+        if (ea.size() != eb.size()) {
+            return false;
+        }
+        for (int k = 0; k < ea.size(); k++) {
+            Element x = ea.get(k);
+            Element y = eb.get(k);
+            if (x.getClass() != y.getClass() || !Arrays.equals(x.terminals(), y.terminals())) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private int branchCursor() {
+        return base != null ? patchBranch : branchNames.size();
+    }
+
+    private int stateCursor() {
+        return base != null ? patchState : states.size();
+    }
+
+    void addPart(Part part, Map<String, Integer> pins, List<Element> els, PartNetwork.Reader reader, RelayHandle relay,
+                 int firstBranch, int firstState) {
+        int firstElement = base != null ? patchElement : elements.size();
+        PartNetwork p = new PartNetwork(part, pins, els, reader, relay, firstElement, firstBranch,
+                branchCursor() - firstBranch, firstState, stateCursor() - firstState);
+        if (base != null) {
+            patched = p;
+            return;
+        }
         parts.add(p);
         elements.addAll(p.elements());
     }
@@ -185,9 +314,13 @@ public final class NetlistBuilder {
         private final FlattenOptions o;
         private final double kelvin;
         private final List<Element> els = new ArrayList<>();
+        private final int firstBranch;
+        private final int firstState;
 
         PartFlattener(NetlistBuilder b, Part part, Map<String, Integer> pins, FlattenOptions o) {
             this.b = b;
+            this.firstBranch = b.branchCursor();
+            this.firstState = b.stateCursor();
             this.part = part;
             this.pins = pins;
             this.o = o;
@@ -217,7 +350,7 @@ public final class NetlistBuilder {
         }
 
         private void done(PartNetwork.Reader reader, RelayHandle relay) {
-            b.addPart(new PartNetwork(part, pins, els, reader, relay));
+            b.addPart(part, pins, els, reader, relay, firstBranch, firstState);
         }
 
         void flatten() {
@@ -391,8 +524,10 @@ public final class NetlistBuilder {
             els.add(new Resistor(ref() + " input resistor", in, b1, v("inputResistanceOhms")));
             els.add(new Resistor(ref() + " Q1 base-emitter resistor", b1, b2, v("firstBaseEmitterOhms")));
             els.add(new Resistor(ref() + " Q2 base-emitter resistor", b2, e, v("secondBaseEmitterOhms")));
-            BjtElement q1 = new BjtElement(ref() + " Q1", out, b1, b2, new Bjt(tp1), kelvin, o.junctionGminSiemens());
+            // the output resistance is the collector lead both transistors share (joined collectors
+            // behind it): VCE(sat) = IC·R + VCE(sat) of Q1 + VBE of Q2, the shape of array datasheets
             int c2 = series(out, v("collectorResistanceOhms"), "c2");
+            BjtElement q1 = new BjtElement(ref() + " Q1", c2, b1, b2, new Bjt(tp1), kelvin, o.junctionGminSiemens());
             BjtElement q2 = new BjtElement(ref() + " Q2", c2, b2, e, new Bjt(tp2), kelvin, o.junctionGminSiemens());
             JunctionElement clamp = new JunctionElement(ref() + " clamp diode", out, com,
                     new Diode(DiodeParams.junction(di.clampSaturationCurrentAmps(), di.clampEmissionCoefficient())),

@@ -50,6 +50,11 @@ public final class PartNetwork {
     private final List<Element> elements;
     private final Reader reader;
     private final RelayHandle relay;
+    private final int firstElement;
+    private final int firstBranch;
+    private final int branchCount;
+    private final int firstState;
+    private final int stateCount;
 
     /**
      * @param part the part of the drawing
@@ -57,13 +62,44 @@ public final class PartNetwork {
      * @param elements the elements it became
      * @param reader how to read it back
      * @param relay the relay handle, or {@code null} for a part that is not a relay
+     * @param firstElement index of its first element in the netlist's element list
+     * @param firstBranch its first branch number (its branches are consecutive)
+     * @param branchCount how many branches it allocated
+     * @param firstState its first state slot (its slots are consecutive)
+     * @param stateCount how many state slots it allocated
      */
-    PartNetwork(Part part, Map<String, Integer> pinNodes, List<Element> elements, Reader reader, RelayHandle relay) {
+    PartNetwork(Part part, Map<String, Integer> pinNodes, List<Element> elements, Reader reader, RelayHandle relay,
+                int firstElement, int firstBranch, int branchCount, int firstState, int stateCount) {
         this.part = part;
         this.pinNodes = Collections.unmodifiableMap(new LinkedHashMap<>(pinNodes));
         this.elements = List.copyOf(elements);
         this.reader = reader;
         this.relay = relay;
+        this.firstElement = firstElement;
+        this.firstBranch = firstBranch;
+        this.branchCount = branchCount;
+        this.firstState = firstState;
+        this.stateCount = stateCount;
+    }
+
+    int firstElement() {
+        return firstElement;
+    }
+
+    int firstBranch() {
+        return firstBranch;
+    }
+
+    int branchCount() {
+        return branchCount;
+    }
+
+    int firstState() {
+        return firstState;
+    }
+
+    int stateCount() {
+        return stateCount;
     }
 
     /** @return the part as drawn */

@@ -10,6 +10,7 @@ import org.armature.netlist.StampContext;
  * "DC operating points of transistor circuits", NOLTA IEICE 2012 (CHECKS.md NM-5).
  *
  * <p>Reusable by the transient engine for its initial point. Allocates its work arrays once.
+ * One instance serves one thread.
  */
 public final class DcStrategy {
 
@@ -19,6 +20,7 @@ public final class DcStrategy {
     private final double[] start;
     private int iterations;
     private double residual;
+    private StateUpdater updater;
 
     /**
      * @param newton the Newton solver of the netlist
@@ -51,10 +53,30 @@ public final class DcStrategy {
      * @throws NonConvergenceException if every fallback fails
      */
     public void solve(double[] x, double[] states) {
+        solve(x, states, false, null);
+    }
+
+    /**
+     * Solves the DC operating point, with a cold-start junction preset and states updated inside
+     * the Newton loop ({@link NewtonSolver#run(double[], double[], StampContext, double, boolean,
+     * StateUpdater)}).
+     *
+     * @param x start point, overwritten with the solution
+     * @param states element states, modified only by {@code updater}
+     * @param coldStart true when {@code x} is no earlier solution; applies to the first, plain attempt
+     * @param updater state update inside every attempt, or {@code null}
+     * @throws SingularCircuitException if the matrix is singular even with the gmin shunt
+     * @throws NonConvergenceException if every fallback fails
+     */
+    public void solve(double[] x, double[] states, boolean coldStart, StateUpdater updater) {
+        this.updater = updater;
         iterations = 0;
         int n = x.length;
         System.arraycopy(x, 0, start, 0, n);
-        if (attempt(x, states, StampContext.DC, 0.0)) {
+        boolean ok = newton.run(x, states, StampContext.DC, 0.0, coldStart, updater);
+        iterations += newton.iterations();
+        residual = finiteOr(newton.maxResidualAmps());
+        if (ok) {
             return;
         }
         boolean singularPlain = newton.singular();
@@ -114,7 +136,7 @@ public final class DcStrategy {
     }
 
     private boolean attempt(double[] x, double[] states, StampContext ctx, double shunt) {
-        boolean ok = newton.run(x, states, ctx, shunt);
+        boolean ok = newton.run(x, states, ctx, shunt, false, updater);
         iterations += newton.iterations();
         residual = finiteOr(newton.maxResidualAmps());
         return ok;

@@ -195,23 +195,21 @@ public final class OperatingPoint {
 
     /** Copies the solution vector into {@code x} when the netlist has the same shape; false otherwise. */
     boolean copyUnknownsInto(Netlist other, double[] x) {
-        if (other == netlist || (other.unknownCount() == unknowns.length && sameNodes(other))) {
+        if (other.unknownCount() == unknowns.length && netlist.sameShape(other)) {
             System.arraycopy(unknowns, 0, x, 0, unknowns.length);
             return true;
         }
         return false;
     }
 
-    private boolean sameNodes(Netlist other) {
-        if (other.nodeCount() != netlist.nodeCount()) {
-            return false;
-        }
-        for (int i = 0; i < other.nodeCount(); i++) {
-            if (!other.nodeName(i).equals(netlist.nodeName(i))) {
-                return false;
-            }
-        }
-        return true;
+    /** @return true if this point's state slots line up with those of {@code other} */
+    boolean sameStateLayout(Netlist other) {
+        return other.stateCount() == states.length && netlist.sameShape(other);
+    }
+
+    /** @return the value of one state slot of the solution */
+    double stateValue(int slot) {
+        return states[slot];
     }
 
     private ArraySolution solution() {

@@ -17,7 +17,8 @@
  *     pA through the 1e-12 S junction gmin); do not set it below about 1e-15 A, where rounding of
  *     milliamp currents dominates.</li>
  * <li>{@link org.armature.solver.NewtonOptions}: 100 iterations per run is generous (templates need
- *     about 5–25 from a cold start including the relay loop); the 50 V step damping only matters for
+ *     about 3–13 from a cold start and 2–6 for a warm
+ *     re-solve after a value change, relay loop included); the 50 V step damping only matters for
  *     stages whose node voltages jump by more than that in one iteration (mains on the contact side).
  *     The pivot threshold is relative to each row's largest entry: 1e-13 catches rows that are
  *     combinations of others to a few hundred rounding errors and never rejects a well-scaled row,
@@ -26,7 +27,13 @@
  *     then source stepping. Only used when plain Newton fails; a start above 1e-3 S hardly helps,
  *     a finer factor than 10 costs iterations without making hard stages converge.</li>
  * <li>{@link org.armature.solver.RelayLoopOptions}: 0.01 K on the coil temperature changes the
- *     copper resistance by 4e-5, below reltol; loosening it to 0.1 K saves a pass per solve.</li>
+ *     copper resistance by 4e-5, below reltol. The coil temperature converges inside the Newton
+ *     loop ({@link org.armature.solver.StateUpdater}); the outer loop re-solves only when contacts
+ *     change state.</li>
+ * <li>{@link org.armature.solver.DcOptions#warmStart()}: on by default. A value edit re-flattens only
+ *     the edited part and starts Newton from the last solution of the same stage and pin state;
+ *     the answer equals a cold start's within the NM-6 tolerances (WarmStartTest). Turn it off to make
+ *     every solve independent of the engine's history, for example to compare iteration counts.</li>
  * </ul>
  *
  * <p>Failures are one unchecked family, {@link org.armature.solver.SolverException}: a

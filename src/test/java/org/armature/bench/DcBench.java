@@ -3,6 +3,8 @@ package org.armature.bench;
 import java.util.Random;
 import java.util.concurrent.TimeUnit;
 import org.armature.model.HighSideDrive;
+import org.armature.model.Part;
+import org.armature.model.PartKind;
 import org.armature.model.Stage;
 import org.armature.model.StageTemplate;
 import org.armature.model.Suppressor;
@@ -28,10 +30,14 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 
 /**
- * DC engine figures: operating point of each template after warm-up (cold start from 0 V each
- * time, relay loop included), a 10,000-point supply sweep, and one dense LU factor + solve of the
- * same size, so that solve ÷ (iterations × LU) can be reported. Run with
- * {@code -prof gc} for the allocation per solve.
+ * DC engine figures, per template: the operating point from a cold start (0 V with the junction
+ * preset, netlist already compiled, relay loop included), the warm re-solve after a value change
+ * (the live-editing case: the engine alternates between two stages that differ by 1 % in one
+ * resistor, so every call re-flattens that part and starts from the last solution), a first solve
+ * on a fresh engine (flatten and topology check included), a 10,000-point supply sweep, and one
+ * dense LU factor + solve of the same size, so that solve ÷ (iterations × LU) can be reported. The
+ * Newton iterations of each case are printed at set-up. Run with {@code -prof gc} for the
+ * allocation per solve.
  */
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MICROSECONDS)
@@ -44,7 +50,10 @@ public class DcBench {
         public String template;
 
         Stage stage;
+        Stage edited;
+        boolean flip;
         DcAnalysis dense;
+        DcAnalysis warm;
         DcAnalysis ejml;
         double[] matrix;
         double[] work;
@@ -57,9 +66,15 @@ public class DcBench {
         public void setUp() {
             StageTemplate t = StageTemplate.byId(template).orElseThrow();
             stage = Templates.build(t, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT);
-            dense = new DcAnalysis();
-            ejml = new DcAnalysis(DcOptions.DEFAULT.withLinearSolver(DcOptions.LinearSolverKind.EJML));
+            Part res = stage.parts().stream().filter(p -> p.kind() == PartKind.RESISTOR).findFirst().orElseThrow();
+            edited = stage.withPart(res.with("resistanceOhms", res.value("resistanceOhms") * 1.01));
+            DcOptions cold = DcOptions.DEFAULT.withWarmStart(false);
+            dense = new DcAnalysis(cold);
+            warm = new DcAnalysis();
+            ejml = new DcAnalysis(cold.withLinearSolver(DcOptions.LinearSolverKind.EJML));
             OperatingPoint op = dense.solve(stage);
+            warm.solve(stage);
+            OperatingPoint w = warm.solve(edited);
             int n = NetlistBuilder.flatten(stage, FlattenOptions.of(true, 25)).unknownCount();
             // diagonally dominant random matrix of the template's size, as an MNA matrix of that size
             Random r = new Random(42);
@@ -83,19 +98,33 @@ public class DcBench {
             lu = new DenseLu(n);
             ejmlLu = new EjmlLu(n);
             System.err.println("# " + template + ": " + n + " unknowns, " + op.iterations()
-                    + " Newton iterations per operating point");
+                    + " Newton iterations per cold operating point, " + w.iterations()
+                    + " per warm re-solve after a value change");
         }
     }
 
-    /** Operating point, own LU. */
+    /** Operating point from a cold start (compiled netlist, 0 V), own LU. */
     @Benchmark
-    public OperatingPoint operatingPoint(TemplateState s) {
+    public OperatingPoint operatingPointCold(TemplateState s) {
         return s.dense.solve(s.stage);
     }
 
-    /** Operating point, EJML LU. */
+    /** Warm re-solve after a value change (the live-editing case), own LU. */
     @Benchmark
-    public OperatingPoint operatingPointEjml(TemplateState s) {
+    public OperatingPoint operatingPointWarm(TemplateState s) {
+        s.flip = !s.flip;
+        return s.warm.solve(s.flip ? s.edited : s.stage);
+    }
+
+    /** First solve on a fresh engine: flatten, topology check, cold start. */
+    @Benchmark
+    public OperatingPoint operatingPointFresh(TemplateState s) {
+        return new DcAnalysis().solve(s.stage);
+    }
+
+    /** Operating point from a cold start, EJML LU. */
+    @Benchmark
+    public OperatingPoint operatingPointColdEjml(TemplateState s) {
         return s.ejml.solve(s.stage);
     }
 

@@ -49,4 +49,41 @@ class FlattenTest {
         assertTrue(npn.netNodes().containsKey("switch"));
         assertEquals(Netlist.GROUND, (int) npn.netNodes().get("gnd"));
     }
+
+    @Test
+    @DisplayName("re-flattening a changed value keeps the numbering and shares the unchanged parts' elements")
+    void reflattenValue() {
+        org.armature.model.Stage s = Templates.defaultStage();
+        FlattenOptions fo = FlattenOptions.of(true, 25);
+        Netlist nl = NetlistBuilder.flatten(s, fo);
+        int v1 = indexOf(s, "V1");
+        org.armature.model.Stage changed = s.withPart(s.require("V1").with("volts", 9.0));
+        Netlist re = NetlistBuilder.reflatten(nl, changed, fo, v1).orElseThrow();
+        assertTrue(re.sameShape(nl));
+        assertEquals(9.0, ((VoltageSource) re.part("V1").orElseThrow().elements().get(0)).volts(), 0.0);
+        assertEquals(nl.elements().size(), re.elements().size());
+        assertTrue(re.part("K1").orElseThrow().elements().get(0) == nl.part("K1").orElseThrow().elements().get(0),
+                "an unchanged part keeps its elements");
+    }
+
+    @Test
+    @DisplayName("re-flattening refuses a change of structure (a series resistance set to 0 removes a node)")
+    void reflattenStructure() {
+        org.armature.model.Stage s = Templates.defaultStage();
+        FlattenOptions fo = FlattenOptions.of(true, 25);
+        Netlist nl = NetlistBuilder.flatten(s, fo);
+        org.armature.model.Part q = s.parts().stream().filter(p -> p.kind() == org.armature.model.PartKind.NPN)
+                .findFirst().orElseThrow();
+        org.armature.model.Stage changed = s.withPart(q.with("baseResistanceOhms", 0.0));
+        assertTrue(NetlistBuilder.reflatten(nl, changed, fo, indexOf(s, q.ref())).isEmpty());
+    }
+
+    private static int indexOf(org.armature.model.Stage s, String ref) {
+        for (int i = 0; i < s.parts().size(); i++) {
+            if (s.parts().get(i).ref().equals(ref)) {
+                return i;
+            }
+        }
+        throw new IllegalArgumentException(ref);
+    }
 }
