@@ -5,6 +5,7 @@ import java.util.HashSet;
 import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import org.armature.devices.BreakdownClamp;
 import org.armature.devices.MovingArmature;
@@ -29,7 +30,10 @@ import org.armature.solver.SolveOptions;
 /**
  * Turns a stage into a {@link TimeDomainCircuit}: the solver's netlist of each drive level, with the
  * reactive parts given the run's integration formula, the coil's inductance, self-capacitance and
- * core loss added, and a breakdown clamp across the switch.
+ * core loss added, and a breakdown clamp across the switch. A relay whose attracted inductance
+ * exceeds the released one gets the fitted moving armature ({@link RelayArmatureFit}); when the
+ * fit reports inconsistent figures (its ERROR findings: for example an attracted inductance too
+ * high for the pick-up/drop-out ratio) or none is given, the constant-inductance threshold model.
  */
 final class StageCircuit {
 
@@ -122,9 +126,11 @@ final class StageCircuit {
         }
         double pickUp = handle.pickUpAmps();
         double dropOut = handle.dropOutAmps();
-        RelayArmatureFit fit = RelayArmatureFit.fit(armatureDatasheet(relay, ohms, pickUp, dropOut));
-        if (fit.moving().isPresent()) {
-            MovingArmature m = fit.moving().get();
+        Optional<MovingArmature> moving = relay.value("inductanceAttractedHenries") > lRel && dropOut < pickUp
+                ? RelayArmatureFit.fit(armatureDatasheet(relay, ohms, pickUp, dropOut)).moving()
+                : Optional.empty();
+        if (moving.isPresent()) {
+            MovingArmature m = moving.get();
             tc.setHenries(m.inductanceHenries(operated ? 0.0 : m.travelMetres()));
             c.armatures.add(new ArmatureDynamics(relay.ref(), tc, handle.contactSlot(), m, operated));
             return tc;

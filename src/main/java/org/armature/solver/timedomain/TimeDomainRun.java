@@ -17,7 +17,10 @@ import org.armature.solver.NewtonSolver;
  * The step loop of one run: DC operating point, then time points under local-truncation-error
  * control (CHECKS NM-9, NM-10), a time point on every breakpoint (drive edges, ends of armature
  * transit) with a backward-Euler restart after each (NM-7), and relay thresholds located in time by
- * {@link EventLocator} within {@link StepOptions#eventTimeToleranceSeconds()}.
+ * {@link EventLocator} within {@link StepOptions#eventTimeToleranceSeconds()}. Moving armatures
+ * ({@link ArmatureDynamics}) are solved with the circuit at every time point (staggered fixed
+ * point), their gaps join the error test, and their events (leaving a stop, contact set point,
+ * arrival at a stop) are located alike.
  *
  * <p>Single use: construct, {@link #run()}, read the result.
  */
