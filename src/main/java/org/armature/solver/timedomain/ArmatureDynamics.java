@@ -52,6 +52,8 @@ final class ArmatureDynamics {
     static final int ATTRACTED_STOP = 2;
     static final int RELEASED_STOP = 3;
     static final int EVENT_COUNT = 4;
+    /** Value of an event function that cannot fire in the present phase (negative: never crosses). */
+    private static final double NO_EVENT = -1;
 
     final String ref;
     final TransientCoil coil;
@@ -164,13 +166,13 @@ final class ArmatureDynamics {
             case LEAVE_STOP -> switch (phase) {
                 case RESTING_RELEASED -> i - model.pickUpAmps();
                 case RESTING_ATTRACTED -> model.dropOutAmps() - i;
-                case MOVING -> -1;
+                case MOVING -> NO_EVENT;
             };
-            case CONTACT -> phase != Phase.MOVING ? -1
+            case CONTACT -> phase != Phase.MOVING ? NO_EVENT
                     : contactsOperated ? (g - model.contactSetPointMetres()) / model.travelMetres()
                     : (model.contactSetPointMetres() - g) / model.travelMetres();
-            case ATTRACTED_STOP -> phase == Phase.MOVING ? -g / model.travelMetres() : -1;
-            case RELEASED_STOP -> phase == Phase.MOVING ? (g - model.travelMetres()) / model.travelMetres() : -1;
+            case ATTRACTED_STOP -> phase == Phase.MOVING ? -g / model.travelMetres() : NO_EVENT;
+            case RELEASED_STOP -> phase == Phase.MOVING ? (g - model.travelMetres()) / model.travelMetres() : NO_EVENT;
             default -> throw new IllegalArgumentException("event kind " + kind);
         };
     }
