@@ -1,7 +1,8 @@
 package org.armature.solver.timedomain;
 
 /**
- * The armature of a relay with constant inductance: it starts to move when the coil current reaches
+ * The armature of a relay with constant inductance (no attracted inductance given; with one the
+ * run uses {@link ArmatureDynamics}): it starts to move when the coil current reaches
  * pick-up (from released) or falls to drop-out (from attracted), as located events, and takes a
  * transit time to the other end, where the contacts change. The transit times come from the
  * datasheet: operate transit = operate time minus the L/R rise to pick-up at rated voltage; release

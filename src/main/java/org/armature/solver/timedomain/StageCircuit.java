@@ -5,8 +5,12 @@ import java.util.HashSet;
 import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import org.armature.devices.BreakdownClamp;
+import org.armature.devices.MovingArmature;
+import org.armature.devices.RelayArmatureDatasheet;
+import org.armature.devices.RelayArmatureFit;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
 import org.armature.model.Stage;
@@ -26,7 +30,10 @@ import org.armature.solver.SolveOptions;
 /**
  * Turns a stage into a {@link TimeDomainCircuit}: the solver's netlist of each drive level, with the
  * reactive parts given the run's integration formula, the coil's inductance, self-capacitance and
- * core loss added, and a breakdown clamp across the switch.
+ * core loss added, and a breakdown clamp across the switch. A relay whose attracted inductance
+ * exceeds the released one gets the fitted moving armature ({@link RelayArmatureFit}); when the
+ * fit reports inconsistent figures (its ERROR findings: for example an attracted inductance too
+ * high for the pick-up/drop-out ratio) or none is given, the constant-inductance threshold model.
  */
 final class StageCircuit {
 
@@ -119,6 +126,15 @@ final class StageCircuit {
         }
         double pickUp = handle.pickUpAmps();
         double dropOut = handle.dropOutAmps();
+        Optional<MovingArmature> moving = relay.value("inductanceAttractedHenries") > lRel && dropOut < pickUp
+                ? RelayArmatureFit.fit(armatureDatasheet(relay, ohms, pickUp, dropOut)).moving()
+                : Optional.empty();
+        if (moving.isPresent()) {
+            MovingArmature m = moving.get();
+            tc.setHenries(m.inductanceHenries(operated ? 0.0 : m.travelMetres()));
+            c.armatures.add(new ArmatureDynamics(relay.ref(), tc, handle.contactSlot(), m, operated));
+            return tc;
+        }
         double tau = lRel / rRef;
         double rated = relay.value("ratedVolts") / rRef;
         double rise = pickUp < rated ? tau * Math.log(rated / (rated - pickUp)) : 0;
@@ -127,6 +143,20 @@ final class StageCircuit {
         c.relays.add(new RelayDynamics(relay.ref(), tc, handle.contactSlot(), pickUp, dropOut, operateTransit,
                 releaseTransit, relay.value("travelMetres"), operated));
         return tc;
+    }
+
+    /**
+     * The fit's inputs from the relay part: the coil resistance at the coil temperature of the
+     * operating point, the pick-up and drop-out currents (must-operate and must-release voltages
+     * over the reference resistance: the armature responds to ampere-turns), both inductances,
+     * travel and spring ratio; mass, damping and contact set point take the typical defaults of
+     * {@link RelayArmatureDatasheet}, no bounce.
+     */
+    static RelayArmatureDatasheet armatureDatasheet(Part relay, double coilOhms, double pickUpAmps,
+                                                    double dropOutAmps) {
+        return RelayArmatureDatasheet.typical(coilOhms, relay.value("inductanceReleasedHenries"),
+                        relay.value("inductanceAttractedHenries"), pickUpAmps, dropOutAmps, relay.value("travelMetres"))
+                .withSpringForceRatio(relay.value("springForceRatio"));
     }
 
     /** Part whose pins are the switch's high and low terminals, with the rating of its breakdown. */
@@ -157,7 +187,8 @@ final class StageCircuit {
             double v = x.voltage(a1) - x.voltage(a2);
             return ohms * i * i + (core > 0 ? v * v / core : 0);
         });
-        c.dropOutAmps = c.relays.get(0).dropOutAmps;
+        c.dropOutAmps = c.relays.isEmpty() ? c.armatures.get(0).model.dropOutAmps() : c.relays.get(0).dropOutAmps;
+        // the inductance of the initial gap (attracted when the run starts operated)
         c.storedEnergyHenries = coil.henries();
         // the switch that carries the coil current: the first switch part touching a coil net
         PartNetwork sw = null;

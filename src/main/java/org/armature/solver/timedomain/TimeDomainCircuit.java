@@ -24,6 +24,8 @@ final class TimeDomainCircuit {
     final List<Element> driveHigh = new ArrayList<>();
     final List<Reactive> reactives = new ArrayList<>();
     final List<RelayDynamics> relays = new ArrayList<>();
+    /** Relays with a moving armature (an attracted inductance given); their coils are in {@link #reactives}. */
+    final List<ArmatureDynamics> armatures = new ArrayList<>();
     final Map<String, Integer> namedNodes = new LinkedHashMap<>();
     final List<Probe> probes = new ArrayList<>();
     final List<SwitchClamp> clamps = new ArrayList<>();

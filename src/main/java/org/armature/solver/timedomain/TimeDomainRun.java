@@ -17,7 +17,10 @@ import org.armature.solver.NewtonSolver;
  * The step loop of one run: DC operating point, then time points under local-truncation-error
  * control (CHECKS NM-9, NM-10), a time point on every breakpoint (drive edges, ends of armature
  * transit) with a backward-Euler restart after each (NM-7), and relay thresholds located in time by
- * {@link EventLocator} within {@link StepOptions#eventTimeToleranceSeconds()}.
+ * {@link EventLocator} within {@link StepOptions#eventTimeToleranceSeconds()}. Moving armatures
+ * ({@link ArmatureDynamics}) are solved with the circuit at every time point (staggered fixed
+ * point), their gaps join the error test, and their events (leaving a stop, contact set point,
+ * arrival at a stop) are located alike.
  *
  * <p>Single use: construct, {@link #run()}, read the result.
  */
@@ -35,6 +38,10 @@ final class TimeDomainRun {
     private int newtonIterations;
     private final int n;
     private final int stateCount;
+    /** States of the reactive elements; the armature gaps follow them in the state vector. */
+    private final int reactiveStates;
+    /** Time of the last accepted point, seconds (the start of the step being solved). */
+    private double tCommitted;
     private final ArraySolution view;
     private final TreeMap<Double, String> breakpoints = new TreeMap<>();
     private final List<TransientEvent> events = new ArrayList<>();
@@ -77,6 +84,8 @@ final class TimeDomainRun {
         for (Reactive r : circuit.reactives) {
             s += r.stateCount();
         }
+        this.reactiveStates = s;
+        s += circuit.armatures.size();
         this.stateCount = s;
         this.histTimes = new double[4][1];
         this.histStates = new double[4][s];
@@ -150,7 +159,7 @@ final class TimeDomainRun {
         }
         double[] trial = new double[n];
         double[] newStates = new double[stateCount];
-        double[] gOld = new double[c.relays.size()];
+        double[] gOld = new double[eventCount()];
         int steps = 0;
         while (t < duration) {
             if (++steps > o.maxSteps()) {
@@ -196,18 +205,17 @@ final class TimeDomainRun {
                     continue;
                 }
             }
-            // relay thresholds: locate the earliest crossing inside the step
+            // relay thresholds and armature events: locate the earliest crossing inside the step
             view.bind(x, states);
-            int crossing = -1;
-            double earliest = Double.POSITIVE_INFINITY;
-            for (int i = 0; i < c.relays.size(); i++) {
-                RelayDynamics r = c.relays.get(i);
-                gOld[i] = r.eventFunction(coilCurrentCommitted(r));
+            int eventTotal = gOld.length;
+            for (int i = 0; i < eventTotal; i++) {
+                gOld[i] = eventCommitted(i);
             }
             view.bind(trial, states);
-            for (int i = 0; i < c.relays.size(); i++) {
-                RelayDynamics r = c.relays.get(i);
-                double gNew = r.eventFunction(r.coil.current(view));
+            int crossing = -1;
+            double earliest = Double.POSITIVE_INFINITY;
+            for (int i = 0; i < eventTotal; i++) {
+                double gNew = eventTrial(i, view);
                 if (gOld[i] < 0 && gNew >= 0) {
                     double est = t + hTry * (-gOld[i]) / (gNew - gOld[i]);
                     if (est < earliest) {
@@ -217,9 +225,8 @@ final class TimeDomainRun {
                 }
             }
             if (crossing >= 0 && hTry > o.eventTimeToleranceSeconds()) {
-                RelayDynamics r = c.relays.get(crossing);
                 view.bind(trial, states);
-                EventLocator loc = new EventLocator(t, gOld[crossing], t + hTry, r.eventFunction(r.coil.current(view)),
+                EventLocator loc = new EventLocator(t, gOld[crossing], t + hTry, eventTrial(crossing, view),
                         o.eventTimeToleranceSeconds());
                 double[] best = trial.clone();
                 IntegratorCoefficients bestK = k;
@@ -233,7 +240,7 @@ final class TimeDomainRun {
                         break;
                     }
                     view.bind(probe, states);
-                    double g = r.eventFunction(r.coil.current(view));
+                    double g = eventTrial(crossing, view);
                     loc.update(tt, g);
                     if (loc.eventTime() == tt) {
                         System.arraycopy(probe, 0, best, 0, n);
@@ -244,6 +251,10 @@ final class TimeDomainRun {
                 k = bestK;
                 System.arraycopy(best, 0, trial, 0, n);
                 c.step.set(k);
+                if (!c.armatures.isEmpty() && !solve(trial, t + hTry, k)) {
+                    // the armature states must belong to the point kept; its solve converged before
+                    throw new TransientFailureException("no solution at a located armature event", t, hTry);
+                }
             } else {
                 crossing = -1;
             }
@@ -255,13 +266,25 @@ final class TimeDomainRun {
             for (Reactive r : c.reactives) {
                 r.commit(view);
             }
+            for (ArmatureDynamics a : c.armatures) {
+                a.commit(k);
+            }
             System.arraycopy(trial, 0, x, 0, n);
             t = tNew;
+            tCommitted = t;
             accepted++;
             hPrev = hTry;
             pushHistory(t, newStates);
             h = checkError ? control.propose(hTry, ratio, method.order()) : hTry * o.maxGrowthFactor();
-            if (crossing >= 0) {
+            if (crossing >= c.relays.size()) {
+                int index = crossing - c.relays.size();
+                ArmatureDynamics a = c.armatures.get(index / ArmatureDynamics.EVENT_COUNT);
+                String what = a.handle(index % ArmatureDynamics.EVENT_COUNT);
+                events.add(new TransientEvent(t, what, a.ref));
+                states[a.contactSlot] = a.contactsOperated ? 1.0 : 0.0;
+                restart();
+                h = o.firstStepSeconds();
+            } else if (crossing >= 0) {
                 RelayDynamics r = c.relays.get(crossing);
                 boolean wasAttracted = r.headingAttracted();
                 double arrival = r.reverse(t);
@@ -380,21 +403,74 @@ final class TimeDomainRun {
                 }
             }
         }
+        for (ArmatureDynamics a : c.armatures) {
+            view.bind(x, states);
+            a.settle(a.coil.current(view));
+            if (states[a.contactSlot] != (a.contactsOperated ? 1.0 : 0.0)) {
+                states[a.contactSlot] = a.contactsOperated ? 1.0 : 0.0;
+                if (!newton(x, StampContext.DC)) {
+                    throw new TransientFailureException("no DC operating point after contact change", 0, 0);
+                }
+            }
+        }
     }
 
+    /**
+     * Solves one time point. With moving armatures the circuit solve and the mechanical solve
+     * alternate (staggered fixed point, see {@link ArmatureDynamics}) until every gap settles.
+     */
     private boolean solve(double[] trial, double time, IntegratorCoefficients k) {
         c.step.set(k);
         StampContext ctx = new StampContext(StampContext.Mode.TRANSIENT, 1.0, time, 1.0 / k.a0(), k.a0());
-        return newton(trial, ctx);
+        if (c.armatures.isEmpty()) {
+            return newton(trial, ctx);
+        }
+        for (ArmatureDynamics a : c.armatures) {
+            a.begin(k, time - tCommitted);
+        }
+        double gapTolerance = ArmatureDynamics.GAP_ITERATION_FRACTION * o.absoluteMetresTolerance();
+        for (int pass = 0; pass < ArmatureDynamics.MAX_COUPLING_PASSES; pass++) {
+            if (!newton(trial, ctx)) {
+                return false;
+            }
+            view.bind(trial, states);
+            double worst = 0;
+            for (ArmatureDynamics a : c.armatures) {
+                worst = Math.max(worst, Math.abs(a.advance(a.coil.current(view), k)));
+            }
+            if (worst <= gapTolerance) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private int eventCount() {
+        return c.relays.size() + ArmatureDynamics.EVENT_COUNT * c.armatures.size();
+    }
+
+    /** Event function i at the committed point (view bound to it). */
+    private double eventCommitted(int i) {
+        if (i < c.relays.size()) {
+            RelayDynamics r = c.relays.get(i);
+            return r.eventFunction(coilCurrentCommitted(r));
+        }
+        int j = i - c.relays.size();
+        return c.armatures.get(j / ArmatureDynamics.EVENT_COUNT).event(j % ArmatureDynamics.EVENT_COUNT, false);
+    }
+
+    /** Event function i at the point just solved (view bound to its solution). */
+    private double eventTrial(int i, ArraySolution solved) {
+        if (i < c.relays.size()) {
+            RelayDynamics r = c.relays.get(i);
+            return r.eventFunction(r.coil.current(solved));
+        }
+        int j = i - c.relays.size();
+        return c.armatures.get(j / ArmatureDynamics.EVENT_COUNT).event(j % ArmatureDynamics.EVENT_COUNT, true);
     }
 
     private double errorRatio(double[] trial, double tNew, IntegratorCoefficients k, double[] newStates) {
-        view.bind(trial, states);
-        int off = 0;
-        for (Reactive r : c.reactives) {
-            r.states(view, newStates, off);
-            off += r.stateCount();
-        }
+        statesAt(trial, newStates);
         int p = k.method().order();
         double[] ts = new double[p + 2];
         double[] vs = new double[p + 2];
@@ -403,26 +479,33 @@ final class TimeDomainRun {
             ts[j] = histTimes[j - 1][0];
         }
         double worst = 0;
-        off = 0;
+        int off = 0;
         for (Reactive r : c.reactives) {
             for (int s = 0; s < r.stateCount(); s++) {
-                int idx = off + s;
-                vs[0] = newStates[idx];
-                for (int j = 1; j < p + 2; j++) {
-                    vs[j] = histStates[j - 1][idx];
-                }
-                double e = TruncationError.estimate(k, ts, vs);
-                double abs = switch (r.unit(s)) {
-                    case VOLTS -> o.absoluteVoltsTolerance();
-                    case AMPS -> o.absoluteAmpsTolerance();
-                    case METRES -> o.absoluteMetresTolerance();
-                };
-                double scale = Math.max(stateScale[idx], Math.abs(vs[0]));
-                worst = Math.max(worst, TruncationError.ratio(e, scale, vs[1], o.relativeTolerance(), abs));
+                worst = Math.max(worst, stateRatio(off + s, r.unit(s), k, ts, vs, newStates, p));
             }
             off += r.stateCount();
         }
+        for (int a = 0; a < c.armatures.size(); a++) {
+            worst = Math.max(worst, stateRatio(reactiveStates + a, Reactive.Unit.METRES, k, ts, vs, newStates, p));
+        }
         return worst;
+    }
+
+    private double stateRatio(int idx, Reactive.Unit unit, IntegratorCoefficients k, double[] ts, double[] vs,
+                              double[] newStates, int p) {
+        vs[0] = newStates[idx];
+        for (int j = 1; j < p + 2; j++) {
+            vs[j] = histStates[j - 1][idx];
+        }
+        double e = TruncationError.estimate(k, ts, vs);
+        double abs = switch (unit) {
+            case VOLTS -> o.absoluteVoltsTolerance();
+            case AMPS -> o.absoluteAmpsTolerance();
+            case METRES -> o.absoluteMetresTolerance();
+        };
+        double scale = Math.max(stateScale[idx], Math.abs(vs[0]));
+        return TruncationError.ratio(e, scale, vs[1], o.relativeTolerance(), abs);
     }
 
     /** Pushes the states of the point just accepted, read before its commit (the coil reads its history). */
@@ -450,6 +533,9 @@ final class TimeDomainRun {
             r.states(view, out, off);
             off += r.stateCount();
         }
+        for (int a = 0; a < c.armatures.size(); a++) {
+            out[reactiveStates + a] = c.armatures.get(a).gTrial;
+        }
         return out;
     }
 
@@ -464,7 +550,7 @@ final class TimeDomainRun {
         if (c.coilCurrent != null) {
             names.add(Waveform.COIL_CURRENT);
         }
-        if (!c.relays.isEmpty()) {
+        if (!c.relays.isEmpty() || !c.armatures.isEmpty()) {
             names.add(Waveform.ARMATURE_POSITION);
             names.add(Waveform.CONTACT_STATE);
         }
@@ -482,7 +568,7 @@ final class TimeDomainRun {
         if (c.coilCurrent != null) {
             units.add("A");
         }
-        if (!c.relays.isEmpty()) {
+        if (!c.relays.isEmpty() || !c.armatures.isEmpty()) {
             units.add("m");
             units.add("1");
         }
@@ -493,7 +579,7 @@ final class TimeDomainRun {
         view.bind(solution, states);
         times.add(t);
         double[] row = new double[c.namedNodes.size() + c.probes.size() + (c.coilCurrent == null ? 0 : 1)
-                + (c.relays.isEmpty() ? 0 : 2)];
+                + (c.relays.isEmpty() && c.armatures.isEmpty() ? 0 : 2)];
         int j = 0;
         for (int node : c.namedNodes.values()) {
             row[j++] = view.voltage(node);
@@ -508,6 +594,10 @@ final class TimeDomainRun {
             RelayDynamics r = c.relays.get(0);
             row[j++] = r.position(t);
             row[j] = states[r.contactSlot];
+        } else if (!c.armatures.isEmpty()) {
+            ArmatureDynamics a = c.armatures.get(0);
+            row[j++] = a.model.travelMetres() - a.gTrial;
+            row[j] = states[a.contactSlot];
         }
         samples.add(row);
         double[] in = new double[INTERNALS];

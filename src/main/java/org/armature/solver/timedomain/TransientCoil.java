@@ -15,7 +15,7 @@ import org.armature.netlist.StampContext;
  * <p>Stamped in Norton form, so it needs no extra unknown: at DC a conductance 1/R (the inductance
  * is a short); at a time point {@code dλ/dt ≈ a0·λ + history} gives
  * {@code i = (v − history)/(R + a0·L)}. During one Newton solve the inductance is fixed; the
- * armature's gap is iterated around it by the run (see {@link TransientAnalysis}).
+ * armature's gap is iterated around it by the run (see {@link ArmatureDynamics}).
  */
 final class TransientCoil implements Reactive {
 

@@ -13,7 +13,10 @@ public record TransientEvent(double timeSeconds, String what, String subject) {
     public static final String DRIVE_HIGH = "drive high";
     /** The drive pin went low. */
     public static final String DRIVE_LOW = "drive low";
-    /** The armature left its released position (constant inductance: the coil current reached pick-up). */
+    /**
+     * The armature left its released position: the coil current reached pick-up (with a moving
+     * armature, the current whose pull balances the spring at the released stop).
+     */
     public static final String PICK_UP = "pick-up";
     /** The armature left its attracted position (constant inductance: the coil current fell to drop-out). */
     public static final String DROP_OUT = "drop-out";

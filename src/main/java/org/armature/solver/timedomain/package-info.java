@@ -23,6 +23,24 @@
  * and drop-out are located in time by Illinois regula falsi
  * ({@link org.armature.solver.timedomain.EventLocator}).
  *
+ * <p>Relay armature. With an attracted inductance above the released one, the relay is the
+ * fitted electromechanical armature of {@link org.armature.devices.RelayArmatureFit} (DESIGN.md
+ * "Relay model"): the coil integrates its flux linkage λ (dλ/dt = v − R·i, i = λ/L(g)) with its
+ * inductance set to L(g) of the new point before each Newton solve, and the gap and speed are
+ * integrated by the same multistep formula from the pull of the new coil current; circuit and
+ * mechanics alternate within the time point until the gap settles to 1 % of the METRES tolerance
+ * (a staggered fixed point, so the coupling adds no error beyond that), and the gap takes part in
+ * the truncation-error test. Leaving a stop (the coil current at the balance current: the fitted
+ * must-operate or must-release current), the contact set point and the arrival at a stop are
+ * located events with a backward-Euler restart; at a stop the speed reverses with the
+ * coefficient of restitution (contact bounce). Operate time, release time, the current dip at
+ * pull-in and the slower release with a plain diode come out of this motion. The datasheet's
+ * mass and damping are not relay-part parameters yet: the typical defaults of
+ * {@link org.armature.devices.RelayArmatureDatasheet} apply. Without an attracted inductance (0
+ * or not above the released value) the relay keeps the constant-inductance threshold model: the
+ * armature moves at the pick-up and drop-out currents and takes the datasheet transit times, so
+ * the closed forms of CHECKS.md hold.
+ *
  * <p>Choosing the tolerances ({@link org.armature.solver.timedomain.StepOptions}): the relative
  * tolerance (default 1e-3) applies to the largest magnitude each state has reached, so a decaying or
  * ringing quantity is held to a fraction of its own amplitude. Local control bounds the error per

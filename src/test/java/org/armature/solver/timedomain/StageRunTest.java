@@ -33,11 +33,12 @@ class StageRunTest {
 
     @ParameterizedTest
     @EnumSource(value = Suppressor.class, names = {"DIODE", "DIODE_ZENER", "TVS", "NONE", "RESISTOR", "RC"})
-    @DisplayName("energy balance on the low-side NPN stage: ½·L·I0² (+ rail energy while it feeds) = coil R + suppressor + switch within 1 %")
+    @DisplayName("energy balance on the low-side NPN stage: ½·L·I0² − field energy left − work of the pull on the armature (+ rail energy while it feeds) = coil R + suppressor + switch within 1 % (derived)")
     void energyBalance(Suppressor s) {
         Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN, s, HighSideDrive.LEVEL_SHIFT);
-        TransientResult r = TransientAnalysis.run(stage, TransientOptions.turnOff().withDuration(0.04)
-                .withStep(StepOptions.DEFAULTS.withTolerance(1e-4)));
+        TimeDomainCircuit c = StageCircuit.build(stage, stage.conditions().ambientCelsius(), true);
+        TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOff(TransientOptions.DEFAULT_EDGE_SECONDS),
+                0.04, StepOptions.DEFAULTS.withTolerance(1e-4));
         TransientMetrics m = r.metrics();
         Waveform w = r.waveform();
         // energy the 12 V rail delivers after the edge (into the coil while the switch or a snubber conducts)
@@ -52,9 +53,13 @@ class StageRunTest {
         }
         double supp = Double.isNaN(m.suppressorEnergyJoules()) ? 0 : m.suppressorEnergyJoules();
         double out = m.coilResistiveEnergyJoules() + supp + m.switchEnergyJoules();
-        assertEquals(m.storedEnergyJoules() + supplied, out, 0.01 * m.storedEnergyJoules(),
+        // the template relay has a moving armature (1.2 H / 2.4 H): account for the field energy
+        // left at the end and the work of the pull while the spring opens the gap (derived)
+        double motion = c.armatures.isEmpty() ? 0 : Circuits.endFieldEnergyJoules(w, c.armatures.get(0).model)
+                + Circuits.pullWorkJoules(w, c.armatures.get(0).model, TransientOptions.DEFAULT_EDGE_SECONDS);
+        assertEquals(m.storedEnergyJoules() + supplied - motion, out, 0.01 * m.storedEnergyJoules(),
                 "coil " + m.coilResistiveEnergyJoules() + " supp " + supp + " switch " + m.switchEnergyJoules()
-                        + " rail " + supplied + " coil current at end " + iCoil.value(w.size() - 1));
+                        + " rail " + supplied + " motion " + motion + " coil current at end " + iCoil.value(w.size() - 1));
     }
 
     @Test
@@ -77,7 +82,7 @@ class StageRunTest {
     }
 
     @Test
-    @DisplayName("turn-on: contacts close after pick-up; operate time near the datasheet's 8 ms (constant-inductance armature)")
+    @DisplayName("turn-on: contacts close after pick-up; operate time from the armature physics near the datasheet's 8 ms (1 g default armature: 8–9 ms, RelayArmatureDatasheet, derived)")
     void turnOn() {
         TransientResult r = TransientAnalysis.run(Templates.defaultStage(), TransientOptions.turnOn());
         assertTrue(r.waveform().firstEvent(TransientEvent.PICK_UP).isPresent());
