@@ -49,6 +49,7 @@ public final class ArmatureApp extends Application {
                 solver, Platform::runLater, slow);
         MainWindow w = new MainWindow(vm, new RecentFiles());
         primary.setScene(w.scene(1560, 960));
+        w.guardClose(primary);
         Runnable title = () -> primary.setTitle("Armature — " + vm.fileName() + (vm.dirtyProperty().get() ? " ●" : ""));
         title.run();
         vm.fileProperty().addListener((o, a, b) -> title.run());

@@ -15,6 +15,7 @@ import javafx.scene.control.MenuItem;
 import javafx.scene.control.TextField;
 import javafx.scene.image.PixelReader;
 import javafx.scene.image.WritableImage;
+import javafx.stage.WindowEvent;
 import org.armature.io.StageFileException;
 import org.armature.model.HighSideDrive;
 import org.armature.model.Stage;
@@ -60,12 +61,15 @@ class MainWindowTest {
     private EditorViewModel vm;
     private MainWindow window;
     private final MemoryStore store = new MemoryStore();
+    private javafx.stage.Stage fxStage;
 
     @Start
     void start(javafx.stage.Stage stage) {
         vm = new EditorViewModel(Templates.defaultStage(), store, ReadoutSource.NONE, Runnable::run, Runnable::run);
         window = new MainWindow(vm, new RecentFiles());
         stage.setScene(window.scene(1200, 800));
+        window.guardClose(stage);
+        fxStage = stage;
         stage.show();
     }
 
@@ -199,5 +203,45 @@ class MainWindowTest {
             }
         }
         assertTrue(ink > 300, "ink samples: " + ink);
+    }
+
+    @Test
+    @DisplayName("the close button with unsaved changes asks; cancel keeps the window open, discard lets it close")
+    void closeButtonAsksBeforeDiscarding(FxRobot robot) {
+        int[] asked = {0};
+        boolean[] answer = {false};
+        robot.interact(() -> window.setDiscardQuestion(() -> {
+            asked[0]++;
+            return answer[0];
+        }));
+        // clean document: no question, the close goes ahead
+        AtomicReference<WindowEvent> clean = new AtomicReference<>();
+        robot.interact(() -> {
+            clean.set(new WindowEvent(fxStage, WindowEvent.WINDOW_CLOSE_REQUEST));
+            assertTrue(window.handleCloseRequest(clean.get()));
+        });
+        assertEquals(0, asked[0]);
+        assertFalse(clean.get().isConsumed());
+        robot.interact(() -> vm.setValue("R1", "resistanceOhms", 2200));
+        assertTrue(vm.dirtyProperty().get());
+        // dirty and cancelled: the request is consumed, the window stays
+        robot.interact(() -> fxStage.fireEvent(new WindowEvent(fxStage, WindowEvent.WINDOW_CLOSE_REQUEST)));
+        assertEquals(1, asked[0]);
+        assertTrue(fxStage.isShowing());
+        AtomicReference<WindowEvent> cancelled = new AtomicReference<>();
+        robot.interact(() -> {
+            cancelled.set(new WindowEvent(fxStage, WindowEvent.WINDOW_CLOSE_REQUEST));
+            assertFalse(window.handleCloseRequest(cancelled.get()));
+        });
+        assertTrue(cancelled.get().isConsumed());
+        // dirty and discarded: the request passes
+        answer[0] = true;
+        AtomicReference<WindowEvent> discarded = new AtomicReference<>();
+        robot.interact(() -> {
+            discarded.set(new WindowEvent(fxStage, WindowEvent.WINDOW_CLOSE_REQUEST));
+            assertTrue(window.handleCloseRequest(discarded.get()));
+        });
+        assertFalse(discarded.get().isConsumed());
+        assertEquals(3, asked[0]);
     }
 }
