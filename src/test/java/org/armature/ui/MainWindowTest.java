@@ -244,4 +244,37 @@ class MainWindowTest {
         assertFalse(discarded.get().isConsumed());
         assertEquals(3, asked[0]);
     }
+
+    @Test
+    @DisplayName("the drive pin's datasheet section fits GP-7 (VOH 2.9 V at 8 mA, 2.0 V at 20 mA: 75 Ω, 3.5 V; "
+            + "derived from a typical 3.3 V microcontroller output table) as one step; bad input is marked")
+    void datasheetSectionFitsPin(FxRobot robot) {
+        robot.interact(() -> {
+            vm.setValue("U1", "highVolts", 5);
+            vm.setValue("U1", "outputResistanceOhms", 40);
+            vm.select(Selection.ofPart("U1"));
+        });
+        StageDocument before = vm.document();
+        javafx.scene.control.TitledPane pane = robot.lookup("#datasheet-pane").queryAs(javafx.scene.control.TitledPane.class);
+        TextField i2 = robot.lookup("#fit-voh2-i").queryAs(TextField.class);
+        robot.interact(() -> {
+            pane.setExpanded(true);
+            i2.setText("20 mQ");
+        });
+        assertTrue(i2.getStyleClass().contains(PartSheet.INVALID));
+        robot.interact(() -> robot.lookup("#datasheet-apply").queryButton().fire());
+        assertEquals(before, vm.document(), "nothing applied while a figure is bad");
+        robot.interact(() -> {
+            robot.lookup("#fit-voh1").queryAs(TextField.class).setText("2.9");
+            robot.lookup("#fit-voh1-i").queryAs(TextField.class).setText("8m");
+            robot.lookup("#fit-voh2").queryAs(TextField.class).setText("2.0 V");
+            i2.setText("20m");
+        });
+        assertFalse(i2.getStyleClass().contains(PartSheet.INVALID));
+        robot.interact(() -> robot.lookup("#datasheet-apply").queryButton().fire());
+        assertEquals(75, vm.stage().require("U1").value("outputResistanceOhms"), 1e-9, "GP-7");
+        assertEquals(3.5, vm.stage().require("U1").value("highVolts"), 1e-9, "GP-7");
+        robot.interact(vm::undo);
+        assertEquals(before, vm.document());
+    }
 }
