@@ -25,7 +25,9 @@ import org.armature.ui.edit.Editor;
  *   <li>NPN and PNP: βF and IS by {@link BjtFit#gainAndSaturationCurrent} from typical hFE at a stated
  *       IC and VCE and VBE(sat) at a stated IC with IC/IB = {@value #SATURATION_FORCED_BETA}, both at
  *       {@link DiodeParams#DATASHEET_TEMPERATURE_KELVIN}. Figures are entered as magnitudes; the signs
- *       of a PNP are applied here.</li>
+ *       of a PNP are applied here. The datasheet's VBE(sat) and VCE are terminal voltages; the drops
+ *       across the part's RB, RC and RE are taken off before the fit, which works on the intrinsic
+ *       junctions.</li>
  *   <li>N-channel MOSFET: VT0 and β by {@link MosfetFit#fit} from VGS(th) at its test current and
  *       RDS(on) at a stated VGS and ID; the datasheet figures VGS(th), RDS(on) and its VGS are written
  *       as entered.</li>
@@ -112,18 +114,23 @@ public final class DatasheetFit {
         if (part.kind() != PartKind.NPN && part.kind() != PartKind.PNP) {
             return Result.refused(part.ref() + " is not a bipolar transistor.");
         }
-        BjtPolarity polarity = part.kind() == PartKind.NPN ? BjtPolarity.NPN : BjtPolarity.PNP;
-        double sign = polarity.sign();
-        double inf = Double.POSITIVE_INFINITY;
+        double sign = part.kind() == PartKind.NPN ? BjtPolarity.NPN.sign() : BjtPolarity.PNP.sign();
         try {
-            BjtParams base = new BjtParams(polarity, part.value("saturationCurrentAmps"), part.value("betaForward"),
-                    part.value("betaReverse"), 1.0, 1.0, part.value("earlyVolts"), inf, part.value("kneeCurrentAmps"),
-                    inf, part.value("baseResistanceOhms"), part.value("collectorResistanceOhms"),
-                    part.value("emitterResistanceOhms"), DiodeParams.PN_JUNCTION_TEMP_EXPONENT,
-                    part.value("gainTempExponent"), DiodeParams.SILICON_BAND_GAP_ELECTRON_VOLTS,
-                    DiodeParams.DATASHEET_TEMPERATURE_KELVIN);
+            BjtParams base = bjtParams(part);
+            // the datasheet states terminal voltages; the fit works on the intrinsic junctions, so the
+            // drops across RB, RC and RE (series elements in the netlist) are taken off first
+            double hfeBaseAmps = f.hfeCollectorAmps() / f.hfe();
+            double hfeVce = f.hfeVceVolts() - f.hfeCollectorAmps() * base.collectorResistanceOhms()
+                    - (f.hfeCollectorAmps() + hfeBaseAmps) * base.emitterResistanceOhms();
+            double satBaseAmps = f.satCollectorAmps() / SATURATION_FORCED_BETA;
+            double vbeSat = f.vbeSatVolts() - satBaseAmps * base.baseResistanceOhms()
+                    - (f.satCollectorAmps() + satBaseAmps) * base.emitterResistanceOhms();
+            if (!(hfeVce > 0 && vbeSat > 0)) {
+                return Result.refused("The stated voltages are smaller than the drops across the series "
+                        + "resistances RB, RC and RE.");
+            }
             BjtParams fit = BjtFit.gainAndSaturationCurrent(base, f.hfe(), sign * f.hfeCollectorAmps(),
-                    sign * f.hfeVceVolts(), sign * f.vbeSatVolts(), sign * f.satCollectorAmps(),
+                    sign * hfeVce, sign * vbeSat, sign * f.satCollectorAmps(),
                     SATURATION_FORCED_BETA, DiodeParams.DATASHEET_TEMPERATURE_KELVIN);
             return checked(part, List.of(
                     new Editor.ValueChange(part.ref(), "betaForward", fit.betaForward()),
@@ -131,6 +138,27 @@ public final class DatasheetFit {
         } catch (IllegalArgumentException | DeviceConvergenceException e) {
             return Result.refused("No fit: " + e.getMessage());
         }
+    }
+
+    /**
+     * The bipolar model parameters of an NPN or PNP part, as the netlist builds them (unit emission
+     * coefficients, no reverse Early voltage or knee, stated at
+     * {@link DiodeParams#DATASHEET_TEMPERATURE_KELVIN}).
+     *
+     * @throws IllegalArgumentException if the part is not a bipolar transistor
+     */
+    public static BjtParams bjtParams(Part part) {
+        if (part.kind() != PartKind.NPN && part.kind() != PartKind.PNP) {
+            throw new IllegalArgumentException(part.ref() + " is not a bipolar transistor");
+        }
+        BjtPolarity polarity = part.kind() == PartKind.NPN ? BjtPolarity.NPN : BjtPolarity.PNP;
+        double inf = Double.POSITIVE_INFINITY;
+        return new BjtParams(polarity, part.value("saturationCurrentAmps"), part.value("betaForward"),
+                part.value("betaReverse"), 1.0, 1.0, part.value("earlyVolts"), inf, part.value("kneeCurrentAmps"),
+                inf, part.value("baseResistanceOhms"), part.value("collectorResistanceOhms"),
+                part.value("emitterResistanceOhms"), DiodeParams.PN_JUNCTION_TEMP_EXPONENT,
+                part.value("gainTempExponent"), DiodeParams.SILICON_BAND_GAP_ELECTRON_VOLTS,
+                DiodeParams.DATASHEET_TEMPERATURE_KELVIN);
     }
 
     /** Fits VT0 and β of an N-channel MOSFET part and writes the datasheet figures as entered. */

@@ -6,6 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Map;
 import java.util.stream.Collectors;
+import org.armature.devices.Bjt;
+import org.armature.devices.BjtEvaluation;
+import org.armature.devices.BjtJunctionSolution;
+import org.armature.devices.DeviceNewtonOptions;
+import org.armature.devices.DiodeParams;
 import org.armature.model.HighSideDrive;
 import org.armature.model.Part;
 import org.armature.model.Stage;
@@ -118,6 +123,19 @@ class DatasheetFitTest {
         assertEquals(java.util.Set.of("betaForward", "saturationCurrentAmps"), byKey(r).keySet());
         assertTrue(vm.applyDatasheetFit("Q1", r));
         assertEquals(byKey(r).get("betaForward"), vm.stage().require("Q1").value("betaForward"), 0);
+        // derived: the fitted model reproduces both statements at the terminals (hFE at 10 mA, 1 V; VBE(sat) at 50 mA, 5 mA)
+        Bjt fitted = new Bjt(DatasheetFit.bjtParams(vm.stage().require("Q1")));
+        double t = DiodeParams.DATASHEET_TEMPERATURE_KELVIN;
+        var q1 = fitted.params();
+        double ib = 10e-3 / 200;
+        double vceIntrinsic = 1 - 10e-3 * q1.collectorResistanceOhms() - (10e-3 + ib) * q1.emitterResistanceOhms();
+        BjtJunctionSolution active = fitted.vbeForCollectorCurrent(10e-3, vceIntrinsic, t, DeviceNewtonOptions.DEFAULTS);
+        BjtEvaluation ev = new BjtEvaluation();
+        fitted.evaluate(active.vbeVolts(), active.vbcVolts(), t, ev);
+        assertEquals(200, ev.collectorAmps() / ev.baseAmps(), 200 * 1e-6, "derived: hFE = IC/IB");
+        BjtJunctionSolution sat = fitted.junctionsForCurrents(50e-3, 5e-3, t, DeviceNewtonOptions.DEFAULTS);
+        double terminalVbe = sat.vbeVolts() + 5e-3 * q1.baseResistanceOhms() + 55e-3 * q1.emitterResistanceOhms();
+        assertEquals(0.85, terminalVbe, 1e-6, "derived: terminal VBE(sat) = VBE' + IB·RB + IE·RE at IC/IB = 10");
         vm.undo();
         assertEquals(before, vm.document());
 
