@@ -4,6 +4,8 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import javafx.application.Application;
 import javafx.application.Platform;
+import javafx.geometry.Rectangle2D;
+import javafx.stage.Screen;
 import javafx.stage.Stage;
 import org.armature.model.Templates;
 
@@ -24,6 +26,8 @@ public final class ArmatureApp extends Application {
 
     private ExecutorService solver;
     private ExecutorService analyses;
+    private Stage primary;
+    private MainWindow window;
 
     /** Starts the JavaFX application (the jar's launcher calls this by reflection). */
     public static void main(String[] args) {
@@ -32,6 +36,7 @@ public final class ArmatureApp extends Application {
 
     @Override
     public void start(Stage primary) {
+        this.primary = primary;
         solver = Executors.newSingleThreadExecutor(r -> {
             Thread t = new Thread(r, "armature-solver");
             t.setDaemon(true);
@@ -48,7 +53,9 @@ public final class ArmatureApp extends Application {
         EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, new EngineReadouts(),
                 solver, Platform::runLater, slow);
         MainWindow w = new MainWindow(vm, new RecentFiles());
+        this.window = w;
         primary.setScene(w.scene(1560, 960));
+        w.guardClose(primary);
         Runnable title = () -> primary.setTitle("Armature — " + vm.fileName() + (vm.dirtyProperty().get() ? " ●" : ""));
         title.run();
         vm.fileProperty().addListener((o, a, b) -> title.run());
@@ -57,6 +64,7 @@ public final class ArmatureApp extends Application {
         if ("dark".equals(System.getProperty(THEME_PROPERTY))) {
             w.setDark(true);
         }
+        restoreLayout(primary, w);
         if (Boolean.getBoolean(EDGES_PROPERTY)) {
             w.edgesDrawer().setExpanded(true);
         }
@@ -64,8 +72,41 @@ public final class ArmatureApp extends Application {
         Platform.runLater(w.canvas()::fit);
     }
 
+    private static void restoreLayout(Stage stage, MainWindow w) {
+        WindowLayout.load(RecentFiles.preferences()).ifPresent(l -> {
+            Rectangle2D wanted = new Rectangle2D(l.xPixels(), l.yPixels(), l.widthPixels(), l.heightPixels());
+            // a position on a screen that is no longer attached is dropped: the window is centred
+            if (!Screen.getScreensForRectangle(wanted).isEmpty()) {
+                stage.setX(l.xPixels());
+                stage.setY(l.yPixels());
+            }
+            stage.setWidth(l.widthPixels());
+            stage.setHeight(l.heightPixels());
+            stage.setMaximized(l.maximised());
+            w.edgesDrawer().setExpanded(l.edgesOpen());
+        });
+    }
+
+    private void saveLayout() {
+        if (primary == null || window == null) {
+            return;
+        }
+        boolean max = primary.isMaximized();
+        boolean edges = window.edgesDrawer().isExpanded();
+        WindowLayout now = new WindowLayout(primary.getX(), primary.getY(), primary.getWidth(), primary.getHeight(),
+                max, edges);
+        // a maximised window keeps the normal bounds saved before, so un-maximising restores them
+        WindowLayout layout = max ? WindowLayout.load(RecentFiles.preferences())
+                .map(l -> new WindowLayout(l.xPixels(), l.yPixels(), l.widthPixels(), l.heightPixels(), true, edges))
+                .orElse(now) : now;
+        if (Double.isFinite(primary.getX()) && Double.isFinite(primary.getWidth())) {
+            layout.clamped().save(RecentFiles.preferences());
+        }
+    }
+
     @Override
     public void stop() {
+        saveLayout();
         if (solver != null) {
             solver.shutdownNow();
         }

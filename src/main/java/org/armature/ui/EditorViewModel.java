@@ -462,6 +462,23 @@ public final class EditorViewModel {
         refresh();
     }
 
+    /**
+     * Writes a datasheet fit's parameters as one undoable step ("Fit Q1 to datasheet"). A refused fit
+     * changes nothing and says why in {@link #messageProperty()}.
+     *
+     * @return true when the fit was applied
+     */
+    public boolean applyDatasheetFit(String ref, DatasheetFit.Result fit) {
+        if (!fit.fitted() || editor.stage().part(ref).isEmpty()) {
+            message.set(fit.problem().orElse("There is no part " + ref + "."));
+            return false;
+        }
+        editor.setValues("Fit " + ref + " to datasheet", fit.changes());
+        message.set("Fitted " + ref + " to the datasheet figures");
+        refresh();
+        return true;
+    }
+
     /** Executes a prepared command. */
     public void execute(EditCommand c) {
         editor.execute(c);

@@ -4,6 +4,7 @@ import java.io.File;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
 import javafx.application.Platform;
 import javafx.geometry.Insets;
@@ -34,6 +35,7 @@ import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import javafx.stage.FileChooser;
 import javafx.stage.Window;
+import javafx.stage.WindowEvent;
 import org.armature.io.StageFiles;
 import org.armature.model.HighSideDrive;
 import org.armature.model.StageTemplate;
@@ -68,6 +70,7 @@ public final class MainWindow {
     private Scene scene;
     private boolean syncingAmbient;
     private boolean syncingSupply;
+    private BooleanSupplier discardQuestion = this::askDiscard;
 
     /** Range of the supply slider, V: a 3.3 V rail up to a 36 V one (the stages this tool is for). */
     public static final double SUPPLY_MIN_VOLTS = 3;
@@ -496,18 +499,54 @@ public final class MainWindow {
     }
 
     private void confirmDiscard(Runnable then) {
-        if (!vm.dirtyProperty().get() || window() == null) {
+        if (mayDiscard()) {
             then.run();
-            return;
         }
+    }
+
+    /**
+     * True when the document may be dropped: it has no unsaved changes, the window is not shown, or
+     * the user agrees to discard them (the question the Quit menu asks).
+     */
+    private boolean mayDiscard() {
+        return !vm.dirtyProperty().get() || window() == null || discardQuestion.getAsBoolean();
+    }
+
+    private boolean askDiscard() {
         Alert a = new Alert(Alert.AlertType.CONFIRMATION, "The stage has unsaved changes. Discard them?",
                 ButtonType.CANCEL, ButtonType.OK);
         a.setHeaderText(null);
         a.initOwner(window());
         Optional<ButtonType> r = a.showAndWait();
-        if (r.isPresent() && r.get() == ButtonType.OK) {
-            then.run();
+        return r.isPresent() && r.get() == ButtonType.OK;
+    }
+
+    /**
+     * Replaces the "discard unsaved changes?" question (tests answer it without a dialog); the
+     * supplier returns true for discard. The default shows a confirmation dialog.
+     */
+    public void setDiscardQuestion(BooleanSupplier question) {
+        this.discardQuestion = java.util.Objects.requireNonNull(question, "question");
+    }
+
+    /**
+     * Handles a window close request (the title-bar close button): with unsaved changes it asks the
+     * same question as Quit, and a cancel consumes the event so the window stays open.
+     *
+     * @param event the close request
+     * @return true when the window may close
+     */
+    public boolean handleCloseRequest(WindowEvent event) {
+        boolean close = mayDiscard();
+        if (!close) {
+            event.consume();
         }
+        return close;
+    }
+
+    /** Guards a stage's close button with {@link #handleCloseRequest(WindowEvent)}. */
+    public void guardClose(javafx.stage.Stage stage) {
+        stage.setOnCloseRequest(this::handleCloseRequest);
     }
 
     private void about() {

@@ -14,11 +14,19 @@ public final class RecentFiles {
     /** Most entries kept. */
     public static final int MAX = 8;
 
+    /** System property naming the user preferences node (default {@code armature}; tests use their own). */
+    public static final String PREFS_NODE_PROPERTY = "armature.prefs.node";
+
     private final Preferences prefs;
 
     /** Recent files in the configured preferences node. */
     public RecentFiles() {
-        this.prefs = Preferences.userRoot().node(System.getProperty("armature.prefs.node", "armature"));
+        this.prefs = preferences();
+    }
+
+    /** The application's user preferences node, named by {@value #PREFS_NODE_PROPERTY}. */
+    public static Preferences preferences() {
+        return Preferences.userRoot().node(System.getProperty(PREFS_NODE_PROPERTY, "armature"));
     }
 
     /** The files, newest first. */

@@ -15,6 +15,7 @@ import javafx.scene.control.MenuItem;
 import javafx.scene.control.TextField;
 import javafx.scene.image.PixelReader;
 import javafx.scene.image.WritableImage;
+import javafx.stage.WindowEvent;
 import org.armature.io.StageFileException;
 import org.armature.model.HighSideDrive;
 import org.armature.model.Stage;
@@ -60,12 +61,15 @@ class MainWindowTest {
     private EditorViewModel vm;
     private MainWindow window;
     private final MemoryStore store = new MemoryStore();
+    private javafx.stage.Stage fxStage;
 
     @Start
     void start(javafx.stage.Stage stage) {
         vm = new EditorViewModel(Templates.defaultStage(), store, ReadoutSource.NONE, Runnable::run, Runnable::run);
         window = new MainWindow(vm, new RecentFiles());
         stage.setScene(window.scene(1200, 800));
+        window.guardClose(stage);
+        fxStage = stage;
         stage.show();
     }
 
@@ -199,5 +203,78 @@ class MainWindowTest {
             }
         }
         assertTrue(ink > 300, "ink samples: " + ink);
+    }
+
+    @Test
+    @DisplayName("the close button with unsaved changes asks; cancel keeps the window open, discard lets it close")
+    void closeButtonAsksBeforeDiscarding(FxRobot robot) {
+        int[] asked = {0};
+        boolean[] answer = {false};
+        robot.interact(() -> window.setDiscardQuestion(() -> {
+            asked[0]++;
+            return answer[0];
+        }));
+        // clean document: no question, the close goes ahead
+        AtomicReference<WindowEvent> clean = new AtomicReference<>();
+        robot.interact(() -> {
+            clean.set(new WindowEvent(fxStage, WindowEvent.WINDOW_CLOSE_REQUEST));
+            assertTrue(window.handleCloseRequest(clean.get()));
+        });
+        assertEquals(0, asked[0]);
+        assertFalse(clean.get().isConsumed());
+        robot.interact(() -> vm.setValue("R1", "resistanceOhms", 2200));
+        assertTrue(vm.dirtyProperty().get());
+        // dirty and cancelled: the request is consumed, the window stays
+        robot.interact(() -> fxStage.fireEvent(new WindowEvent(fxStage, WindowEvent.WINDOW_CLOSE_REQUEST)));
+        assertEquals(1, asked[0]);
+        assertTrue(fxStage.isShowing());
+        AtomicReference<WindowEvent> cancelled = new AtomicReference<>();
+        robot.interact(() -> {
+            cancelled.set(new WindowEvent(fxStage, WindowEvent.WINDOW_CLOSE_REQUEST));
+            assertFalse(window.handleCloseRequest(cancelled.get()));
+        });
+        assertTrue(cancelled.get().isConsumed());
+        // dirty and discarded: the request passes
+        answer[0] = true;
+        AtomicReference<WindowEvent> discarded = new AtomicReference<>();
+        robot.interact(() -> {
+            discarded.set(new WindowEvent(fxStage, WindowEvent.WINDOW_CLOSE_REQUEST));
+            assertTrue(window.handleCloseRequest(discarded.get()));
+        });
+        assertFalse(discarded.get().isConsumed());
+        assertEquals(3, asked[0]);
+    }
+
+    @Test
+    @DisplayName("the drive pin's datasheet section fits GP-7 (VOH 2.9 V at 8 mA, 2.0 V at 20 mA: 75 Ω, 3.5 V; "
+            + "derived from a typical 3.3 V microcontroller output table) as one step; bad input is marked")
+    void datasheetSectionFitsPin(FxRobot robot) {
+        robot.interact(() -> {
+            vm.setValue("U1", "highVolts", 5);
+            vm.setValue("U1", "outputResistanceOhms", 40);
+            vm.select(Selection.ofPart("U1"));
+        });
+        StageDocument before = vm.document();
+        javafx.scene.control.TitledPane pane = robot.lookup("#datasheet-pane").queryAs(javafx.scene.control.TitledPane.class);
+        TextField i2 = robot.lookup("#fit-voh2-i").queryAs(TextField.class);
+        robot.interact(() -> {
+            pane.setExpanded(true);
+            i2.setText("20 mQ");
+        });
+        assertTrue(i2.getStyleClass().contains(PartSheet.INVALID));
+        robot.interact(() -> robot.lookup("#datasheet-apply").queryButton().fire());
+        assertEquals(before, vm.document(), "nothing applied while a figure is bad");
+        robot.interact(() -> {
+            robot.lookup("#fit-voh1").queryAs(TextField.class).setText("2.9");
+            robot.lookup("#fit-voh1-i").queryAs(TextField.class).setText("8m");
+            robot.lookup("#fit-voh2").queryAs(TextField.class).setText("2.0 V");
+            i2.setText("20m");
+        });
+        assertFalse(i2.getStyleClass().contains(PartSheet.INVALID));
+        robot.interact(() -> robot.lookup("#datasheet-apply").queryButton().fire());
+        assertEquals(75, vm.stage().require("U1").value("outputResistanceOhms"), 1e-9, "GP-7");
+        assertEquals(3.5, vm.stage().require("U1").value("highVolts"), 1e-9, "GP-7");
+        robot.interact(vm::undo);
+        assertEquals(before, vm.document());
     }
 }
