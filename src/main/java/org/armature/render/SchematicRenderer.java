@@ -85,7 +85,7 @@ public final class SchematicRenderer {
             wires(pen, stage, pal);
         }
         if (options.draws(Layer.PARTS)) {
-            parts(pen, stage, pal);
+            parts(pen, stage, pal, operatedRelays(annotations));
         }
         if (options.draws(Layer.LABELS)) {
             for (PlacedLabel l : layout.labels()) {
@@ -436,7 +436,18 @@ public final class SchematicRenderer {
         return out;
     }
 
-    private static void parts(Pen pen, Stage stage, Palette pal) {
+    /** Relays the readouts report operated: their contact sets are drawn energised. */
+    private static java.util.Set<String> operatedRelays(Annotations annotations) {
+        java.util.Set<String> refs = new java.util.HashSet<>();
+        for (Annotations.RelayGauge g : annotations.gauges()) {
+            if (g.operated()) {
+                refs.add(g.ref());
+            }
+        }
+        return refs;
+    }
+
+    private static void parts(Pen pen, Stage stage, Palette pal, java.util.Set<String> operated) {
         Map<GridPoint, Integer> use = new HashMap<>();
         for (Part p : stage.parts()) {
             for (PinSpec pin : p.kind().pins()) {
@@ -445,7 +456,7 @@ public final class SchematicRenderer {
         }
         for (Part p : stage.parts()) {
             pen.push(PartGeometry.frame(p.placement()));
-            Symbols.draw(pen, p, pal.ink(), pal.paper(), stage.conditions().pinHigh());
+            Symbols.draw(pen, p, pal.ink(), pal.paper(), stage.conditions().pinHigh(), operated.contains(p.ref()));
             pen.pop();
         }
         Stroke ring = Stroke.solid(0.05);

@@ -22,6 +22,14 @@ final class Symbols {
 
     /** Draws one part; the pen's transform must already map local units (see {@link PartGeometry#frame}). */
     static void draw(Pen pen, Part part, Colour ink, Colour paper, boolean pinHigh) {
+        draw(pen, part, ink, paper, pinHigh, false);
+    }
+
+    /**
+     * Draws a part's symbol in its own frame; a relay with {@code relayOperated} has its blade on
+     * the normally-open contact, otherwise on the normally-closed one.
+     */
+    static void draw(Pen pen, Part part, Colour ink, Colour paper, boolean pinHigh, boolean relayOperated) {
         Stroke s = Stroke.solid(LINE);
         switch (part.kind()) {
             case RESISTOR -> resistor(pen, ink, s);
@@ -37,7 +45,7 @@ final class Symbols {
             case PNP -> bjt(pen, ink, s, false);
             case NMOS -> nmos(pen, ink, s);
             case DARLINGTON -> darlington(pen, ink, s);
-            case RELAY -> relay(pen, ink, s);
+            case RELAY -> relay(pen, ink, s, relayOperated);
             case LOAD -> {
                 switch (part.option("loadKind")) {
                     case "lamp" -> lamp(pen, ink, s);
@@ -176,15 +184,15 @@ final class Symbols {
     }
 
     /** Coil between A1 (0, −2) and A2 (0, 2); changeover set: common (5, −2), NC (4, 2), NO (6, 2). */
-    private static void relay(Pen pen, Colour ink, Stroke s) {
+    private static void relay(Pen pen, Colour ink, Stroke s, boolean operated) {
         pen.line(0, -2, 0, -0.5, ink, s);
         pen.line(0, 0.5, 0, 2, ink, s);
         pen.strokeRect(new Box(-0.75, -0.5, 0.75, 0.5), ink, s);
-        // contact set drawn de-energised: the blade rests on the normally-closed contact
+        // the blade rests on the normally-closed contact unless the readouts say operated
         pen.line(5, -2, 5, -0.55, ink, s);
         pen.polyline(new double[] {4, 4, 4.45}, new double[] {2, 0.7, 0.7}, ink, s);
         pen.polyline(new double[] {6, 6, 5.55}, new double[] {2, 0.7, 0.7}, ink, s);
-        pen.line(5, -0.55, 4.3, 0.72, ink, s);
+        pen.line(5, -0.55, operated ? 5.7 : 4.3, 0.72, ink, s);
         pen.fillCircle(5, -0.55, 0.09, ink);
         // mechanical link from the coil to the blade
         pen.line(0.75, 0, 4.62, 0, ink, new Stroke(LINE * 0.75, java.util.List.of(0.22, 0.16)));
