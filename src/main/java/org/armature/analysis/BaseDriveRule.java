@@ -1,7 +1,5 @@
 package org.armature.analysis;
 
-import org.armature.units.EngineeringNotation;
-import org.armature.units.Unit;
 
 /**
  * How much base current the sizing assistant asks for.
@@ -38,7 +36,7 @@ public sealed interface BaseDriveRule permits BaseDriveRule.ForcedBeta, BaseDriv
 
         @Override
         public String formula() {
-            return "IB = IC / βforced, βforced = " + BaseDriveRule.ratio(forcedBeta);
+            return "IB = IC / βforced, βforced = " + Quantities.ratio(forcedBeta);
         }
     }
 
@@ -61,11 +59,8 @@ public sealed interface BaseDriveRule permits BaseDriveRule.ForcedBeta, BaseDriv
 
         @Override
         public String formula() {
-            return "IB = k · IC / hFE(min, cold), k = " + BaseDriveRule.ratio(factor);
+            return "IB = k · IC / hFE(min, cold), k = " + Quantities.ratio(factor);
         }
     }
 
-    private static String ratio(double v) {
-        return EngineeringNotation.format(v, Unit.RATIO);
-    }
 }

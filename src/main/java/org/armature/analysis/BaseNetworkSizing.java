@@ -1,5 +1,11 @@
 package org.armature.analysis;
 
+import static org.armature.analysis.Quantities.volts;
+import static org.armature.analysis.Quantities.amps;
+import static org.armature.analysis.Quantities.ohms;
+import static org.armature.analysis.Quantities.ratio;
+import static org.armature.analysis.Quantities.celsius;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -10,7 +16,6 @@ import org.armature.model.PartKind;
 import org.armature.model.Severity;
 import org.armature.model.Stage;
 import org.armature.units.ESeries;
-import org.armature.units.EngineeringNotation;
 import org.armature.units.Unit;
 
 /**
@@ -405,23 +410,8 @@ public final class BaseNetworkSizing {
         }
     }
 
-    static String volts(double v) {
-        return EngineeringNotation.format(v, Unit.VOLT);
-    }
 
-    static String amps(double v) {
-        return EngineeringNotation.format(v, Unit.AMPERE);
-    }
 
-    static String ohms(double v) {
-        return EngineeringNotation.format(v, Unit.OHM);
-    }
 
-    static String ratio(double v) {
-        return EngineeringNotation.format(v, Unit.RATIO);
-    }
 
-    static String celsius(double v) {
-        return EngineeringNotation.format(v, Unit.CELSIUS);
-    }
 }

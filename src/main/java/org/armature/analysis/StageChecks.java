@@ -1,5 +1,11 @@
 package org.armature.analysis;
 
+import static org.armature.analysis.Quantities.volts;
+import static org.armature.analysis.Quantities.amps;
+import static org.armature.analysis.Quantities.celsius;
+import static org.armature.analysis.Quantities.ratio;
+import static org.armature.analysis.Quantities.pct;
+
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -362,7 +368,7 @@ public final class StageChecks {
             }
             double peak = sup.peakSwitchVolts(vs, Double.isNaN(i0) ? 0 : i0);
             Measure m = rated(peak, rating, "Peak switch voltage VS,max + Vc + I0·Rs = " + volts(vs) + " + "
-                    + volts(sup.clampVolts()) + (sup.seriesOhms() > 0 ? " + " + amps(i0) + " × " + BaseNetworkSizing.ohms(sup.seriesOhms()) : "")
+                    + volts(sup.clampVolts()) + (sup.seriesOhms() > 0 ? " + " + amps(i0) + " × " + Quantities.ohms(sup.seriesOhms()) : "")
                     + " = " + volts(peak) + " (" + sup.description() + ") against " + volts(rating) + ".");
             return new CheckResult("rating.switch-voltage", m.status(), m.value(), m.limit(), Unit.VOLT, Map.of(),
                     "supply at its maximum, largest coil current", STATIC, m.explanation(), refs);
@@ -626,23 +632,8 @@ public final class StageChecks {
         }
     }
 
-    static String volts(double v) {
-        return EngineeringNotation.format(v, Unit.VOLT);
-    }
 
-    static String amps(double v) {
-        return EngineeringNotation.format(v, Unit.AMPERE);
-    }
 
-    static String celsius(double v) {
-        return EngineeringNotation.format(v, Unit.CELSIUS);
-    }
 
-    static String ratio(double v) {
-        return EngineeringNotation.format(v, Unit.RATIO);
-    }
 
-    static String pct(double fraction) {
-        return EngineeringNotation.format(fraction * 100, Unit.PERCENT);
-    }
 }

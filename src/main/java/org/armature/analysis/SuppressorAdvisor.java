@@ -168,14 +168,14 @@ public final class SuppressorAdvisor {
             }
         } else {
             findings.add(new Finding(Severity.WARNING, "suppressor.no-zener-fits", q.ref(), "",
-                    "No zener fits: " + BaseNetworkSizing.volts(clampMax) + " of clamp is all the switch's rating leaves"
+                    "No zener fits: " + Quantities.volts(clampMax) + " of clamp is all the switch's rating leaves"
                             + " above the supply's maximum."));
         }
         double tvs = e24.roundUp(TVS_HEADROOM * vsMax);
         if (tvs > clampMax) {
             findings.add(new Finding(Severity.WARNING, "suppressor.no-tvs-fits", q.ref(), "",
-                    "No TVS fits: one that stays off at " + BaseNetworkSizing.volts(vsMax) + " clamps above the "
-                            + BaseNetworkSizing.volts(clampMax) + " the switch's rating leaves."));
+                    "No TVS fits: one that stays off at " + Quantities.volts(vsMax) + " clamps above the "
+                            + Quantities.volts(clampMax) + " the switch's rating leaves."));
             tvs = Double.NaN;
         }
         List<Factor> factors = Corners.factors(stage);

@@ -65,16 +65,16 @@ public record SuppressorEstimate(String description, double clampVolts, double s
                     // a zener entered at its cathode from the coil's high end breaks down; otherwise it conducts forward
                     boolean breaks = parts.size() > 1;
                     vc += breaks ? p.value("breakdownVolts") : forwardDropVolts;
-                    w = breaks ? BaseNetworkSizing.volts(p.value("breakdownVolts")) + " zener" : "zener (as a diode)";
+                    w = breaks ? Quantities.volts(p.value("breakdownVolts")) + " zener" : "zener (as a diode)";
                 }
                 case TVS -> {
                     vc += p.value("breakdownVolts");
-                    w = BaseNetworkSizing.volts(p.value("breakdownVolts")) + " TVS";
+                    w = Quantities.volts(p.value("breakdownVolts")) + " TVS";
                 }
                 case RESISTOR -> {
                     rs += p.value("resistanceOhms");
                     linear = true;
-                    w = BaseNetworkSizing.ohms(p.value("resistanceOhms")) + " resistor";
+                    w = Quantities.ohms(p.value("resistanceOhms")) + " resistor";
                 }
                 case CAPACITOR -> w = "capacitor";
                 case DARLINGTON -> {

@@ -1,5 +1,7 @@
 package org.armature.analysis;
 
+import static org.armature.analysis.Quantities.volts;
+
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Deque;
@@ -16,8 +18,6 @@ import org.armature.model.PartKind;
 import org.armature.model.PinRef;
 import org.armature.model.Severity;
 import org.armature.model.Stage;
-import org.armature.units.EngineeringNotation;
-import org.armature.units.Unit;
 
 /**
  * Recognises which of the four driver stages was drawn, from connectivity alone, and explains
@@ -677,9 +677,6 @@ public final class TopologyCheck {
         return Math.abs(supply.value("volts")) * (1 + supply.value("tolerancePercent") / 100);
     }
 
-    private static String volts(double v) {
-        return EngineeringNotation.format(v, Unit.VOLT);
-    }
 
     /** A part's pin on a net. */
     private record PinOn(Part part, String pin) {

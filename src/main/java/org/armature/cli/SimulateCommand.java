@@ -93,7 +93,7 @@ final class SimulateCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         StageDocument doc = StageFiles.open(file);
-        Stage stage = select(doc);
+        Stage stage = StageSelection.select(doc, stageSelector, file, spec.commandLine());
         List<String> errors = Validator.validate(stage).stream()
                 .filter(f -> f.severity() == Severity.ERROR).map(Finding::message).toList();
         if (!errors.isEmpty()) {
@@ -125,23 +125,6 @@ final class SimulateCommand implements Callable<Integer> {
         out.print(json ? json(result) : summary(stage, result));
         out.flush();
         return CommandLine.ExitCode.OK;
-    }
-
-    private Stage select(StageDocument doc) {
-        if (stageSelector == null) {
-            return doc.first();
-        }
-        if (stageSelector.matches("\\d+")) {
-            int n = Integer.parseInt(stageSelector);
-            if (n < 1 || n > doc.stages().size()) {
-                throw new CommandLine.ParameterException(spec.commandLine(), "--stage " + n + " is not in "
-                        + file.getFileName() + ", which holds " + doc.stages().size() + " stage(s).");
-            }
-            return doc.stages().get(n - 1);
-        }
-        return doc.stages().stream().filter(s -> s.name().equals(stageSelector)).findFirst()
-                .orElseThrow(() -> new CommandLine.ParameterException(spec.commandLine(), "No stage of "
-                        + file.getFileName() + " is named \"" + stageSelector + "\"."));
     }
 
     /** The result as one JSON object (see the class comment). */

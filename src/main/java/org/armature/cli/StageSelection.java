@@ -5,7 +5,7 @@ import org.armature.model.Stage;
 import org.armature.model.StageDocument;
 import picocli.CommandLine;
 
-/** Picks one stage of a stage file by number (from 1) or name, for the {@code check} and {@code size} commands. */
+/** Picks one stage of a stage file by number (from 1) or name, for every command that reads a file. */
 final class StageSelection {
 
     private StageSelection() {
