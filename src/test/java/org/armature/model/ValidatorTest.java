@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
 class ValidatorTest {
@@ -37,6 +38,7 @@ class ValidatorTest {
     }
 
     @Test
+    @DisplayName("pins follow rotation and mirroring: derived from the clockwise map (x, y) -> (-y, x) on a y-down grid")
     void placementRotationMapsPins() {
         Placement p = new Placement(new GridPoint(10, 10), 90, false);
         assertEquals(new GridPoint(12, 10), p.apply(0, -2), "a at top turns to the right");

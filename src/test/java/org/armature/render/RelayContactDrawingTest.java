@@ -32,7 +32,7 @@ class RelayContactDrawingTest {
         List<String> a = twoPointLines(released);
         List<String> b = twoPointLines(operated);
         // K1 sits at grid (20, 6) unrotated; the blade pivots at (5, -0.55) in the symbol and ends
-        // 0.7 left (NC side) or right (NO side) of it, 1.27 lower (PartKind.RELAY pin layout)
+        // 0.7 left (NC side) or right (NO side) of it, 1.27 lower (derived from the symbol geometry in Symbols.relay and the PartKind.RELAY pin layout)
         String toNc = "25.000,5.450,24.300,6.720";
         String toNo = "25.000,5.450,25.700,6.720";
         assertTrue(a.contains(toNc) && !a.contains(toNo), "released blade on NC: " + a);
