@@ -67,11 +67,13 @@ public record BreakdownClamp(double ratedVolts, double kneeCurrentAmps, double s
      *
      * @param vNewVolts proposed switch voltage, volts
      * @param vOldVolts previous switch voltage, volts
-     * @return the limited voltage, volts
+     * @return the limited voltage, volts; exactly {@code vNewVolts} when no limiting applies
      */
     public double limitVoltage(double vNewVolts, double vOldVolts) {
         double vCrit = Junctions.criticalVoltage(softnessVolts, kneeCurrentAmps);
-        return ratedVolts + Junctions.limitJunction(vNewVolts - ratedVolts, vOldVolts - ratedVolts,
-                softnessVolts, vCrit);
+        double uNew = vNewVolts - ratedVolts;
+        double uLimited = Junctions.limitJunction(uNew, vOldVolts - ratedVolts, softnessVolts, vCrit);
+        // subtracting and adding the rating back rounds: hand back the proposal when nothing was limited
+        return uLimited == uNew ? vNewVolts : ratedVolts + uLimited;
     }
 }

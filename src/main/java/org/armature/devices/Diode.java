@@ -96,7 +96,7 @@ public final class Diode {
      * @param vNewVolts proposed junction voltage, volts
      * @param vOldVolts previous junction voltage, volts
      * @param temperatureKelvin junction temperature, kelvin
-     * @return the limited junction voltage, volts
+     * @return the limited junction voltage, volts; exactly {@code vNewVolts} when no limiting applies
      */
     public double limitVoltage(double vNewVolts, double vOldVolts, double temperatureKelvin) {
         double vt = Thermal.voltage(temperatureKelvin);
@@ -115,7 +115,8 @@ public final class Diode {
         double uNew = sign * vNewVolts - bv;
         double uOld = sign * vOldVolts - bv;
         double uLimited = Junctions.limitJunction(uNew, uOld, nb, vCrit);
-        return sign * (uLimited + bv);
+        // mapping through (±v − BV) and back rounds: hand back the proposal itself when nothing was limited
+        return uLimited == uNew ? vNewVolts : sign * (uLimited + bv);
     }
 
     /**

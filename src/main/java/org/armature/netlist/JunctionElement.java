@@ -13,12 +13,6 @@ import org.armature.devices.JunctionEvaluation;
  */
 public final class JunctionElement implements Element {
 
-    /**
-     * A limiter result this close to the proposed voltage is rounding, not limiting: 1e-12 V, a
-     * million times below vntol (1 µV) and above the rounding of voltages up to a few kilovolts.
-     */
-    public static final double LIMITER_ROUNDING_VOLTS = 1e-12;
-
     private final String label;
     private final int anode;
     private final int cathode;
@@ -124,10 +118,6 @@ public final class JunctionElement implements Element {
             cold = false;
         } else {
             vl = diode.limitVoltage(v, lastVolts, temperatureKelvin);
-        }
-        if (Math.abs(vl - v) <= LIMITER_ROUNDING_VOLTS) {
-            // the breakdown limiter maps v through (−v − BV) and back: rounding, not limiting
-            vl = v;
         }
         lastVolts = vl;
         diode.evaluate(vl, temperatureKelvin, eval);

@@ -214,4 +214,19 @@ class DiodeTest {
         double noise = 8 * Math.ulp(Math.max(Math.abs(ip), Math.abs(im))) / (2 * h);
         assertEquals(fd, e.conductanceSiemens(), 1e-5 * Math.abs(fd) + noise);
     }
+
+    @Test
+    @DisplayName("limiting leaves a reverse-biased step it does not limit exactly as proposed (Nagel 1975 limits only large steps)")
+    void limiterPassesSmallReverseStepsUnchanged() {
+        DiodeParams p = DiodeParams.junction(1e-14, 1.0).withBreakdown(100, 1e-5, 1.0);
+        Diode d = new Diode(p);
+        double t = p.nominalTemperatureKelvin();
+        for (double v : new double[] {-0.3, -11.999999999999998, -23.7, -99.9}) {
+            assertEquals(v, d.limitVoltage(v, v + 1e-3, t), 0.0, "no rounding through the breakdown mapping at " + v);
+        }
+        BreakdownClamp clamp = BreakdownClamp.atRating(40.0);
+        for (double v : new double[] {12.6, 13.200000000000001, 24.9}) {
+            assertEquals(v, clamp.limitVoltage(v, v - 1e-3), 0.0, "no rounding through the rating offset at " + v);
+        }
+    }
 }

@@ -14,12 +14,6 @@ import org.armature.netlist.StampContext;
  */
 final class SwitchClamp implements org.armature.netlist.Element {
 
-    /**
-     * A limiter result this close to the proposed voltage is rounding (the limiter works on
-     * v − rating and adds the rating back), not limiting: 1e-12 V, a million times below vntol.
-     */
-    private static final double LIMITER_ROUNDING_VOLTS = 1e-12;
-
     private final String label;
     private final int high;
     private final int low;
@@ -73,9 +67,6 @@ final class SwitchClamp implements org.armature.netlist.Element {
     public boolean stamp(Stamper s, Solution x, StampContext ctx) {
         double v = x.voltage(high) - x.voltage(low);
         double limited = clamp.limitVoltage(v, lastVolts);
-        if (Math.abs(limited - v) <= LIMITER_ROUNDING_VOLTS * Math.max(1, Math.abs(v))) {
-            limited = v;
-        }
         lastVolts = limited;
         clamp.evaluate(limited, eval);
         double g = eval.conductanceSiemens();
