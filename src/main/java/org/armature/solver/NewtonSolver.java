@@ -127,7 +127,6 @@ public final class NewtonSolver {
      */
     public boolean run(double[] x, double[] states, StampContext ctx, double nodeShuntSiemens, boolean coldStart,
                        StateUpdater updater) {
-        ConvergenceTolerances tol = options.tolerances();
         view.bind(x, states);
         for (Element e : elements) {
             if (coldStart) {
@@ -136,6 +135,34 @@ public final class NewtonSolver {
                 e.begin(view);
             }
         }
+        return iterate(x, states, ctx, nodeShuntSiemens, updater);
+    }
+
+    /**
+     * Runs Newton from a predicted iterate while the elements' limiting memory starts at an earlier
+     * solution, as a time-domain step does: {@code x} holds the predictor's extrapolation and
+     * {@code limitFrom} the last accepted time point, so a junction whose predicted voltage lies far
+     * beyond the accepted one is limited against the accepted one (after Nagel, ERL M520, 1975, where
+     * the device state of the last time point seeds the limiting).
+     *
+     * @param x start iterate (the prediction); overwritten with the last iterate
+     * @param limitFrom the solution the limiting memory begins at (not modified), same length
+     * @param states element states; not modified
+     * @param ctx analysis context
+     * @return true if converged; then {@code x} is the solution
+     */
+    public boolean runPredicted(double[] x, double[] limitFrom, double[] states, StampContext ctx) {
+        view.bind(limitFrom, states);
+        for (Element e : elements) {
+            e.begin(view);
+        }
+        view.bind(x, states);
+        return iterate(x, states, ctx, 0.0, null);
+    }
+
+    private boolean iterate(double[] x, double[] states, StampContext ctx, double nodeShuntSiemens,
+                            StateUpdater updater) {
+        ConvergenceTolerances tol = options.tolerances();
         iterations = 0;
         singular = false;
         singularUnknown = -1;

@@ -111,8 +111,10 @@ final class ArmatureDynamics {
     void begin(IntegratorCoefficients k, double h) {
         histG = k.history(gNow, gBefore, dgNow);
         histU = k.history(uNow, uBefore, duNow);
-        gTrial = phase == Phase.MOVING ? gNow + h * uNow : gNow;
-        uTrial = phase == Phase.MOVING ? uNow : 0;
+        // second-order predictor from the committed speed and acceleration (the first coupling pass
+        // then starts close to the answer)
+        gTrial = phase == Phase.MOVING ? gNow + h * uNow + 0.5 * h * h * duNow : gNow;
+        uTrial = phase == Phase.MOVING ? uNow + h * duNow : 0;
         coil.setHenries(model.inductanceHenries(gTrial));
     }
 

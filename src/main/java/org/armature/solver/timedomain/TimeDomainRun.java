@@ -42,6 +42,16 @@ final class TimeDomainRun {
     private final int reactiveStates;
     /** Time of the last accepted point, seconds (the start of the step being solved). */
     private double tCommitted;
+    /** Length of the first step after the latest restart, seconds. */
+    private double restartStep;
+    /**
+     * First step after an armature event (leaving a stop, contact change, arrival) as a fraction of
+     * the step that reached it: 1e-3 (our choice). These events bend the waveforms (the gap's
+     * acceleration or speed jumps) but do not make them jump the way a drive edge does, so the
+     * restart need not fall to {@link StepOptions#firstStepSeconds()}; the error test resumes from
+     * the second step after it.
+     */
+    static final double EVENT_RESTART_FRACTION = 1e-3;
     private final ArraySolution view;
     private final TreeMap<Double, String> breakpoints = new TreeMap<>();
     private final List<TransientEvent> events = new ArrayList<>();
@@ -51,6 +61,8 @@ final class TimeDomainRun {
     private final List<double[]> internals = new ArrayList<>();
 
     private double[] x;
+    /** The solution before {@link #x}, for the predictor. */
+    private double[] xPrev;
     private double[] states;
     private final double[][] histTimes;
     private final double[][] histStates;
@@ -131,9 +143,18 @@ final class TimeDomainRun {
         return ok;
     }
 
+    /** Newton from a predicted start, with the junction limiting seeded at the last accepted point. */
+    private boolean newtonPredicted(double[] trial, StampContext ctx) {
+        NewtonSolver s = highNow ? newtonHigh : newtonLow;
+        boolean ok = s.runPredicted(trial, x, states, ctx);
+        newtonIterations += s.iterations();
+        return ok;
+    }
+
     TimeDomainResult run() {
         states = c.initialStates.clone();
         x = new double[n];
+        xPrev = new double[n];
         highNow = drive.initialHigh();
         selectDrive();
         operatingPoint();
@@ -152,6 +173,7 @@ final class TimeDomainRun {
         histCount = 0;
         pushHistory(0, statesAt(x, new double[stateCount]));
         double h = o.firstStepSeconds();
+        restartStep = h;
         double hPrev = h;
         double maxStep = o.maxStepFraction() * duration;
         if (breakpoints.containsKey(0.0)) {
@@ -175,7 +197,7 @@ final class TimeDomainRun {
             if (histCount < 2) {
                 method = IntegrationMethod.BACKWARD_EULER;
                 checkError = false;
-                hTry = Math.min(hTry, o.firstStepSeconds());
+                hTry = Math.min(hTry, restartStep);
             } else if (histCount < o.method().order() + 2) {
                 method = IntegrationMethod.BACKWARD_EULER;
                 checkError = true;
@@ -184,8 +206,8 @@ final class TimeDomainRun {
                 checkError = true;
             }
             IntegratorCoefficients k = IntegratorCoefficients.of(method, hTry, hPrev);
-            System.arraycopy(x, 0, trial, 0, n);
-            if (!solve(trial, t + hTry, k)) {
+            boolean predicted = predict(trial, hTry / hPrev);
+            if (!solve(trial, t + hTry, k, predicted)) {
                 rejected++;
                 h = hTry * o.newtonFailureShrinkFactor();
                 if (h < o.minStepSeconds()) {
@@ -269,6 +291,7 @@ final class TimeDomainRun {
             for (ArmatureDynamics a : c.armatures) {
                 a.commit(k);
             }
+            System.arraycopy(x, 0, xPrev, 0, n);
             System.arraycopy(trial, 0, x, 0, n);
             t = tNew;
             tCommitted = t;
@@ -283,7 +306,8 @@ final class TimeDomainRun {
                 events.add(new TransientEvent(t, what, a.ref));
                 states[a.contactSlot] = a.contactsOperated ? 1.0 : 0.0;
                 restart();
-                h = o.firstStepSeconds();
+                restartStep = Math.max(o.firstStepSeconds(), EVENT_RESTART_FRACTION * h);
+                h = restartStep;
             } else if (crossing >= 0) {
                 RelayDynamics r = c.relays.get(crossing);
                 boolean wasAttracted = r.headingAttracted();
@@ -294,14 +318,16 @@ final class TimeDomainRun {
                 if (arrival <= t) {
                     arrive(crossing, t);
                     restart();
-                    h = o.firstStepSeconds();
+                    restartStep = o.firstStepSeconds();
+                    h = restartStep;
                 } else if (arrival < duration) {
                     breakpoints.put(arrival, key);
                 }
             }
             if (breakpoints.containsKey(t) && t < duration) {
                 handleBreakpoints(t);
-                h = o.firstStepSeconds();
+                restartStep = o.firstStepSeconds();
+                h = restartStep;
             }
         }
         List<Trace> traces = new ArrayList<>();
@@ -420,17 +446,26 @@ final class TimeDomainRun {
      * alternate (staggered fixed point, see {@link ArmatureDynamics}) until every gap settles.
      */
     private boolean solve(double[] trial, double time, IntegratorCoefficients k) {
+        return solve(trial, time, k, false);
+    }
+
+    /**
+     * Solves one time point from {@code trial}; {@code predicted} says it holds the predictor's
+     * extrapolation rather than an accepted solution (the first Newton pass then limits against the
+     * last accepted point).
+     */
+    private boolean solve(double[] trial, double time, IntegratorCoefficients k, boolean predicted) {
         c.step.set(k);
         StampContext ctx = new StampContext(StampContext.Mode.TRANSIENT, 1.0, time, 1.0 / k.a0(), k.a0());
         if (c.armatures.isEmpty()) {
-            return newton(trial, ctx);
+            return predicted ? newtonPredicted(trial, ctx) : newton(trial, ctx);
         }
         for (ArmatureDynamics a : c.armatures) {
             a.begin(k, time - tCommitted);
         }
         double gapTolerance = ArmatureDynamics.GAP_ITERATION_FRACTION * o.absoluteMetresTolerance();
         for (int pass = 0; pass < ArmatureDynamics.MAX_COUPLING_PASSES; pass++) {
-            if (!newton(trial, ctx)) {
+            if (!(pass == 0 && predicted ? newtonPredicted(trial, ctx) : newton(trial, ctx))) {
                 return false;
             }
             view.bind(trial, states);
@@ -445,6 +480,22 @@ final class TimeDomainRun {
         return false;
     }
 
+    /**
+     * The Newton start of the next time point: the straight line through the last two accepted
+     * points, extended by the step ratio (a first-order predictor, common practice in circuit
+     * simulators); the last point alone right after a restart, where the derivative jumps.
+     */
+    private boolean predict(double[] trial, double stepRatio) {
+        if (histCount < 2) {
+            System.arraycopy(x, 0, trial, 0, n);
+            return false;
+        }
+        for (int i = 0; i < n; i++) {
+            trial[i] = x[i] + stepRatio * (x[i] - xPrev[i]);
+        }
+        return true;
+    }
+    
     private int eventCount() {
         return c.relays.size() + ArmatureDynamics.EVENT_COUNT * c.armatures.size();
     }
