@@ -46,8 +46,10 @@ final class StageCircuit {
         Map<String, Boolean> operated = op.relayOperated();
         boolean anyOperated = operated.values().stream().anyMatch(Boolean::booleanValue);
         FlattenOptions fo = FlattenOptions.of(initialHigh, ambientCelsius).withRelayOperated(anyOperated);
-        Netlist here = NetlistBuilder.flatten(stage, fo);
-        Netlist other = NetlistBuilder.flatten(stage, fo.withPinHigh(!initialHigh));
+        // one connectivity for both drive levels (the geometry is the same)
+        org.armature.model.Connectivity nets = org.armature.model.Connectivity.of(stage);
+        Netlist here = NetlistBuilder.flatten(stage, nets, fo);
+        Netlist other = NetlistBuilder.flatten(stage, nets, fo.withPinHigh(!initialHigh));
         Netlist low = initialHigh ? other : here;
         Netlist high = initialHigh ? here : other;
         double[] states = here.initialStates();
@@ -207,10 +209,11 @@ final class StageCircuit {
             PartNetwork swFinal = sw;
             c.switchRef = sw.ref();
             c.switchVoltage = new Probe("switch voltage", "V", x -> x.voltage(hi) - x.voltage(lo));
+            ReadingMemo memo = c.switchReading;
             c.switchPower = new Probe("switch power", "W",
-                    x -> swFinal.read(x).powerWatts() + (x.voltage(hi) - x.voltage(lo)) * clamp.current(x));
+                    x -> memo.of(swFinal, x).powerWatts() + (x.voltage(hi) - x.voltage(lo)) * clamp.current(x));
             c.probes.add(new Probe("I(" + sw.ref() + ")", "A",
-                    x -> swFinal.read(x).pinCurrents().get(pins.high()) + clamp.current(x)));
+                    x -> memo.of(swFinal, x).pinCurrents().get(pins.high()) + clamp.current(x)));
         }
         List<PartNetwork> chain = suppressorParts(net, a1, a2);
         List<Probe> powers = new ArrayList<>();

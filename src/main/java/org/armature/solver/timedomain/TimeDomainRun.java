@@ -628,6 +628,7 @@ final class TimeDomainRun {
 
     private void record(double t, double[] solution) {
         view.bind(solution, states);
+        c.switchReading.clear();
         times.add(t);
         double[] row = new double[c.namedNodes.size() + c.probes.size() + (c.coilCurrent == null ? 0 : 1)
                 + (c.relays.isEmpty() && c.armatures.isEmpty() ? 0 : 2)];
