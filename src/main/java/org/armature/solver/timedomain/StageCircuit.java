@@ -49,7 +49,7 @@ final class StageCircuit {
         // one connectivity for both drive levels (the geometry is the same)
         org.armature.model.Connectivity nets = org.armature.model.Connectivity.of(stage);
         Netlist here = NetlistBuilder.flatten(stage, nets, fo);
-        Netlist other = NetlistBuilder.flatten(stage, nets, fo.withPinHigh(!initialHigh));
+        Netlist other = otherLevel(stage, nets, fo.withPinHigh(!initialHigh), here);
         Netlist low = initialHigh ? other : here;
         Netlist high = initialHigh ? here : other;
         double[] states = here.initialStates();
@@ -106,6 +106,17 @@ final class StageCircuit {
             roles(c, here, relayNet, firstCoil, caps);
         }
         return c;
+    }
+
+    /**
+     * The netlist of the other drive level: the first one with only the drive pins flattened anew
+     * (the rest is shared), or a whole flatten when a pin's structure would change.
+     */
+    private static Netlist otherLevel(Stage stage, org.armature.model.Connectivity nets, FlattenOptions fo,
+                                      Netlist here) {
+        int[] pins = java.util.stream.IntStream.range(0, stage.parts().size())
+                .filter(i -> stage.parts().get(i).kind() == PartKind.DRIVE_PIN).toArray();
+        return NetlistBuilder.reflatten(here, stage, fo, pins).orElseGet(() -> NetlistBuilder.flatten(stage, nets, fo));
     }
 
     private static TransientCoil addCoil(TimeDomainCircuit c, Part relay, RelayCoil coil, double[] states,

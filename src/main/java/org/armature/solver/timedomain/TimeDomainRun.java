@@ -52,6 +52,12 @@ final class TimeDomainRun {
      * the second step after it.
      */
     static final double EVENT_RESTART_FRACTION = 1e-3;
+    /**
+     * First step of a run that starts without an edge, as a fraction of the largest step: 0.1 (our
+     * choice). The DC operating point is a steady state, so nothing changes until the first edge;
+     * the error test takes over from the second step.
+     */
+    static final double START_STEP_FRACTION = 0.1;
     private final ArraySolution view;
     private final TreeMap<Double, String> breakpoints = new TreeMap<>();
     private final List<TransientEvent> events = new ArrayList<>();
@@ -172,10 +178,13 @@ final class TimeDomainRun {
         record(0, x);
         histCount = 0;
         pushHistory(0, statesAt(x, new double[stateCount]));
-        double h = o.firstStepSeconds();
+        double maxStep = o.maxStepFraction() * duration;
+        // the run starts from its DC operating point, a steady state: the first step may be long
+        // unless an edge sits at t = 0
+        double h = breakpoints.containsKey(0.0) ? o.firstStepSeconds()
+                : Math.max(o.firstStepSeconds(), START_STEP_FRACTION * maxStep);
         restartStep = h;
         double hPrev = h;
-        double maxStep = o.maxStepFraction() * duration;
         if (breakpoints.containsKey(0.0)) {
             handleBreakpoints(0);
         }
