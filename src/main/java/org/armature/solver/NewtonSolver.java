@@ -17,9 +17,10 @@ import org.armature.netlist.StampContext;
  * instance serves one thread.
  *
  * <p>An iteration stamps every element at the iterate x (each nonlinear element may limit its own
- * linearisation point), computes the residual r = A·x − b, and declares convergence when no element
- * limited, the previous step passed the step test and every residual passes the residual test.
- * Otherwise it factors and solves for the next iterate.
+ * linearisation point) and declares convergence when no element limited, the previous step passed
+ * the step test and every residual r = A·x − b passes the residual test (the residual is computed
+ * only once the other tests have passed, and after the last iteration for the report). Otherwise it
+ * factors and solves for the next iterate.
  */
 public final class NewtonSolver {
 
@@ -184,9 +185,13 @@ public final class NewtonSolver {
             if (nodeShuntSiemens > 0) {
                 mna.addNodeShunt(nodeShuntSiemens);
             }
-            boolean residualOk = residual(x, a, b, tol);
-            if (!limited && stepOk && residualOk && statesOk) {
-                return true;
+            // the residual decides only when everything else has passed (and is reported after the last pass)
+            boolean mayConverge = !limited && stepOk && statesOk;
+            if (mayConverge || pass == options.maxIterations()) {
+                boolean residualOk = residual(x, a, b, tol);
+                if (mayConverge && residualOk) {
+                    return true;
+                }
             }
             if (pass == options.maxIterations()) {
                 break;
