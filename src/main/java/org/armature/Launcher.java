@@ -5,9 +5,10 @@ import java.lang.reflect.Method;
 import org.armature.cli.ArmatureCli;
 
 /**
- * Main class of the runnable jar. With no arguments it opens the window; with any arguments it runs
- * the command line ({@link ArmatureCli}) without loading a single JavaFX class, so {@code --help} and
- * {@code --version} work with no display.
+ * Main class of the runnable jar. With no arguments it opens the window; with one argument naming a
+ * stage file ({@code *.stage.json}) it opens the window on that file; with any other arguments it
+ * runs the command line ({@link ArmatureCli}) without loading a single JavaFX class, so
+ * {@code --help} and {@code --version} work with no display.
  *
  * <p>The window class is found by name ({@value #WINDOW_CLASS}) so that this class, and the command
  * line, do not link against JavaFX.
@@ -26,7 +27,7 @@ public final class Launcher {
      * @param args command-line arguments
      */
     public static void main(String[] args) {
-        if (args.length == 0) {
+        if (args.length == 0 || opensFile(args)) {
             int status = openWindow(args);
             if (status != 0) {
                 System.exit(status);
@@ -34,6 +35,18 @@ public final class Launcher {
         } else {
             System.exit(ArmatureCli.run(args));
         }
+    }
+
+    /**
+     * Whether the arguments ask for the window on a file: exactly one argument, not an option, ending
+     * in the stage-file extension (a subcommand never does).
+     *
+     * @param args command-line arguments
+     * @return true to open the window on {@code args[0]}
+     */
+    static boolean opensFile(String[] args) {
+        return args.length == 1 && !args[0].startsWith("-")
+                && args[0].toLowerCase(java.util.Locale.ROOT).endsWith(org.armature.io.StageFiles.EXTENSION);
     }
 
     /** Starts the window; returns 0 once it has closed, or a failure status after saying why. */

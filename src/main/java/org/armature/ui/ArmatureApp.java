@@ -1,5 +1,7 @@
 package org.armature.ui;
 
+import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import javafx.application.Application;
@@ -10,7 +12,9 @@ import javafx.stage.Stage;
 import org.armature.model.Templates;
 
 /**
- * The desktop application: opens the editor window on the default example stage, with no file.
+ * The desktop application: opens the editor window on the default example stage, with no file, or
+ * on the stage file given as its one parameter (when it cannot be read, the default stage stays and
+ * the status line says why).
  * Readouts are computed by the DC engine on one background thread and published on the FX thread;
  * the checks and edges run on a second, low-priority thread once edits settle.
  */
@@ -67,6 +71,14 @@ public final class ArmatureApp extends Application {
         restoreLayout(primary, w);
         if (Boolean.getBoolean(EDGES_PROPERTY)) {
             w.edgesDrawer().setExpanded(true);
+        }
+        // a stage file named on the command line (the launcher passes it through)
+        List<String> raw = getParameters() == null ? List.of() : getParameters().getRaw();
+        if (raw.size() == 1) {
+            Path path = Path.of(raw.get(0));
+            if (vm.open(path)) {
+                w.rememberRecent(path);
+            }
         }
         primary.show();
         Platform.runLater(w.canvas()::fit);

@@ -446,6 +446,16 @@ public final class MainWindow {
         return fc;
     }
 
+    /**
+     * Adds a file opened outside the menus (the command line) to the recent-files list.
+     *
+     * @param path the file opened
+     */
+    public void rememberRecent(Path path) {
+        recent.add(path);
+        refreshRecent();
+    }
+
     private void chooseOpen() {
         confirmDiscard(() -> {
             File f = chooser("Open stage file").showOpenDialog(window());
