@@ -41,4 +41,15 @@ interface Reactive extends Element {
      * @param x the accepted solution
      */
     void commit(Solution x);
+
+    /**
+     * The derivative of the state as the integration formula last committed it (a capacitor's
+     * current, a coil's dλ/dt in volts): the trapezoidal rule's undamped ringing shows first here.
+     *
+     * @return the committed derivative, in {@link #derivativeUnit()}
+     */
+    double committedDerivative();
+
+    /** @return the unit class of {@link #committedDerivative()} */
+    Unit derivativeUnit();
 }

@@ -192,6 +192,8 @@ final class StageCircuit {
         int a2 = coil.a2();
         double ohms = coil.ohms();
         double core = relay.part().value("coreLossOhms");
+        Probe channelClamp = null;
+        Probe channelClampPower = null;
         c.coilRef = relay.ref();
         c.coilCurrent = new Probe(Waveform.COIL_CURRENT, "A", coil::current);
         c.coilVoltage = new Probe("coil voltage", "V", x -> x.voltage(a1) - x.voltage(a2));
@@ -221,13 +223,29 @@ final class StageCircuit {
             c.switchRef = sw.ref();
             c.switchVoltage = new Probe("switch voltage", "V", x -> x.voltage(hi) - x.voltage(lo));
             ReadingMemo memo = c.switchReading;
-            c.switchPower = new Probe("switch power", "W",
-                    x -> memo.of(swFinal, x).powerWatts() + (x.voltage(hi) - x.voltage(lo)) * clamp.current(x));
+            if (sw.part().kind() == PartKind.DARLINGTON) {
+                // the channel's clamp diode to its common pin is the suppressor when that pin goes to
+                // the coil's supply: its power counts as suppressor power, not switch power
+                int com = sw.pinNodes().get("com");
+                java.util.function.ToDoubleFunction<org.armature.netlist.Solution> iClamp =
+                        x -> -memo.of(swFinal, x).pinCurrents().get("com");
+                c.switchPower = new Probe("switch power", "W",
+                        x -> memo.of(swFinal, x).powerWatts() - (x.voltage(hi) - x.voltage(com)) * iClamp.applyAsDouble(x)
+                                + (x.voltage(hi) - x.voltage(lo)) * clamp.current(x));
+                channelClamp = new Probe("channel clamp current", "A", iClamp);
+                channelClampPower = new Probe("", "W", x -> (x.voltage(hi) - x.voltage(com)) * iClamp.applyAsDouble(x));
+            } else {
+                c.switchPower = new Probe("switch power", "W",
+                        x -> memo.of(swFinal, x).powerWatts() + (x.voltage(hi) - x.voltage(lo)) * clamp.current(x));
+            }
             c.probes.add(new Probe("I(" + sw.ref() + ")", "A",
                     x -> memo.of(swFinal, x).pinCurrents().get(pins.high()) + clamp.current(x)));
         }
         List<PartNetwork> chain = suppressorParts(net, a1, a2);
         List<Probe> powers = new ArrayList<>();
+        if (channelClampPower != null) {
+            powers.add(channelClampPower);
+        }
         for (PartNetwork p : chain) {
             List<Integer> nodes = List.copyOf(p.pinNodes().values());
             int pa = nodes.get(0);
@@ -235,7 +253,7 @@ final class StageCircuit {
             java.util.function.ToDoubleFunction<org.armature.netlist.Solution> i = twoTerminalCurrent(p, caps);
             powers.add(new Probe("", "W", x -> (x.voltage(pa) - x.voltage(pb)) * i.applyAsDouble(x)));
         }
-        if (!chain.isEmpty()) {
+        if (!chain.isEmpty() || channelClamp != null) {
             c.suppressorPower = new Probe("suppressor power", "W", x -> {
                 double sum = 0;
                 for (Probe pr : powers) {
@@ -243,7 +261,8 @@ final class StageCircuit {
                 }
                 return sum;
             });
-            c.suppressorCurrent = new Probe("suppressor current", "A", twoTerminalCurrent(chain.get(0), caps));
+            c.suppressorCurrent = chain.isEmpty() ? channelClamp
+                    : new Probe("suppressor current", "A", twoTerminalCurrent(chain.get(0), caps));
         }
         // part currents of two-terminal parts, first pin to second
         for (PartNetwork p : net.parts()) {

@@ -81,6 +81,14 @@ final class TimeDomainRun {
     private final double[] stateScale;
     private int accepted;
     private int rejected;
+    /** Backward-Euler steps taken to damp trapezoidal ringing. */
+    private int dampedSteps;
+    /** The step just refused is tried again with backward Euler. */
+    private boolean eulerRetry;
+    /** The last three committed derivatives of each reactive element, newest first. */
+    private double[][] derivativeHistory;
+    /** Points in {@link #derivativeHistory} since the last restart. */
+    private int derivativeCount;
     private boolean highNow;
 
     TimeDomainRun(TimeDomainCircuit circuit, DriveWaveform drive, double durationSeconds, StepOptions options) {
@@ -161,6 +169,7 @@ final class TimeDomainRun {
         states = c.initialStates.clone();
         x = new double[n];
         xPrev = new double[n];
+        derivativeHistory = new double[c.reactives.size()][3];
         highNow = drive.initialHigh();
         selectDrive();
         operatingPoint();
@@ -211,9 +220,10 @@ final class TimeDomainRun {
                 method = IntegrationMethod.BACKWARD_EULER;
                 checkError = true;
             } else {
-                method = o.method();
+                method = eulerRetry ? IntegrationMethod.BACKWARD_EULER : o.method();
                 checkError = true;
             }
+            eulerRetry = false;
             IntegratorCoefficients k = IntegratorCoefficients.of(method, hTry, hPrev);
             boolean predicted = predict(trial, hTry / hPrev);
             if (!solve(trial, t + hTry, k, predicted)) {
@@ -235,6 +245,15 @@ final class TimeDomainRun {
                     }
                     continue;
                 }
+            }
+            if (method == IntegrationMethod.TRAPEZOIDAL && unresolvedReversal(trial)) {
+                // the same step again with backward Euler, which follows the fast mode instead of
+                // overshooting it
+                rejected++;
+                dampedSteps++;
+                eulerRetry = true;
+                h = hTry;
+                continue;
             }
             // relay thresholds and armature events: locate the earliest crossing inside the step
             view.bind(x, states);
@@ -306,7 +325,13 @@ final class TimeDomainRun {
             tCommitted = t;
             accepted++;
             hPrev = hTry;
+            boolean ringing = ringing(newStates) && method == IntegrationMethod.TRAPEZOIDAL;
             pushHistory(t, newStates);
+            if (ringing) {
+                // one damped step: backward Euler at the step the control proposes, error test on
+                histCount = Math.min(histCount, o.method().order() + 1);
+                dampedSteps++;
+            }
             h = checkError ? control.propose(hTry, ratio, method.order()) : hTry * o.maxGrowthFactor();
             if (crossing >= c.relays.size()) {
                 int index = crossing - c.relays.size();
@@ -405,6 +430,7 @@ final class TimeDomainRun {
     private void restart() {
         // the last accepted point stays as the only history point: values are continuous, derivatives are not
         histCount = 1;
+        derivativeCount = 0;
     }
 
     private void selectDrive() {
@@ -567,6 +593,70 @@ final class TimeDomainRun {
         double scale = Math.max(stateScale[idx], Math.abs(vs[0]));
         return TruncationError.ratio(e, scale, vs[1], o.relativeTolerance(), abs);
     }
+
+    /**
+     * Whether the trapezoidal rule is ringing point to point on a mode far faster than the step (a
+     * capacitor meeting a diode that has just switched on), which it never damps (CHECKS NM-7): some
+     * reactive element's committed derivative (a capacitor's current, a coil's voltage) has changed
+     * sign on each of the last three steps, by more than {@link #RINGING_TOLERANCE_MULTIPLE} times its
+     * absolute tolerance each time. A ring the step resolves never alternates every step. Called after
+     * the elements have committed the new point.
+     */
+    private boolean ringing(double[] newStates) {
+        boolean found = false;
+        int j = 0;
+        for (Reactive r : c.reactives) {
+            double d = r.committedDerivative();
+            double abs = RINGING_TOLERANCE_MULTIPLE * switch (r.derivativeUnit()) {
+                case VOLTS -> o.absoluteVoltsTolerance();
+                case AMPS -> o.absoluteAmpsTolerance();
+                case METRES -> o.absoluteMetresTolerance();
+            };
+            double[] h = derivativeHistory[j++];
+            double d1 = d - h[0];
+            double d2 = h[0] - h[1];
+            double d3 = h[1] - h[2];
+            if (derivativeCount >= 3 && d1 * d2 < 0 && d2 * d3 < 0
+                    && Math.abs(d1) > abs && Math.abs(d2) > abs && Math.abs(d3) > abs) {
+                found = true;
+            }
+            h[2] = h[1];
+            h[1] = h[0];
+            h[0] = d;
+        }
+        derivativeCount++;
+        return found;
+    }
+
+    /**
+     * Whether a trapezoidal step has turned some capacitor's current from one direction to the other
+     * at nearly full strength (the smaller of the two magnitudes at least
+     * {@link #REVERSAL_FRACTION} of the larger, and more than {@link #RINGING_TOLERANCE_MULTIPLE}
+     * absolute tolerances): the current of a mode far faster than the step (a winding capacitance
+     * meeting a freewheeling diode that has just switched on), which the trapezoidal rule reflects
+     * instead of following (CHECKS NM-7). A current the step resolves passes through zero gradually.
+     */
+    private boolean unresolvedReversal(double[] trial) {
+        view.bind(trial, states);
+        double abs = RINGING_TOLERANCE_MULTIPLE * o.absoluteAmpsTolerance();
+        for (Reactive r : c.reactives) {
+            if (r instanceof TransientCapacitor cap) {
+                double before = cap.committedDerivative();
+                double now = cap.current(view);
+                double small = Math.min(Math.abs(before), Math.abs(now));
+                if (before * now < 0 && small > abs && small >= REVERSAL_FRACTION * Math.max(Math.abs(before), Math.abs(now))) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
+    /** Ratio of the two current magnitudes at which a reversal in one step counts as unresolved: 0.1 (our choice). */
+    static final double REVERSAL_FRACTION = 0.1;
+
+    /** Multiple of a state's absolute tolerance below which a change does not count as ringing: 10 (our choice). */
+    static final double RINGING_TOLERANCE_MULTIPLE = 10;
 
     /** Pushes the states of the point just accepted, read before its commit (the coil reads its history). */
     private void pushHistory(double t, double[] stateVector) {

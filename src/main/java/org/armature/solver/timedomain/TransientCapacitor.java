@@ -102,4 +102,14 @@ final class TransientCapacitor implements Reactive {
         vNow = x.voltage(a) - x.voltage(b);
         iNow = i;
     }
+
+    @Override
+    public double committedDerivative() {
+        return iNow;
+    }
+
+    @Override
+    public Unit derivativeUnit() {
+        return Unit.AMPS;
+    }
 }

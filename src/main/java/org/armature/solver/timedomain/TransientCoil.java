@@ -144,4 +144,14 @@ final class TransientCoil implements Reactive {
         lambdaNow = lambda;
         dLambdaNow = d;
     }
+
+    @Override
+    public double committedDerivative() {
+        return dLambdaNow;
+    }
+
+    @Override
+    public Unit derivativeUnit() {
+        return Unit.VOLTS;
+    }
 }
