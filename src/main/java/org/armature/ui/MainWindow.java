@@ -53,6 +53,8 @@ public final class MainWindow {
 
     /** Style sheet of the light theme (default; it prints). */
     public static final String LIGHT_CSS = "/org/armature/assets/css/light.css";
+    /** The rules both themes share (their colours come from the theme sheet). */
+    public static final String BASE_CSS = "/org/armature/assets/css/base.css";
     /** Style sheet of the dark theme. */
     public static final String DARK_CSS = "/org/armature/assets/css/dark.css";
 
@@ -118,7 +120,7 @@ public final class MainWindow {
     /** A scene of the window with the light theme. */
     public Scene scene(double width, double height) {
         scene = new Scene(root, width, height);
-        scene.getStylesheets().add(css(LIGHT_CSS));
+        scene.getStylesheets().addAll(css(BASE_CSS), css(LIGHT_CSS));
         return scene;
     }
 
@@ -145,7 +147,7 @@ public final class MainWindow {
     /** Switches theme: style sheet and drawing palette. */
     public void setDark(boolean dark) {
         if (scene != null) {
-            scene.getStylesheets().setAll(css(dark ? DARK_CSS : LIGHT_CSS));
+            scene.getStylesheets().setAll(css(BASE_CSS), css(dark ? DARK_CSS : LIGHT_CSS));
         }
         canvas.setPalette(dark ? Palette.DARK : Palette.LIGHT);
         edges.setPalette(dark ? Palette.DARK : Palette.LIGHT);
