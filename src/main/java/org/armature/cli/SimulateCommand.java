@@ -180,6 +180,9 @@ final class SimulateCommand implements Callable<Integer> {
             b.append(String.format(Locale.ROOT, "  %12.6f s  %s %s%n", e.timeSeconds(), e.what(), e.subject()));
         }
         b.append(String.format(Locale.ROOT, "%d time points%n", r.waveform().size()));
+        for (String note : r.notes()) {
+            b.append("note: ").append(note).append(System.lineSeparator());
+        }
         return b.toString();
     }
 

@@ -157,6 +157,12 @@ public final class EdgesPane extends BorderPane {
             v.getStyleClass().add("reading");
             figures.getChildren().add(new HBox(6, k, v));
         }
+        for (String note : r.get().notes()) {
+            Label n = new Label(note);
+            n.setWrapText(true);
+            n.getStyleClass().add("sheet-description");
+            figures.getChildren().add(n);
+        }
     }
 
     private static String seconds(double s) {

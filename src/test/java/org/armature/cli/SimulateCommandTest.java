@@ -93,4 +93,19 @@ class SimulateCommandTest {
         n.fieldNames().forEachRemaining(names::add);
         return names;
     }
+
+    @Test
+    @DisplayName("a relay the armature fit rejects runs with constant inductance, and the summary says so")
+    void rejectedArmatureFitIsNoted() {
+        org.armature.model.Stage st = Templates.build(StageTemplate.LOW_SIDE_NPN, Suppressor.DIODE,
+                HighSideDrive.LEVEL_SHIFT);
+        org.armature.model.Part k1 = st.part("K1").orElseThrow();
+        // 1.2 H released, 20 H attracted: more than √ρ·Ipu/Ido (≈ 10.6 for 9 V / 1.2 V, ρ = 2) times
+        // the released inductance, which the flux-state fit cannot reach (derived, RelayArmatureFit)
+        Path bad = dir.resolve("bad.stage.json");
+        StageFiles.save(new StageDocument("bad", List.of(st.withPart(k1.with("inductanceAttractedHenries", 20)))), bad);
+        CliRun r = CliRun.of("simulate", bad.toString());
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().contains("note: K1: no moving armature, constant inductance instead"), r.out());
+    }
 }

@@ -139,9 +139,18 @@ final class StageCircuit {
         }
         double pickUp = handle.pickUpAmps();
         double dropOut = handle.dropOutAmps();
-        Optional<MovingArmature> moving = relay.value("inductanceAttractedHenries") > lRel && dropOut < pickUp
-                ? RelayArmatureFit.fit(armatureDatasheet(relay, ohms, pickUp, dropOut)).moving()
-                : Optional.empty();
+        Optional<MovingArmature> moving = Optional.empty();
+        if (relay.value("inductanceAttractedHenries") > lRel && dropOut < pickUp) {
+            RelayArmatureFit fit = RelayArmatureFit.fit(armatureDatasheet(relay, ohms, pickUp, dropOut));
+            moving = fit.moving();
+            if (moving.isEmpty()) {
+                for (org.armature.devices.DeviceFinding f : fit.findings()) {
+                    if (f.severity() == org.armature.devices.DeviceFinding.Severity.ERROR) {
+                        c.notes.add(relay.ref() + ": no moving armature, constant inductance instead: " + f.detail());
+                    }
+                }
+            }
+        }
         if (moving.isPresent()) {
             MovingArmature m = moving.get();
             tc.setHenries(m.inductanceHenries(operated ? 0.0 : m.travelMetres()));

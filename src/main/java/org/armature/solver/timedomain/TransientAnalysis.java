@@ -39,6 +39,6 @@ public final class TransientAnalysis {
                                StepOptions options) {
         TimeDomainResult raw = new TimeDomainRun(circuit, drive, durationSeconds, options).run();
         return new TransientResult(raw.waveform(), MetricsCalculator.compute(raw, circuit), raw.acceptedSteps(),
-                raw.rejectedSteps(), raw.newtonIterations());
+                raw.rejectedSteps(), raw.newtonIterations(), circuit.notes);
     }
 }

@@ -8,7 +8,15 @@ package org.armature.solver.timedomain;
  * @param acceptedSteps accepted time points after the start
  * @param rejectedSteps steps rejected by the error test or by Newton
  * @param newtonIterations Newton iterations of the whole run
+ * @param notes plain-language notes on how the stage was modelled (for example a relay whose
+ *     datasheet figures the moving-armature fit rejected, run with constant inductance instead); empty
+ *     when there is nothing to say
  */
 public record TransientResult(Waveform waveform, TransientMetrics metrics, int acceptedSteps, int rejectedSteps,
-                              int newtonIterations) {
+                              int newtonIterations, java.util.List<String> notes) {
+
+    /** Copies the notes. */
+    public TransientResult {
+        notes = java.util.List.copyOf(notes);
+    }
 }
