@@ -41,6 +41,10 @@ public enum Unit {
      * {@code 0.3m} is 0.3 m and {@code 0.3 mm} is 0.3e-3 m.
      */
     METRE("m", "length", false, true, "0.3 mm, 300µ, 1.5 or 3e-4"),
+    /** Gram, a moving mass; never negative. */
+    GRAM("g", "mass", false, true, "1, 0.5 g, 800m or 1e-1"),
+    /** Newton-second per metre, viscous damping; never negative; printed without prefixes. Also read as {@code Ns/m}. */
+    NEWTON_SECOND_PER_METRE("N·s/m", "damping", false, false, "0.1, 0.05 N·s/m, 1 or 2e-1", "Ns/m"),
     /** Kelvin, absolute or difference temperature; never negative. */
     KELVIN("K", "temperature", false, true, "300, 298.15 K or 3e2"),
     /** Degree Celsius; negatives allowed; printed without prefixes. Also read as {@code degC}. */

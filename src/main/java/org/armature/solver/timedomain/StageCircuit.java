@@ -40,6 +40,9 @@ final class StageCircuit {
     private StageCircuit() {
     }
 
+    /** Kilograms per gram (the part sheet gives the armature mass in grams). */
+    private static final double GRAMS_TO_KILOGRAMS = 1e-3;
+
     static TimeDomainCircuit build(Stage stage, double ambientCelsius, boolean initialHigh) {
         OperatingPoint op = new DcAnalysis().solve(stage,
                 SolveOptions.DEFAULT.withPinHigh(initialHigh).withAmbient(ambientCelsius));
@@ -178,7 +181,9 @@ final class StageCircuit {
                                                     double dropOutAmps) {
         return RelayArmatureDatasheet.typical(coilOhms, relay.value("inductanceReleasedHenries"),
                         relay.value("inductanceAttractedHenries"), pickUpAmps, dropOutAmps, relay.value("travelMetres"))
-                .withSpringForceRatio(relay.value("springForceRatio"));
+                .withSpringForceRatio(relay.value("springForceRatio"))
+                .withMechanics(GRAMS_TO_KILOGRAMS * relay.value("armatureMassGrams"),
+                        relay.value("armatureDampingNewtonSecondsPerMetre"), 0.0);
     }
 
     /** Part whose pins are the switch's high and low terminals, with the rating of its breakdown. */

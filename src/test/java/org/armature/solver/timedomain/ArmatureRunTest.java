@@ -239,4 +239,24 @@ class ArmatureRunTest {
         Optional<TransientEvent> stop = r.waveform().firstEvent(TransientEvent.RELEASED);
         assertTrue(stop.isEmpty(), "no armature motion events without an attracted inductance");
     }
+
+    @Test
+    @DisplayName("the armature mass is a relay parameter: four times the mass, about twice the flight (derived: t ∝ √m under a given force)")
+    void heavierArmatureFliesLonger() {
+        Stage light = Templates.defaultStage();
+        org.armature.model.Part k1 = light.part("K1").orElseThrow();
+        Stage heavy = light.withPart(k1.with("armatureMassGrams", 4));
+        double flightLight = flight(TransientAnalysis.run(light, TransientOptions.turnOn().withDuration(0.04)));
+        double flightHeavy = flight(TransientAnalysis.run(heavy, TransientOptions.turnOn().withDuration(0.04)));
+        // under a force that did not change with time the flight would scale as √4 = 2; the pull
+        // grows as the gap closes and the current dips, so allow ±25 % (derived)
+        assertEquals(2.0, flightHeavy / flightLight, 0.5, flightLight + " s vs " + flightHeavy + " s");
+    }
+
+    /** Pick-up to contacts closed, seconds. */
+    private static double flight(TransientResult r) {
+        double pickUp = r.waveform().firstEvent(TransientEvent.PICK_UP).orElseThrow().timeSeconds();
+        double closed = r.waveform().firstEvent(TransientEvent.CONTACTS_CLOSED).orElseThrow().timeSeconds();
+        return closed - pickUp;
+    }
 }
