@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.function.Function;
+import java.util.function.Supplier;
 import org.armature.model.Finding;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
@@ -110,8 +111,12 @@ public final class StageChecks {
         return new Run(stage, options, dc).run();
     }
 
-    /** A variant with its two operating points (empty when the engine failed). */
-    record Solved(Variant variant, Optional<OperatingPoint> on, Optional<OperatingPoint> off) {
+    /**
+     * A variant with its two operating points (empty when the engine failed) and the parts the
+     * measures read, looked up once (relay, switch, and the drive pin or null).
+     */
+    record Solved(Variant variant, Optional<OperatingPoint> on, Optional<OperatingPoint> off, Part relay,
+                  Part switchPart, Part pin) {
     }
 
     /** The turn-off run and the corner it ran at. */
@@ -123,7 +128,11 @@ public final class StageChecks {
      * @param margin how far inside the absolute limit, in the check's own terms (a ratio minus one, or
      *     kelvin for the junction): only compared between variants of the same check, to find the worst
      */
-    record Measure(double value, double limit, CheckStatus status, double margin, String explanation) {
+    record Measure(double value, double limit, CheckStatus status, double margin, Supplier<String> why) {
+        /** @return the explanation, formatted only when asked for (most variants are never reported) */
+        String explanation() {
+            return why.get();
+        }
     }
 
     /** One check run. */
@@ -211,7 +220,25 @@ public final class StageChecks {
         private Solved solveVariant(Variant v, String what) {
             Optional<OperatingPoint> on = solve(v.stage(), true, nominalOn, what);
             Optional<OperatingPoint> off = solve(v.stage(), false, nominalOff, what);
-            return new Solved(v, on, off);
+            Part relay = null;
+            Part sw = null;
+            Part pin = null;
+            String pinRef = roles.drivePinRef().orElse(null);
+            for (Part p : v.stage().parts()) {
+                if (p.ref().equals(roles.relayRef())) {
+                    relay = p;
+                }
+                if (p.ref().equals(roles.switchRef())) {
+                    sw = p;
+                }
+                if (p.ref().equals(pinRef)) {
+                    pin = p;
+                }
+            }
+            if (relay == null || sw == null || (pinRef != null && pin == null)) {
+                throw new IllegalStateException("a variant lost a part of the stage's roles");
+            }
+            return new Solved(v, on, off, relay, sw, pin);
         }
 
         private Optional<OperatingPoint> solve(Stage s, boolean pinHigh, Optional<OperatingPoint> start, String what) {
@@ -237,7 +264,7 @@ public final class StageChecks {
             if (s.on().isEmpty()) {
                 return Optional.empty();
             }
-            Part k = s.variant().stage().require(roles.relayRef());
+            Part k = s.relay();
             PartResult r = s.on().get().requirePart(roles.relayRef());
             double v = Math.abs(r.quantity("coilVoltage"));
             double t = r.quantity("coilTemperature");
@@ -245,7 +272,7 @@ public final class StageChecks {
             double limit = mo * (1 + o.operateMarginFraction());
             CheckStatus st = v >= limit ? CheckStatus.PASS : v >= mo ? CheckStatus.WARN : CheckStatus.FAIL;
             return Optional.of(new Measure(v, limit, st, v / mo - 1,
-                    "Coil voltage " + volts(v) + " at a coil temperature of " + celsius(t) + ", where must-operate is "
+                    () -> "Coil voltage " + volts(v) + " at a coil temperature of " + celsius(t) + ", where must-operate is "
                             + volts(mo) + " (" + pct(v / mo) + " of it; " + pct(1 + o.operateMarginFraction())
                             + " wanted)."));
         }
@@ -254,7 +281,7 @@ public final class StageChecks {
             if (s.off().isEmpty()) {
                 return Optional.empty();
             }
-            Part k = s.variant().stage().require(roles.relayRef());
+            Part k = s.relay();
             PartResult r = s.off().get().requirePart(roles.relayRef());
             double v = Math.abs(r.quantity("coilVoltage"));
             double t = r.quantity("coilTemperature");
@@ -262,7 +289,7 @@ public final class StageChecks {
             double limit = mr * (1 - o.releaseMarginFraction());
             CheckStatus st = v <= limit ? CheckStatus.PASS : v <= mr ? CheckStatus.WARN : CheckStatus.FAIL;
             return Optional.of(new Measure(v, limit, st, 1 - v / mr,
-                    "With the pin low the coil sees " + volts(v) + "; must-release at " + celsius(t) + " is " + volts(mr)
+                    () -> "With the pin low the coil sees " + volts(v) + "; must-release at " + celsius(t) + " is " + volts(mr)
                             + " (" + pct(1 - o.releaseMarginFraction()) + " of it allowed)."));
         }
 
@@ -270,20 +297,21 @@ public final class StageChecks {
             if (s.on().isEmpty()) {
                 return Optional.empty();
             }
-            Part q = s.variant().stage().require(roles.switchRef());
+            Part q = s.switchPart();
             PartResult r = s.on().get().requirePart(roles.switchRef());
             double margin;
-            String why;
+            Supplier<String> why;
             if (q.kind() == PartKind.NPN || q.kind() == PartKind.PNP) {
                 double ic = r.quantity("ic");
                 double ib = r.quantity("ib");
                 double beta = q.value("betaForward");
-                margin = ic > 0 && ib > 0 ? beta * ib / ic : 0;
-                why = "gain " + ratio(beta) + " × IB " + amps(ib) + " ÷ IC " + amps(ic) + " = ×" + ratio(margin) + ".";
+                double m = ic > 0 && ib > 0 ? beta * ib / ic : 0;
+                margin = m;
+                why = () -> "gain " + ratio(beta) + " × IB " + amps(ib) + " ÷ IC " + amps(ic) + " = ×" + ratio(m) + ".";
             } else {
                 Optional<SwitchVerdict> v = s.on().get().switchVerdict();
                 margin = v.map(SwitchVerdict::margin).orElse(0.0);
-                why = v.map(SwitchVerdict::reason).orElse("no switch verdict");
+                why = () -> v.map(SwitchVerdict::reason).orElse("no switch verdict");
             }
             CheckStatus st = margin >= o.saturationPassMargin() ? CheckStatus.PASS : margin >= 1 ? CheckStatus.WARN
                     : CheckStatus.FAIL;
@@ -294,11 +322,11 @@ public final class StageChecks {
             if (s.on().isEmpty()) {
                 return Optional.empty();
             }
-            Part q = s.variant().stage().require(roles.switchRef());
+            Part q = s.switchPart();
             PartResult r = s.on().get().requirePart(roles.switchRef());
             double i = Math.abs(r.quantity(q.kind() == PartKind.NMOS ? "id" : "ic"));
             double rating = q.value(q.kind() == PartKind.NMOS ? "idMaxAmps" : "icMaxAmps");
-            return Optional.of(rated(i, rating, amps(i) + " against a rating of " + amps(rating) + "."));
+            return Optional.of(rated(i, rating, () -> amps(i) + " against a rating of " + amps(rating) + "."));
         }
 
         private Optional<Measure> pinCurrent(Solved s) {
@@ -307,8 +335,8 @@ public final class StageChecks {
             }
             String pin = roles.drivePinRef().orElseThrow();
             double i = Math.abs(s.on().get().requirePart(pin).quantity("current"));
-            double limit = s.variant().stage().require(pin).value("pinCurrentLimitAmps");
-            return Optional.of(rated(i, limit, "The pin sources " + amps(i) + "; its limit is " + amps(limit) + "."));
+            double limit = s.pin().value("pinCurrentLimitAmps");
+            return Optional.of(rated(i, limit, () -> "The pin sources " + amps(i) + "; its limit is " + amps(limit) + "."));
         }
 
         private Optional<Measure> packageCurrent(Solved s) {
@@ -316,15 +344,15 @@ public final class StageChecks {
                 return Optional.empty();
             }
             String pin = roles.drivePinRef().orElseThrow();
-            Part u = s.variant().stage().require(pin);
+            Part u = s.pin();
             double n = u.value("channelCount");
             double i = n * Math.abs(s.on().get().requirePart(pin).quantity("current"));
             double limit = u.value("packageCurrentLimitAmps");
-            return Optional.of(rated(i, limit, ratio(n) + " channels draw " + amps(i) + " from the package; its limit is "
+            return Optional.of(rated(i, limit, () -> ratio(n) + " channels draw " + amps(i) + " from the package; its limit is "
                     + amps(limit) + "."));
         }
 
-        private Measure rated(double value, double rating, String why) {
+        private Measure rated(double value, double rating, Supplier<String> why) {
             double pass = rating * o.ratingUseFraction();
             CheckStatus st = value <= pass ? CheckStatus.PASS : value <= rating ? CheckStatus.WARN : CheckStatus.FAIL;
             return new Measure(value, pass, st, 1 - value / rating, why);
@@ -334,7 +362,7 @@ public final class StageChecks {
             if (s.on().isEmpty()) {
                 return Optional.empty();
             }
-            Part q = s.variant().stage().require(roles.switchRef());
+            Part q = s.switchPart();
             PartResult r = s.on().get().requirePart(roles.switchRef());
             double ta = s.variant().stage().conditions().ambientCelsius();
             double n = q.kind() == PartKind.DARLINGTON ? q.value("channelCount") : 1;
@@ -345,7 +373,7 @@ public final class StageChecks {
             double pass = max - o.thermalMarginKelvin();
             CheckStatus st = tj <= pass ? CheckStatus.PASS : tj <= max ? CheckStatus.WARN : CheckStatus.FAIL;
             return Optional.of(new Measure(tj, pass, st, max - tj,
-                    "Tj = " + celsius(ta) + " + " + EngineeringNotation.format(p, Unit.WATT) + " × "
+                    () -> "Tj = " + celsius(ta) + " + " + EngineeringNotation.format(p, Unit.WATT) + " × "
                             + EngineeringNotation.format(rth, Unit.KELVIN_PER_WATT) + " = " + celsius(tj) + "; Tj(max) "
                             + celsius(max) + "."));
         }
@@ -367,7 +395,7 @@ public final class StageChecks {
                         refs);
             }
             double peak = sup.peakSwitchVolts(vs, Double.isNaN(i0) ? 0 : i0);
-            Measure m = rated(peak, rating, "Peak switch voltage VS,max + Vc + I0·Rs = " + volts(vs) + " + "
+            Measure m = rated(peak, rating, () -> "Peak switch voltage VS,max + Vc + I0·Rs = " + volts(vs) + " + "
                     + volts(sup.clampVolts()) + (sup.seriesOhms() > 0 ? " + " + amps(i0) + " × " + Quantities.ohms(sup.seriesOhms()) : "")
                     + " = " + volts(peak) + " (" + sup.description() + ") against " + volts(rating) + ".");
             return new CheckResult("rating.switch-voltage", m.status(), m.value(), m.limit(), Unit.VOLT, Map.of(),
@@ -384,7 +412,7 @@ public final class StageChecks {
             }
             boolean channel = diode.get().kind() == PartKind.DARLINGTON;
             double rating = diode.get().value(channel ? "icMaxAmps" : "maxCurrentAmps");
-            Measure m = rated(i0, rating, (channel ? diode.get().ref() + "'s clamp diode" : diode.get().ref())
+            Measure m = rated(i0, rating, () -> (channel ? diode.get().ref() + "'s clamp diode" : diode.get().ref())
                     + " carries the coil current at turn-off, " + amps(i0) + ", against a peak rating of " + amps(rating)
                     + (channel ? " (taken as the channel's output rating)." : "."));
             return Optional.of(new CheckResult("rating.suppressor-current", m.status(), m.value(), m.limit(), Unit.AMPERE,
@@ -453,7 +481,7 @@ public final class StageChecks {
             Part q = t.stage().require(roles.switchRef());
             double rating = q.value(q.kind() == PartKind.NMOS ? "vdssVolts" : "vceoVolts");
             double peak = t.metrics().peakSwitchVolts();
-            Measure m = rated(peak, rating, "Peak switch voltage at turn-off " + volts(peak) + " (" + sup.description()
+            Measure m = rated(peak, rating, () -> "Peak switch voltage at turn-off " + volts(peak) + " (" + sup.description()
                     + ") against " + volts(rating) + ".");
             CheckStatus st = t.metrics().switchBreakdown() ? CheckStatus.FAIL : m.status();
             String why = t.metrics().switchBreakdown()
@@ -477,7 +505,7 @@ public final class StageChecks {
             boolean channel = diode.get().kind() == PartKind.DARLINGTON;
             double rating = diode.get().value(channel ? "icMaxAmps" : "maxCurrentAmps");
             double peak = t.metrics().peakSuppressorAmps();
-            Measure m = rated(peak, rating, "Peak suppressor current " + amps(peak) + " against " + amps(rating)
+            Measure m = rated(peak, rating, () -> "Peak suppressor current " + amps(peak) + " against " + amps(rating)
                     + (channel ? " (the channel's output rating)." : "."));
             return Optional.of(new CheckResult("rating.suppressor-current", m.status(), peak, m.limit(), Unit.AMPERE,
                     t.corner(), t.cornerText(), TRANSIENT, m.explanation(), List.of(diode.get().ref())));

@@ -140,10 +140,13 @@ public final class DcAnalysis {
             return c;
         }
         boolean sameTopology = c != null && sameTopology(c.stage, stage);
-        if (sameTopology && c.patch(stage, fo)) {
+        Compiled other = byPin[1 - slot];
+        // the other pin state compiled this very stage: its part networks serve where the pin does not matter
+        Netlist donor = other != null && other.stage == stage && other.flatten.equals(fo.withPinHigh(other.flatten.pinHigh()))
+                ? other.netlist : null;
+        if (sameTopology && c.patch(stage, fo, donor)) {
             return c;
         }
-        Compiled other = byPin[1 - slot];
         boolean otherSame = other != null && sameTopology(other.stage, stage);
         Connectivity conn;
         if (sameTopology) {
@@ -290,23 +293,28 @@ public final class DcAnalysis {
         }
 
         /**
-         * Takes a stage of the same topology: re-flattens the parts whose values differ (every part
-         * when the ambient differs). False if some part's structure would change.
+         * Takes a stage of the same topology: re-flattens the parts whose values differ (when only
+         * the ambient differs, also every part whose flattening depends on it,
+         * {@link NetlistBuilder#flattensWithAmbient}; every part when other options differ), taking
+         * the part networks of {@code donor} (the other pin state's netlist of the same stage, or
+         * null) where the pin state does not matter. False if some part's structure would change.
          */
-        boolean patch(Stage next, FlattenOptions fo) {
+        boolean patch(Stage next, FlattenOptions fo, Netlist donor) {
             List<Part> now = stage.parts();
             List<Part> then = next.parts();
             boolean all = !fo.equals(flatten);
+            boolean ambientOnly = all && fo.sameExceptAmbient(flatten);
             int count = 0;
             for (int i = 0; i < then.size(); i++) {
                 Part a = now.get(i);
                 Part b = then.get(i);
-                if (all || (a != b && !a.equals(b))) {
+                boolean byOptions = all && (!ambientOnly || NetlistBuilder.flattensWithAmbient(b.kind()));
+                if (byOptions || (a != b && !a.equals(b))) {
                     changed[count++] = i;
                 }
             }
             if (count > 0) {
-                Optional<Netlist> patched = NetlistBuilder.reflatten(netlist, next, fo,
+                Optional<Netlist> patched = NetlistBuilder.reflatten(netlist, next, fo, donor,
                         count == changed.length ? changed : Arrays.copyOf(changed, count));
                 if (patched.isEmpty()) {
                     return false;

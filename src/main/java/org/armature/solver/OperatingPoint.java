@@ -22,8 +22,9 @@ import org.armature.units.Unit;
  * power and named quantities, and the switch verdict.
  *
  * <p>The snapshot holds its own copy of the solution vector and element states; the per-part maps
- * are built from it on first access (and then kept), so a solve whose readouts nobody reads costs
- * almost no allocation. Safe to share between threads.
+ * are built from it on first access (and then kept), part by part when only some parts are asked
+ * for, so a solve whose readouts nobody reads costs almost no allocation. Safe to share between
+ * threads.
  *
  * <p>Every number is finite: a solve that would produce NaN or infinity throws instead.
  */
@@ -48,6 +49,8 @@ public final class OperatingPoint {
 
     private Map<String, Double> nodeVoltages;
     private Map<String, PartResult> parts;
+    /** Part results built so far, by part network index; null until the first is asked for. */
+    private PartResult[] built;
     private Optional<SwitchVerdict> verdict;
 
     OperatingPoint(Netlist netlist, double[] unknowns, double[] states, boolean converged, int iterations,
@@ -121,22 +124,10 @@ public final class OperatingPoint {
     /** @return every part's result, by designator, in drawing order */
     public synchronized Map<String, PartResult> parts() {
         if (parts == null) {
-            ArraySolution x = solution();
             Map<String, PartResult> m = new LinkedHashMap<>();
-            List<RelayHandle> relays = netlist.relays();
-            for (PartNetwork p : netlist.parts()) {
-                PartReading r = p.read(x);
-                Map<String, Double> pinV = new LinkedHashMap<>();
-                for (Map.Entry<String, Integer> e : p.pinNodes().entrySet()) {
-                    pinV.put(e.getKey(), x.voltage(e.getValue()));
-                }
-                Map<String, String> st = r.states();
-                if (p.relay().isPresent()) {
-                    st = new HashMap<>(st);
-                    st.put("contactsFrom", contactsFrom[relays.indexOf(p.relay().get())]);
-                }
-                m.put(p.ref(), new PartResult(p.ref(), p.part().kind(), pinV, r.pinCurrents(), r.powerWatts(),
-                        r.quantities(), st));
+            List<PartNetwork> all = netlist.parts();
+            for (int i = 0; i < all.size(); i++) {
+                m.put(all.get(i).ref(), result(i));
             }
             parts = Collections.unmodifiableMap(m);
         }
@@ -144,11 +135,50 @@ public final class OperatingPoint {
     }
 
     /**
+     * One part's result; only that part is read from the solution (the checks read two or three
+     * parts of each of thousands of operating points).
+     *
      * @param ref a designator
      * @return that part's result
      */
-    public Optional<PartResult> part(String ref) {
-        return Optional.ofNullable(parts().get(ref));
+    public synchronized Optional<PartResult> part(String ref) {
+        if (parts != null) {
+            return Optional.ofNullable(parts.get(ref));
+        }
+        List<PartNetwork> all = netlist.parts();
+        for (int i = 0; i < all.size(); i++) {
+            if (all.get(i).ref().equals(ref)) {
+                return Optional.of(result(i));
+            }
+        }
+        return Optional.empty();
+    }
+
+    /** The result of part network {@code index}, built on first use and kept. */
+    private PartResult result(int index) {
+        if (built == null) {
+            built = new PartResult[netlist.parts().size()];
+        }
+        PartResult done = built[index];
+        if (done != null) {
+            return done;
+        }
+        PartNetwork p = netlist.parts().get(index);
+        ArraySolution x = solution();
+        PartReading r = p.read(x);
+        Map<String, Double> pinV = new LinkedHashMap<>();
+        for (Map.Entry<String, Integer> e : p.pinNodes().entrySet()) {
+            pinV.put(e.getKey(), x.voltage(e.getValue()));
+        }
+        Map<String, String> st = r.states();
+        if (p.relay().isPresent()) {
+            st = new HashMap<>(st);
+            st.put("contactsFrom", contactsFrom[netlist.relays().indexOf(p.relay().get())]);
+        }
+        PartResult made = new PartResult(p.ref(), p.part().kind(), pinV, r.pinCurrents(), r.powerWatts(),
+                r.quantities(), st);
+        built[index] = made;
+        return made;
     }
 
     /**
@@ -223,7 +253,7 @@ public final class OperatingPoint {
         }
         for (PartNetwork p : netlist.parts()) {
             if (p.part().kind().isSwitch() && p.pinNodes().containsValue(switchNode)) {
-                return Optional.of(verdictFor(p.part(), parts().get(p.ref())));
+                return Optional.of(verdictFor(p.part(), part(p.ref()).orElseThrow()));
             }
         }
         return Optional.empty();
