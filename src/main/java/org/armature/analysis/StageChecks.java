@@ -20,7 +20,6 @@ import org.armature.model.Severity;
 import org.armature.model.Stage;
 import org.armature.solver.DcAnalysis;
 import org.armature.solver.OperatingPoint;
-import org.armature.solver.PartResult;
 import org.armature.solver.SolveOptions;
 import org.armature.solver.SolverException;
 import org.armature.solver.SwitchVerdict;
@@ -192,7 +191,7 @@ public final class StageChecks {
                         "channels × largest pin current vs the package limit (GP-x)", List.of(pin)));
             });
             double i0 = corners.stream().flatMap(s -> s.on().stream())
-                    .mapToDouble(op -> Math.abs(op.requirePart(roles.relayRef()).quantity("coilCurrent"))).max().orElse(Double.NaN);
+                    .mapToDouble(op -> Math.abs(op.quantity(roles.relayRef(), "coilCurrent"))).max().orElse(Double.NaN);
             SuppressorEstimate sup = SuppressorEstimate.of(stage, roles, o.forwardDropVolts());
             Optional<TurnOff> edge = o.useTransient() ? turnOff(sup, i0) : Optional.empty();
             if (edge.isPresent()) {
@@ -217,6 +216,10 @@ public final class StageChecks {
 
         // ------------------------------------------------------------------ solving
 
+        /**
+         * Solves a variant with the pin high and low, each started from the nominal operating point
+         * of that pin state (so every variant's answer is independent of the order they are solved in).
+         */
         private Solved solveVariant(Variant v, String what) {
             Optional<OperatingPoint> on = solve(v.stage(), true, nominalOn, what);
             Optional<OperatingPoint> off = solve(v.stage(), false, nominalOff, what);
@@ -265,9 +268,9 @@ public final class StageChecks {
                 return Optional.empty();
             }
             Part k = s.relay();
-            PartResult r = s.on().get().requirePart(roles.relayRef());
-            double v = Math.abs(r.quantity("coilVoltage"));
-            double t = r.quantity("coilTemperature");
+            OperatingPoint op = s.on().get();
+            double v = Math.abs(op.quantity(roles.relayRef(), "coilVoltage"));
+            double t = op.quantity(roles.relayRef(), "coilTemperature");
             double mo = PartPhysics.coilVoltsAt(k, k.value("mustOperateVolts"), t);
             double limit = mo * (1 + o.operateMarginFraction());
             CheckStatus st = v >= limit ? CheckStatus.PASS : v >= mo ? CheckStatus.WARN : CheckStatus.FAIL;
@@ -282,9 +285,9 @@ public final class StageChecks {
                 return Optional.empty();
             }
             Part k = s.relay();
-            PartResult r = s.off().get().requirePart(roles.relayRef());
-            double v = Math.abs(r.quantity("coilVoltage"));
-            double t = r.quantity("coilTemperature");
+            OperatingPoint op = s.off().get();
+            double v = Math.abs(op.quantity(roles.relayRef(), "coilVoltage"));
+            double t = op.quantity(roles.relayRef(), "coilTemperature");
             double mr = PartPhysics.coilVoltsAt(k, k.value("mustReleaseVolts"), t);
             double limit = mr * (1 - o.releaseMarginFraction());
             CheckStatus st = v <= limit ? CheckStatus.PASS : v <= mr ? CheckStatus.WARN : CheckStatus.FAIL;
@@ -298,18 +301,18 @@ public final class StageChecks {
                 return Optional.empty();
             }
             Part q = s.switchPart();
-            PartResult r = s.on().get().requirePart(roles.switchRef());
+            OperatingPoint op = s.on().get();
             double margin;
             Supplier<String> why;
             if (q.kind() == PartKind.NPN || q.kind() == PartKind.PNP) {
-                double ic = r.quantity("ic");
-                double ib = r.quantity("ib");
+                double ic = op.quantity(roles.switchRef(), "ic");
+                double ib = op.quantity(roles.switchRef(), "ib");
                 double beta = q.value("betaForward");
                 double m = ic > 0 && ib > 0 ? beta * ib / ic : 0;
                 margin = m;
                 why = () -> "gain " + ratio(beta) + " × IB " + amps(ib) + " ÷ IC " + amps(ic) + " = ×" + ratio(m) + ".";
             } else {
-                Optional<SwitchVerdict> v = s.on().get().switchVerdict();
+                Optional<SwitchVerdict> v = op.switchVerdict();
                 margin = v.map(SwitchVerdict::margin).orElse(0.0);
                 why = () -> v.map(SwitchVerdict::reason).orElse("no switch verdict");
             }
@@ -323,8 +326,7 @@ public final class StageChecks {
                 return Optional.empty();
             }
             Part q = s.switchPart();
-            PartResult r = s.on().get().requirePart(roles.switchRef());
-            double i = Math.abs(r.quantity(q.kind() == PartKind.NMOS ? "id" : "ic"));
+            double i = Math.abs(s.on().get().quantity(roles.switchRef(), q.kind() == PartKind.NMOS ? "id" : "ic"));
             double rating = q.value(q.kind() == PartKind.NMOS ? "idMaxAmps" : "icMaxAmps");
             return Optional.of(rated(i, rating, () -> amps(i) + " against a rating of " + amps(rating) + "."));
         }
@@ -334,7 +336,7 @@ public final class StageChecks {
                 return Optional.empty();
             }
             String pin = roles.drivePinRef().orElseThrow();
-            double i = Math.abs(s.on().get().requirePart(pin).quantity("current"));
+            double i = Math.abs(s.on().get().quantity(pin, "current"));
             double limit = s.pin().value("pinCurrentLimitAmps");
             return Optional.of(rated(i, limit, () -> "The pin sources " + amps(i) + "; its limit is " + amps(limit) + "."));
         }
@@ -346,7 +348,7 @@ public final class StageChecks {
             String pin = roles.drivePinRef().orElseThrow();
             Part u = s.pin();
             double n = u.value("channelCount");
-            double i = n * Math.abs(s.on().get().requirePart(pin).quantity("current"));
+            double i = n * Math.abs(s.on().get().quantity(pin, "current"));
             double limit = u.value("packageCurrentLimitAmps");
             return Optional.of(rated(i, limit, () -> ratio(n) + " channels draw " + amps(i) + " from the package; its limit is "
                     + amps(limit) + "."));
@@ -363,10 +365,9 @@ public final class StageChecks {
                 return Optional.empty();
             }
             Part q = s.switchPart();
-            PartResult r = s.on().get().requirePart(roles.switchRef());
             double ta = s.variant().stage().conditions().ambientCelsius();
             double n = q.kind() == PartKind.DARLINGTON ? q.value("channelCount") : 1;
-            double p = Math.max(0, r.powerWatts()) * n;
+            double p = Math.max(0, s.on().get().powerWatts(roles.switchRef())) * n;
             double rth = q.value("thermalResistanceKelvinPerWatt");
             double tj = ThermalBudget.junctionCelsius(ta, p, rth);
             double max = q.value("tjMaxCelsius");

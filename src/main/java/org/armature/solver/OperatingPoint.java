@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
+import java.util.function.Supplier;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
 import org.armature.netlist.ArraySolution;
@@ -51,6 +52,8 @@ public final class OperatingPoint {
     private Map<String, PartResult> parts;
     /** Part results built so far, by part network index; null until the first is asked for. */
     private PartResult[] built;
+    /** Part readings made so far, by part network index; null until the first is asked for. */
+    private PartReading[] readings;
     private Optional<SwitchVerdict> verdict;
 
     OperatingPoint(Netlist netlist, double[] unknowns, double[] states, boolean converged, int iterations,
@@ -145,13 +148,54 @@ public final class OperatingPoint {
         if (parts != null) {
             return Optional.ofNullable(parts.get(ref));
         }
-        List<PartNetwork> all = netlist.parts();
-        for (int i = 0; i < all.size(); i++) {
-            if (all.get(i).ref().equals(ref)) {
-                return Optional.of(result(i));
-            }
+        int i = netlist.partIndex(ref);
+        return i < 0 ? Optional.empty() : Optional.of(result(i));
+    }
+
+    /**
+     * One named quantity of one part, read without building the part's full result.
+     *
+     * @param ref a designator
+     * @param key a quantity key of that part's kind (as in {@link PartResult#quantities()})
+     * @return the value, in the quantity's unit
+     * @throws IllegalArgumentException if there is no such part or quantity
+     */
+    public synchronized double quantity(String ref, String key) {
+        Double v = reading(index(ref)).quantities().get(key);
+        if (v == null) {
+            throw new IllegalArgumentException(ref + " has no quantity " + key);
         }
-        return Optional.empty();
+        return v;
+    }
+
+    /**
+     * @param ref a designator
+     * @return the power that part dissipates, W (as {@link PartResult#powerWatts()})
+     * @throws IllegalArgumentException if there is no such part
+     */
+    public synchronized double powerWatts(String ref) {
+        return reading(index(ref)).powerWatts();
+    }
+
+    private int index(String ref) {
+        int i = netlist.partIndex(ref);
+        if (i < 0) {
+            throw new IllegalArgumentException("no part " + ref);
+        }
+        return i;
+    }
+
+    /** The reading of part network {@code index}, made on first use and kept. */
+    private PartReading reading(int index) {
+        if (readings == null) {
+            readings = new PartReading[netlist.parts().size()];
+        }
+        PartReading r = readings[index];
+        if (r == null) {
+            r = netlist.parts().get(index).read(solution());
+            readings[index] = r;
+        }
+        return r;
     }
 
     /** The result of part network {@code index}, built on first use and kept. */
@@ -165,7 +209,7 @@ public final class OperatingPoint {
         }
         PartNetwork p = netlist.parts().get(index);
         ArraySolution x = solution();
-        PartReading r = p.read(x);
+        PartReading r = reading(index);
         Map<String, Double> pinV = new LinkedHashMap<>();
         for (Map.Entry<String, Integer> e : p.pinNodes().entrySet()) {
             pinV.put(e.getKey(), x.voltage(e.getValue()));
@@ -278,20 +322,20 @@ public final class OperatingPoint {
             double vgs = r.quantity("vgs");
             double id = r.quantity("id");
             if (r.state("region").equals("cutoff") || !(id > 0)) {
-                return new SwitchVerdict(ref, false, 0.0, ref + " is off: VGS " + volts(vgs) + " is below threshold.");
+                return new SwitchVerdict(ref, false, 0.0, () -> ref + " is off: VGS " + volts(vgs) + " is below threshold.");
             }
             double thMax = part.value("vgsThMaxVolts");
             double rdsOn = part.value("rdsOnOhms");
             double spec = part.value("rdsOnGateVolts");
             double needed = (spec - thMax) + id * rdsOn / 2.0;
             if (!(spec > thMax)) {
-                return new SwitchVerdict(ref, false, 0.0, ref + " RDS(on) is stated at VGS " + volts(spec)
+                return new SwitchVerdict(ref, false, 0.0, () -> ref + " RDS(on) is stated at VGS " + volts(spec)
                         + ", not above VGS(th) max " + volts(thMax) + ": the datasheet guarantees no on-state.");
             }
             double available = Math.max(0.0, vgs - thMax);
             double margin = available / needed;
             boolean on = margin >= 1.0;
-            String reason = on
+            Supplier<String> reason = () -> on
                     ? "fully on, " + times(margin) + " margin: gate overdrive " + volts(vgs - thMax)
                             + " over VGS(th) max against " + volts(needed) + " needed for " + amps(id)
                             + " at RDS(on) " + EngineeringNotation.format(rdsOn, Unit.OHM) + "."
@@ -305,14 +349,14 @@ public final class OperatingPoint {
         double drive = r.quantity(darlington ? "iin" : "ib");
         double hfeMin = part.value("hfeMin");
         if (r.state("region").equals("cutoff") || !(ic > 0) || !(drive > 0)) {
-            return new SwitchVerdict(ref, false, 0.0, ref + " is cut off: " + (darlington ? "input" : "base")
+            return new SwitchVerdict(ref, false, 0.0, () -> ref + " is cut off: " + (darlington ? "input" : "base")
                     + " current " + amps(Math.max(drive, 0.0)) + ", the coil is not energised.");
         }
         double margin = hfeMin * drive / ic;
         double neededDrive = ic / hfeMin;
         String driveName = darlington ? "IIN" : "IB";
         boolean on = margin >= 1.0;
-        String reason = on
+        Supplier<String> reason = () -> on
                 ? "saturated, " + times(margin) + " margin: hFE(min) " + String.format(java.util.Locale.ROOT, "%.4g", hfeMin)
                         + " × " + driveName + " " + amps(drive) + " ÷ IC " + amps(ic) + "."
                 : "not guaranteed saturated at hFE(min): needs " + amps(neededDrive - drive) + " more " + (darlington ? "input" : "base")
