@@ -7,6 +7,7 @@ import static org.armature.analysis.Quantities.ratio;
 import static org.armature.analysis.Quantities.pct;
 
 import java.util.ArrayList;
+import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -114,8 +115,39 @@ public final class StageChecks {
      * A variant with its two operating points (empty when the engine failed) and the parts the
      * measures read, looked up once (relay, switch, and the drive pin or null).
      */
-    record Solved(Variant variant, Optional<OperatingPoint> on, Optional<OperatingPoint> off, Part relay,
+    record Solved(Variant variant, Optional<Readout> on, Optional<Readout> off, Part relay,
                   Part switchPart, Part pin) {
+    }
+
+    /**
+     * What the measures read of one operating point, taken right after its solve, so that the run
+     * keeps a few numbers per variant instead of the operating point and its netlist. Quantities a
+     * switch kind does not have are NaN; the verdict is kept for the switches judged by it (MOSFET,
+     * Darlington channel).
+     */
+    record Readout(double coilVoltage, double coilTemperature, double coilCurrent, double ic, double ib,
+                   double id, double switchPowerWatts, double pinCurrent, Optional<SwitchVerdict> verdict) {
+
+        /** The readout of a pin-high point: relay, switch and drive pin. */
+        static Readout on(OperatingPoint op, StageRoles roles, PartKind switchKind) {
+            String k = roles.relayRef();
+            String q = roles.switchRef();
+            boolean bipolar = switchKind == PartKind.NPN || switchKind == PartKind.PNP;
+            boolean mos = switchKind == PartKind.NMOS;
+            return new Readout(op.quantity(k, "coilVoltage"), op.quantity(k, "coilTemperature"),
+                    op.quantity(k, "coilCurrent"), mos ? Double.NaN : op.quantity(q, "ic"),
+                    bipolar ? op.quantity(q, "ib") : Double.NaN, mos ? op.quantity(q, "id") : Double.NaN,
+                    op.powerWatts(q), roles.drivePinRef().map(pin -> op.quantity(pin, "current")).orElse(Double.NaN),
+                    bipolar ? Optional.empty() : op.switchVerdict());
+        }
+
+        /** The readout of a pin-low point: the relay only. */
+        static Readout off(OperatingPoint op, StageRoles roles) {
+            String k = roles.relayRef();
+            return new Readout(op.quantity(k, "coilVoltage"), op.quantity(k, "coilTemperature"),
+                    op.quantity(k, "coilCurrent"), Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
+                    Optional.empty());
+        }
     }
 
     /** The turn-off run and the corner it ran at. */
@@ -191,7 +223,7 @@ public final class StageChecks {
                         "channels × largest pin current vs the package limit (GP-x)", List.of(pin)));
             });
             double i0 = corners.stream().flatMap(s -> s.on().stream())
-                    .mapToDouble(op -> Math.abs(op.quantity(roles.relayRef(), "coilCurrent"))).max().orElse(Double.NaN);
+                    .mapToDouble(r -> Math.abs(r.coilCurrent())).max().orElse(Double.NaN);
             SuppressorEstimate sup = SuppressorEstimate.of(stage, roles, o.forwardDropVolts());
             Optional<TurnOff> edge = o.useTransient() ? turnOff(sup, i0) : Optional.empty();
             if (edge.isPresent()) {
@@ -241,7 +273,9 @@ public final class StageChecks {
             if (relay == null || sw == null || (pinRef != null && pin == null)) {
                 throw new IllegalStateException("a variant lost a part of the stage's roles");
             }
-            return new Solved(v, on, off, relay, sw, pin);
+            PartKind kind = sw.kind();
+            return new Solved(v, on.map(op -> Readout.on(op, roles, kind)), off.map(op -> Readout.off(op, roles)),
+                    relay, sw, pin);
         }
 
         private Optional<OperatingPoint> solve(Stage s, boolean pinHigh, Optional<OperatingPoint> start, String what) {
@@ -268,9 +302,9 @@ public final class StageChecks {
                 return Optional.empty();
             }
             Part k = s.relay();
-            OperatingPoint op = s.on().get();
-            double v = Math.abs(op.quantity(roles.relayRef(), "coilVoltage"));
-            double t = op.quantity(roles.relayRef(), "coilTemperature");
+            Readout op = s.on().get();
+            double v = Math.abs(op.coilVoltage());
+            double t = op.coilTemperature();
             double mo = PartPhysics.coilVoltsAt(k, k.value("mustOperateVolts"), t);
             double limit = mo * (1 + o.operateMarginFraction());
             CheckStatus st = v >= limit ? CheckStatus.PASS : v >= mo ? CheckStatus.WARN : CheckStatus.FAIL;
@@ -285,9 +319,9 @@ public final class StageChecks {
                 return Optional.empty();
             }
             Part k = s.relay();
-            OperatingPoint op = s.off().get();
-            double v = Math.abs(op.quantity(roles.relayRef(), "coilVoltage"));
-            double t = op.quantity(roles.relayRef(), "coilTemperature");
+            Readout op = s.off().get();
+            double v = Math.abs(op.coilVoltage());
+            double t = op.coilTemperature();
             double mr = PartPhysics.coilVoltsAt(k, k.value("mustReleaseVolts"), t);
             double limit = mr * (1 - o.releaseMarginFraction());
             CheckStatus st = v <= limit ? CheckStatus.PASS : v <= mr ? CheckStatus.WARN : CheckStatus.FAIL;
@@ -301,18 +335,18 @@ public final class StageChecks {
                 return Optional.empty();
             }
             Part q = s.switchPart();
-            OperatingPoint op = s.on().get();
+            Readout op = s.on().get();
             double margin;
             Supplier<String> why;
             if (q.kind() == PartKind.NPN || q.kind() == PartKind.PNP) {
-                double ic = op.quantity(roles.switchRef(), "ic");
-                double ib = op.quantity(roles.switchRef(), "ib");
+                double ic = op.ic();
+                double ib = op.ib();
                 double beta = q.value("betaForward");
                 double m = ic > 0 && ib > 0 ? beta * ib / ic : 0;
                 margin = m;
                 why = () -> "gain " + ratio(beta) + " × IB " + amps(ib) + " ÷ IC " + amps(ic) + " = ×" + ratio(m) + ".";
             } else {
-                Optional<SwitchVerdict> v = op.switchVerdict();
+                Optional<SwitchVerdict> v = op.verdict();
                 margin = v.map(SwitchVerdict::margin).orElse(0.0);
                 why = () -> v.map(SwitchVerdict::reason).orElse("no switch verdict");
             }
@@ -326,7 +360,7 @@ public final class StageChecks {
                 return Optional.empty();
             }
             Part q = s.switchPart();
-            double i = Math.abs(s.on().get().quantity(roles.switchRef(), q.kind() == PartKind.NMOS ? "id" : "ic"));
+            double i = Math.abs(q.kind() == PartKind.NMOS ? s.on().get().id() : s.on().get().ic());
             double rating = q.value(q.kind() == PartKind.NMOS ? "idMaxAmps" : "icMaxAmps");
             return Optional.of(rated(i, rating, () -> amps(i) + " against a rating of " + amps(rating) + "."));
         }
@@ -335,8 +369,7 @@ public final class StageChecks {
             if (s.on().isEmpty()) {
                 return Optional.empty();
             }
-            String pin = roles.drivePinRef().orElseThrow();
-            double i = Math.abs(s.on().get().quantity(pin, "current"));
+            double i = Math.abs(s.on().get().pinCurrent());
             double limit = s.pin().value("pinCurrentLimitAmps");
             return Optional.of(rated(i, limit, () -> "The pin sources " + amps(i) + "; its limit is " + amps(limit) + "."));
         }
@@ -345,10 +378,9 @@ public final class StageChecks {
             if (s.on().isEmpty()) {
                 return Optional.empty();
             }
-            String pin = roles.drivePinRef().orElseThrow();
             Part u = s.pin();
             double n = u.value("channelCount");
-            double i = n * Math.abs(s.on().get().quantity(pin, "current"));
+            double i = n * Math.abs(s.on().get().pinCurrent());
             double limit = u.value("packageCurrentLimitAmps");
             return Optional.of(rated(i, limit, () -> ratio(n) + " channels draw " + amps(i) + " from the package; its limit is "
                     + amps(limit) + "."));
@@ -367,7 +399,7 @@ public final class StageChecks {
             Part q = s.switchPart();
             double ta = s.variant().stage().conditions().ambientCelsius();
             double n = q.kind() == PartKind.DARLINGTON ? q.value("channelCount") : 1;
-            double p = Math.max(0, s.on().get().powerWatts(roles.switchRef())) * n;
+            double p = Math.max(0, s.on().get().switchPowerWatts()) * n;
             double rth = q.value("thermalResistanceKelvinPerWatt");
             double tj = ThermalBudget.junctionCelsius(ta, p, rth);
             double max = q.value("tjMaxCelsius");
@@ -587,11 +619,13 @@ public final class StageChecks {
                     effect[c][j] = nHi[j] > 0 && nLo[j] > 0 ? hi[j] / nHi[j] - lo[j] / nLo[j] : 0;
                 }
             }
-            List<Variant> samples = Corners.monteCarlo(stage, factors, o.monteCarloSamples(), o.seed());
+            // one sample at a time: a sample is judged and dropped, so the run keeps no stage of it
+            Iterator<Variant> samples = Corners.monteCarloSamples(stage, factors, o.monteCarloSamples(), o.seed());
             int passed = 0;
             int unsolved = 0;
             Map<String, Integer> culprits = new LinkedHashMap<>();
-            for (Variant v : samples) {
+            while (samples.hasNext()) {
+                Variant v = samples.next();
                 Solved s = solveVariant(v, "Monte Carlo sample " + v.index());
                 if (s.on().isEmpty() || s.off().isEmpty()) {
                     unsolved++;
@@ -622,7 +656,7 @@ public final class StageChecks {
                 }
             }
             Optional<String> top = culprits.entrySet().stream().max(Map.Entry.comparingByValue()).map(Map.Entry::getKey);
-            return new YieldResult(samples.size(), o.seed(), passed, unsolved, culprits, top);
+            return new YieldResult(o.monteCarloSamples(), o.seed(), passed, unsolved, culprits, top);
         }
 
         // ------------------------------------------------------------------ safety
