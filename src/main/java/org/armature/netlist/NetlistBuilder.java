@@ -53,13 +53,14 @@ public final class NetlistBuilder {
 
     private static final String GND = Connectivity.GROUND;
 
-    private final List<String> nodeNames = new ArrayList<>();
-    private final Map<String, Integer> nodeByName = new HashMap<>();
-    private final List<String> branchNames = new ArrayList<>();
-    private final List<Double> states = new ArrayList<>();
-    private final List<Element> elements = new ArrayList<>();
-    private final List<PartNetwork> parts = new ArrayList<>();
-    private final Map<String, Integer> netNodes = new LinkedHashMap<>();
+    /** The collections of a fresh build; empty and unused when re-flattening (then {@link #base} numbers everything). */
+    private final List<String> nodeNames;
+    private final Map<String, Integer> nodeByName;
+    private final List<String> branchNames;
+    private final List<Double> states;
+    private final List<Element> elements;
+    private final List<PartNetwork> parts;
+    private final Map<String, Integer> netNodes;
 
     /** Re-flattening into an existing numbering ({@link #reflatten}); null when building afresh. */
     private final Netlist base;
@@ -72,6 +73,13 @@ public final class NetlistBuilder {
 
     /** An empty builder. */
     public NetlistBuilder() {
+        this.nodeNames = new ArrayList<>();
+        this.nodeByName = new HashMap<>();
+        this.branchNames = new ArrayList<>();
+        this.states = new ArrayList<>();
+        this.elements = new ArrayList<>();
+        this.parts = new ArrayList<>();
+        this.netNodes = new LinkedHashMap<>();
         netNodes.put(GND, Netlist.GROUND);
         this.base = null;
         this.baseStates = null;
@@ -79,6 +87,13 @@ public final class NetlistBuilder {
 
     /** A builder that re-flattens parts of {@code base} into its numbering, writing state values into {@code states}. */
     private NetlistBuilder(Netlist base, double[] states) {
+        this.nodeNames = List.of();
+        this.nodeByName = Map.of();
+        this.branchNames = List.of();
+        this.states = List.of();
+        this.elements = List.of();
+        this.parts = List.of();
+        this.netNodes = Map.of();
         this.base = base;
         this.baseStates = states;
     }
