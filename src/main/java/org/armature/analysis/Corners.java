@@ -1,9 +1,11 @@
 package org.armature.analysis;
 
 import java.util.ArrayList;
+import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.NoSuchElementException;
 import java.util.Optional;
 import java.util.SplittableRandom;
 import org.armature.model.Conditions;
@@ -59,16 +61,27 @@ public final class Corners {
         List<Factor> factors = factors(stage, options);
         int k = factors.size();
         int n = 1 << k;
+        // corner i applies factor 0, 1, ... k−1 in turn, at the level of bit j of i; corners that
+        // agree in bits 0..j share the stage after factor j, so each layer applies every factor
+        // once per distinct prefix (2^(k+1) − 2 applications instead of k·2^k), giving the same stages
+        Stage[] layer = {stage};
+        for (int j = 0; j < k; j++) {
+            Factor f = factors.get(j);
+            int width = layer.length;
+            Stage[] next = new Stage[2 * width];
+            for (int q = 0; q < width; q++) {
+                next[q] = f.apply(layer[q], -1.0);
+                next[q + width] = f.apply(layer[q], 1.0);
+            }
+            layer = next;
+        }
         List<Variant> corners = new ArrayList<>(n);
         for (int i = 0; i < n; i++) {
             Map<String, Double> levels = new LinkedHashMap<>();
-            Stage s = stage;
             for (int j = 0; j < k; j++) {
-                double level = ((i >> j) & 1) == 1 ? 1.0 : -1.0;
-                levels.put(factors.get(j).id(), level);
-                s = factors.get(j).apply(s, level);
+                levels.put(factors.get(j).id(), ((i >> j) & 1) == 1 ? 1.0 : -1.0);
             }
-            corners.add(new Variant(i, levels, s));
+            corners.add(new Variant(i, levels, layer[i]));
         }
         return new CornerPlan(factors, corners);
     }
@@ -83,22 +96,50 @@ public final class Corners {
      * @return the samples in order
      */
     public static List<Variant> monteCarlo(Stage stage, List<Factor> factors, int count, long seed) {
+        List<Variant> out = new ArrayList<>(Math.max(0, count));
+        monteCarloSamples(stage, factors, count, seed).forEachRemaining(out::add);
+        return out;
+    }
+
+    /**
+     * The samples of {@link #monteCarlo} one at a time, each built when asked for (a caller that
+     * judges each sample and drops it keeps one sample's stage alive instead of all of them).
+     *
+     * @param stage the nominal stage; not modified
+     * @param factors the factors to draw
+     * @param count number of samples, zero or more
+     * @param seed the same seed gives the same samples as {@link #monteCarlo}
+     * @return the samples in order
+     */
+    public static Iterator<Variant> monteCarloSamples(Stage stage, List<Factor> factors, int count, long seed) {
         if (count < 0) {
             throw new IllegalArgumentException("count must not be negative: " + count);
         }
         SplittableRandom random = new SplittableRandom(seed);
-        List<Variant> out = new ArrayList<>(count);
-        for (int i = 0; i < count; i++) {
-            Map<String, Double> levels = new LinkedHashMap<>();
-            Stage s = stage;
-            for (Factor f : factors) {
-                double level = f.spread().draw(random);
-                levels.put(f.id(), level);
-                s = f.apply(s, level);
+        List<Factor> fs = List.copyOf(factors);
+        return new Iterator<>() {
+            private int i;
+
+            @Override
+            public boolean hasNext() {
+                return i < count;
             }
-            out.add(new Variant(i, levels, s));
-        }
-        return out;
+
+            @Override
+            public Variant next() {
+                if (i >= count) {
+                    throw new NoSuchElementException("all " + count + " samples drawn");
+                }
+                Map<String, Double> levels = new LinkedHashMap<>();
+                Stage s = stage;
+                for (Factor f : fs) {
+                    double level = f.spread().draw(random);
+                    levels.put(f.id(), level);
+                    s = f.apply(s, level);
+                }
+                return new Variant(i++, levels, s);
+            }
+        };
     }
 
     /** The stage with every factor at given levels (missing ids stay nominal: level 0 is not applied). */

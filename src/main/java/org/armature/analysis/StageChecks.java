@@ -7,11 +7,13 @@ import static org.armature.analysis.Quantities.ratio;
 import static org.armature.analysis.Quantities.pct;
 
 import java.util.ArrayList;
+import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.function.Function;
+import java.util.function.Supplier;
 import org.armature.model.Finding;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
@@ -19,7 +21,6 @@ import org.armature.model.Severity;
 import org.armature.model.Stage;
 import org.armature.solver.DcAnalysis;
 import org.armature.solver.OperatingPoint;
-import org.armature.solver.PartResult;
 import org.armature.solver.SolveOptions;
 import org.armature.solver.SolverException;
 import org.armature.solver.SwitchVerdict;
@@ -110,8 +111,43 @@ public final class StageChecks {
         return new Run(stage, options, dc).run();
     }
 
-    /** A variant with its two operating points (empty when the engine failed). */
-    record Solved(Variant variant, Optional<OperatingPoint> on, Optional<OperatingPoint> off) {
+    /**
+     * A variant with its two operating points (empty when the engine failed) and the parts the
+     * measures read, looked up once (relay, switch, and the drive pin or null).
+     */
+    record Solved(Variant variant, Optional<Readout> on, Optional<Readout> off, Part relay,
+                  Part switchPart, Part pin) {
+    }
+
+    /**
+     * What the measures read of one operating point, taken right after its solve, so that the run
+     * keeps a few numbers per variant instead of the operating point and its netlist. Quantities a
+     * switch kind does not have are NaN; the verdict is kept for the switches judged by it (MOSFET,
+     * Darlington channel).
+     */
+    record Readout(double coilVoltage, double coilTemperature, double coilCurrent, double ic, double ib,
+                   double id, double switchPowerWatts, double pinCurrent, Optional<SwitchVerdict> verdict) {
+
+        /** The readout of a pin-high point: relay, switch and drive pin. */
+        static Readout on(OperatingPoint op, StageRoles roles, PartKind switchKind) {
+            String k = roles.relayRef();
+            String q = roles.switchRef();
+            boolean bipolar = switchKind == PartKind.NPN || switchKind == PartKind.PNP;
+            boolean mos = switchKind == PartKind.NMOS;
+            return new Readout(op.quantity(k, "coilVoltage"), op.quantity(k, "coilTemperature"),
+                    op.quantity(k, "coilCurrent"), mos ? Double.NaN : op.quantity(q, "ic"),
+                    bipolar ? op.quantity(q, "ib") : Double.NaN, mos ? op.quantity(q, "id") : Double.NaN,
+                    op.powerWatts(q), roles.drivePinRef().map(pin -> op.quantity(pin, "current")).orElse(Double.NaN),
+                    bipolar ? Optional.empty() : op.switchVerdict());
+        }
+
+        /** The readout of a pin-low point: the relay only. */
+        static Readout off(OperatingPoint op, StageRoles roles) {
+            String k = roles.relayRef();
+            return new Readout(op.quantity(k, "coilVoltage"), op.quantity(k, "coilTemperature"),
+                    op.quantity(k, "coilCurrent"), Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
+                    Optional.empty());
+        }
     }
 
     /** The turn-off run and the corner it ran at. */
@@ -123,7 +159,11 @@ public final class StageChecks {
      * @param margin how far inside the absolute limit, in the check's own terms (a ratio minus one, or
      *     kelvin for the junction): only compared between variants of the same check, to find the worst
      */
-    record Measure(double value, double limit, CheckStatus status, double margin, String explanation) {
+    record Measure(double value, double limit, CheckStatus status, double margin, Supplier<String> why) {
+        /** @return the explanation, formatted only when asked for (most variants are never reported) */
+        String explanation() {
+            return why.get();
+        }
     }
 
     /** One check run. */
@@ -183,7 +223,7 @@ public final class StageChecks {
                         "channels × largest pin current vs the package limit (GP-x)", List.of(pin)));
             });
             double i0 = corners.stream().flatMap(s -> s.on().stream())
-                    .mapToDouble(op -> Math.abs(op.requirePart(roles.relayRef()).quantity("coilCurrent"))).max().orElse(Double.NaN);
+                    .mapToDouble(r -> Math.abs(r.coilCurrent())).max().orElse(Double.NaN);
             SuppressorEstimate sup = SuppressorEstimate.of(stage, roles, o.forwardDropVolts());
             Optional<TurnOff> edge = o.useTransient() ? turnOff(sup, i0) : Optional.empty();
             if (edge.isPresent()) {
@@ -208,10 +248,34 @@ public final class StageChecks {
 
         // ------------------------------------------------------------------ solving
 
+        /**
+         * Solves a variant with the pin high and low, each started from the nominal operating point
+         * of that pin state (so every variant's answer is independent of the order they are solved in).
+         */
         private Solved solveVariant(Variant v, String what) {
             Optional<OperatingPoint> on = solve(v.stage(), true, nominalOn, what);
             Optional<OperatingPoint> off = solve(v.stage(), false, nominalOff, what);
-            return new Solved(v, on, off);
+            Part relay = null;
+            Part sw = null;
+            Part pin = null;
+            String pinRef = roles.drivePinRef().orElse(null);
+            for (Part p : v.stage().parts()) {
+                if (p.ref().equals(roles.relayRef())) {
+                    relay = p;
+                }
+                if (p.ref().equals(roles.switchRef())) {
+                    sw = p;
+                }
+                if (p.ref().equals(pinRef)) {
+                    pin = p;
+                }
+            }
+            if (relay == null || sw == null || (pinRef != null && pin == null)) {
+                throw new IllegalStateException("a variant lost a part of the stage's roles");
+            }
+            PartKind kind = sw.kind();
+            return new Solved(v, on.map(op -> Readout.on(op, roles, kind)), off.map(op -> Readout.off(op, roles)),
+                    relay, sw, pin);
         }
 
         private Optional<OperatingPoint> solve(Stage s, boolean pinHigh, Optional<OperatingPoint> start, String what) {
@@ -237,15 +301,15 @@ public final class StageChecks {
             if (s.on().isEmpty()) {
                 return Optional.empty();
             }
-            Part k = s.variant().stage().require(roles.relayRef());
-            PartResult r = s.on().get().requirePart(roles.relayRef());
-            double v = Math.abs(r.quantity("coilVoltage"));
-            double t = r.quantity("coilTemperature");
+            Part k = s.relay();
+            Readout op = s.on().get();
+            double v = Math.abs(op.coilVoltage());
+            double t = op.coilTemperature();
             double mo = PartPhysics.coilVoltsAt(k, k.value("mustOperateVolts"), t);
             double limit = mo * (1 + o.operateMarginFraction());
             CheckStatus st = v >= limit ? CheckStatus.PASS : v >= mo ? CheckStatus.WARN : CheckStatus.FAIL;
             return Optional.of(new Measure(v, limit, st, v / mo - 1,
-                    "Coil voltage " + volts(v) + " at a coil temperature of " + celsius(t) + ", where must-operate is "
+                    () -> "Coil voltage " + volts(v) + " at a coil temperature of " + celsius(t) + ", where must-operate is "
                             + volts(mo) + " (" + pct(v / mo) + " of it; " + pct(1 + o.operateMarginFraction())
                             + " wanted)."));
         }
@@ -254,15 +318,15 @@ public final class StageChecks {
             if (s.off().isEmpty()) {
                 return Optional.empty();
             }
-            Part k = s.variant().stage().require(roles.relayRef());
-            PartResult r = s.off().get().requirePart(roles.relayRef());
-            double v = Math.abs(r.quantity("coilVoltage"));
-            double t = r.quantity("coilTemperature");
+            Part k = s.relay();
+            Readout op = s.off().get();
+            double v = Math.abs(op.coilVoltage());
+            double t = op.coilTemperature();
             double mr = PartPhysics.coilVoltsAt(k, k.value("mustReleaseVolts"), t);
             double limit = mr * (1 - o.releaseMarginFraction());
             CheckStatus st = v <= limit ? CheckStatus.PASS : v <= mr ? CheckStatus.WARN : CheckStatus.FAIL;
             return Optional.of(new Measure(v, limit, st, 1 - v / mr,
-                    "With the pin low the coil sees " + volts(v) + "; must-release at " + celsius(t) + " is " + volts(mr)
+                    () -> "With the pin low the coil sees " + volts(v) + "; must-release at " + celsius(t) + " is " + volts(mr)
                             + " (" + pct(1 - o.releaseMarginFraction()) + " of it allowed)."));
         }
 
@@ -270,20 +334,21 @@ public final class StageChecks {
             if (s.on().isEmpty()) {
                 return Optional.empty();
             }
-            Part q = s.variant().stage().require(roles.switchRef());
-            PartResult r = s.on().get().requirePart(roles.switchRef());
+            Part q = s.switchPart();
+            Readout op = s.on().get();
             double margin;
-            String why;
+            Supplier<String> why;
             if (q.kind() == PartKind.NPN || q.kind() == PartKind.PNP) {
-                double ic = r.quantity("ic");
-                double ib = r.quantity("ib");
+                double ic = op.ic();
+                double ib = op.ib();
                 double beta = q.value("betaForward");
-                margin = ic > 0 && ib > 0 ? beta * ib / ic : 0;
-                why = "gain " + ratio(beta) + " × IB " + amps(ib) + " ÷ IC " + amps(ic) + " = ×" + ratio(margin) + ".";
+                double m = ic > 0 && ib > 0 ? beta * ib / ic : 0;
+                margin = m;
+                why = () -> "gain " + ratio(beta) + " × IB " + amps(ib) + " ÷ IC " + amps(ic) + " = ×" + ratio(m) + ".";
             } else {
-                Optional<SwitchVerdict> v = s.on().get().switchVerdict();
+                Optional<SwitchVerdict> v = op.verdict();
                 margin = v.map(SwitchVerdict::margin).orElse(0.0);
-                why = v.map(SwitchVerdict::reason).orElse("no switch verdict");
+                why = () -> v.map(SwitchVerdict::reason).orElse("no switch verdict");
             }
             CheckStatus st = margin >= o.saturationPassMargin() ? CheckStatus.PASS : margin >= 1 ? CheckStatus.WARN
                     : CheckStatus.FAIL;
@@ -294,37 +359,34 @@ public final class StageChecks {
             if (s.on().isEmpty()) {
                 return Optional.empty();
             }
-            Part q = s.variant().stage().require(roles.switchRef());
-            PartResult r = s.on().get().requirePart(roles.switchRef());
-            double i = Math.abs(r.quantity(q.kind() == PartKind.NMOS ? "id" : "ic"));
+            Part q = s.switchPart();
+            double i = Math.abs(q.kind() == PartKind.NMOS ? s.on().get().id() : s.on().get().ic());
             double rating = q.value(q.kind() == PartKind.NMOS ? "idMaxAmps" : "icMaxAmps");
-            return Optional.of(rated(i, rating, amps(i) + " against a rating of " + amps(rating) + "."));
+            return Optional.of(rated(i, rating, () -> amps(i) + " against a rating of " + amps(rating) + "."));
         }
 
         private Optional<Measure> pinCurrent(Solved s) {
             if (s.on().isEmpty()) {
                 return Optional.empty();
             }
-            String pin = roles.drivePinRef().orElseThrow();
-            double i = Math.abs(s.on().get().requirePart(pin).quantity("current"));
-            double limit = s.variant().stage().require(pin).value("pinCurrentLimitAmps");
-            return Optional.of(rated(i, limit, "The pin sources " + amps(i) + "; its limit is " + amps(limit) + "."));
+            double i = Math.abs(s.on().get().pinCurrent());
+            double limit = s.pin().value("pinCurrentLimitAmps");
+            return Optional.of(rated(i, limit, () -> "The pin sources " + amps(i) + "; its limit is " + amps(limit) + "."));
         }
 
         private Optional<Measure> packageCurrent(Solved s) {
             if (s.on().isEmpty()) {
                 return Optional.empty();
             }
-            String pin = roles.drivePinRef().orElseThrow();
-            Part u = s.variant().stage().require(pin);
+            Part u = s.pin();
             double n = u.value("channelCount");
-            double i = n * Math.abs(s.on().get().requirePart(pin).quantity("current"));
+            double i = n * Math.abs(s.on().get().pinCurrent());
             double limit = u.value("packageCurrentLimitAmps");
-            return Optional.of(rated(i, limit, ratio(n) + " channels draw " + amps(i) + " from the package; its limit is "
+            return Optional.of(rated(i, limit, () -> ratio(n) + " channels draw " + amps(i) + " from the package; its limit is "
                     + amps(limit) + "."));
         }
 
-        private Measure rated(double value, double rating, String why) {
+        private Measure rated(double value, double rating, Supplier<String> why) {
             double pass = rating * o.ratingUseFraction();
             CheckStatus st = value <= pass ? CheckStatus.PASS : value <= rating ? CheckStatus.WARN : CheckStatus.FAIL;
             return new Measure(value, pass, st, 1 - value / rating, why);
@@ -334,18 +396,17 @@ public final class StageChecks {
             if (s.on().isEmpty()) {
                 return Optional.empty();
             }
-            Part q = s.variant().stage().require(roles.switchRef());
-            PartResult r = s.on().get().requirePart(roles.switchRef());
+            Part q = s.switchPart();
             double ta = s.variant().stage().conditions().ambientCelsius();
             double n = q.kind() == PartKind.DARLINGTON ? q.value("channelCount") : 1;
-            double p = Math.max(0, r.powerWatts()) * n;
+            double p = Math.max(0, s.on().get().switchPowerWatts()) * n;
             double rth = q.value("thermalResistanceKelvinPerWatt");
             double tj = ThermalBudget.junctionCelsius(ta, p, rth);
             double max = q.value("tjMaxCelsius");
             double pass = max - o.thermalMarginKelvin();
             CheckStatus st = tj <= pass ? CheckStatus.PASS : tj <= max ? CheckStatus.WARN : CheckStatus.FAIL;
             return Optional.of(new Measure(tj, pass, st, max - tj,
-                    "Tj = " + celsius(ta) + " + " + EngineeringNotation.format(p, Unit.WATT) + " × "
+                    () -> "Tj = " + celsius(ta) + " + " + EngineeringNotation.format(p, Unit.WATT) + " × "
                             + EngineeringNotation.format(rth, Unit.KELVIN_PER_WATT) + " = " + celsius(tj) + "; Tj(max) "
                             + celsius(max) + "."));
         }
@@ -367,7 +428,7 @@ public final class StageChecks {
                         refs);
             }
             double peak = sup.peakSwitchVolts(vs, Double.isNaN(i0) ? 0 : i0);
-            Measure m = rated(peak, rating, "Peak switch voltage VS,max + Vc + I0·Rs = " + volts(vs) + " + "
+            Measure m = rated(peak, rating, () -> "Peak switch voltage VS,max + Vc + I0·Rs = " + volts(vs) + " + "
                     + volts(sup.clampVolts()) + (sup.seriesOhms() > 0 ? " + " + amps(i0) + " × " + Quantities.ohms(sup.seriesOhms()) : "")
                     + " = " + volts(peak) + " (" + sup.description() + ") against " + volts(rating) + ".");
             return new CheckResult("rating.switch-voltage", m.status(), m.value(), m.limit(), Unit.VOLT, Map.of(),
@@ -384,7 +445,7 @@ public final class StageChecks {
             }
             boolean channel = diode.get().kind() == PartKind.DARLINGTON;
             double rating = diode.get().value(channel ? "icMaxAmps" : "maxCurrentAmps");
-            Measure m = rated(i0, rating, (channel ? diode.get().ref() + "'s clamp diode" : diode.get().ref())
+            Measure m = rated(i0, rating, () -> (channel ? diode.get().ref() + "'s clamp diode" : diode.get().ref())
                     + " carries the coil current at turn-off, " + amps(i0) + ", against a peak rating of " + amps(rating)
                     + (channel ? " (taken as the channel's output rating)." : "."));
             return Optional.of(new CheckResult("rating.suppressor-current", m.status(), m.value(), m.limit(), Unit.AMPERE,
@@ -453,7 +514,7 @@ public final class StageChecks {
             Part q = t.stage().require(roles.switchRef());
             double rating = q.value(q.kind() == PartKind.NMOS ? "vdssVolts" : "vceoVolts");
             double peak = t.metrics().peakSwitchVolts();
-            Measure m = rated(peak, rating, "Peak switch voltage at turn-off " + volts(peak) + " (" + sup.description()
+            Measure m = rated(peak, rating, () -> "Peak switch voltage at turn-off " + volts(peak) + " (" + sup.description()
                     + ") against " + volts(rating) + ".");
             CheckStatus st = t.metrics().switchBreakdown() ? CheckStatus.FAIL : m.status();
             String why = t.metrics().switchBreakdown()
@@ -477,7 +538,7 @@ public final class StageChecks {
             boolean channel = diode.get().kind() == PartKind.DARLINGTON;
             double rating = diode.get().value(channel ? "icMaxAmps" : "maxCurrentAmps");
             double peak = t.metrics().peakSuppressorAmps();
-            Measure m = rated(peak, rating, "Peak suppressor current " + amps(peak) + " against " + amps(rating)
+            Measure m = rated(peak, rating, () -> "Peak suppressor current " + amps(peak) + " against " + amps(rating)
                     + (channel ? " (the channel's output rating)." : "."));
             return Optional.of(new CheckResult("rating.suppressor-current", m.status(), peak, m.limit(), Unit.AMPERE,
                     t.corner(), t.cornerText(), TRANSIENT, m.explanation(), List.of(diode.get().ref())));
@@ -558,11 +619,13 @@ public final class StageChecks {
                     effect[c][j] = nHi[j] > 0 && nLo[j] > 0 ? hi[j] / nHi[j] - lo[j] / nLo[j] : 0;
                 }
             }
-            List<Variant> samples = Corners.monteCarlo(stage, factors, o.monteCarloSamples(), o.seed());
+            // one sample at a time: a sample is judged and dropped, so the run keeps no stage of it
+            Iterator<Variant> samples = Corners.monteCarloSamples(stage, factors, o.monteCarloSamples(), o.seed());
             int passed = 0;
             int unsolved = 0;
             Map<String, Integer> culprits = new LinkedHashMap<>();
-            for (Variant v : samples) {
+            while (samples.hasNext()) {
+                Variant v = samples.next();
                 Solved s = solveVariant(v, "Monte Carlo sample " + v.index());
                 if (s.on().isEmpty() || s.off().isEmpty()) {
                     unsolved++;
@@ -593,7 +656,7 @@ public final class StageChecks {
                 }
             }
             Optional<String> top = culprits.entrySet().stream().max(Map.Entry.comparingByValue()).map(Map.Entry::getKey);
-            return new YieldResult(samples.size(), o.seed(), passed, unsolved, culprits, top);
+            return new YieldResult(o.monteCarloSamples(), o.seed(), passed, unsolved, culprits, top);
         }
 
         // ------------------------------------------------------------------ safety

@@ -23,6 +23,7 @@ public record Variant(int index, Map<String, Double> levels, Stage stage) {
 
     /** The level of a factor; 0 (the middle) for a factor not varied. */
     public double level(String factorId) {
-        return levels.getOrDefault(factorId, 0.0);
+        Double level = levels.get(factorId);
+        return level == null ? 0.0 : level;
     }
 }

@@ -250,7 +250,13 @@ public enum PartKind {
 
     /** The parameter with this key, if the kind has one. */
     public Optional<ParamSpec> param(String key) {
-        return params.stream().filter(p -> p.key().equals(key)).findFirst();
+        // a plain loop: Part.value falls back here for every default, thousands of times per check run
+        for (ParamSpec p : params) {
+            if (p.key().equals(key)) {
+                return Optional.of(p);
+            }
+        }
+        return Optional.empty();
     }
 
     /** The option with this key, if the kind has one. */

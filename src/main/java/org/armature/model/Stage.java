@@ -34,7 +34,13 @@ public record Stage(String name, String description, List<Part> parts, List<Wire
 
     /** The part with this designator. */
     public Optional<Part> part(String ref) {
-        return parts.stream().filter(p -> p.ref().equals(ref)).findFirst();
+        // a plain loop: the checks look parts up for every corner and sample
+        for (Part p : parts) {
+            if (p.ref().equals(ref)) {
+                return Optional.of(p);
+            }
+        }
+        return Optional.empty();
     }
 
     /** The part with this designator, or an exception naming it (for callers that know it exists). */

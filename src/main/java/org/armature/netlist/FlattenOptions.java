@@ -50,6 +50,16 @@ public record FlattenOptions(boolean pinHigh, double ambientCelsius, boolean rel
     }
 
     /** @return the same options at another ambient, °C */
+    /**
+     * @param other other options
+     * @return true if they differ from these at most in the ambient
+     */
+    public boolean sameExceptAmbient(FlattenOptions other) {
+        return pinHigh == other.pinHigh && relayOperated == other.relayOperated
+                && Double.compare(junctionGminSiemens, other.junctionGminSiemens) == 0 && contacts.equals(other.contacts)
+                && regions.equals(other.regions) && darlington.equals(other.darlington);
+    }
+
     public FlattenOptions withAmbient(double celsius) {
         return new FlattenOptions(pinHigh, celsius, relayOperated, junctionGminSiemens, contacts, regions, darlington);
     }

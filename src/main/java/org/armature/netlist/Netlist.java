@@ -29,6 +29,8 @@ public final class Netlist {
     private final List<PartNetwork> parts;
     private final Map<String, Integer> netNodes;
     private final Map<String, Integer> nodeIndex;
+    /** Part network index by designator (the same for every netlist of one numbering). */
+    private final Map<String, Integer> partIndex;
 
     Netlist(List<String> nodeNames, List<String> branchNames, double[] initialStates, List<Element> elements,
             List<PartNetwork> parts, Map<String, Integer> netNodes) {
@@ -43,6 +45,11 @@ public final class Netlist {
             index.put(this.nodeNames.get(i), i);
         }
         this.nodeIndex = Collections.unmodifiableMap(index);
+        Map<String, Integer> byRef = new HashMap<>();
+        for (int i = 0; i < this.parts.size(); i++) {
+            byRef.putIfAbsent(this.parts.get(i).ref(), i);
+        }
+        this.partIndex = Collections.unmodifiableMap(byRef);
     }
 
     /** A netlist of the same shape as {@code base} with other elements and parts (no copies of the shape). */
@@ -51,6 +58,7 @@ public final class Netlist {
         this.branchNames = base.branchNames;
         this.netNodes = base.netNodes;
         this.nodeIndex = base.nodeIndex;
+        this.partIndex = base.partIndex;
         this.initialStates = initialStates;
         this.elements = Collections.unmodifiableList(Arrays.asList(elements));
         this.parts = Collections.unmodifiableList(Arrays.asList(parts));
@@ -139,10 +147,20 @@ public final class Netlist {
 
     /**
      * @param ref a designator
+     * @return the index of its part network in {@link #parts()}, or −1 if there is none
+     */
+    public int partIndex(String ref) {
+        Integer i = partIndex.get(ref);
+        return i == null ? -1 : i;
+    }
+
+    /**
+     * @param ref a designator
      * @return that part's network
      */
     public Optional<PartNetwork> part(String ref) {
-        return parts.stream().filter(p -> p.ref().equals(ref)).findFirst();
+        int i = partIndex(ref);
+        return i < 0 ? Optional.empty() : Optional.of(parts.get(i));
     }
 
     /** @return node of every net of the drawing that has a pin, by net name; {@code gnd} maps to {@link #GROUND} */

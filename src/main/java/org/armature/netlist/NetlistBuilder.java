@@ -53,13 +53,14 @@ public final class NetlistBuilder {
 
     private static final String GND = Connectivity.GROUND;
 
-    private final List<String> nodeNames = new ArrayList<>();
-    private final Map<String, Integer> nodeByName = new HashMap<>();
-    private final List<String> branchNames = new ArrayList<>();
-    private final List<Double> states = new ArrayList<>();
-    private final List<Element> elements = new ArrayList<>();
-    private final List<PartNetwork> parts = new ArrayList<>();
-    private final Map<String, Integer> netNodes = new LinkedHashMap<>();
+    /** The collections of a fresh build; empty and unused when re-flattening (then {@link #base} numbers everything). */
+    private final List<String> nodeNames;
+    private final Map<String, Integer> nodeByName;
+    private final List<String> branchNames;
+    private final List<Double> states;
+    private final List<Element> elements;
+    private final List<PartNetwork> parts;
+    private final Map<String, Integer> netNodes;
 
     /** Re-flattening into an existing numbering ({@link #reflatten}); null when building afresh. */
     private final Netlist base;
@@ -72,6 +73,13 @@ public final class NetlistBuilder {
 
     /** An empty builder. */
     public NetlistBuilder() {
+        this.nodeNames = new ArrayList<>();
+        this.nodeByName = new HashMap<>();
+        this.branchNames = new ArrayList<>();
+        this.states = new ArrayList<>();
+        this.elements = new ArrayList<>();
+        this.parts = new ArrayList<>();
+        this.netNodes = new LinkedHashMap<>();
         netNodes.put(GND, Netlist.GROUND);
         this.base = null;
         this.baseStates = null;
@@ -79,6 +87,13 @@ public final class NetlistBuilder {
 
     /** A builder that re-flattens parts of {@code base} into its numbering, writing state values into {@code states}. */
     private NetlistBuilder(Netlist base, double[] states) {
+        this.nodeNames = List.of();
+        this.nodeByName = Map.of();
+        this.branchNames = List.of();
+        this.states = List.of();
+        this.elements = List.of();
+        this.parts = List.of();
+        this.netNodes = Map.of();
         this.base = base;
         this.baseStates = states;
     }
@@ -235,7 +250,30 @@ public final class NetlistBuilder {
      *     structure would change: then flatten the stage anew
      */
     public static Optional<Netlist> reflatten(Netlist netlist, Stage stage, FlattenOptions options, int... partIndices) {
+        return reflatten(netlist, stage, options, null, partIndices);
+    }
+
+    /**
+     * {@link #reflatten(Netlist, Stage, FlattenOptions, int...)} that takes the part networks of a
+     * donor instead of flattening them again where that gives the same result: the donor is a
+     * netlist of the same numbering flattened from the same stage with options that differ at most
+     * in the pin state (the DC engine's other pin state); every part whose flattening does not
+     * depend on the pin state ({@link #flattensWithPinState}) and whose donor network was made from
+     * an equal part is shared. Element objects are then shared by both netlists: they may be used
+     * by one thread in turn (every run begins its elements afresh), not at the same time.
+     *
+     * @param netlist the netlist of the earlier flatten
+     * @param stage the stage with new values
+     * @param options flatten options of the new netlist
+     * @param donor the other netlist as described, or {@code null} for none
+     * @param partIndices indices of the parts to re-flatten
+     * @return as {@link #reflatten(Netlist, Stage, FlattenOptions, int...)}
+     */
+    public static Optional<Netlist> reflatten(Netlist netlist, Stage stage, FlattenOptions options, Netlist donor,
+                                              int... partIndices) {
         List<PartNetwork> old = netlist.parts();
+        List<PartNetwork> given = donor != null && donor.sameShape(netlist) && donor.parts().size() == old.size()
+                ? donor.parts() : null;
         if (stage.parts().size() != old.size()) {
             return Optional.empty();
         }
@@ -251,6 +289,17 @@ public final class NetlistBuilder {
             if (!part.ref().equals(was.ref()) || part.kind() != was.part().kind()) {
                 return Optional.empty();
             }
+            if (given != null && !flattensWithPinState(part.kind())) {
+                PartNetwork d = given.get(index);
+                if (d.firstElement() == was.firstElement() && d.firstState() == was.firstState()
+                        && (d.part() == part || d.part().equals(part)) && sameStructure(was, d)) {
+                    for (int k = 0; k < d.stateCount(); k++) {
+                        states[d.firstState() + k] = donor.initialState(d.firstState() + k);
+                    }
+                    replacements[index] = d;
+                    continue;
+                }
+            }
             b.patchBranch = was.firstBranch();
             b.patchState = was.firstState();
             b.patchElement = was.firstElement();
@@ -263,6 +312,33 @@ public final class NetlistBuilder {
             replacements[index] = now;
         }
         return Optional.of(netlist.withParts(replacements, states));
+    }
+
+    /**
+     * Whether the flattening of a kind depends on the ambient of {@link FlattenOptions}: the
+     * semiconductors sit at the ambient and a relay's coil starts at it; supplies, drive pins,
+     * resistors, loads, capacitors and ground do not. An ambient change re-flattens only the kinds
+     * for which this is true.
+     *
+     * @param kind a part kind
+     * @return true if its elements or readings change with the ambient
+     */
+    public static boolean flattensWithAmbient(PartKind kind) {
+        return switch (kind) {
+            case GROUND, SUPPLY, DRIVE_PIN, RESISTOR, LOAD, CAPACITOR -> false;
+            default -> true;
+        };
+    }
+
+    /**
+     * Whether the flattening of a kind depends on the drive pin state of {@link FlattenOptions}:
+     * only the drive pin's own source does.
+     *
+     * @param kind a part kind
+     * @return true if its elements or readings change with the pin state
+     */
+    public static boolean flattensWithPinState(PartKind kind) {
+        return kind == PartKind.DRIVE_PIN;
     }
 
     private static boolean sameStructure(PartNetwork a, PartNetwork b) {

@@ -39,8 +39,30 @@ public final class SwitchedResistor implements Element {
      * @return resistance in that state, Ω
      */
     public double ohms(Solution x) {
-        boolean operated = x.state(stateSlot) > 0.5;
+        return ohms(x.state(stateSlot) > 0.5);
+    }
+
+    /**
+     * @param operated the relay state
+     * @return resistance in that state, Ω
+     */
+    public double ohms(boolean operated) {
         return operated == closedWhenOperated ? model.closedOhms() : model.openOhms();
+    }
+
+    /** @return the state slot that switches this contact (1 operated, 0 released) */
+    public int stateSlot() {
+        return stateSlot;
+    }
+
+    /** @return node of one contact end ({@link Netlist#GROUND} for ground) */
+    public int nodeA() {
+        return a;
+    }
+
+    /** @return node of the other contact end ({@link Netlist#GROUND} for ground) */
+    public int nodeB() {
+        return b;
     }
 
     /**

@@ -9,11 +9,13 @@ import org.armature.model.Connectivity;
 import org.armature.model.Part;
 import org.armature.model.Stage;
 import org.armature.netlist.ArraySolution;
+import org.armature.netlist.Element;
 import org.armature.netlist.FlattenOptions;
 import org.armature.netlist.Netlist;
 import org.armature.netlist.NetlistBuilder;
 import org.armature.netlist.RelayHandle;
 import org.armature.netlist.StampContext;
+import org.armature.netlist.SwitchedResistor;
 
 /**
  * The DC engine: the operating point of a stage by modified nodal analysis (Ho, Ruehli, Brennan,
@@ -35,6 +37,15 @@ import org.armature.netlist.StampContext;
  * loop (a scalar Newton step on T = ambient + I²R(T)·Rθ, taking the coil as voltage-driven), so it
  * converges with the node voltages; an outer loop re-solves only when a relay's contacts change
  * state, to {@link RelayLoopOptions}.
+ *
+ * <p>Contact states: a relay without a previous state given starts released (as after power-up),
+ * so a stage whose relay operates would spend a pass with released contacts. Instead the loop
+ * starts from the contacts of the start point or the last solve; an answer that differs from the
+ * default start is kept only when the coil currents, estimated with the contacts put back
+ * (Sherman–Morrison–Woodbury on the factored Jacobian), imply the same states with a margin: a start
+ * from the default would then settle in the same place. Otherwise (a self-holding contact, a coil
+ * current near a threshold) the solve is redone from the default start, so the hysteresis band keeps
+ * its power-up and previous-state rules exactly.
  */
 public final class DcAnalysis {
 
@@ -129,10 +140,13 @@ public final class DcAnalysis {
             return c;
         }
         boolean sameTopology = c != null && sameTopology(c.stage, stage);
-        if (sameTopology && c.patch(stage, fo)) {
+        Compiled other = byPin[1 - slot];
+        // the other pin state compiled this very stage: its part networks serve where the pin does not matter
+        Netlist donor = other != null && other.stage == stage && other.flatten.equals(fo.withPinHigh(other.flatten.pinHigh()))
+                ? other.netlist : null;
+        if (sameTopology && c.patch(stage, fo, donor)) {
             return c;
         }
-        Compiled other = byPin[1 - slot];
         boolean otherSame = other != null && sameTopology(other.stage, stage);
         Connectivity conn;
         if (sameTopology) {
@@ -203,6 +217,25 @@ public final class DcAnalysis {
         boolean hasLast;
         private double ambient;
         private int[] changed;
+        private boolean settled;
+        /** The linear solver of {@link #newton}: after a polish step it holds the factors at the solution. */
+        private final LinearSolver lu;
+        /** Each relay's contact state of a start without a guess: the caller's previous state, else released. */
+        private final double[] defaultContacts;
+        /** The start point and coil temperatures, kept to redo a solve whose contact guess is not confirmed. */
+        private final double[] startX;
+        private final double[] startTemps;
+        /** Every relay contact element of the netlist (refreshed when a part is re-flattened). */
+        private final SwitchedResistor[] contacts;
+        /** Work of the contact check: flipped contacts' nodes and conductance changes, J⁻¹·u, the small system. */
+        private final int[] flipA;
+        private final int[] flipB;
+        private final double[] flipSiemens;
+        private final double[][] flipResponse;
+        private final double[] small;
+        private final double[] smallRhs;
+        private final double[] delta;
+        private final ArraySolution deltaView;
 
         Compiled(Stage stage, FlattenOptions flatten, Connectivity connectivity, Netlist netlist, DcOptions options) {
             this.stage = stage;
@@ -210,7 +243,6 @@ public final class DcAnalysis {
             this.connectivity = connectivity;
             this.netlist = netlist;
             int n = Math.max(1, netlist.unknownCount());
-            LinearSolver lu;
             if (options.linearSolver() == DcOptions.LinearSolverKind.EJML) {
                 lu = new EjmlLu(n, options.newton().relativePivotThreshold());
             } else {
@@ -230,26 +262,59 @@ public final class DcAnalysis {
             this.lastX = new double[netlist.unknownCount()];
             this.lastStates = new double[states.length];
             this.changed = new int[stage.parts().size()];
+            this.defaultContacts = new double[relays.length];
+            this.startX = new double[netlist.unknownCount()];
+            this.startTemps = new double[states.length];
+            int m = 0;
+            for (Element e : netlist.elements()) {
+                if (e instanceof SwitchedResistor) {
+                    m++;
+                }
+            }
+            this.contacts = new SwitchedResistor[m];
+            refreshContacts();
+            this.flipA = new int[m];
+            this.flipB = new int[m];
+            this.flipSiemens = new double[m];
+            this.flipResponse = new double[m][netlist.unknownCount()];
+            this.small = new double[m * m];
+            this.smallRhs = new double[m];
+            this.delta = new double[netlist.unknownCount()];
+            this.deltaView = new ArraySolution(netlist.nodeCount(), delta, states);
+        }
+
+        private void refreshContacts() {
+            int m = 0;
+            for (Element e : netlist.elements()) {
+                if (e instanceof SwitchedResistor sr) {
+                    contacts[m++] = sr;
+                }
+            }
         }
 
         /**
-         * Takes a stage of the same topology: re-flattens the parts whose values differ (every part
-         * when the ambient differs). False if some part's structure would change.
+         * Takes a stage of the same topology: re-flattens the parts whose values differ (when only
+         * the ambient differs, also every part whose flattening depends on it,
+         * {@link NetlistBuilder#flattensWithAmbient}; every part when other options differ), taking
+         * the part networks of {@code donor} (the other pin state's netlist of the same stage, or
+         * null) where the pin state does not matter. False if some part's structure would change.
          */
-        boolean patch(Stage next, FlattenOptions fo) {
+        boolean patch(Stage next, FlattenOptions fo, Netlist donor) {
             List<Part> now = stage.parts();
             List<Part> then = next.parts();
             boolean all = !fo.equals(flatten);
+            boolean ambientOnly = all && fo.sameExceptAmbient(flatten);
             int count = 0;
             for (int i = 0; i < then.size(); i++) {
                 Part a = now.get(i);
                 Part b = then.get(i);
-                if (all || (a != b && !a.equals(b))) {
+                boolean byOptions = all && (!ambientOnly || NetlistBuilder.flattensWithAmbient(b.kind()));
+                if (byOptions || (a != b && !a.equals(b))) {
                     changed[count++] = i;
                 }
             }
             if (count > 0) {
-                Optional<Netlist> patched = NetlistBuilder.reflatten(netlist, next, fo,
+                Optional<Netlist> patched = NetlistBuilder.reflatten(netlist, next, fo, donor,
                         count == changed.length ? changed : Arrays.copyOf(changed, count));
                 if (patched.isEmpty()) {
                     return false;
@@ -260,6 +325,7 @@ public final class DcAnalysis {
                 for (int r = 0; r < relays.length; r++) {
                     relays[r] = rs.get(r);
                 }
+                refreshContacts();
             }
             stage = next;
             flatten = fo;
@@ -302,9 +368,11 @@ public final class DcAnalysis {
             }
             boolean startStates = startOp != null && startOp.sameStateLayout(netlist);
             Map<String, Boolean> previous = so.previousRelayOperated();
+            boolean guessed = false;
             for (int r = 0; r < relays.length; r++) {
                 RelayHandle h = relays[r];
                 int ts = h.temperatureSlot();
+                int cs = h.contactSlot();
                 // the coil temperature of a start point is only a guess: the loop settles it
                 if (startStates) {
                     states[ts] = startOp.stateValue(ts);
@@ -314,12 +382,66 @@ public final class DcAnalysis {
                     states[ts] = ambient;
                 }
                 Boolean prev = previous.get(h.ref());
-                states[h.contactSlot()] = prev != null && prev ? 1.0 : 0.0;
+                defaultContacts[r] = prev != null && prev ? 1.0 : 0.0;
+                // without a previous state, the contacts of the start point (or of the last solve) are a
+                // first guess only: a result that differs from the default start is confirmed below
+                double guess = defaultContacts[r];
+                if (prev == null && startStates) {
+                    guess = startOp.stateValue(cs) > 0.5 ? 1.0 : 0.0;
+                } else if (prev == null && startOp == null && warmStart && hasLast) {
+                    guess = lastStates[cs] > 0.5 ? 1.0 : 0.0;
+                }
+                states[cs] = guess;
+                guessed |= guess != defaultContacts[r];
             }
-            int iterations = 0;
-            boolean settled = false;
-            StateUpdater coilHeat = relays.length > 0 ? this : null;
             hasLast = false;
+            int iterations = 0;
+            boolean confirmed = false;
+            if (guessed) {
+                System.arraycopy(x, 0, startX, 0, x.length);
+                System.arraycopy(states, 0, startTemps, 0, states.length);
+                try {
+                    iterations += relayLoop(cold, previous);
+                    boolean polished = newton.polish(x, states, StampContext.DC);
+                    if (polished) {
+                        iterations++;
+                    }
+                    confirmed = settled && (atDefaultContacts() || polished && defaultStartAgrees(previous));
+                } catch (SolverException e) {
+                    // the guessed contact state did not solve; the default start below decides
+                    confirmed = false;
+                }
+                if (!confirmed) {
+                    System.arraycopy(startX, 0, x, 0, x.length);
+                    System.arraycopy(startTemps, 0, states, 0, states.length);
+                    for (int r = 0; r < relays.length; r++) {
+                        states[relays[r].contactSlot()] = defaultContacts[r];
+                    }
+                }
+            }
+            if (!confirmed) {
+                iterations += relayLoop(cold, previous);
+                if (newton.polish(x, states, StampContext.DC)) {
+                    iterations++;
+                }
+            }
+            System.arraycopy(x, 0, lastX, 0, x.length);
+            System.arraycopy(states, 0, lastStates, 0, states.length);
+            hasLast = true;
+            return new OperatingPoint(netlist, x, states, settled, iterations, strategy.maxResidualAmps(), pinHigh,
+                    ambient, contactsFrom);
+        }
+
+        /**
+         * The relay loop from the contact states in {@code states}: solve, update each coil
+         * temperature and contact state, re-solve until they settle; sets {@link #settled}.
+         *
+         * @return Newton iterations spent
+         */
+        private int relayLoop(boolean cold, Map<String, Boolean> previous) {
+            int iterations = 0;
+            settled = false;
+            StateUpdater coilHeat = relays.length > 0 ? this : null;
             for (int pass = 0; pass < relayLoop.maxPasses(); pass++) {
                 strategy.solve(x, states, cold && pass == 0, coilHeat);
                 iterations += strategy.iterations();
@@ -331,14 +453,168 @@ public final class DcAnalysis {
                     break;
                 }
             }
-            if (newton.polish(x, states, StampContext.DC)) {
-                iterations++;
+            return iterations;
+        }
+
+        /** @return true if every relay's contacts are in the state a start without a guess begins with */
+        private boolean atDefaultContacts() {
+            for (int r = 0; r < relays.length; r++) {
+                if (states[relays[r].contactSlot()] != defaultContacts[r]) {
+                    return false;
+                }
             }
-            System.arraycopy(x, 0, lastX, 0, x.length);
-            System.arraycopy(states, 0, lastStates, 0, states.length);
-            hasLast = true;
-            return new OperatingPoint(netlist, x, states, settled, iterations, strategy.maxResidualAmps(), pinHigh,
-                    ambient, contactsFrom);
+            return true;
+        }
+
+        /**
+         * Whether a start from the default contact states would settle where the guess did. That
+         * start solves first with the default contacts, then moves each relay to the state its coil
+         * current implies; so it ends at this solution exactly when, with every contact put back to
+         * its default, each coil current still implies the state solved here. The change of the coil
+         * currents is estimated by the linear response at the solution: the contacts are
+         * resistances, so putting them back is a low-rank change ΔG = U·D·Uᵀ of the factored
+         * Jacobian J, and the Newton step from the solution is δ = −J⁻¹U·(D⁻¹ + UᵀJ⁻¹U)⁻¹·Uᵀx
+         * (Sherman–Morrison–Woodbury; Golub and Van Loan, Matrix Computations, 2.1.4). A coil current
+         * counts as unchanged in its implied state only when that state holds over
+         * ±({@link #CONTACT_CHECK_SAFETY}·|Δi| + the current tolerance of the solve).
+         *
+         * @return true if confirmed; false when unsure (then the caller solves from the default start)
+         */
+        private boolean defaultStartAgrees(Map<String, Boolean> previous) {
+            int n = x.length;
+            int m = 0;
+            for (SwitchedResistor c : contacts) {
+                int slot = c.stateSlot();
+                double now = states[slot];
+                double back = defaultContactsOfSlot(slot);
+                if (now == back) {
+                    continue;
+                }
+                double change = 1.0 / c.ohms(back > 0.5) - 1.0 / c.ohms(now > 0.5);
+                if (change == 0.0) {
+                    continue;
+                }
+                flipA[m] = c.nodeA();
+                flipB[m] = c.nodeB();
+                flipSiemens[m] = change;
+                double[] z = flipResponse[m];
+                Arrays.fill(z, 0.0);
+                if (flipA[m] >= 0) {
+                    z[flipA[m]] = 1.0;
+                }
+                if (flipB[m] >= 0) {
+                    z[flipB[m]] -= 1.0;
+                }
+                lu.solve(z);
+                m++;
+            }
+            // the small system (D⁻¹ + UᵀZ)·c = Uᵀx, Z = J⁻¹U
+            for (int e = 0; e < m; e++) {
+                for (int f = 0; f < m; f++) {
+                    double[] z = flipResponse[f];
+                    small[e * m + f] = (e == f ? 1.0 / flipSiemens[e] : 0.0) + at(z, flipA[e]) - at(z, flipB[e]);
+                }
+                smallRhs[e] = at(x, flipA[e]) - at(x, flipB[e]);
+            }
+            if (!solveSmall(m)) {
+                return false;
+            }
+            Arrays.fill(delta, 0.0);
+            for (int f = 0; f < m; f++) {
+                double cf = smallRhs[f];
+                double[] z = flipResponse[f];
+                for (int i = 0; i < n; i++) {
+                    delta[i] -= z[i] * cf;
+                }
+            }
+            deltaView.bind(delta, states);
+            ConvergenceTolerances tol = newton.options().tolerances();
+            for (int r = 0; r < relays.length; r++) {
+                RelayHandle h = relays[r];
+                double i = Math.abs(h.coil().current(view));
+                double di = Math.abs(h.coil().current(deltaView));
+                if (!Double.isFinite(di)) {
+                    return false;
+                }
+                double spread = CONTACT_CHECK_SAFETY * di + tol.reltol() * i + tol.abstolAmps();
+                double solved = states[h.contactSlot()];
+                Boolean prev = previous.get(h.ref());
+                if (implied(h, i - spread, prev) != solved || implied(h, i + spread, prev) != solved) {
+                    return false;
+                }
+            }
+            return true;
+        }
+
+        private double defaultContactsOfSlot(int slot) {
+            for (int r = 0; r < relays.length; r++) {
+                if (relays[r].contactSlot() == slot) {
+                    return defaultContacts[r];
+                }
+            }
+            return states[slot];
+        }
+
+        /** The contact state (1 operated, 0 released) a coil current implies, as {@link #updateRelay} decides it. */
+        private static double implied(RelayHandle h, double coilAmps, Boolean prev) {
+            RelayHandle.State st = h.stateFor(Math.max(0.0, coilAmps));
+            if (st == RelayHandle.State.OPERATED) {
+                return 1.0;
+            }
+            if (st == RelayHandle.State.RELEASED) {
+                return 0.0;
+            }
+            return prev != null && prev ? 1.0 : 0.0;
+        }
+
+        private static double at(double[] v, int node) {
+            return node >= 0 ? v[node] : 0.0;
+        }
+
+        /** Gaussian elimination with partial pivoting of the m × m contact system, in place; false if singular. */
+        private boolean solveSmall(int m) {
+            double[] a = small;
+            double[] b = smallRhs;
+            for (int k = 0; k < m; k++) {
+                int p = k;
+                for (int i = k + 1; i < m; i++) {
+                    if (Math.abs(a[i * m + k]) > Math.abs(a[p * m + k])) {
+                        p = i;
+                    }
+                }
+                if (p != k) {
+                    for (int j = 0; j < m; j++) {
+                        double t = a[k * m + j];
+                        a[k * m + j] = a[p * m + j];
+                        a[p * m + j] = t;
+                    }
+                    double t = b[k];
+                    b[k] = b[p];
+                    b[p] = t;
+                }
+                double pivot = a[k * m + k];
+                if (!(pivot != 0.0) || !Double.isFinite(pivot)) {
+                    return false;
+                }
+                for (int i = k + 1; i < m; i++) {
+                    double f = a[i * m + k] / pivot;
+                    for (int j = k; j < m; j++) {
+                        a[i * m + j] -= f * a[k * m + j];
+                    }
+                    b[i] -= f * b[k];
+                }
+            }
+            for (int i = m - 1; i >= 0; i--) {
+                double sum = b[i];
+                for (int j = i + 1; j < m; j++) {
+                    sum -= a[i * m + j] * b[j];
+                }
+                b[i] = sum / a[i * m + i];
+                if (!Double.isFinite(b[i])) {
+                    return false;
+                }
+            }
+            return true;
         }
 
         /**
@@ -415,6 +691,12 @@ public final class DcAnalysis {
      * fixed-point step); −5 bounds the over-relaxation for strongly self-limiting coils.
      */
     private static final double MAX_FIXED_POINT_SLOPE = 0.9;
+    /**
+     * Safety factor on the linear estimate of how much a coil current changes when the contacts go
+     * back to their default state: the estimate is one Newton step from the solution, whose error is
+     * second order in that (small) change, so ten times the change bounds it with room to spare.
+     */
+    private static final double CONTACT_CHECK_SAFETY = 10.0;
     private static final double MAX_SECANT_SLOPE = 5.0;
     /** Floor of a coil temperature update, °C: just above copper's zero-resistance intercept. */
     private static final double MIN_COIL_CELSIUS = -234.0;

@@ -3,7 +3,9 @@ package org.armature.solver;
 /**
  * In-place LU factorisation with partial (row) pivoting, Doolittle form, for the small dense MNA
  * systems of a relay stage (about 10–30 unknowns), after G. H. Golub and C. F. Van Loan, Matrix
- * Computations, algorithm 3.4.1. Allocates only in its constructor.
+ * Computations, algorithm 3.4.1. Allocates only in its constructor. Each elimination step updates
+ * only the columns where the pivot row is nonzero, which keeps the arithmetic of the dense algorithm
+ * (a zero in the pivot row leaves an entry unchanged) at the cost of the sparse MNA pattern.
  *
  * <p>Singularity test, relative not absolute: a pivot counts as zero when its magnitude is at most
  * {@code relativePivotThreshold} times the largest magnitude of the original row it came from.
@@ -23,6 +25,8 @@ public final class DenseLu implements LinearSolver {
     private final int[] perm;
     private final double[] rowScale;
     private final double[] work;
+    /** Columns right of the pivot where the pivot row is nonzero, gathered once per elimination step. */
+    private final int[] pivotRowColumns;
     private double[] lu;
     private int failed = -1;
 
@@ -49,6 +53,7 @@ public final class DenseLu implements LinearSolver {
         this.perm = new int[size];
         this.rowScale = new double[size];
         this.work = new double[size];
+        this.pivotRowColumns = new int[size];
     }
 
     @Override
@@ -101,13 +106,23 @@ public final class DenseLu implements LinearSolver {
             }
             double inv = 1.0 / pivot;
             int rk = k * n;
+            // MNA rows hold a handful of entries: update only the columns where the pivot row is
+            // nonzero (a zero there leaves the entry as it was), the same arithmetic as the full row
+            int[] cols = pivotRowColumns;
+            int count = 0;
+            for (int j = k + 1; j < n; j++) {
+                if (a[rk + j] != 0.0) {
+                    cols[count++] = j;
+                }
+            }
             for (int i = k + 1; i < n; i++) {
                 int ri = i * n;
                 double f = a[ri + k];
                 if (f != 0.0) {
                     f *= inv;
                     a[ri + k] = f;
-                    for (int j = k + 1; j < n; j++) {
+                    for (int t = 0; t < count; t++) {
+                        int j = cols[t];
                         a[ri + j] -= f * a[rk + j];
                     }
                 }

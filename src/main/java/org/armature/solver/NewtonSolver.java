@@ -234,19 +234,25 @@ public final class NewtonSolver {
             if (i < nodes) {
                 double xi = x[i];
                 double rowSum = 0.0;
+                // zero entries (most of a sparse MNA row) add nothing to any of the sums
                 for (int j = 0; j < nodes; j++) {
                     double aij = a[row + j];
-                    s += aij * x[j];
-                    rowSum += aij;
-                    if (j != i) {
-                        scale += Math.abs(aij * (x[j] - xi));
+                    if (aij != 0.0) {
+                        s += aij * x[j];
+                        rowSum += aij;
+                        if (j != i) {
+                            scale += Math.abs(aij * (x[j] - xi));
+                        }
                     }
                 }
                 scale += Math.abs(rowSum * xi);
                 for (int j = nodes; j < n; j++) {
-                    double t = a[row + j] * x[j];
-                    s += t;
-                    scale += Math.abs(t);
+                    double aij = a[row + j];
+                    if (aij != 0.0) {
+                        double t = aij * x[j];
+                        s += t;
+                        scale += Math.abs(t);
+                    }
                 }
                 double r = Math.abs(s);
                 worst = Math.max(worst, r);
@@ -255,9 +261,12 @@ public final class NewtonSolver {
                 }
             } else {
                 for (int j = 0; j < n; j++) {
-                    double t = a[row + j] * x[j];
-                    s += t;
-                    scale += Math.abs(t);
+                    double aij = a[row + j];
+                    if (aij != 0.0) {
+                        double t = aij * x[j];
+                        s += t;
+                        scale += Math.abs(t);
+                    }
                 }
                 if (Math.abs(s) > tol.reltol() * scale + tol.vntolVolts()) {
                     ok = false;

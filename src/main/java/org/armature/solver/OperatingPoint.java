@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
+import java.util.function.Supplier;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
 import org.armature.netlist.ArraySolution;
@@ -22,8 +23,9 @@ import org.armature.units.Unit;
  * power and named quantities, and the switch verdict.
  *
  * <p>The snapshot holds its own copy of the solution vector and element states; the per-part maps
- * are built from it on first access (and then kept), so a solve whose readouts nobody reads costs
- * almost no allocation. Safe to share between threads.
+ * are built from it on first access (and then kept), part by part when only some parts are asked
+ * for, so a solve whose readouts nobody reads costs almost no allocation. Safe to share between
+ * threads.
  *
  * <p>Every number is finite: a solve that would produce NaN or infinity throws instead.
  */
@@ -48,6 +50,10 @@ public final class OperatingPoint {
 
     private Map<String, Double> nodeVoltages;
     private Map<String, PartResult> parts;
+    /** Part results built so far, by part network index; null until the first is asked for. */
+    private PartResult[] built;
+    /** Part readings made so far, by part network index; null until the first is asked for. */
+    private PartReading[] readings;
     private Optional<SwitchVerdict> verdict;
 
     OperatingPoint(Netlist netlist, double[] unknowns, double[] states, boolean converged, int iterations,
@@ -121,22 +127,10 @@ public final class OperatingPoint {
     /** @return every part's result, by designator, in drawing order */
     public synchronized Map<String, PartResult> parts() {
         if (parts == null) {
-            ArraySolution x = solution();
             Map<String, PartResult> m = new LinkedHashMap<>();
-            List<RelayHandle> relays = netlist.relays();
-            for (PartNetwork p : netlist.parts()) {
-                PartReading r = p.read(x);
-                Map<String, Double> pinV = new LinkedHashMap<>();
-                for (Map.Entry<String, Integer> e : p.pinNodes().entrySet()) {
-                    pinV.put(e.getKey(), x.voltage(e.getValue()));
-                }
-                Map<String, String> st = r.states();
-                if (p.relay().isPresent()) {
-                    st = new HashMap<>(st);
-                    st.put("contactsFrom", contactsFrom[relays.indexOf(p.relay().get())]);
-                }
-                m.put(p.ref(), new PartResult(p.ref(), p.part().kind(), pinV, r.pinCurrents(), r.powerWatts(),
-                        r.quantities(), st));
+            List<PartNetwork> all = netlist.parts();
+            for (int i = 0; i < all.size(); i++) {
+                m.put(all.get(i).ref(), result(i));
             }
             parts = Collections.unmodifiableMap(m);
         }
@@ -144,11 +138,91 @@ public final class OperatingPoint {
     }
 
     /**
+     * One part's result; only that part is read from the solution (the checks read two or three
+     * parts of each of thousands of operating points).
+     *
      * @param ref a designator
      * @return that part's result
      */
-    public Optional<PartResult> part(String ref) {
-        return Optional.ofNullable(parts().get(ref));
+    public synchronized Optional<PartResult> part(String ref) {
+        if (parts != null) {
+            return Optional.ofNullable(parts.get(ref));
+        }
+        int i = netlist.partIndex(ref);
+        return i < 0 ? Optional.empty() : Optional.of(result(i));
+    }
+
+    /**
+     * One named quantity of one part, read without building the part's full result.
+     *
+     * @param ref a designator
+     * @param key a quantity key of that part's kind (as in {@link PartResult#quantities()})
+     * @return the value, in the quantity's unit
+     * @throws IllegalArgumentException if there is no such part or quantity
+     */
+    public synchronized double quantity(String ref, String key) {
+        Double v = reading(index(ref)).quantities().get(key);
+        if (v == null) {
+            throw new IllegalArgumentException(ref + " has no quantity " + key);
+        }
+        return v;
+    }
+
+    /**
+     * @param ref a designator
+     * @return the power that part dissipates, W (as {@link PartResult#powerWatts()})
+     * @throws IllegalArgumentException if there is no such part
+     */
+    public synchronized double powerWatts(String ref) {
+        return reading(index(ref)).powerWatts();
+    }
+
+    private int index(String ref) {
+        int i = netlist.partIndex(ref);
+        if (i < 0) {
+            throw new IllegalArgumentException("no part " + ref);
+        }
+        return i;
+    }
+
+    /** The reading of part network {@code index}, made on first use and kept. */
+    private PartReading reading(int index) {
+        if (readings == null) {
+            readings = new PartReading[netlist.parts().size()];
+        }
+        PartReading r = readings[index];
+        if (r == null) {
+            r = netlist.parts().get(index).read(solution());
+            readings[index] = r;
+        }
+        return r;
+    }
+
+    /** The result of part network {@code index}, built on first use and kept. */
+    private PartResult result(int index) {
+        if (built == null) {
+            built = new PartResult[netlist.parts().size()];
+        }
+        PartResult done = built[index];
+        if (done != null) {
+            return done;
+        }
+        PartNetwork p = netlist.parts().get(index);
+        ArraySolution x = solution();
+        PartReading r = reading(index);
+        Map<String, Double> pinV = new LinkedHashMap<>();
+        for (Map.Entry<String, Integer> e : p.pinNodes().entrySet()) {
+            pinV.put(e.getKey(), x.voltage(e.getValue()));
+        }
+        Map<String, String> st = r.states();
+        if (p.relay().isPresent()) {
+            st = new HashMap<>(st);
+            st.put("contactsFrom", contactsFrom[netlist.relays().indexOf(p.relay().get())]);
+        }
+        PartResult made = new PartResult(p.ref(), p.part().kind(), pinV, r.pinCurrents(), r.powerWatts(),
+                r.quantities(), st);
+        built[index] = made;
+        return made;
     }
 
     /**
@@ -223,7 +297,7 @@ public final class OperatingPoint {
         }
         for (PartNetwork p : netlist.parts()) {
             if (p.part().kind().isSwitch() && p.pinNodes().containsValue(switchNode)) {
-                return Optional.of(verdictFor(p.part(), parts().get(p.ref())));
+                return Optional.of(verdictFor(p.part(), part(p.ref()).orElseThrow()));
             }
         }
         return Optional.empty();
@@ -248,20 +322,20 @@ public final class OperatingPoint {
             double vgs = r.quantity("vgs");
             double id = r.quantity("id");
             if (r.state("region").equals("cutoff") || !(id > 0)) {
-                return new SwitchVerdict(ref, false, 0.0, ref + " is off: VGS " + volts(vgs) + " is below threshold.");
+                return new SwitchVerdict(ref, false, 0.0, () -> ref + " is off: VGS " + volts(vgs) + " is below threshold.");
             }
             double thMax = part.value("vgsThMaxVolts");
             double rdsOn = part.value("rdsOnOhms");
             double spec = part.value("rdsOnGateVolts");
             double needed = (spec - thMax) + id * rdsOn / 2.0;
             if (!(spec > thMax)) {
-                return new SwitchVerdict(ref, false, 0.0, ref + " RDS(on) is stated at VGS " + volts(spec)
+                return new SwitchVerdict(ref, false, 0.0, () -> ref + " RDS(on) is stated at VGS " + volts(spec)
                         + ", not above VGS(th) max " + volts(thMax) + ": the datasheet guarantees no on-state.");
             }
             double available = Math.max(0.0, vgs - thMax);
             double margin = available / needed;
             boolean on = margin >= 1.0;
-            String reason = on
+            Supplier<String> reason = () -> on
                     ? "fully on, " + times(margin) + " margin: gate overdrive " + volts(vgs - thMax)
                             + " over VGS(th) max against " + volts(needed) + " needed for " + amps(id)
                             + " at RDS(on) " + EngineeringNotation.format(rdsOn, Unit.OHM) + "."
@@ -275,14 +349,14 @@ public final class OperatingPoint {
         double drive = r.quantity(darlington ? "iin" : "ib");
         double hfeMin = part.value("hfeMin");
         if (r.state("region").equals("cutoff") || !(ic > 0) || !(drive > 0)) {
-            return new SwitchVerdict(ref, false, 0.0, ref + " is cut off: " + (darlington ? "input" : "base")
+            return new SwitchVerdict(ref, false, 0.0, () -> ref + " is cut off: " + (darlington ? "input" : "base")
                     + " current " + amps(Math.max(drive, 0.0)) + ", the coil is not energised.");
         }
         double margin = hfeMin * drive / ic;
         double neededDrive = ic / hfeMin;
         String driveName = darlington ? "IIN" : "IB";
         boolean on = margin >= 1.0;
-        String reason = on
+        Supplier<String> reason = () -> on
                 ? "saturated, " + times(margin) + " margin: hFE(min) " + String.format(java.util.Locale.ROOT, "%.4g", hfeMin)
                         + " × " + driveName + " " + amps(drive) + " ÷ IC " + amps(ic) + "."
                 : "not guaranteed saturated at hFE(min): needs " + amps(neededDrive - drive) + " more " + (darlington ? "input" : "base")

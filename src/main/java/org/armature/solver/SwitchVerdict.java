@@ -18,16 +18,81 @@ package org.armature.solver;
  * </ul>
  * A switch that is cut off gets margin 0, fullyOn false.
  *
- * @param ref the switch's designator
- * @param fullyOn true when the margin is at least 1 and the switch conducts
- * @param margin the margin as above, dimensionless, finite, ≥ 0
- * @param reason one sentence with the numbers
+ * <p>Immutable, with the accessors, equality and text of a record of its four values; the reason
+ * is written out only when first asked for (the checks judge thousands of verdicts by their
+ * margin alone).
  */
-public record SwitchVerdict(String ref, boolean fullyOn, double margin, String reason) {
+import java.util.Objects;
+import java.util.function.Supplier;
 
-    public SwitchVerdict {
+public final class SwitchVerdict {
+
+    private final String ref;
+    private final boolean fullyOn;
+    private final double margin;
+    private final Supplier<String> because;
+    private volatile String reason;
+
+    /**
+     * @param ref the switch's designator
+     * @param fullyOn true when the margin is at least 1 and the switch conducts
+     * @param margin the margin as above, dimensionless, finite, ≥ 0
+     * @param reason one sentence with the numbers
+     */
+    public SwitchVerdict(String ref, boolean fullyOn, double margin, String reason) {
+        this(ref, fullyOn, margin, () -> reason);
+        this.reason = reason;
+    }
+
+    /** A verdict whose reason is formatted on first use ({@code reason} must give the same text each time). */
+    SwitchVerdict(String ref, boolean fullyOn, double margin, Supplier<String> reason) {
         if (!(margin >= 0) || !Double.isFinite(margin)) {
             throw new IllegalArgumentException("margin must be finite and ≥ 0, was " + margin);
         }
+        this.ref = ref;
+        this.fullyOn = fullyOn;
+        this.margin = margin;
+        this.because = reason;
+    }
+
+    /** @return the switch's designator */
+    public String ref() {
+        return ref;
+    }
+
+    /** @return true when the margin is at least 1 and the switch conducts */
+    public boolean fullyOn() {
+        return fullyOn;
+    }
+
+    /** @return the margin as above, dimensionless, finite, ≥ 0 */
+    public double margin() {
+        return margin;
+    }
+
+    /** @return one sentence with the numbers */
+    public String reason() {
+        String r = reason;
+        if (r == null) {
+            r = because.get();
+            reason = r;
+        }
+        return r;
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof SwitchVerdict v && Objects.equals(ref, v.ref) && fullyOn == v.fullyOn
+                && Double.compare(margin, v.margin) == 0 && Objects.equals(reason(), v.reason());
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(ref, fullyOn, margin, reason());
+    }
+
+    @Override
+    public String toString() {
+        return "SwitchVerdict[ref=" + ref + ", fullyOn=" + fullyOn + ", margin=" + margin + ", reason=" + reason() + "]";
     }
 }

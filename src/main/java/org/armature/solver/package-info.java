@@ -31,7 +31,9 @@
  *     loop ({@link org.armature.solver.StateUpdater}); the outer loop re-solves only when contacts
  *     change state.</li>
  * <li>{@link org.armature.solver.DcOptions#warmStart()}: on by default. A value edit re-flattens only
- *     the edited part and starts Newton from the last solution of the same stage and pin state;
+ *     the edited part and starts Newton from the last solution of the same stage and pin state,
+ *     with the last contact states as the relay loop's first guess (kept only when a start with
+ *     released contacts is shown to settle the same way, ContactGuessTest);
  *     the answer equals a cold start's within the NM-6 tolerances (WarmStartTest). Turn it off to make
  *     every solve independent of the engine's history, for example to compare iteration counts.</li>
  * </ul>
