@@ -384,7 +384,12 @@ public final class NetlistBuilder {
 
     /** Flattens one part. */
     private static final class PartFlattener {
-        private final NetlistBuilder b;
+        /**
+         * The builder, until the part is added: the part's reader (a lambda over this flattener)
+         * outlives the build, and must not hold the builder, whose re-flatten base would otherwise
+         * keep every earlier netlist alive in a chain.
+         */
+        private NetlistBuilder b;
         private final Part part;
         private final Map<String, Integer> pins;
         private final FlattenOptions o;
@@ -427,6 +432,7 @@ public final class NetlistBuilder {
 
         private void done(PartNetwork.Reader reader, RelayHandle relay) {
             b.addPart(part, pins, els, reader, relay, firstBranch, firstState);
+            b = null;
         }
 
         void flatten() {
