@@ -79,6 +79,15 @@ public final class Factor {
         return valueAt.applyAsDouble(level);
     }
 
+    /**
+     * The name of the factor in a corner's plain-words description: its identifier, with the word
+     * "shift" after a factor whose value is an offset from the part's own figure (the VBE spread),
+     * so "vbe shift 30.0 mV" does not read as a VBE of 30 mV.
+     */
+    public String word() {
+        return id.equals("vbe") ? "vbe shift" : id;
+    }
+
     /** The value at a level with its unit ({@code 10.8 V}). */
     public String describe(double level) {
         return EngineeringNotation.format(valueAt(level), unit);

@@ -498,7 +498,7 @@ public final class StageChecks {
                 for (Factor f : factors) {
                     if (present.containsKey(f.id())) {
                         corner.put(f.id(), f.valueAt(present.get(f.id())));
-                        words.add(f.id() + " " + f.describe(present.get(f.id())));
+                        words.add(f.word() + " " + f.describe(present.get(f.id())));
                     }
                 }
                 return Optional.of(new TurnOff(r.metrics(), s, corner, String.join(", ", words)));
@@ -582,7 +582,7 @@ public final class StageChecks {
             for (Factor f : factors) {
                 double level = at.variant().level(f.id());
                 corner.put(f.id(), f.valueAt(level));
-                words.add(f.id() + " " + f.describe(level));
+                words.add(f.word() + " " + f.describe(level));
             }
             String note = judged < variants.size() ? " (" + judged + " of " + variants.size() + " corners solved)" : "";
             return new CheckResult(id, worst.status(), worst.value(), worst.limit(), unit, corner,

@@ -164,4 +164,15 @@ class CornersTest {
         Factor f = Corners.factors(Fixtures.build(StageTemplate.LOW_SIDE_NPN)).get(0);
         assertThrows(IllegalArgumentException.class, () -> f.apply(Fixtures.build(StageTemplate.LOW_SIDE_NPN), 1.5));
     }
+
+    @org.junit.jupiter.api.Test
+    @org.junit.jupiter.api.DisplayName("the VBE spread reads as a shift in corner descriptions, its id stays vbe (README check ids)")
+    void vbeReadsAsAShift() {
+        Factor vbe = Corners.factors(org.armature.model.Templates.defaultStage()).stream()
+                .filter(f -> f.id().equals("vbe")).findFirst().orElseThrow();
+        assertEquals("vbe shift", vbe.word());
+        Factor supply = Corners.factors(org.armature.model.Templates.defaultStage()).stream()
+                .filter(f -> f.id().equals("supply")).findFirst().orElseThrow();
+        assertEquals("supply", supply.word());
+    }
 }
