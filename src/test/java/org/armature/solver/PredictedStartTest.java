@@ -33,13 +33,19 @@ class PredictedStartTest {
         return b.build();
     }
 
+    /** The DC operating point by the ordinary strategy: the accepted point of the tests. */
+    private static double[] operatingPoint(Netlist nl, NewtonSolver newton) {
+        double[] x = new double[nl.unknownCount()];
+        new DcStrategy(newton, ContinuationOptions.DEFAULT).solve(x, nl.initialStates());
+        return x;
+    }
+
     @Test
     @DisplayName("a wild prediction (anode at 3 V) limited from the accepted point converges to the same solution")
     void wildPredictionConverges() {
         Netlist nl = diodeCircuit();
         NewtonSolver newton = new NewtonSolver(nl, NewtonOptions.DEFAULT);
-        double[] accepted = new double[nl.unknownCount()];
-        new DcStrategy(newton, ContinuationOptions.DEFAULT).solve(accepted, nl.initialStates());
+        double[] accepted = operatingPoint(nl, newton);
         // the diode carries about (5 − 0.69) V / 1 kΩ ≈ 4.3 mA: VF ≈ VT·ln(I/IS) ≈ 0.69 V (derived, Shockley)
         int anode = 1;
         assertEquals(0.69, accepted[anode], 0.02, "Shockley, derived");
@@ -55,8 +61,7 @@ class PredictedStartTest {
     void exactPredictionOneSolve() {
         Netlist nl = diodeCircuit();
         NewtonSolver newton = new NewtonSolver(nl, NewtonOptions.DEFAULT);
-        double[] accepted = new double[nl.unknownCount()];
-        new DcStrategy(newton, ContinuationOptions.DEFAULT).solve(accepted, nl.initialStates());
+        double[] accepted = operatingPoint(nl, newton);
         double[] predicted = accepted.clone();
         assertTrue(newton.runPredicted(predicted, accepted, nl.initialStates(), StampContext.DC));
         assertEquals(1, newton.iterations(), "one solve, then the residual and step tests pass (NewtonSolver contract)");
