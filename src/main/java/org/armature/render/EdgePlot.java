@@ -268,7 +268,15 @@ public final class EdgePlot {
             }
             double x = x0 + (col + 0.5) / columns * (x1 - x0);
             if (Double.isNaN(first)) {
-                pts.add(new double[] {x, mapY(prev, lo, hi, sy0, sy1)});
+                // no sample in this column: a state holds its value, a waveform runs straight on
+                // to the next sample (time points may lie many columns apart)
+                double v = prev;
+                if (!c.binary() && i > 0 && i < ts.length && ts[i] > ts[i - 1]) {
+                    double tc = t0 + (col + 0.5) / columns * (t1 - t0);
+                    double f = Math.max(0, Math.min(1, (tc - ts[i - 1]) / (ts[i] - ts[i - 1])));
+                    v = (vs[i - 1] + f * (vs[i] - vs[i - 1])) * c.scale();
+                }
+                pts.add(new double[] {x, mapY(v, lo, hi, sy0, sy1)});
                 continue;
             }
             if (c.binary()) {
