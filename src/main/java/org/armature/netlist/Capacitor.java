@@ -3,12 +3,9 @@ package org.armature.netlist;
 import java.util.List;
 
 /**
- * A linear capacitor. At DC it is open and stamps nothing. At a transient point it stamps the
- * backward-Euler companion model: conductance α0·C in parallel with a current α0·C·v(previous)
- * into {@code a}, where α0 = {@link StampContext#integrationCoefficientPerSecond()} and v(previous)
- * is the voltage at the last accepted point (kept by {@link #accept}). A transient engine that
- * needs another integration formula supplies its own companion element through the same
- * {@link Stamper} calls.
+ * A linear capacitor of the DC netlist: open at DC, so it stamps nothing. It carries the
+ * capacitance for the transient engine, which replaces it by its own companion element (with the
+ * run's integration formula and history); stamping it at a time point is a programming error.
  */
 public final class Capacitor implements Element {
 
@@ -16,7 +13,6 @@ public final class Capacitor implements Element {
     private final int a;
     private final int b;
     private final double farads;
-    private double previousVolts;
 
     /**
      * @param label designator for messages
@@ -56,18 +52,10 @@ public final class Capacitor implements Element {
 
     @Override
     public boolean stamp(Stamper s, Solution x, StampContext ctx) {
-        if (ctx.isDc()) {
-            return false;
+        if (!ctx.isDc()) {
+            throw new IllegalStateException("capacitor " + label + " stamped at a time point: the transient engine"
+                    + " replaces it by its own companion");
         }
-        double g = ctx.integrationCoefficientPerSecond() * farads;
-        s.conductance(a, b, g);
-        s.current(a, g * previousVolts);
-        s.current(b, -g * previousVolts);
         return false;
-    }
-
-    @Override
-    public void accept(Solution x, StampContext ctx) {
-        previousVolts = x.voltage(a) - x.voltage(b);
     }
 }

@@ -103,4 +103,18 @@ class IntegratorCoefficientsTest {
         assertEquals(2e6, l.resistanceOhms(), 1e-6); // derived: 2L/h
         assertEquals(-2e6 * 0.03 + 12, l.volts(), 1e-6); // derived: −2L/h·i − v
     }
+
+    @Test
+    @DisplayName("transient capacitor stamp: backward Euler at h = 1 ms, 1 µF charged to 2 V: C/h and C/h·v(previous) into a (derived)")
+    void transientCapacitorStamp() {
+        StepState step = new StepState();
+        TransientCapacitor c = new TransientCapacitor("C", 0, org.armature.netlist.Netlist.GROUND, 1e-6, step);
+        c.initialise(new org.armature.netlist.ArraySolution(1, new double[] {2.0}, new double[0]));
+        step.set(IntegratorCoefficients.of(IntegrationMethod.BACKWARD_EULER, 1e-3, 1e-3));
+        org.armature.solver.MnaSystem m = new org.armature.solver.MnaSystem(1, 0);
+        c.stamp(m, new org.armature.netlist.ArraySolution(1, new double[1], new double[0]),
+                new org.armature.netlist.StampContext(org.armature.netlist.StampContext.Mode.TRANSIENT, 1, 1e-3, 1e-3, 1e3));
+        assertEquals(1e-3, m.matrix()[0], 1e-15); // derived: C/h = 1 µF / 1 ms
+        assertEquals(2e-3, m.rhs()[0], 1e-15); // derived: C/h·v(previous) = 1 mS · 2 V
+    }
 }
