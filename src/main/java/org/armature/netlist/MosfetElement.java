@@ -144,7 +144,7 @@ public final class MosfetElement implements Element {
      * Drain–source step limiting, the classic rule of the MOS models of the Berkeley simulation
      * work that followed Nagel (ERL M520, 1975): from a drain–source voltage of at least 3.5 V a
      * fall is stopped at 2 V and a rise at 3·v + 2 V; from below 3.5 V a rise is stopped at 4 V and
-     * a fall at −0.5 V. A channel switching on with its drain still at the supply is thus linearised
+     * a fall at −0.5 V (when it starts above −0.5 V; a drain pinned there by the stop moves on freely). A channel switching on with its drain still at the supply is thus linearised
      * near the triode region instead of at a saturation current the load cannot carry (which throws
      * the drain tens of volts below ground and into the body diode).
      */
@@ -158,7 +158,10 @@ public final class MosfetElement implements Element {
         if (vNew > vOld) {
             return Math.min(vNew, VDS_LOW_RISE_STOP_VOLTS);
         }
-        return Math.max(vNew, VDS_LOW_FALL_STOP_VOLTS);
+        // the fall stop applies from above it: a drain already below −0.5 V (the body diode
+        // conducting while the coil rings below ground) moves freely, its diode limits it; stopping
+        // it there again would flag every iteration as limited and never converge
+        return vOld > VDS_LOW_FALL_STOP_VOLTS ? Math.max(vNew, VDS_LOW_FALL_STOP_VOLTS) : vNew;
     }
 
     /** Constants of {@link #limitDrainSource} (the classic values), V or dimensionless. */

@@ -255,7 +255,13 @@ public final class OperatingPoint {
     }
 
     /** @return node names and values of the solution vector, for a start guess */
-    Map<String, Double> unknownsByNodeName() {
+    /**
+     * The solution's node voltages by the netlist's node names, internal nodes included (for a
+     * warm start of another engine on the same stage, such as the transient run's operating point).
+     *
+     * @return node name to voltage, V
+     */
+    public Map<String, Double> unknownsByNodeName() {
         Map<String, Double> m = new HashMap<>();
         for (int i = 0; i < netlist.nodeCount(); i++) {
             m.put(netlist.nodeName(i), unknowns[i]);

@@ -64,8 +64,11 @@ final class StageCircuit {
             }
         }
         TimeDomainCircuit c = new TimeDomainCircuit(here.nodeCount(), here.branchCount(), states);
+        Map<String, Double> solved = op.unknownsByNodeName();
+        c.startGuess = new double[here.nodeCount() + here.branchCount()];
         for (int i = 0; i < here.nodeCount(); i++) {
             c.nodeName(i, here.nodeName(i));
+            c.startGuess[i] = solved.getOrDefault(here.nodeName(i), 0.0);
         }
         for (Map.Entry<String, Integer> e : here.netNodes().entrySet()) {
             if (e.getValue() >= 0) {

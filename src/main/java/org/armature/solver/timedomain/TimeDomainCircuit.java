@@ -28,6 +28,8 @@ final class TimeDomainCircuit {
     final List<ArmatureDynamics> armatures = new ArrayList<>();
     final Map<String, Integer> namedNodes = new LinkedHashMap<>();
     final List<Probe> probes = new ArrayList<>();
+    /** Node voltages to start the run's own operating point from (the DC engine's answer), or null. */
+    double[] startGuess;
     /** Notes on how the stage was modelled, for the result. */
     final List<String> notes = new ArrayList<>();
     /** One reading of the switch part per recorded point, shared by its power and current probes. */

@@ -152,23 +152,53 @@ final class TimeDomainRun {
 
     private boolean newton(double[] trial, StampContext ctx) {
         NewtonSolver s = highNow ? newtonHigh : newtonLow;
+        System.arraycopy(trial, 0, retryStart, 0, n);
         boolean ok = s.run(trial, states, ctx, 0);
         newtonIterations += s.iterations();
-        return ok;
+        return ok || shunted(s, trial, ctx);
     }
 
     /** Newton from a predicted start, with the junction limiting seeded at the last accepted point. */
     private boolean newtonPredicted(double[] trial, StampContext ctx) {
         NewtonSolver s = highNow ? newtonHigh : newtonLow;
+        System.arraycopy(trial, 0, retryStart, 0, n);
         boolean ok = s.runPredicted(trial, x, states, ctx);
+        newtonIterations += s.iterations();
+        if (ok) {
+            return true;
+        }
+        System.arraycopy(x, 0, trial, 0, n);
+        System.arraycopy(x, 0, retryStart, 0, n);
+        return shunted(s, trial, ctx);
+    }
+
+    /**
+     * The fallback of a failed time point: the same solve with {@link #FALLBACK_SHUNT_SIEMENS} from
+     * every node to ground, which gives a node that only reverse-biased junctions touch (between a
+     * blocking diode and a blocking zener, for example) a defined voltage (after the gmin practice of
+     * CHECKS NM-5). The run without the shunt is always tried first, so converging points are
+     * unchanged.
+     */
+    private boolean shunted(NewtonSolver s, double[] trial, StampContext ctx) {
+        System.arraycopy(retryStart, 0, trial, 0, n);
+        boolean ok = s.run(trial, states, ctx, FALLBACK_SHUNT_SIEMENS);
         newtonIterations += s.iterations();
         return ok;
     }
+
+    /**
+     * Node shunt of the fallback, siemens: 1e-9 S (our choice: 12 nA at 12 V, a ten-thousandth of a
+     * small relay's drop-out current, yet a million times the junctions' own minimum conductance).
+     */
+    static final double FALLBACK_SHUNT_SIEMENS = 1e-9;
+    /** Start of the solve being attempted, for its fallback. */
+    private double[] retryStart;
 
     TimeDomainResult run() {
         states = c.initialStates.clone();
         x = new double[n];
         xPrev = new double[n];
+        retryStart = new double[n];
         derivativeHistory = new double[c.reactives.size()][3];
         highNow = drive.initialHigh();
         selectDrive();
@@ -439,6 +469,11 @@ final class TimeDomainRun {
 
     private void operatingPoint() {
         c.step.setDc();
+        // from the DC engine's answer when the stage came with one (its gmin and source stepping and
+        // junction presets found it); hand-built circuits start from 0 V
+        if (c.startGuess != null && c.startGuess.length == n) {
+            System.arraycopy(c.startGuess, 0, x, 0, n);
+        }
         boolean ok = newton(x, StampContext.DC);
         if (!ok) {
             // source stepping (CHECKS NM-5): bring the sources up from 10 % in ten steps
