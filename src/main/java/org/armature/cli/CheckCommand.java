@@ -7,7 +7,6 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.armature.analysis.CheckOptions;
@@ -19,9 +18,7 @@ import org.armature.analysis.YieldResult;
 import org.armature.io.StageFiles;
 import org.armature.model.Conditions;
 import org.armature.model.Finding;
-import org.armature.model.Severity;
 import org.armature.model.Stage;
-import org.armature.model.Validator;
 import org.armature.solver.DcAnalysis;
 import org.armature.units.EngineeringNotation;
 import org.armature.units.Unit;
@@ -109,12 +106,7 @@ final class CheckCommand implements Callable<Integer> {
         }
         Stage stage = StageSelection.select(StageFiles.open(file), stageSelector, file, cl);
         stage = withOverrides(stage, cl);
-        List<String> errors = Validator.validate(stage).stream()
-                .filter(f -> f.severity() == Severity.ERROR).map(Finding::message).toList();
-        if (!errors.isEmpty()) {
-            throw new CommandFailedException("Stage \"" + stage.name() + "\" cannot be checked: "
-                    + String.join(" ", errors));
-        }
+        StageSelection.requireValid(stage, "checked");
         CheckOptions options = CheckOptions.DEFAULT.withTransient(!noTransient);
         if (monteCarlo != null) {
             options = options.withMonteCarlo(monteCarlo, seed);

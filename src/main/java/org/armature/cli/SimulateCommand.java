@@ -15,11 +15,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.armature.io.StageFiles;
-import org.armature.model.Finding;
-import org.armature.model.Severity;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
-import org.armature.model.Validator;
 import org.armature.solver.SolverException;
 import org.armature.solver.timedomain.DriveWaveform;
 import org.armature.solver.timedomain.StepOptions;
@@ -94,12 +91,7 @@ final class SimulateCommand implements Callable<Integer> {
     public Integer call() {
         StageDocument doc = StageFiles.open(file);
         Stage stage = StageSelection.select(doc, stageSelector, file, spec.commandLine());
-        List<String> errors = Validator.validate(stage).stream()
-                .filter(f -> f.severity() == Severity.ERROR).map(Finding::message).toList();
-        if (!errors.isEmpty()) {
-            throw new CommandFailedException("Stage \"" + stage.name() + "\" cannot be simulated: "
-                    + String.join(" ", errors));
-        }
+        StageSelection.requireValid(stage, "simulated");
         double window = duration == null ? TransientOptions.DEFAULT_DURATION_SECONDS : duration;
         double at = TransientOptions.DEFAULT_EDGE_SECONDS;
         if (!(window > at)) {

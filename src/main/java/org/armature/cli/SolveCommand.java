@@ -6,18 +6,14 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import java.util.concurrent.Callable;
 import org.armature.io.StageFiles;
-import org.armature.model.Finding;
-import org.armature.model.Severity;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
-import org.armature.model.Validator;
 import org.armature.solver.DcAnalysis;
 import org.armature.solver.OperatingPoint;
 import org.armature.solver.PartResult;
@@ -82,12 +78,7 @@ final class SolveCommand implements Callable<Integer> {
     public Integer call() {
         StageDocument doc = StageFiles.open(file);
         Stage stage = StageSelection.select(doc, stageSelector, file, spec.commandLine());
-        List<String> errors = Validator.validate(stage).stream()
-                .filter(f -> f.severity() == Severity.ERROR).map(Finding::message).toList();
-        if (!errors.isEmpty()) {
-            throw new CommandFailedException("Stage \"" + stage.name() + "\" cannot be solved: "
-                    + String.join(" ", errors));
-        }
+        StageSelection.requireValid(stage, "solved");
         SolveOptions options = SolveOptions.DEFAULT;
         if (pinState != null) {
             options = options.withPinHigh(pinState.isHigh());

@@ -5,7 +5,10 @@ import org.armature.model.Stage;
 import org.armature.model.StageDocument;
 import picocli.CommandLine;
 
-/** Picks one stage of a stage file by number (from 1) or name, for every command that reads a file. */
+/**
+ * Picks one stage of a stage file by number (from 1) or name, for every command that reads a file,
+ * and refuses a stage with validation errors.
+ */
 final class StageSelection {
 
     private StageSelection() {
@@ -34,5 +37,24 @@ final class StageSelection {
         return doc.stages().stream().filter(s -> s.name().equals(selector)).findFirst()
                 .orElseThrow(() -> new CommandLine.ParameterException(cl, "No stage of " + file.getFileName()
                         + " is named \"" + selector + "\"."));
+    }
+
+    /**
+     * Refuses a stage the validator finds errors in, before an engine sees it.
+     *
+     * @param stage the selected stage
+     * @param verb what the command would do, for the message ("solved", "checked", "simulated")
+     * @return the stage
+     * @throws CommandFailedException naming every error
+     */
+    static Stage requireValid(Stage stage, String verb) {
+        java.util.List<String> errors = org.armature.model.Validator.validate(stage).stream()
+                .filter(f -> f.severity() == org.armature.model.Severity.ERROR)
+                .map(org.armature.model.Finding::message).toList();
+        if (!errors.isEmpty()) {
+            throw new CommandFailedException("Stage \"" + stage.name() + "\" cannot be " + verb + ": "
+                    + String.join(" ", errors));
+        }
+        return stage;
     }
 }
