@@ -310,7 +310,7 @@ public final class Corners {
                         out = out.updatePart(q.ref(), p -> p.with("saturationCurrentAmps", is));
                     }
                     return out;
-                });
+                }).describedAs("vbe shift");
     }
 
     /**

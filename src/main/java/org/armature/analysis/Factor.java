@@ -25,6 +25,8 @@ public final class Factor {
     private final Spread spread;
     private final DoubleUnaryOperator valueAt;
     private final BiFunction<Stage, Double, Stage> apply;
+    /** Name in corner descriptions. */
+    private final String word;
 
     /**
      * @param id stable identifier
@@ -37,6 +39,11 @@ public final class Factor {
      */
     public Factor(String id, String label, Unit unit, List<String> refs, Spread spread, DoubleUnaryOperator valueAt,
                   BiFunction<Stage, Double, Stage> apply) {
+        this(id, label, unit, refs, spread, valueAt, apply, id);
+    }
+
+    private Factor(String id, String label, Unit unit, List<String> refs, Spread spread, DoubleUnaryOperator valueAt,
+                   BiFunction<Stage, Double, Stage> apply, String word) {
         if (id == null || id.isBlank()) {
             throw new IllegalArgumentException("id must not be blank");
         }
@@ -47,6 +54,7 @@ public final class Factor {
         this.spread = spread == null ? Spread.UNIFORM : spread;
         this.valueAt = valueAt;
         this.apply = apply;
+        this.word = word;
     }
 
     /** Stable identifier. */
@@ -80,12 +88,21 @@ public final class Factor {
     }
 
     /**
-     * The name of the factor in a corner's plain-words description: its identifier, with the word
-     * "shift" after a factor whose value is an offset from the part's own figure (the VBE spread),
-     * so "vbe shift 30.0 mV" does not read as a VBE of 30 mV.
+     * The name of the factor in a corner's plain-words description: its identifier unless
+     * {@link #describedAs} gave another (a factor whose value is an offset says so: "vbe shift").
      */
     public String word() {
-        return id.equals("vbe") ? "vbe shift" : id;
+        return word;
+    }
+
+    /**
+     * This factor with another name in corner descriptions (the identifier stays).
+     *
+     * @param words the name, for example "vbe shift" so an offset of 30 mV does not read as a VBE of 30 mV
+     * @return a copy
+     */
+    public Factor describedAs(String words) {
+        return new Factor(id, label, unit, refs, spread, valueAt, apply, words);
     }
 
     /** The value at a level with its unit ({@code 10.8 V}). */
