@@ -1,16 +1,22 @@
 package org.armature.solver.timedomain;
 
 import java.util.ArrayList;
+import java.util.Collections;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.function.ToDoubleFunction;
+import java.util.stream.IntStream;
 import org.armature.devices.BreakdownClamp;
+import org.armature.devices.DeviceFinding;
 import org.armature.devices.MovingArmature;
 import org.armature.devices.RelayArmatureDatasheet;
 import org.armature.devices.RelayArmatureFit;
+import org.armature.model.Connectivity;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
 import org.armature.model.Stage;
@@ -22,6 +28,7 @@ import org.armature.netlist.NetlistBuilder;
 import org.armature.netlist.PartNetwork;
 import org.armature.netlist.RelayCoil;
 import org.armature.netlist.RelayHandle;
+import org.armature.netlist.Solution;
 import org.armature.netlist.Resistor;
 import org.armature.solver.DcAnalysis;
 import org.armature.solver.OperatingPoint;
@@ -50,7 +57,7 @@ final class StageCircuit {
         boolean anyOperated = operated.values().stream().anyMatch(Boolean::booleanValue);
         FlattenOptions fo = FlattenOptions.of(initialHigh, ambientCelsius).withRelayOperated(anyOperated);
         // one connectivity for both drive levels (the geometry is the same)
-        org.armature.model.Connectivity nets = org.armature.model.Connectivity.of(stage);
+        Connectivity nets = Connectivity.of(stage);
         Netlist here = NetlistBuilder.flatten(stage, nets, fo);
         Netlist other = otherLevel(stage, nets, fo.withPinHigh(!initialHigh), here);
         Netlist low = initialHigh ? other : here;
@@ -75,8 +82,8 @@ final class StageCircuit {
                 c.node(e.getKey(), e.getValue());
             }
         }
-        Set<Element> inParts = java.util.Collections.newSetFromMap(new IdentityHashMap<>());
-        Map<String, TransientCapacitor> caps = new java.util.HashMap<>();
+        Set<Element> inParts = Collections.newSetFromMap(new IdentityHashMap<>());
+        Map<String, TransientCapacitor> caps = new HashMap<>();
         TransientCoil firstCoil = null;
         PartNetwork relayNet = null;
         for (PartNetwork p : low.parts()) {
@@ -118,9 +125,9 @@ final class StageCircuit {
      * The netlist of the other drive level: the first one with only the drive pins flattened anew
      * (the rest is shared), or a whole flatten when a pin's structure would change.
      */
-    private static Netlist otherLevel(Stage stage, org.armature.model.Connectivity nets, FlattenOptions fo,
+    private static Netlist otherLevel(Stage stage, Connectivity nets, FlattenOptions fo,
                                       Netlist here) {
-        int[] pins = java.util.stream.IntStream.range(0, stage.parts().size())
+        int[] pins = IntStream.range(0, stage.parts().size())
                 .filter(i -> stage.parts().get(i).kind() == PartKind.DRIVE_PIN).toArray();
         return NetlistBuilder.reflatten(here, stage, fo, pins).orElseGet(() -> NetlistBuilder.flatten(stage, nets, fo));
     }
@@ -150,8 +157,8 @@ final class StageCircuit {
             RelayArmatureFit fit = RelayArmatureFit.fit(armatureDatasheet(relay, ohms, pickUp, dropOut));
             moving = fit.moving();
             if (moving.isEmpty()) {
-                for (org.armature.devices.DeviceFinding f : fit.findings()) {
-                    if (f.severity() == org.armature.devices.DeviceFinding.Severity.ERROR) {
+                for (DeviceFinding f : fit.findings()) {
+                    if (f.severity() == DeviceFinding.Severity.ERROR) {
                         c.notes.add(relay.ref() + ": no moving armature, constant inductance instead: " + f.detail());
                     }
                 }
@@ -244,7 +251,7 @@ final class StageCircuit {
                 // the channel's clamp diode to its common pin is the suppressor when that pin goes to
                 // the coil's supply: its power counts as suppressor power, not switch power
                 int com = sw.pinNodes().get("com");
-                java.util.function.ToDoubleFunction<org.armature.netlist.Solution> iClamp =
+                ToDoubleFunction<Solution> iClamp =
                         x -> -memo.of(swFinal, x).pinCurrents().get("com");
                 c.switchPower = new Probe("switch power", "W",
                         x -> memo.of(swFinal, x).powerWatts() - (x.voltage(hi) - x.voltage(com)) * iClamp.applyAsDouble(x)
@@ -267,7 +274,7 @@ final class StageCircuit {
             List<Integer> nodes = List.copyOf(p.pinNodes().values());
             int pa = nodes.get(0);
             int pb = nodes.get(1);
-            java.util.function.ToDoubleFunction<org.armature.netlist.Solution> i = twoTerminalCurrent(p, caps);
+            ToDoubleFunction<Solution> i = twoTerminalCurrent(p, caps);
             powers.add(new Probe("", "W", x -> (x.voltage(pa) - x.voltage(pb)) * i.applyAsDouble(x)));
         }
         if (!chain.isEmpty() || channelClamp != null) {
@@ -297,7 +304,7 @@ final class StageCircuit {
      * current); a full {@link PartNetwork#read} for anything else. Part readings build maps, and
      * at every time point that cost more than the solve.
      */
-    private static java.util.function.ToDoubleFunction<org.armature.netlist.Solution> twoTerminalCurrent(
+    private static ToDoubleFunction<Solution> twoTerminalCurrent(
             PartNetwork p, Map<String, TransientCapacitor> caps) {
         TransientCapacitor cap = caps.get(p.ref());
         if (cap != null) {

@@ -81,8 +81,6 @@ final class TimeDomainRun {
     private final double[] stateScale;
     private int accepted;
     private int rejected;
-    /** Backward-Euler steps taken to damp trapezoidal ringing. */
-    private int dampedSteps;
     /** The step just refused is tried again with backward Euler. */
     private boolean eulerRetry;
     /** The last three committed derivatives of each reactive element, newest first. */
@@ -201,7 +199,6 @@ final class TimeDomainRun {
         retryStart = new double[n];
         derivativeHistory = new double[c.reactives.size()][3];
         highNow = drive.initialHigh();
-        selectDrive();
         operatingPoint();
         for (double e : drive.edgeTimes()) {
             if (e < duration) {
@@ -280,7 +277,6 @@ final class TimeDomainRun {
                 // the same step again with backward Euler, which follows the fast mode instead of
                 // overshooting it
                 rejected++;
-                dampedSteps++;
                 eulerRetry = true;
                 h = hTry;
                 continue;
@@ -355,12 +351,11 @@ final class TimeDomainRun {
             tCommitted = t;
             accepted++;
             hPrev = hTry;
-            boolean ringing = ringing(newStates) && method == IntegrationMethod.TRAPEZOIDAL;
+            boolean ringing = ringing() && method == IntegrationMethod.TRAPEZOIDAL;
             pushHistory(t, newStates);
             if (ringing) {
                 // one damped step: backward Euler at the step the control proposes, error test on
                 histCount = Math.min(histCount, o.method().order() + 1);
-                dampedSteps++;
             }
             h = checkError ? control.propose(hTry, ratio, method.order()) : hTry * o.maxGrowthFactor();
             if (crossing >= c.relays.size()) {
@@ -437,8 +432,7 @@ final class TimeDomainRun {
         }
         if (what.equals(DRIVE)) {
             highNow = !highNow;
-            selectDrive();
-            events.add(new TransientEvent(t, highNow ? TransientEvent.DRIVE_HIGH : TransientEvent.DRIVE_LOW, ""));
+                events.add(new TransientEvent(t, highNow ? TransientEvent.DRIVE_HIGH : TransientEvent.DRIVE_LOW, ""));
         } else if (what.startsWith("relay:")) {
             arrive(Integer.parseInt(what.substring(6)), t);
         }
@@ -463,8 +457,13 @@ final class TimeDomainRun {
         derivativeCount = 0;
     }
 
-    private void selectDrive() {
-        // the Newton loop of the present level is chosen in newton(); nothing else depends on it
+    /** The absolute error tolerance of a unit class (StepOptions). */
+    private double absoluteTolerance(Reactive.Unit unit) {
+        return switch (unit) {
+            case VOLTS -> o.absoluteVoltsTolerance();
+            case AMPS -> o.absoluteAmpsTolerance();
+            case METRES -> o.absoluteMetresTolerance();
+        };
     }
 
     private void operatingPoint() {
@@ -620,11 +619,7 @@ final class TimeDomainRun {
             vs[j] = histStates[j - 1][idx];
         }
         double e = TruncationError.estimate(k, ts, vs);
-        double abs = switch (unit) {
-            case VOLTS -> o.absoluteVoltsTolerance();
-            case AMPS -> o.absoluteAmpsTolerance();
-            case METRES -> o.absoluteMetresTolerance();
-        };
+        double abs = absoluteTolerance(unit);
         double scale = Math.max(stateScale[idx], Math.abs(vs[0]));
         return TruncationError.ratio(e, scale, vs[1], o.relativeTolerance(), abs);
     }
@@ -637,16 +632,12 @@ final class TimeDomainRun {
      * absolute tolerance each time. A ring the step resolves never alternates every step. Called after
      * the elements have committed the new point.
      */
-    private boolean ringing(double[] newStates) {
+    private boolean ringing() {
         boolean found = false;
         int j = 0;
         for (Reactive r : c.reactives) {
             double d = r.committedDerivative();
-            double abs = RINGING_TOLERANCE_MULTIPLE * switch (r.derivativeUnit()) {
-                case VOLTS -> o.absoluteVoltsTolerance();
-                case AMPS -> o.absoluteAmpsTolerance();
-                case METRES -> o.absoluteMetresTolerance();
-            };
+            double abs = RINGING_TOLERANCE_MULTIPLE * absoluteTolerance(r.derivativeUnit());
             double[] h = derivativeHistory[j++];
             double d1 = d - h[0];
             double d2 = h[0] - h[1];
@@ -673,7 +664,7 @@ final class TimeDomainRun {
      */
     private boolean unresolvedReversal(double[] trial) {
         view.bind(trial, states);
-        double abs = RINGING_TOLERANCE_MULTIPLE * o.absoluteAmpsTolerance();
+        double abs = RINGING_TOLERANCE_MULTIPLE * absoluteTolerance(Reactive.Unit.AMPS);
         for (Reactive r : c.reactives) {
             if (r instanceof TransientCapacitor cap) {
                 double before = cap.committedDerivative();
