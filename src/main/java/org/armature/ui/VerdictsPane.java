@@ -90,6 +90,8 @@ public final class VerdictsPane extends VBox {
         if (!caution.isEmpty()) {
             Label head = new Label("Mains or high voltage on the contacts", new FontIcon("mdi2f-flash-alert"));
             head.getStyleClass().add("caution-title");
+            // the panel is narrow: the heading wraps like the cautions under it instead of being cut
+            head.setWrapText(true);
             cautions.getChildren().add(head);
             for (Finding f : caution) {
                 Label l = new Label(f.message());
