@@ -7,11 +7,8 @@ import java.util.List;
  * capacitance for the transient engine, which replaces it by its own companion element (with the
  * run's integration formula and history); stamping it at a time point is a programming error.
  */
-public final class Capacitor implements Element {
+public final class Capacitor extends TwoTerminalElement {
 
-    private final String label;
-    private final int a;
-    private final int b;
     private final double farads;
 
     /**
@@ -21,28 +18,16 @@ public final class Capacitor implements Element {
      * @param farads capacitance, F, positive
      */
     public Capacitor(String label, int a, int b, double farads) {
+        super(label, a, b);
         if (!(farads > 0) || !Double.isFinite(farads)) {
             throw new IllegalArgumentException("farads of " + label + " must be positive and finite");
         }
-        this.label = label;
-        this.a = a;
-        this.b = b;
         this.farads = farads;
     }
 
     /** @return capacitance, F */
     public double farads() {
         return farads;
-    }
-
-    @Override
-    public String label() {
-        return label;
-    }
-
-    @Override
-    public int[] terminals() {
-        return new int[] {a, b};
     }
 
     @Override

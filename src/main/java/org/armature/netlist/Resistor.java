@@ -1,13 +1,9 @@
 package org.armature.netlist;
 
-import java.util.List;
 
 /** A linear resistor between two nodes (Ohm's law). */
-public final class Resistor implements Element {
+public final class Resistor extends TwoTerminalElement {
 
-    private final String label;
-    private final int a;
-    private final int b;
     private final double ohms;
 
     /**
@@ -17,12 +13,10 @@ public final class Resistor implements Element {
      * @param ohms resistance, Ω, positive and finite
      */
     public Resistor(String label, int a, int b, double ohms) {
+        super(label, a, b);
         if (!(ohms > 0) || !Double.isFinite(ohms)) {
             throw new IllegalArgumentException("ohms of " + label + " must be positive and finite, was " + ohms);
         }
-        this.label = label;
-        this.a = a;
-        this.b = b;
         this.ohms = ohms;
     }
 
@@ -37,21 +31,6 @@ public final class Resistor implements Element {
      */
     public double current(Solution x) {
         return (x.voltage(a) - x.voltage(b)) / ohms;
-    }
-
-    @Override
-    public String label() {
-        return label;
-    }
-
-    @Override
-    public int[] terminals() {
-        return new int[] {a, b};
-    }
-
-    @Override
-    public List<int[]> conductingPairs() {
-        return List.of(new int[] {a, b});
     }
 
     @Override

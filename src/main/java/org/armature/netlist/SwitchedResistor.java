@@ -1,17 +1,13 @@
 package org.armature.netlist;
 
-import java.util.List;
 
 /**
  * A relay contact: a small resistance when closed, a large one when open, switched by a state slot
  * (1 = relay operated, 0 = released). A normally-open contact is closed when operated, a
  * normally-closed one when released. Resistances are from {@link ContactModel}.
  */
-public final class SwitchedResistor implements Element {
+public final class SwitchedResistor extends TwoTerminalElement {
 
-    private final String label;
-    private final int a;
-    private final int b;
     private final int stateSlot;
     private final boolean closedWhenOperated;
     private final ContactModel model;
@@ -26,9 +22,7 @@ public final class SwitchedResistor implements Element {
      */
     public SwitchedResistor(String label, int a, int b, int stateSlot, boolean closedWhenOperated,
                             ContactModel model) {
-        this.label = label;
-        this.a = a;
-        this.b = b;
+        super(label, a, b);
         this.stateSlot = stateSlot;
         this.closedWhenOperated = closedWhenOperated;
         this.model = model;
@@ -71,21 +65,6 @@ public final class SwitchedResistor implements Element {
      */
     public double current(Solution x) {
         return (x.voltage(a) - x.voltage(b)) / ohms(x);
-    }
-
-    @Override
-    public String label() {
-        return label;
-    }
-
-    @Override
-    public int[] terminals() {
-        return new int[] {a, b};
-    }
-
-    @Override
-    public List<int[]> conductingPairs() {
-        return List.of(new int[] {a, b});
     }
 
     @Override

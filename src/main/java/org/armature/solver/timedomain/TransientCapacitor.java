@@ -4,17 +4,15 @@ import java.util.List;
 import org.armature.netlist.Solution;
 import org.armature.netlist.Stamper;
 import org.armature.netlist.StampContext;
+import org.armature.netlist.TwoTerminalElement;
 
 /**
  * A linear capacitor with the run's integration formula: open at DC, at a time point the Norton
  * companion of {@link Companion#capacitor} (trapezoidal, backward Euler or BDF2). State: its voltage
  * v(a) − v(b).
  */
-final class TransientCapacitor implements Reactive {
+final class TransientCapacitor extends TwoTerminalElement implements Reactive {
 
-    private final String label;
-    private final int a;
-    private final int b;
     private final double farads;
     private final StepState step;
     private double vNow;
@@ -22,12 +20,10 @@ final class TransientCapacitor implements Reactive {
     private double iNow;
 
     TransientCapacitor(String label, int a, int b, double farads, StepState step) {
+        super(label, a, b);
         if (!(farads > 0) || !Double.isFinite(farads)) {
             throw new IllegalArgumentException("farads of " + label + " must be positive and finite");
         }
-        this.label = label;
-        this.a = a;
-        this.b = b;
         this.farads = farads;
         this.step = step;
     }
@@ -44,16 +40,6 @@ final class TransientCapacitor implements Reactive {
         IntegratorCoefficients k = step.coefficients();
         double v = x.voltage(a) - x.voltage(b);
         return farads * k.derivative(v, k.history(vNow, vBefore, iNow / farads));
-    }
-
-    @Override
-    public String label() {
-        return label;
-    }
-
-    @Override
-    public int[] terminals() {
-        return new int[] {a, b};
     }
 
     @Override
