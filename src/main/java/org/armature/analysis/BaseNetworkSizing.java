@@ -26,7 +26,7 @@ import org.armature.units.Unit;
  * <ol>
  * <li>worst coil current for the base drive: the coil at its smallest resistance, −tolerance at
  *     the coldest ambient (copper law, RC-6), and the supply at its maximum:
- *     IC = (VS,max − VCE(sat)) / Rcoil,min (BJ-16, BJ-18; CHECKS "beyond the hand calculation" 2);</li>
+ *     IC = (VS,max − VCE(sat)) / Rcoil,min (BJ-16, BJ-18; check-values.md "beyond the hand calculation" 2);</li>
  * <li>hFE(min) moved to the coldest ambient by (T/Tnom)^XTB (BJ-13); the base current from the
  *     {@link BaseDriveRule} (forced β 10 by default, BJ-15), flagged when it falls short of
  *     IC / hFE(min, cold) (BJ-19);</li>
@@ -34,12 +34,12 @@ import org.armature.units.Unit;
  *     at most the share f of the base current, and not above Voff / Ileak, so that the leakage
  *     flowing out of the base with the pin floating develops less than Voff (rules and defaults in
  *     {@link SizingOptions});</li>
- * <li>the pin's high level under the real load, V0 − ΔV0 − I·Rout (CHECKS "beyond" 5, GP-7);</li>
+ * <li>the pin's high level under the real load, V0 − ΔV0 − I·Rout (check-values.md "beyond" 5, GP-7);</li>
  * <li>RB = (VOH − VBE(sat)) / (IB + Ipd), rounded <em>down</em> to the chosen series (more drive,
- *     CHECKS "beyond" 6), then the base current and forced β with both resistors at the ends of
+ *     check-values.md "beyond" 6), then the base current and forced β with both resistors at the ends of
  *     their series' tolerance (PV-7);</li>
  * <li>the largest pin current against the per-pin limit and, times the channels driven, against
- *     the package total (GP-x, CHECKS "beyond" 5).</li>
+ *     the package total (GP-x, check-values.md "beyond" 5).</li>
  * </ol>
  *
  * <p>N-MOSFET: the gate resistor is the smallest preferred value at or above (V0 / Ilim − Rout) / (1 − tol),
@@ -47,7 +47,7 @@ import org.armature.units.Unit;
  * least {@link SizingOptions#minimumGateOhms()}); the gate pull-down keeps the DC divider loss
  * below {@link SizingOptions#gateDividerLossFraction()} and holds the gate against IGSS; the
  * switch counts as fully on only when RDS(on) is specified at or below the gate voltage available
- * (MO-6, CHECKS "beyond" 7).
+ * (MO-6, check-values.md "beyond" 7).
  *
  * <p>Darlington channel: the input current (V0 − ΔV0 − 2·VBE) / (Rout + Rext + Rin) (DA-5) against
  * IC / hFE(min) and the pin limits; VCE(sat) from the class values of {@link DarlingtonSaturation}.

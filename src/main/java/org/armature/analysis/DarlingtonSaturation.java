@@ -2,7 +2,7 @@ package org.armature.analysis;
 
 /**
  * Output saturation voltage of one channel of a seven-channel Darlington sink array, from the
- * class values common to such datasheets (CHECKS DA-2): typical 0.9 / 1.1 / 1.3 V and maximum
+ * class values common to such datasheets (check-values.md DA-2): typical 0.9 / 1.1 / 1.3 V and maximum
  * 1.1 / 1.3 / 1.6 V at 100 / 200 / 350 mA. Between the points the value is interpolated linearly
  * in current; below 100 mA and above 350 mA it is held at the end values (a conservative reading
  * below 100 mA, where the real drop is somewhat lower).

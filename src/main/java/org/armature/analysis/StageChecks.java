@@ -64,7 +64,7 @@ import org.armature.units.Unit;
  *     ≤ Tj(max) / above</td></tr>
  * <tr><td>{@code relay.release-time}</td><td>only with a requirement: turn-off edge to the contacts
  *     opening (transient engine); without it the coil-current decay to drop-out through the
- *     suppressor, closed form (CHECKS, suppression), before the armature moves</td><td>≤ requirement / – / above</td></tr>
+ *     suppressor, closed form (check-values.md, suppression), before the armature moves</td><td>≤ requirement / – / above</td></tr>
  * </table>
  *
  * <p>Other findings: {@code check.not-recognised}, {@code check.not-solved} (a variant the engine
@@ -87,7 +87,7 @@ public final class StageChecks {
     /** Longest turn-off window the checks run, 0.2 s: ten times a small relay's release. */
     private static final double TRANSIENT_MAX_WINDOW_SECONDS = 0.2;
 
-    private static final String STATIC = "static estimate (closed form of CHECKS, suppression); the transient engine"
+    private static final String STATIC = "static estimate (closed form of check-values.md, suppression); the transient engine"
             + " is not used yet";
 
     private StageChecks() {

@@ -25,7 +25,7 @@ import org.armature.units.ESeries;
 
 /**
  * Ranks coil suppressors for a stage by release time and peak switch voltage, and proposes the
- * zener and TVS voltages (CHECKS "beyond the hand calculation" 1; SU-12, SU-15, SU-16).
+ * zener and TVS voltages (check-values.md "beyond the hand calculation" 1; SU-12, SU-15, SU-16).
  *
  * <p>Rules: the clamp may add at most Vc,max = f·Vrating − VS,max across the switch (f the
  * {@link Options#ratingUseFraction()}, default 80 %). The zener is about the supply voltage (SU-15):

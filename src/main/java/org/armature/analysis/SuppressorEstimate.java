@@ -6,7 +6,7 @@ import org.armature.model.PartKind;
 import org.armature.model.Stage;
 
 /**
- * The closed-form turn-off of a coil through its suppressor (CHECKS, "Suppression and kickback"):
+ * The closed-form turn-off of a coil through its suppressor (check-values.md, "Suppression and kickback"):
  * the coil (L, R, initial current I0) discharges through a clamp of constant voltage Vc in series
  * with a resistance Rs, so with R' = R + Rs and τ' = L/R'
  * <pre>

@@ -49,7 +49,7 @@ import org.armature.model.Stage;
  * <tr><td>{@code topology.no-drive-pin}</td><td>WARNING</td><td>no logic pin drives the input</td></tr>
  * <tr><td>{@code topology.no-base-resistor}</td><td>WARNING</td><td>a base driven with nothing to limit its current</td></tr>
  * <tr><td>{@code topology.floating-control}</td><td>WARNING</td><td>base or gate without pull-down (PNP: pull-up)</td></tr>
- * <tr><td>{@code topology.high-side-cannot-turn-off}</td><td>ERROR</td><td>PNP driven from a pin whose high level is below the supply (CHECKS, beyond the hand calculation, 4)</td></tr>
+ * <tr><td>{@code topology.high-side-cannot-turn-off}</td><td>ERROR</td><td>PNP driven from a pin whose high level is below the supply (check-values.md, beyond the hand calculation, 4)</td></tr>
  * <tr><td>{@code topology.suppressor-missing}</td><td>WARNING</td><td>nothing limits the turn-off voltage (SU-0)</td></tr>
  * <tr><td>{@code topology.suppressor-reversed}</td><td>ERROR</td><td>a suppressor conducts forward when the stage turns on: a short across the supply</td></tr>
  * <tr><td>{@code topology.suppressor-conducts}</td><td>WARNING</td><td>a clamp breaks down at or below the supply's maximum in normal operation</td></tr>

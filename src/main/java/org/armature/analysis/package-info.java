@@ -23,6 +23,6 @@
  *
  * <p>Device equations (copper coil law, gain temperature factor, the pin's Thevenin source) come
  * from {@code devices}; operating points and waveforms from {@code solver}. Hand calculations here
- * are the ones an engineer writes down, and each cites its CHECKS label.
+ * are the ones an engineer writes down, and each cites its check-values.md label.
  */
 package org.armature.analysis;

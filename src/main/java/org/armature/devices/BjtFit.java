@@ -83,7 +83,7 @@ public final class BjtFit {
 
     /**
      * IS such that the model has the stated VBE(sat) at the stated IC with IB = IC / forced
-     * gain (datasheets state VBE(sat) at IC/IB = 10 or 20; CHECKS BJ-15).
+     * gain (datasheets state VBE(sat) at IC/IB = 10 or 20; check-values.md BJ-15).
      *
      * @param base starting parameters (BF should already be fitted)
      * @param vbeSatVolts stated VBE(sat), volts (negative for a PNP)

@@ -4,7 +4,7 @@ package org.armature.devices;
  * Avalanche breakdown of a switch at its rated voltage (BJT collector–emitter VCEO, MOSFET
  * drain–source V(BR)DSS), for a transient solver to put in parallel with the switch so that an
  * unsuppressed coil's kickback is clamped near the rating instead of rising to kilovolts
- * (CHECKS SU-0, SU-6). It uses the smooth breakdown form of the {@link Diode} model:
+ * (check-values.md SU-0, SU-6). It uses the smooth breakdown form of the {@link Diode} model:
  * <pre>
  *   i(v) = IBV·[e^((v − VR)/Vs) − e^(−VR/Vs)]
  * </pre>

@@ -4,7 +4,7 @@ package org.armature.devices;
  * A logic output pin as a Thevenin source, V = V0 − Rout·I with I the current sourced by the
  * pin, fitted to two points of the datasheet's output-voltage table (VOH at two load currents,
  * or VOL at two sink currents with negative I). Valid only between the two fitted currents
- * (CHECKS GP-7); the pin's absolute-maximum current and its package total are separate limits.
+ * (check-values.md GP-7); the pin's absolute-maximum current and its package total are separate limits.
  *
  * @param openCircuitVolts V0, volts, finite
  * @param outputResistanceOhms Rout, ohms, positive

@@ -1,7 +1,7 @@
 package org.armature.devices;
 
 /**
- * Pick-up (must-operate) and drop-out (must-release) coil currents (IEC 61810-1 terms, CHECKS
+ * Pick-up (must-operate) and drop-out (must-release) coil currents (IEC 61810-1 terms, check-values.md
  * RC-1), the minimal relay model: the armature operates at or above pick-up, releases at or
  * below drop-out, and keeps its state in between. Thresholds are currents, not voltages,
  * because ampere-turns move the armature; a datasheet voltage V at temperature T0 becomes

@@ -9,7 +9,7 @@ package org.armature.netlist;
  * @param outputKneeCurrentAmps IKF of the output transistor Q2, A; default 0.15 A (from memory).
  *     Together with the channel's part-sheet typicals (IS 3e-14 A, output resistance 1.3 Ω in the
  *     joined collector lead) the model's VCE(sat) with the datasheet test input currents is
- *     0.95 / 1.12 / 1.35 V at 100 / 200 / 350 mA, near the class typicals of CHECKS.md DA-2
+ *     0.95 / 1.12 / 1.35 V at 100 / 200 / 350 mA, near the class typicals of check-values.md DA-2
  *     (0.9 / 1.1 / 1.3 V) and inside typ..max at each current
  * @param clampSaturationCurrentAmps IS of the clamp diode from the output to the common pin; default
  *     1e-12 A (an integrated junction diode; from memory)

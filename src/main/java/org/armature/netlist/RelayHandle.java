@@ -10,7 +10,7 @@ import org.armature.devices.RelayThresholds;
  * <p>Pick-up and drop-out are currents, not voltages: the armature responds to ampere-turns, so the
  * datasheet's must-operate and must-release voltages at the reference temperature are divided by
  * the coil resistance at that temperature, and a hot coil needs a higher voltage for the same
- * current (relay makers' temperature notes; CHECKS.md RC-7).
+ * current (relay makers' temperature notes; check-values.md RC-7).
  *
  * @param ref relay designator
  * @param coil the coil element

@@ -2,7 +2,7 @@ package org.armature.solver;
 
 /**
  * The fallbacks when plain Newton fails (Trajković, "DC operating points of transistor circuits",
- * NOLTA IEICE 2012; CHECKS.md NM-5): gmin stepping, a conductance from every node to ground
+ * NOLTA IEICE 2012; check-values.md NM-5): gmin stepping, a conductance from every node to ground
  * lowered decade by decade, then source stepping, every independent source ramped from 0 to 100 %.
  *
  * @param gminStartSiemens first shunt conductance, S; default 1e-3 S (stronger than any junction

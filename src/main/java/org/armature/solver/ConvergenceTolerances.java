@@ -1,7 +1,7 @@
 package org.armature.solver;
 
 /**
- * When a Newton iterate counts as converged (CHECKS.md NM-6, common practice): every node voltage
+ * When a Newton iterate counts as converged (check-values.md NM-6, common practice): every node voltage
  * step |Δv| ≤ reltol·|v| + vntol, every branch current step |Δi| ≤ reltol·|i| + abstol, and every
  * KCL residual ≤ reltol·(sum of the magnitudes of the currents meeting there) + abstol.
  *

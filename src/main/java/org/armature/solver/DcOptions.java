@@ -19,7 +19,7 @@ import org.armature.netlist.RegionThresholds;
  * @param warmStart when a solve has no start guess of its own, start Newton from the last solution
  *     of the same stage topology and pin state (the live editor re-solves after each small edit);
  *     default true. False makes every such solve a cold start from 0 V, as on a fresh engine. Both
- *     reach the same operating point within the convergence tolerances (CHECKS.md NM-6); relay
+ *     reach the same operating point within the convergence tolerances (check-values.md NM-6); relay
  *     contact states never carry over into the result (only {@link SolveOptions#previousRelayOperated}
  *     does that): the last solve's contacts are only the first guess of the relay loop, kept when the
  *     coil currents show that a start with released contacts settles in the same state

@@ -7,7 +7,7 @@ import org.armature.netlist.StampContext;
  * One DC solve of a netlist with its fallbacks: plain Newton from the start point, then gmin
  * stepping (a shunt from every node to ground, 1e-3 S lowered by decades to 1e-12 S, then removed),
  * then source stepping (all sources ramped 0 → 100 % with an adaptive step), after Trajković,
- * "DC operating points of transistor circuits", NOLTA IEICE 2012 (CHECKS.md NM-5).
+ * "DC operating points of transistor circuits", NOLTA IEICE 2012 (check-values.md NM-5).
  *
  * <p>Reusable by the transient engine for its initial point. Allocates its work arrays once.
  * One instance serves one thread.

@@ -219,7 +219,7 @@ public final class NewtonSolver {
      * Residual r = A·x − b at the stamped linearisation; records the largest node residual.
      *
      * <p>The scale of a node row is the sum of the magnitudes of the currents meeting there
-     * (CHECKS.md NM-6), taken from the row in shifted form: Σ_j a_ij·x_j = (Σ_j a_ij)·x_i +
+     * (check-values.md NM-6), taken from the row in shifted form: Σ_j a_ij·x_j = (Σ_j a_ij)·x_i +
      * Σ_{j≠i} a_ij·(x_j − x_i) over the node columns, so a conductance between two nodes counts the
      * current through it, g·(x_j − x_i), not g times the nodes' absolute voltages (which would let a
      * junction between two 20 V nodes pass with a residual far above its own current).

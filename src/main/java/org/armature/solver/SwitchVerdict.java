@@ -7,7 +7,7 @@ package org.armature.solver;
  * <p>Margins (≥ 1 means fully on at the worst-case datasheet figure):
  * <ul>
  * <li>bipolar: hFE(min)·IB / IC — the base current available over the base current the minimum
- *     gain needs for the collector current (sizing with hFE(min): common practice, CHECKS.md BJ-19);</li>
+ *     gain needs for the collector current (sizing with hFE(min): common practice, check-values.md BJ-19);</li>
  * <li>Darlington channel: hFE(min)·IIN / IC, the same with the channel's input current;</li>
  * <li>N-MOSFET: (VGS − VGS(th)max) / [(VGS,spec − VGS(th)max) + ID·RDS(on)/2]. The datasheet
  *     guarantees RDS(on) at VGS,spec for any threshold up to VGS(th)max. Seen as a square-law

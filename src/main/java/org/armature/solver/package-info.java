@@ -9,7 +9,7 @@
  *
  * <h2>Choosing the tolerances</h2>
  * <ul>
- * <li>{@link org.armature.solver.ConvergenceTolerances} (CHECKS.md NM-6): reltol 1e-3 gives three
+ * <li>{@link org.armature.solver.ConvergenceTolerances} (check-values.md NM-6): reltol 1e-3 gives three
  *     significant figures, more than any datasheet figure the stage is built from; tighten to 1e-6
  *     only to compare against a closed form to more digits (the reference-circuit tests keep the
  *     default). vntol 1 µV is below any meter; raise it to 1 mV for a fast, rough sweep. abstol 1 pA

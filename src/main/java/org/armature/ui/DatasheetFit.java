@@ -32,7 +32,7 @@ import org.armature.ui.edit.Editor;
  *       RDS(on) at a stated VGS and ID; the datasheet figures VGS(th), RDS(on) and its VGS are written
  *       as entered.</li>
  *   <li>Drive pin: high level and output resistance by {@link LogicOutputPin#fromTwoPoints} from VOH at
- *       two sourced currents (CHECKS GP-7).</li>
+ *       two sourced currents (check-values.md GP-7).</li>
  * </ul>
  * A fit that cannot be made, or whose result lies outside a parameter's range, is a refusal with a
  * message for the user, never an exception.

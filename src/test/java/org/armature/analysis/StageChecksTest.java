@@ -51,7 +51,7 @@ class StageChecksTest {
     }
 
     @Test
-    @DisplayName("peak switch voltage, static estimate: VS,max + VF = 13.2 + 0.7 = 13.9 V (derived, CHECKS suppression)")
+    @DisplayName("peak switch voltage, static estimate: VS,max + VF = 13.2 + 0.7 = 13.9 V (derived, check-values.md suppression)")
     void staticSwitchVoltage() {
         CheckResult c = darlington.check("rating.switch-voltage").orElseThrow();
         assertEquals(13.9, c.value(), 1e-9);

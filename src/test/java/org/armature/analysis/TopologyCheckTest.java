@@ -61,7 +61,7 @@ class TopologyCheckTest {
             expected.add("topology.suppressor-missing");
         }
         if (t == StageTemplate.HIGH_SIDE_PNP && d == HighSideDrive.DIRECT) {
-            // CHECKS "beyond the hand calculation" 4: a 3.5 V pin cannot turn off a PNP on 12 V
+            // check-values.md "beyond the hand calculation" 4: a 3.5 V pin cannot turn off a PNP on 12 V
             expected.add("topology.high-side-cannot-turn-off");
         }
         assertEquals(expected, problemKeys(stage));

@@ -47,7 +47,7 @@ class SimulateCommandTest {
         assertEquals(List.of("peakSwitchVoltage", "peakCoilReverseVoltage", "decayToReleaseCurrent", "decayToZero",
                 "releaseTime", "operateTime", "suppressorEnergy", "switchEnergy", "switchBreakdown"),
                 iterate(m));
-        // 12 V rail plus a rectifier's forward drop at ~30 mA (CHECKS: switch peak = Vsupply + Vc)
+        // 12 V rail plus a rectifier's forward drop at ~30 mA (check-values.md: switch peak = Vsupply + Vc)
         assertEquals(12.8, m.get("peakSwitchVoltage").asDouble(), 0.3);
         assertTrue(m.get("operateTime").isNull(), "no turn-on edge in an off run");
         assertEquals(false, m.get("switchBreakdown").asBoolean());

@@ -93,7 +93,7 @@ class SolveCommandTest {
     @ParameterizedTest(name = "{0} stage {1}")
     @MethodSource("exampleStages")
     @DisplayName("every example stage solves; pin high operates the relay, pin low releases it, except the "
-            + "direct-drive comparison, which cannot turn off (common practice, CHECKS.md item 4)")
+            + "direct-drive comparison, which cannot turn off (common practice, check-values.md item 4)")
     void examplesSolve(Path example, int stage, String name) throws Exception {
         CliRun high = CliRun.of("solve", example.toString(), "--stage", Integer.toString(stage), "--json",
                 "--pin-state", "high");

@@ -20,10 +20,10 @@ class RelayThresholdsTest {
             43.6, OPERATED
             32.8, OPERATED
             20.0, EITHER
-             4.4, EITHER
-             4.3, RELEASED
-             0.0, RELEASED
-           -40.0, OPERATED
+            4.4, EITHER
+            4.3, RELEASED
+            0.0, RELEASED
+            -40.0, OPERATED
             """)
     void classify(double milliamps, ArmaturePosition expected) {
         assertEquals(expected, RELAY.classify(milliamps * 1e-3));

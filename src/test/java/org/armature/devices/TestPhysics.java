@@ -3,7 +3,7 @@ package org.armature.devices;
 /** Test-side constants and conversions (kept independent of the product code on purpose). */
 final class TestPhysics {
 
-    /** k/q with the exact SI 2019 constants, V/K (CHECKS.md constants). */
+    /** k/q with the exact SI 2019 constants, V/K (check-values.md constants). */
     static final double K_OVER_Q = 1.380649e-23 / 1.602176634e-19;
     static final double ZERO_CELSIUS_KELVIN = 273.15;
 

@@ -64,7 +64,7 @@ class ReadoutBuilderTest {
         OperatingPoint op = new DcAnalysis().solve(STAGE);
         Annotations a = ReadoutBuilder.build(STAGE, op, List.of());
         PartResult q1 = op.requirePart("Q1");
-        // derived: margin = hFE(min) · IB / IC (CHECKS BJ-19, common practice)
+        // derived: margin = hFE(min) · IB / IC (check-values.md BJ-19, common practice)
         double margin = STAGE.require("Q1").value("hfeMin") * q1.quantity("ib") / q1.quantity("ic");
         Annotations.PartBadge b = badge(a, "Q1").orElseThrow();
         assertEquals("saturated, ×" + String.format(Locale.ROOT, "%.2g", margin) + " margin", b.text());

@@ -22,7 +22,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
-/** Reference circuits of CHECKS.md solved through the full engine. */
+/** Reference circuits of check-values.md solved through the full engine. */
 class ReferenceCircuitsTest {
 
     private final DcAnalysis dc = new DcAnalysis();
@@ -201,7 +201,7 @@ class ReferenceCircuitsTest {
         assertEquals(ic, u.quantity("ic"), 0.05 * ic);
         double vce = u.quantity("vce");
         // DA-2: typ 0.9 / 1.1 / 1.3 V, max 1.1 / 1.3 / 1.6 V (common datasheet values for 7-channel
-        // Darlington arrays, CHECKS DA-2). With the part's typical channel values (IS 3e-14 A, output
+        // Darlington arrays, check-values.md DA-2). With the part's typical channel values (IS 3e-14 A, output
         // resistance 1.3 Ω) the model gives about 0.95 / 1.12 / 1.35 V: within typ..max at each current.
         assertTrue(vce >= vceTyp && vce <= vceMax,
                 "VCE(sat) " + vce + " V at " + ic + " A, DA-2 band " + vceTyp + " .. " + vceMax + " V");

@@ -40,7 +40,7 @@ class SweepTest {
     }
 
     @Test
-    @DisplayName("ambient sweep: a hot coil draws less current (copper +0.39 %/K, CHECKS.md practitioners' item 2)")
+    @DisplayName("ambient sweep: a hot coil draws less current (copper +0.39 %/K, check-values.md practitioners' item 2)")
     void ambientSweep() {
         DcSweep sweep = new DcAnalysis().sweep(Templates.defaultStage(),
                 SweepSpec.linear(SweepVariable.ambient(), -20, 80, 6));

@@ -42,7 +42,7 @@ class TemplatesSolveTest {
         PartResult k = op.requirePart("K1");
         // the high-side direct-drive variant exists to show the classic mistake: a 3.3 V pin cannot
         // pull the PNP's base up to a 12 V emitter, so the relay stays operated with the pin low
-        // (CHECKS.md, "what practitioners need", item 4; common practice)
+        // (check-values.md, "what practitioners need", item 4; common practice)
         boolean expectOperated = high || d == HighSideDrive.DIRECT && t == StageTemplate.HIGH_SIDE_PNP;
         String expected = expectOperated ? "operated" : "released";
         assertEquals(expected, k.state("state"), () -> k.quantities().toString());

@@ -47,7 +47,7 @@ class LiveWindowTest {
 
     /**
      * The window's engine warm-starts from its last solution, a fresh engine starts cold: both stop
-     * inside the convergence test (CHECKS NM-6, common practice: reltol 1e-3, vntol 1 µV), so they
+     * inside the convergence test (check-values.md NM-6, common practice: reltol 1e-3, vntol 1 µV), so they
      * agree to a few microvolts, not bit for bit.
      */
     private static final double NM6_VOLTS = 1e-5;

@@ -141,7 +141,7 @@ class ESeriesTest {
     }
 
     @Test
-    @DisplayName("BJ-16 / CHECKS 'beyond the hand calculation' 6: 2.143 kΩ rounds down to 1.8 kΩ in E12")
+    @DisplayName("BJ-16 / check-values.md 'beyond the hand calculation' 6: 2.143 kΩ rounds down to 1.8 kΩ in E12")
     void baseResistorRoundsDown() {
         assertEquals(1800.0, ESeries.E12.roundDown(2143), 0.0);
         assertEquals(2000.0, ESeries.E24.roundDown(2143), 0.0);

@@ -11,7 +11,7 @@ import org.junit.jupiter.params.provider.ValueSource;
 
 class PhysicalConstantsTest {
 
-    /** CHECKS.md values are given to 4 decimals in mV: half a unit of the last place. */
+    /** check-values.md values are given to 4 decimals in mV: half a unit of the last place. */
     private static final double HALF_LAST_PLACE_VOLTS = 0.5e-7;
 
     @Test

@@ -6,7 +6,7 @@ import java.util.List;
 /**
  * What the logic pin does during a run: ideal edges between its low and high level. Each edge is a
  * discontinuity of the drive; the engine puts a time point on it and restarts the integration with
- * backward Euler just after it (CHECKS NM-7). The run starts from the DC operating point of the
+ * backward Euler just after it (check-values.md NM-7). The run starts from the DC operating point of the
  * level before the first edge.
  */
 public sealed interface DriveWaveform permits DriveWaveform.TurnOn, DriveWaveform.TurnOff, DriveWaveform.Pulse,

@@ -11,7 +11,7 @@ package org.armature.solver.timedomain;
  *
  * <p>Choice: {@link #TRAPEZOIDAL} is the most accurate for lightly damped ringing (it does not
  * damp an undamped oscillator) but its one-step factor tends to −1 for steps long against a time
- * constant (CHECKS NM-7), so the engine restarts with {@link #BACKWARD_EULER} after each
+ * constant (check-values.md NM-7), so the engine restarts with {@link #BACKWARD_EULER} after each
  * discontinuity. {@link #BDF2} damps such modes (L-stable) at the price of some numerical damping
  * of real ringing.
  */

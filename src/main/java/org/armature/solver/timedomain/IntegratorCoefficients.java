@@ -17,7 +17,7 @@ package org.armature.solver.timedomain;
  * @param b1 coefficient of the derivative at the last accepted point, dimensionless (−1 for the
  *     trapezoidal rule, else zero)
  * @param lteConstant local truncation error of the new value per unit (p+1)-th derivative, s^(p+1):
- *     Dahlquist's error constant times h^(p+1), signed as in CHECKS NM-9 (BE +h²/2, TR −h³/12,
+ *     Dahlquist's error constant times h^(p+1), signed as in check-values.md NM-9 (BE +h²/2, TR −h³/12,
  *     BDF2 −2/9·h³); step control uses only its magnitude
  */
 public record IntegratorCoefficients(IntegrationMethod method, double a0, double a1, double a2, double b1,

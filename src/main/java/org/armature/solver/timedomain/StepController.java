@@ -1,7 +1,7 @@
 package org.armature.solver.timedomain;
 
 /**
- * The step-size rule {@code h_new = h·0.9·(tol/|E|)^(1/(p+1))} (CHECKS NM-10, common practice; the
+ * The step-size rule {@code h_new = h·0.9·(tol/|E|)^(1/(p+1))} (check-values.md NM-10, common practice; the
  * exponent follows from E ∝ h^(p+1)), bounded so a step neither grows too fast nor collapses after
  * one bad estimate. Stateless apart from its options; thread-safe.
  */

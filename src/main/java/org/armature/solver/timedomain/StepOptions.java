@@ -8,7 +8,7 @@ package org.armature.solver.timedomain;
  * linkage, armature gap) must satisfy {@code |E| ≤ relativeTolerance·max(|x(n+1)|, |x(n)|) + abs},
  * where abs is the absolute tolerance of the state's unit. The next step is
  * {@code h·safetyFactor·(1/r)^(1/(p+1))} with r the largest ratio |E|/tolerance over the states
- * (CHECKS NM-10), bounded by {@link #minShrinkFactor} and {@link #maxGrowthFactor}. Tightening
+ * (check-values.md NM-10), bounded by {@link #minShrinkFactor} and {@link #maxGrowthFactor}. Tightening
  * {@link #relativeTolerance} tenfold costs about 10^(1/3) ≈ 2.2 times the steps with a second-order
  * method.
  *
@@ -23,7 +23,7 @@ package org.armature.solver.timedomain;
  * @param absoluteMetresTolerance absolute LTE tolerance for the armature gap, metres; default 1e-8
  *     (0.003 % of a 0.3 mm travel)
  * @param safetyFactor factor on the optimal step, dimensionless in (0, 1); default 0.9 (common practice,
- *     CHECKS NM-10)
+ *     check-values.md NM-10)
  * @param maxGrowthFactor largest ratio of a step to the one before, > 1; default 2 (keeps the variable-step
  *     formulas well conditioned)
  * @param minShrinkFactor smallest ratio of a retried step to the rejected one, in (0, 1); default 0.1
@@ -36,11 +36,11 @@ package org.armature.solver.timedomain;
  *     armature at a stop) is placed in time, seconds; default 1e-7 (0.01 % of a millisecond relay time)
  * @param newtonMaxIterations Newton iterations per time point before the step is cut; default 40
  * @param newtonRelativeTolerance Newton update test, relative; default 1e-3, the DC engine's reltol
- *     (CHECKS NM-6; common practice: circuit simulators test the time points with the same reltol as the
+ *     (check-values.md NM-6; common practice: circuit simulators test the time points with the same reltol as the
  *     operating point). The test applies to the last update, and Newton's quadratic convergence leaves
  *     an error far below it, under the truncation error the step control accepts
- * @param newtonAbsoluteVolts Newton update test for node voltages, volts; default 1e-6 (CHECKS NM-6 vntol)
- * @param newtonAbsoluteAmps Newton update test for branch currents, amperes; default 1e-12 (CHECKS NM-6 abstol)
+ * @param newtonAbsoluteVolts Newton update test for node voltages, volts; default 1e-6 (check-values.md NM-6 vntol)
+ * @param newtonAbsoluteAmps Newton update test for branch currents, amperes; default 1e-12 (check-values.md NM-6 abstol)
  * @param newtonFailureShrinkFactor step factor after a Newton failure, in (0, 1); default 0.125
  * @param maxSteps safety limit on accepted plus rejected steps; default 2,000,000
  */

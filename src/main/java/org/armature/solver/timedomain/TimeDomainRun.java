@@ -15,7 +15,7 @@ import org.armature.solver.NewtonSolver;
 
 /**
  * The step loop of one run: DC operating point, then time points under local-truncation-error
- * control (CHECKS NM-9, NM-10), a time point on every breakpoint (drive edges, ends of armature
+ * control (check-values.md NM-9, NM-10), a time point on every breakpoint (drive edges, ends of armature
  * transit) with a backward-Euler restart after each (NM-7), and relay thresholds located in time by
  * {@link EventLocator} within {@link StepOptions#eventTimeToleranceSeconds()}. Moving armatures
  * ({@link ArmatureDynamics}) are solved with the circuit at every time point (staggered fixed
@@ -174,7 +174,7 @@ final class TimeDomainRun {
      * The fallback of a failed time point: the same solve with {@link #FALLBACK_SHUNT_SIEMENS} from
      * every node to ground, which gives a node that only reverse-biased junctions touch (between a
      * blocking diode and a blocking zener, for example) a defined voltage (after the gmin practice of
-     * CHECKS NM-5). The run without the shunt is always tried first, so converging points are
+     * check-values.md NM-5). The run without the shunt is always tried first, so converging points are
      * unchanged.
      */
     private boolean shunted(NewtonSolver s, double[] trial, StampContext ctx) {
@@ -475,7 +475,7 @@ final class TimeDomainRun {
         }
         boolean ok = newton(x, StampContext.DC);
         if (!ok) {
-            // source stepping (CHECKS NM-5): bring the sources up from 10 % in ten steps
+            // source stepping (check-values.md NM-5): bring the sources up from 10 % in ten steps
             java.util.Arrays.fill(x, 0);
             ok = true;
             for (int i = 1; i <= 10 && ok; i++) {
@@ -626,7 +626,7 @@ final class TimeDomainRun {
 
     /**
      * Whether the trapezoidal rule is ringing point to point on a mode far faster than the step (a
-     * capacitor meeting a diode that has just switched on), which it never damps (CHECKS NM-7): some
+     * capacitor meeting a diode that has just switched on), which it never damps (check-values.md NM-7): some
      * reactive element's committed derivative (a capacitor's current, a coil's voltage) has changed
      * sign on each of the last three steps, by more than {@link #RINGING_TOLERANCE_MULTIPLE} times its
      * absolute tolerance each time. A ring the step resolves never alternates every step. Called after
@@ -660,7 +660,7 @@ final class TimeDomainRun {
      * {@link #REVERSAL_FRACTION} of the larger, and more than {@link #RINGING_TOLERANCE_MULTIPLE}
      * absolute tolerances): the current of a mode far faster than the step (a winding capacitance
      * meeting a freewheeling diode that has just switched on), which the trapezoidal rule reflects
-     * instead of following (CHECKS NM-7). A current the step resolves passes through zero gradually.
+     * instead of following (check-values.md NM-7). A current the step resolves passes through zero gradually.
      */
     private boolean unresolvedReversal(double[] trial) {
         view.bind(trial, states);

@@ -2,7 +2,7 @@ package org.armature.solver.timedomain;
 
 /**
  * Local truncation error estimates from the accepted history, by divided differences
- * (CHECKS NM-9: BE h²/2·x'', TR −h³/12·x''', BDF2 −2/9·h³·x''' at equal steps; Dahlquist 1963,
+ * (check-values.md NM-9: BE h²/2·x'', TR −h³/12·x''', BDF2 −2/9·h³·x''' at equal steps; Dahlquist 1963,
  * Gear 1971).
  *
  * <p>The (p+1)-th derivative is estimated as {@code (p+1)!} times the divided difference through the

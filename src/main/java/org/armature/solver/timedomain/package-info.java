@@ -16,7 +16,7 @@
  * published alternative to the backward-Euler restart used here; it is not implemented. Each time
  * point is solved by the solver package's Newton loop on the modified nodal equations (Ho, Ruehli
  * and Brennan, IEEE Trans. CAS-22, 1975). The local truncation error is estimated from divided
- * differences of the accepted history (CHECKS NM-9) and the step follows
+ * differences of the accepted history (check-values.md NM-9) and the step follows
  * h_new = h·0.9·(tol/|E|)^(1/(p+1)) (NM-10). Every drive edge and every end of armature transit is
  * a time point, and the integration restarts with backward Euler after it, because the trapezoidal
  * rule's one-step factor tends to −1 for steps long against a time constant (NM-7). Relay pick-up
@@ -39,7 +39,7 @@
  * {@link org.armature.devices.RelayArmatureDatasheet} apply. Without an attracted inductance (0
  * or not above the released value) the relay keeps the constant-inductance threshold model: the
  * armature moves at the pick-up and drop-out currents and takes the datasheet transit times, so
- * the closed forms of CHECKS.md hold.
+ * the closed forms of check-values.md hold.
  *
  * <p>Choosing the tolerances ({@link org.armature.solver.timedomain.StepOptions}): the relative
  * tolerance (default 1e-3) applies to the largest magnitude each state has reached, so a decaying or

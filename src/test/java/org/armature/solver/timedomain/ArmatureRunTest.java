@@ -27,7 +27,7 @@ class ArmatureRunTest {
     private static final double DROP_OUT_AMPS = 0.10 * VOLTS / OHMS;
     private static final double EDGE = 1e-3;
 
-    /** The RC-13 relay: 275 Ω, 1.15 H released, 2.29 H attracted, travel 0.3 mm, ρ = 2 (CHECKS RC-13, DESIGN). */
+    /** The RC-13 relay: 275 Ω, 1.15 H released, 2.29 H attracted, travel 0.3 mm, ρ = 2 (check-values.md RC-13, DESIGN). */
     private static MovingArmature rc13() {
         return RelayArmatureFit.fit(RelayArmatureDatasheet.typical(OHMS, 1.15, 2.29, PICK_UP_AMPS, DROP_OUT_AMPS,
                 0.3e-3)).moving().orElseThrow();
@@ -94,14 +94,14 @@ class ArmatureRunTest {
     }
 
     @Test
-    @DisplayName("RC-13 relay, 12.7 V clamp (diode + 12 V zener): decay to drop-out about 5 ms (DESIGN.md; CHECKS closed form τ·ln((I0 + Vc/R)/(Ido + Vc/R)) = 4.79 ms, derived)")
+    @DisplayName("RC-13 relay, 12.7 V clamp (diode + 12 V zener): decay to drop-out about 5 ms (DESIGN.md; check-values.md closed form τ·ln((I0 + Vc/R)/(Ido + Vc/R)) = 4.79 ms, derived)")
     void rc13ZenerDecay() {
         TimeDomainCircuit c = Circuits.armature(VOLTS, rc13(), 1e-3, 1e9, false, 12.7, true);
         TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOff(EDGE), 0.008, StepOptions.DEFAULTS);
         double tau = 2.29 / OHMS;
         double i0 = VOLTS / (OHMS + 1e-3);
         double vcOverR = 12.7 / OHMS;
-        double expected = tau * Math.log((i0 + vcOverR) / (DROP_OUT_AMPS + vcOverR)); // CHECKS "Suppression and kickback"
+        double expected = tau * Math.log((i0 + vcOverR) / (DROP_OUT_AMPS + vcOverR)); // check-values.md "Suppression and kickback"
         assertEquals(expected, r.metrics().decayToReleaseCurrentSeconds(), 0.01 * expected);
     }
 

@@ -34,7 +34,7 @@ class ClosedFormTest {
     }
 
     @ParameterizedTest(name = "Vc = {0} V")
-    @DisplayName("decay through a constant clamp: i = (I0 + Vc/R)e^(−t/τ) − Vc/R, t0 = τ·ln(1 + I0·R/Vc) (CHECKS, derived)")
+    @DisplayName("decay through a constant clamp: i = (I0 + Vc/R)e^(−t/τ) − Vc/R, t0 = τ·ln(1 + I0·R/Vc) (check-values.md, derived)")
     @CsvSource(textBlock = """
             12
             24
@@ -50,7 +50,7 @@ class ClosedFormTest {
             assertEquals(expected, w.valueAt("coil current", EDGE + t), 2e-3 * I0, "t = " + t);
         }
         assertEquals(t0, r.metrics().decayToZeroSeconds(), 2e-3 * t0); // derived, bound: 0.1 % zero threshold + LTE
-        assertEquals(Circuits.VOLTS + vc, r.metrics().peakSwitchVolts(), 0.01); // CHECKS: switch peak = Vsupply + Vc
+        assertEquals(Circuits.VOLTS + vc, r.metrics().peakSwitchVolts(), 0.01); // check-values.md: switch peak = Vsupply + Vc
     }
 
     @Test

@@ -22,7 +22,7 @@ class StageRunTest {
 
     @ParameterizedTest
     @EnumSource(StageTemplate.class)
-    @DisplayName("every template with its diode: switch peak = supply + about one forward drop (CHECKS: Vsupply + Vc)")
+    @DisplayName("every template with its diode: switch peak = supply + about one forward drop (check-values.md: Vsupply + Vc)")
     void everyTemplateWithDiode(StageTemplate t) {
         TransientMetrics m = off(t, Suppressor.DIODE).metrics();
         assertEquals(12.75, m.peakSwitchVolts(), 0.25); // 12 V + VF of a rectifier at ~30 mA (common practice)
@@ -76,7 +76,7 @@ class StageRunTest {
     void zenerFaster() {
         TransientMetrics dz = off(StageTemplate.LOW_SIDE_NPN, Suppressor.DIODE_ZENER).metrics();
         TransientMetrics d = off(StageTemplate.LOW_SIDE_NPN, Suppressor.DIODE).metrics();
-        assertEquals(24.8, dz.peakSwitchVolts(), 0.5); // 12 + 12 + ~0.8 V (CHECKS: Vsupply + Vc)
+        assertEquals(24.8, dz.peakSwitchVolts(), 0.5); // 12 + 12 + ~0.8 V (check-values.md: Vsupply + Vc)
         assertTrue(d.decayToReleaseCurrentSeconds() > 2.5 * dz.decayToReleaseCurrentSeconds(),
                 d.decayToReleaseCurrentSeconds() + " vs " + dz.decayToReleaseCurrentSeconds());
     }
@@ -119,7 +119,7 @@ class StageRunTest {
         // the clamp carries the coil current at the edge (a freewheeling path: common practice); no
         // trapezoidal overshoot when the clamp switches on (NM-7): within 10 %
         assertEquals(onAmps, m.peakSuppressorAmps(), 0.1 * onAmps);
-        // energy left after the winding's own loss goes into the clamp (CHECKS energy balance, derived):
+        // energy left after the winding's own loss goes into the clamp (check-values.md energy balance, derived):
         // at least 9 % of ½LI², against a switch that only sees its saturated drop
         assertTrue(m.suppressorEnergyJoules() > 0.09 * m.storedEnergyJoules(), m.toString());
         assertTrue(m.switchEnergyJoules() < 1e-3 * m.suppressorEnergyJoules(), m.toString());
