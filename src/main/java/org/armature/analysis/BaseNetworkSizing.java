@@ -1,5 +1,7 @@
 package org.armature.analysis;
 
+import org.armature.model.DriverTopology;
+import org.armature.model.StageRoles;
 import static org.armature.analysis.Quantities.volts;
 import static org.armature.analysis.Quantities.amps;
 import static org.armature.analysis.Quantities.ohms;

@@ -1,5 +1,6 @@
 package org.armature.analysis;
 
+import org.armature.model.DriverTopology;
 import java.util.List;
 import java.util.Optional;
 import org.armature.model.Finding;

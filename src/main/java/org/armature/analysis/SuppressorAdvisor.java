@@ -1,5 +1,6 @@
 package org.armature.analysis;
 
+import org.armature.model.StageRoles;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashMap;

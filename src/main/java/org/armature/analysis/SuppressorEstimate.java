@@ -1,5 +1,6 @@
 package org.armature.analysis;
 
+import org.armature.model.StageRoles;
 import java.util.List;
 import org.armature.model.Part;
 import org.armature.model.PartKind;

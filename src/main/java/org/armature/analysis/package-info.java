@@ -5,7 +5,7 @@
  * <p>Entry points, each returning immutable results and never throwing for bad user data:
  * <ul>
  * <li>{@link org.armature.analysis.TopologyCheck#check} / {@link org.armature.analysis.TopologyCheck#analyse}:
- *     which of the four driver stages was drawn ({@link org.armature.analysis.StageRoles}) and the
+ *     which of the four driver stages was drawn ({@link org.armature.model.StageRoles}) and the
  *     problems with stable {@code topology.*} keys, from connectivity alone;</li>
  * <li>{@link org.armature.analysis.BaseNetworkSizing#size}: the drive network values and the
  *     calculation as {@link org.armature.analysis.SizingStep}s, with the rules of

@@ -14,8 +14,9 @@ import java.util.TreeSet;
  *
  * <p>A pin or wire end connects to every wire segment passing through its grid point and to every
  * pin at the same point. A net is named by a ground symbol ({@value #GROUND}), else by a test point,
- * else numbered {@code n1, n2, ...} in order of the net's top-left point, so names are stable while
- * the drawing is unchanged.
+ * else by the role it plays in the stage ({@link StageRecognition}: {@code pin}, {@code control},
+ * {@code switch}, {@code supply}, {@code contact-common}, ...), else after one of its pins
+ * ({@code R5-b}). Names are stable while the drawing is unchanged and never depend on placement.
  *
  * @param netOfPin the net name of every pin of every part
  * @param netOfWire the net name of each wire, by index in {@link Stage#wires()}
@@ -53,8 +54,42 @@ public record Connectivity(Map<PinRef, String> netOfPin, List<String> netOfWire,
                 .toList();
     }
 
-    /** Finds the nets of a stage. */
+    /**
+     * Finds the nets of a stage and gives them the names people can find on a board (see the class
+     * comment). Recognises the stage's roles on the way: callers that need the roles too should
+     * call {@link StageRecognition#of(Stage)} once and take its connectivity.
+     */
     public static Connectivity of(Stage stage) {
+        return StageRecognition.of(stage).connectivity();
+    }
+
+    /**
+     * The same nets with names passed through {@code names}; names not in the map stay.
+     *
+     * @param names old name to new name; the new names must be distinct from each other and from
+     *     the names that stay
+     * @return the renamed connectivity
+     */
+    public Connectivity renamed(Map<String, String> names) {
+        if (names.isEmpty()) {
+            return this;
+        }
+        Map<PinRef, String> pins = new HashMap<>();
+        netOfPin.forEach((pin, net) -> pins.put(pin, names.getOrDefault(net, net)));
+        List<String> wires = netOfWire.stream().map(n -> names.getOrDefault(n, n)).toList();
+        Set<String> all = new TreeSet<>();
+        nets.forEach(n -> all.add(names.getOrDefault(n, n)));
+        List<String> ordered = new ArrayList<>();
+        ordered.add(GROUND);
+        all.stream().filter(n -> !n.equals(GROUND)).forEach(ordered::add);
+        return new Connectivity(pins, wires, ordered, nameConflicts);
+    }
+
+    /**
+     * The nets as drawn, before role names: ground, test points, and {@code n1, n2, ...} for the
+     * rest in order of each net's top-left point. {@link StageRecognition} works on these.
+     */
+    static Connectivity drawn(Stage stage) {
         Map<GridPoint, Integer> index = new LinkedHashMap<>();
         List<GridPoint> points = new ArrayList<>();
         for (Part part : stage.parts()) {

@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
-import org.armature.analysis.StageRoles;
+import org.armature.model.StageRoles;
 import org.armature.analysis.TopologyCheck;
 import org.armature.model.Connectivity;
 import org.armature.model.Part;

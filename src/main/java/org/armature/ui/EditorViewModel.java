@@ -13,7 +13,7 @@ import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
-import org.armature.analysis.StageRoles;
+import org.armature.model.StageRoles;
 import org.armature.analysis.Suggestion;
 import org.armature.analysis.TopologyCheck;
 import org.armature.io.StageFileException;

@@ -1,5 +1,7 @@
 package org.armature.analysis;
 
+import org.armature.model.RoleIssue;
+import org.armature.model.StageRoles;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -45,7 +47,7 @@ class TopologyCheckTest {
                 .map(Finding::key).collect(Collectors.toSet());
     }
 
-    private static Optional<TopologyIssue> issue(Stage stage, String key) {
+    private static Optional<RoleIssue> issue(Stage stage, String key) {
         return TopologyCheck.analyse(stage).issues().stream().filter(i -> i.finding().key().equals(key)).findFirst();
     }
 
@@ -105,7 +107,7 @@ class TopologyCheckTest {
     @DisplayName("removing the pull-down (or PNP pull-up) leaves a floating base or gate, naming the transistor")
     void removedPullIsFloating(StageTemplate t, String removed, String floating) {
         Stage stage = Fixtures.build(t).withoutPart(removed);
-        TopologyIssue i = issue(stage, "topology.floating-control").orElseThrow();
+        RoleIssue i = issue(stage, "topology.floating-control").orElseThrow();
         assertEquals(floating, i.finding().ref());
         assertEquals(Severity.WARNING, i.finding().severity());
         assertEquals(Set.of("topology.floating-control"), problemKeys(stage));
@@ -125,7 +127,7 @@ class TopologyCheckTest {
     void rotatedDiodeIsReversed(StageTemplate t) {
         Stage stage = Fixtures.build(t, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT).updatePart("D1",
                 p -> p.withPlacement(p.placement().rotated(p.placement().rotationDegrees() + 180)));
-        TopologyIssue i = issue(stage, "topology.suppressor-reversed").orElseThrow();
+        RoleIssue i = issue(stage, "topology.suppressor-reversed").orElseThrow();
         assertEquals("D1", i.finding().ref());
         assertEquals(Severity.ERROR, i.finding().severity());
         assertTrue(i.refs().contains("K1"));
@@ -171,7 +173,7 @@ class TopologyCheckTest {
                 .updatePart("U1", p -> p.with("highVolts", 13.5));
         assertEquals(Set.of(), problemKeys(stage));
         Stage lower = stage.updatePart("U1", p -> p.with("highVolts", 12.6));
-        TopologyIssue i = issue(lower, "topology.high-side-cannot-turn-off").orElseThrow();
+        RoleIssue i = issue(lower, "topology.high-side-cannot-turn-off").orElseThrow();
         assertEquals(List.of("Q1", "U1", "R1"), i.refs());
     }
 
@@ -179,7 +181,7 @@ class TopologyCheckTest {
     @DisplayName("no coil supply: an error naming the relay")
     void coilSupplyMissing() {
         Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN).withoutPart("V1");
-        TopologyIssue i = issue(stage, "topology.coil-supply-missing").orElseThrow();
+        RoleIssue i = issue(stage, "topology.coil-supply-missing").orElseThrow();
         assertEquals("K1", i.finding().ref());
         assertEquals(Severity.ERROR, i.finding().severity());
         Stage high = Fixtures.build(StageTemplate.HIGH_SIDE_PNP).withoutPart("V1");
@@ -190,7 +192,7 @@ class TopologyCheckTest {
     @DisplayName("no contact-side supply: the contact side is unpowered, naming K1 and the load")
     void contactSideUnpowered() {
         Stage stage = Fixtures.build(StageTemplate.LOW_SIDE_NPN).withoutPart("V2");
-        TopologyIssue i = issue(stage, "topology.contact-side-unpowered").orElseThrow();
+        RoleIssue i = issue(stage, "topology.contact-side-unpowered").orElseThrow();
         assertEquals(List.of("K1", "E1"), i.refs());
         assertTrue(TopologyCheck.recognise(stage).orElseThrow().contactSupplyRefs().isEmpty());
     }
@@ -271,7 +273,7 @@ class TopologyCheckTest {
     void neverThrowsOnEdits(int index, Stage stage) {
         TopologyReport report = TopologyCheck.analyse(stage);
         Set<String> refs = stage.parts().stream().map(Part::ref).collect(Collectors.toSet());
-        for (TopologyIssue i : report.issues()) {
+        for (RoleIssue i : report.issues()) {
             assertTrue(refs.containsAll(i.refs()), () -> index + ": " + i);
             assertEquals(i.refs().isEmpty() ? "" : i.refs().get(0), i.finding().ref());
         }

@@ -1,4 +1,4 @@
-package org.armature.analysis;
+package org.armature.model;
 
 /** The four driver stages the checks know how to judge (DESIGN.md, "Scope of the editor"). */
 public enum DriverTopology {
@@ -20,6 +20,16 @@ public enum DriverTopology {
     /** Human title, as used in messages. */
     public String title() {
         return title;
+    }
+
+    /** The kind of part that is the switch in this stage. */
+    public PartKind switchKind() {
+        return switch (this) {
+            case LOW_SIDE_NPN -> PartKind.NPN;
+            case LOW_SIDE_NMOS -> PartKind.NMOS;
+            case DARLINGTON_CHANNEL -> PartKind.DARLINGTON;
+            case HIGH_SIDE_PNP -> PartKind.PNP;
+        };
     }
 
     /** True when the switch sits between the coil and ground. */
