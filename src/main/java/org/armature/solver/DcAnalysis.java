@@ -5,9 +5,10 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import org.armature.model.Connectivity;
 import org.armature.model.Part;
 import org.armature.model.Stage;
+import org.armature.model.StageRecognition;
+import org.armature.model.StageRoles;
 import org.armature.netlist.ArraySolution;
 import org.armature.netlist.Element;
 import org.armature.netlist.FlattenOptions;
@@ -148,16 +149,17 @@ public final class DcAnalysis {
             return c;
         }
         boolean otherSame = other != null && sameTopology(other.stage, stage);
-        Connectivity conn;
+        // nets and roles depend on the structure only: found once per topology
+        StageRecognition conn;
         if (sameTopology) {
-            conn = c.connectivity;
+            conn = c.recognition;
         } else if (otherSame) {
-            conn = other.connectivity;
+            conn = other.recognition;
         } else {
-            conn = Connectivity.of(stage);
+            conn = StageRecognition.of(stage);
         }
-        Netlist nl = NetlistBuilder.flatten(stage, conn, fo);
-        TopologyCheck.check(nl);
+        Netlist nl = NetlistBuilder.flatten(stage, conn.connectivity(), fo);
+        DcPathCheck.check(nl);
         Compiled fresh = new Compiled(stage, fo, conn, nl, options);
         if (c != null && options.warmStart()) {
             fresh.seedFrom(c);
@@ -198,7 +200,9 @@ public final class DcAnalysis {
     private static final class Compiled implements StateUpdater {
         Stage stage;
         FlattenOptions flatten;
-        final Connectivity connectivity;
+        /** Nets and roles of the stage's structure; the switch of every operating point comes from here. */
+        final StageRecognition recognition;
+        final Optional<String> switchRef;
         Netlist netlist;
         final NewtonSolver newton;
         final DcStrategy strategy;
@@ -237,10 +241,11 @@ public final class DcAnalysis {
         private final double[] delta;
         private final ArraySolution deltaView;
 
-        Compiled(Stage stage, FlattenOptions flatten, Connectivity connectivity, Netlist netlist, DcOptions options) {
+        Compiled(Stage stage, FlattenOptions flatten, StageRecognition recognition, Netlist netlist, DcOptions options) {
             this.stage = stage;
             this.flatten = flatten;
-            this.connectivity = connectivity;
+            this.recognition = recognition;
+            this.switchRef = recognition.roles().map(StageRoles::switchRef);
             this.netlist = netlist;
             int n = Math.max(1, netlist.unknownCount());
             if (options.linearSolver() == DcOptions.LinearSolverKind.EJML) {
@@ -429,7 +434,7 @@ public final class DcAnalysis {
             System.arraycopy(states, 0, lastStates, 0, states.length);
             hasLast = true;
             return new OperatingPoint(netlist, x, states, settled, iterations, strategy.maxResidualAmps(), pinHigh,
-                    ambient, contactsFrom);
+                    ambient, contactsFrom, switchRef);
         }
 
         /**

@@ -41,7 +41,7 @@ public final class NewtonSolver {
     private int singularUnknown = -1;
 
     /**
-     * @param netlist the netlist (checked by the caller with {@link TopologyCheck})
+     * @param netlist the netlist (checked by the caller with {@link DcPathCheck})
      * @param options iteration limit, damping, tolerances
      */
     public NewtonSolver(Netlist netlist, NewtonOptions options) {

@@ -47,6 +47,8 @@ public final class OperatingPoint {
     private final boolean pinHigh;
     private final double ambientCelsius;
     private final String[] contactsFrom;
+    /** The switch found by the stage's roles ({@link org.armature.model.StageRecognition}); empty when none. */
+    private final Optional<String> switchRef;
 
     private Map<String, Double> nodeVoltages;
     private Map<String, PartResult> parts;
@@ -57,7 +59,8 @@ public final class OperatingPoint {
     private Optional<SwitchVerdict> verdict;
 
     OperatingPoint(Netlist netlist, double[] unknowns, double[] states, boolean converged, int iterations,
-                   double maxKclResidualAmps, boolean pinHigh, double ambientCelsius, String[] contactsFrom) {
+                   double maxKclResidualAmps, boolean pinHigh, double ambientCelsius, String[] contactsFrom,
+                   Optional<String> switchRef) {
         this.netlist = netlist;
         this.unknowns = unknowns.clone();
         this.states = states.clone();
@@ -67,6 +70,7 @@ public final class OperatingPoint {
         this.pinHigh = pinHigh;
         this.ambientCelsius = ambientCelsius;
         this.contactsFrom = contactsFrom.clone();
+        this.switchRef = switchRef;
     }
 
     /**
@@ -244,8 +248,8 @@ public final class OperatingPoint {
     }
 
     /**
-     * @return the verdict on the switch Q1 (the switch-kind part with a pin on the {@code switch}
-     *     net), empty when the stage has none
+     * @return the verdict on the switch the stage's roles name (whatever its designator, wherever it
+     *     is drawn, with or without test points), empty when the stage has none
      */
     public synchronized Optional<SwitchVerdict> switchVerdict() {
         if (verdict == null) {
@@ -297,16 +301,14 @@ public final class OperatingPoint {
     }
 
     private Optional<SwitchVerdict> computeVerdict() {
-        Integer switchNode = netlist.netNodes().get("switch");
-        if (switchNode == null) {
+        if (switchRef.isEmpty()) {
             return Optional.empty();
         }
-        for (PartNetwork p : netlist.parts()) {
-            if (p.part().kind().isSwitch() && p.pinNodes().containsValue(switchNode)) {
-                return Optional.of(verdictFor(p.part(), part(p.ref()).orElseThrow()));
-            }
+        int i = netlist.partIndex(switchRef.get());
+        if (i < 0) {
+            return Optional.empty();
         }
-        return Optional.empty();
+        return Optional.of(verdictFor(netlist.parts().get(i).part(), result(i)));
     }
 
     private static String amps(double a) {

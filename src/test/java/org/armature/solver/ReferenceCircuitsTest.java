@@ -132,7 +132,7 @@ class ReferenceCircuitsTest {
         b.add(new CurrentSource("IB", Netlist.GROUND, base, 1e-3));
         b.add(new CurrentSource("IC", Netlist.GROUND, coll, 10e-3));
         Netlist nl = b.build();
-        TopologyCheck.check(nl);
+        DcPathCheck.check(nl);
         NewtonSolver newton = new NewtonSolver(nl, NewtonOptions.DEFAULT);
         DcStrategy strategy = new DcStrategy(newton, ContinuationOptions.DEFAULT);
         double[] x = new double[nl.unknownCount()];

@@ -20,6 +20,8 @@ import org.armature.model.Connectivity;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
 import org.armature.model.Stage;
+import org.armature.model.StageRecognition;
+import org.armature.model.StageRoles;
 import org.armature.netlist.Capacitor;
 import org.armature.netlist.Element;
 import org.armature.netlist.FlattenOptions;
@@ -56,8 +58,11 @@ final class StageCircuit {
         Map<String, Boolean> operated = op.relayOperated();
         boolean anyOperated = operated.values().stream().anyMatch(Boolean::booleanValue);
         FlattenOptions fo = FlattenOptions.of(initialHigh, ambientCelsius).withRelayOperated(anyOperated);
-        // one connectivity for both drive levels (the geometry is the same)
-        Connectivity nets = Connectivity.of(stage);
+        // one recognition for both drive levels (the geometry is the same): nets, the coil, the switch
+        // and the suppressor come from the stage's roles
+        StageRecognition recognition = StageRecognition.of(stage);
+        Optional<StageRoles> stageRoles = recognition.roles();
+        Connectivity nets = recognition.connectivity();
         Netlist here = NetlistBuilder.flatten(stage, nets, fo);
         Netlist other = otherLevel(stage, nets, fo.withPinHigh(!initialHigh), here);
         Netlist low = initialHigh ? other : here;
@@ -100,7 +105,8 @@ final class StageCircuit {
                     caps.put(p.ref(), c.add(new TransientCapacitor(cap.label(), t[0], t[1], cap.farads(), c.step)));
                 } else if (e instanceof RelayCoil coil) {
                     TransientCoil tc = addCoil(c, p.part(), coil, states, here);
-                    if (firstCoil == null) {
+                    boolean theCoil = stageRoles.map(r -> r.relayRef().equals(p.ref())).orElse(firstCoil == null);
+                    if (theCoil) {
                         firstCoil = tc;
                         relayNet = pHere;
                     }
@@ -116,7 +122,7 @@ final class StageCircuit {
             }
         }
         if (firstCoil != null) {
-            roles(c, here, relayNet, firstCoil, caps);
+            roles(c, here, relayNet, firstCoil, caps, stageRoles);
         }
         return c;
     }
@@ -211,7 +217,7 @@ final class StageCircuit {
     }
 
     private static void roles(TimeDomainCircuit c, Netlist net, PartNetwork relay, TransientCoil coil,
-                              Map<String, TransientCapacitor> caps) {
+                              Map<String, TransientCapacitor> caps, Optional<StageRoles> stageRoles) {
         int a1 = coil.a1();
         int a2 = coil.a2();
         double ohms = coil.ohms();
@@ -229,14 +235,8 @@ final class StageCircuit {
         c.dropOutAmps = c.relays.isEmpty() ? c.armatures.get(0).model.dropOutAmps() : c.relays.get(0).dropOutAmps;
         // the inductance of the initial gap (attracted when the run starts operated)
         c.storedEnergyHenries = coil.henries();
-        // the switch that carries the coil current: the first switch part touching a coil net
-        PartNetwork sw = null;
-        for (PartNetwork p : net.parts()) {
-            if (p.part().kind().isSwitch() && (p.pinNodes().containsValue(a1) || p.pinNodes().containsValue(a2))) {
-                sw = p;
-                break;
-            }
-        }
+        // the switch that carries the coil current, as the stage's roles name it
+        PartNetwork sw = stageRoles.flatMap(r -> net.part(r.switchRef())).orElse(null);
         if (sw != null) {
             SwitchPins pins = switchPins(sw.part().kind());
             int hi = sw.pinNodes().get(pins.high());
@@ -265,7 +265,7 @@ final class StageCircuit {
             c.probes.add(new Probe("I(" + sw.ref() + ")", "A",
                     x -> memo.of(swFinal, x).pinCurrents().get(pins.high()) + clamp.current(x)));
         }
-        List<PartNetwork> chain = suppressorParts(net, a1, a2);
+        List<PartNetwork> chain = suppressorParts(net, stageRoles);
         List<Probe> powers = new ArrayList<>();
         if (channelClampPower != null) {
             powers.add(channelClampPower);
@@ -327,68 +327,17 @@ final class StageCircuit {
         return x -> p.read(x).pinCurrents().get(pin);
     }
 
-    /**
-     * The suppressor parts: parts of a suppressor kind on a chain from one coil net to the other
-     * whose inner nets join only suppressor parts (two per net).
-     */
-    static List<PartNetwork> suppressorParts(Netlist net, int a1, int a2) {
+    /** The parts of the suppressor chains across the coil, as the stage's roles name them, each once. */
+    static List<PartNetwork> suppressorParts(Netlist net, Optional<StageRoles> stageRoles) {
         List<PartNetwork> out = new ArrayList<>();
         Set<String> seen = new HashSet<>();
-        for (PartNetwork start : net.parts()) {
-            if (!start.part().kind().isSuppressorKind() || seen.contains(start.ref())) {
-                continue;
-            }
-            for (int end : List.of(a1, a2)) {
-                if (!start.pinNodes().containsValue(end)) {
-                    continue;
-                }
-                List<PartNetwork> chain = new ArrayList<>();
-                PartNetwork p = start;
-                int from = end;
-                int target = end == a1 ? a2 : a1;
-                boolean ok = false;
-                for (int guard = 0; guard < 8 && p != null; guard++) {
-                    chain.add(p);
-                    int to = otherNode(p, from);
-                    if (to == target) {
-                        ok = true;
-                        break;
-                    }
-                    if (to == a1 || to == a2 || to == Netlist.GROUND) {
-                        break;
-                    }
-                    PartNetwork next = null;
-                    int count = 0;
-                    for (PartNetwork q : net.parts()) {
-                        if (q != p && q.pinNodes().containsValue(to)) {
-                            count++;
-                            next = q;
-                        }
-                    }
-                    if (count != 1 || !next.part().kind().isSuppressorKind() || chain.contains(next)) {
-                        break;
-                    }
-                    from = to;
-                    p = next;
-                }
-                if (ok) {
-                    for (PartNetwork q : chain) {
-                        if (seen.add(q.ref())) {
-                            out.add(q);
-                        }
-                    }
+        for (List<StageRoles.Oriented> chain : stageRoles.map(StageRoles::coilChains).orElse(List.of())) {
+            for (StageRoles.Oriented o : chain) {
+                if (seen.add(o.ref())) {
+                    net.part(o.ref()).ifPresent(out::add);
                 }
             }
         }
         return out;
-    }
-
-    private static int otherNode(PartNetwork p, int node) {
-        for (int n : p.pinNodes().values()) {
-            if (n != node) {
-                return n;
-            }
-        }
-        return node;
     }
 }

@@ -13,9 +13,9 @@ import org.armature.netlist.Netlist;
  * reported by name rather than by a zero pivot: every node needs a DC path to ground (through
  * elements that conduct at DC), and no loop may consist only of voltage sources.
  */
-public final class TopologyCheck {
+public final class DcPathCheck {
 
-    private TopologyCheck() {
+    private DcPathCheck() {
     }
 
     /**
