@@ -11,6 +11,8 @@ import org.armature.model.HighSideDrive;
 import org.armature.model.Part;
 import org.armature.model.Severity;
 import org.armature.model.Stage;
+import org.armature.model.StageRecognition;
+import org.armature.model.StageRoles;
 import org.armature.model.StageDocument;
 import org.armature.model.StageTemplate;
 import org.armature.model.Suppressor;
@@ -138,7 +140,9 @@ final class NewCommand implements Callable<Integer> {
     }
 
     private Stage apply(Stage stage, StageValue v, double value, Suppressor supp, HighSideDrive d) {
-        String ref = v.role().ref(template, supp, d, stage).orElseThrow(() -> usage(v.optionName()
+        StageRoles roles = StageRecognition.of(stage).roles().orElseThrow(() -> new IllegalStateException(
+                "every template is a recognised stage: " + describe(supp, d)));
+        String ref = v.role().ref(stage, roles).orElseThrow(() -> usage(v.optionName()
                 + " does not apply to " + describe(supp, d) + ": it has no " + v.role().words() + "."));
         Part part = stage.require(ref);
         if (part.kind().param(v.key()).isEmpty()) {

@@ -14,6 +14,7 @@ import java.util.concurrent.Callable;
 import org.armature.io.StageFiles;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
+import org.armature.model.StageRecognition;
 import org.armature.solver.DcAnalysis;
 import org.armature.solver.OperatingPoint;
 import org.armature.solver.PartResult;
@@ -37,14 +38,18 @@ import picocli.CommandLine.Spec;
  * {"stage": "...", "pinState": "high", "ambientCelsius": 25,
  *  "converged": true, "iterations": 14, "maxKclResidualAmps": 1.2e-13,
  *  "nodes": {"control": 0.78, "pin": 3.31, "supply": 12, "switch": 0.07, ...},
+ *  "nets": {"control": "Q1's base (Q1.b, R1.b, R2.a)", "switch": "coil low side at Q1's collector (K1.a2, Q1.c)", ...},
  *  "parts": {"Q1": {"region": "saturation", "ic": 0.0299, "ib": 0.0025, "vce": 0.07, "vbe": 0.78,
  *                   "forcedBeta": 12, "power": 0.0041}, "K1": {...}, ...},
  *  "switch": {"ref": "Q1", "fullyOn": true, "margin": 8.1, "reason": "..."}}
  * }</pre>
  *
  * Each part lists its states (text) and quantities (numbers, SI units) under the keys of
- * {@link org.armature.netlist.PartNetwork}, sorted by key. {@code switch} is {@code null} when the
- * stage has no switch on the {@code switch} net.
+ * {@link org.armature.netlist.PartNetwork}, sorted by key. Net names are the stage's test points
+ * and, for the other nets, the names its roles give them ({@link StageRecognition}: {@code pin},
+ * {@code control}, {@code switch}, {@code supply}, {@code contact-common}, ...); {@code nets} says
+ * in words what each one is and which pins are on it. {@code switch} is {@code null} when no part
+ * of the stage switches a relay coil.
  */
 @Command(name = "solve", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Solve the DC operating point of a stage and print node voltages, part currents and "
@@ -94,13 +99,14 @@ final class SolveCommand implements Callable<Integer> {
                     + e.getMessage(), e);
         }
         PrintWriter out = spec.commandLine().getOut();
-        out.print(json ? json(stage, op) : table(stage, op));
+        StageRecognition recognition = StageRecognition.of(stage);
+        out.print(json ? json(stage, recognition, op) : table(stage, recognition, op));
         out.flush();
         return CommandLine.ExitCode.OK;
     }
 
     /** The operating point as one JSON object (see the class comment). */
-    static String json(Stage stage, OperatingPoint op) {
+    static String json(Stage stage, StageRecognition recognition, OperatingPoint op) {
         ObjectNode root = JSON.createObjectNode();
         root.put("stage", stage.name());
         root.put("pinState", op.pinHigh() ? "high" : "low");
@@ -110,6 +116,8 @@ final class SolveCommand implements Callable<Integer> {
         root.put("maxKclResidualAmps", op.maxKclResidualAmps());
         ObjectNode nodes = root.putObject("nodes");
         op.nodeVoltages().forEach(nodes::put);
+        ObjectNode nets = root.putObject("nets");
+        op.nodeVoltages().keySet().forEach(n -> nets.put(n, recognition.describe(n)));
         ObjectNode parts = root.putObject("parts");
         for (PartResult r : op.parts().values()) {
             ObjectNode p = parts.putObject(r.ref());
@@ -134,7 +142,7 @@ final class SolveCommand implements Callable<Integer> {
     }
 
     /** The operating point as a readable table. */
-    static String table(Stage stage, OperatingPoint op) {
+    static String table(Stage stage, StageRecognition recognition, OperatingPoint op) {
         StringBuilder b = new StringBuilder();
         String nl = System.lineSeparator();
         b.append("Stage \"").append(stage.name()).append("\", pin ").append(op.pinHigh() ? "high" : "low")
@@ -144,8 +152,8 @@ final class SolveCommand implements Callable<Integer> {
                 .append(EngineeringNotation.format(op.maxKclResidualAmps(), Unit.AMPERE)).append('.').append(nl);
         b.append(nl).append("Nodes").append(nl);
         for (Map.Entry<String, Double> e : op.nodeVoltages().entrySet()) {
-            b.append(String.format(Locale.ROOT, "  %-10s %12s%n", e.getKey(),
-                    EngineeringNotation.format(e.getValue(), Unit.VOLT)));
+            b.append(String.format(Locale.ROOT, "  %-16s %12s   %s%n", e.getKey(),
+                    EngineeringNotation.format(e.getValue(), Unit.VOLT), recognition.describe(e.getKey())));
         }
         b.append(nl).append("Parts").append(nl);
         for (PartResult r : op.parts().values()) {
@@ -165,7 +173,7 @@ final class SolveCommand implements Callable<Integer> {
         }
         Optional<SwitchVerdict> v = op.switchVerdict();
         b.append(nl).append("Switch ");
-        b.append(v.map(s -> s.ref() + ": " + s.reason()).orElse("none: no switch part on the switch net.")).append(nl);
+        b.append(v.map(s -> s.ref() + ": " + s.reason()).orElse("none: no part switches a relay coil.")).append(nl);
         return b.toString();
     }
 

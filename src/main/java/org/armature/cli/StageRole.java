@@ -2,29 +2,27 @@ package org.armature.cli;
 
 import java.util.Optional;
 import java.util.Set;
-import java.util.stream.Collectors;
-import org.armature.model.HighSideDrive;
-import org.armature.model.Part;
+import org.armature.model.DriverTopology;
 import org.armature.model.PartKind;
 import org.armature.model.Stage;
-import org.armature.model.StageTemplate;
-import org.armature.model.Suppressor;
-import org.armature.model.Templates;
+import org.armature.model.StageRecognition;
+import org.armature.model.StageRoles;
 
 /**
- * The job a part does in a template stage, and which designator does it in each template (see
- * {@link Templates}): the base or gate resistor is R1 in the low-side and Darlington stages and in
- * the direct-drive high side, but R4 in the level-shift high side, where the pin drives R1 into the
- * NPN Q2.
+ * The job a part does in a stage, as {@link StageRecognition} finds it from the drawing: any
+ * designators, any placement. The base or gate resistor, for example, is the resistor between the
+ * pin and the switch's input in the low-side and Darlington stages and in the direct-drive high side,
+ * but the one between the level-shift NPN's collector and the PNP's base in the level-shift high
+ * side, where the pin drives the NPN through its own base resistor.
  */
 enum StageRole {
-    /** The logic drive pin, U1. */
+    /** The logic drive pin. */
     PIN("drive pin"),
-    /** The coil supply rail, V1. */
+    /** The coil supply rail. */
     SUPPLY("coil supply"),
-    /** The relay, K1. */
+    /** The relay whose coil is switched. */
     RELAY("relay"),
-    /** The transistor or array channel that carries the coil current: Q1, or U2 for the Darlington. */
+    /** The transistor or array channel that carries the coil current. */
     SWITCH("switch"),
     /** The series resistor into the switch's base, gate or input. */
     BASE_RESISTOR("base or gate resistor"),
@@ -53,39 +51,35 @@ enum StageRole {
     }
 
     /**
-     * The designator doing this job in a template stage.
+     * The designator doing this job in a stage.
      *
-     * @param stage the stage as built by {@link Templates#build(StageTemplate, Suppressor, HighSideDrive)}
-     * @return the designator, or empty when the template has no such part
+     * @param stage any stage
+     * @param roles its roles, as {@link StageRecognition#of(Stage)} found them
+     * @return the designator, or empty when the stage has no such part
      */
-    Optional<String> ref(StageTemplate template, Suppressor suppressor, HighSideDrive drive, Stage stage) {
-        boolean levelShift = template == StageTemplate.HIGH_SIDE_PNP && drive == HighSideDrive.LEVEL_SHIFT;
-        boolean direct = template == StageTemplate.HIGH_SIDE_PNP && drive == HighSideDrive.DIRECT;
-        boolean lowSide = template == StageTemplate.LOW_SIDE_NPN || template == StageTemplate.LOW_SIDE_NMOS;
+    Optional<String> ref(Stage stage, StageRoles roles) {
+        boolean highSide = roles.topology() == DriverTopology.HIGH_SIDE_PNP;
+        boolean levelShift = roles.levelShiftRef().isPresent();
         return switch (this) {
-            case PIN -> Optional.of("U1");
-            case SUPPLY -> Optional.of("V1");
-            case RELAY -> Optional.of("K1");
-            case SWITCH -> Optional.of(template == StageTemplate.DARLINGTON_CHANNEL ? "U2" : "Q1");
-            case BASE_RESISTOR -> Optional.of(levelShift ? "R4" : "R1");
-            case PULL_DOWN -> lowSide || levelShift ? Optional.of("R2") : Optional.empty();
-            case PULL_UP -> levelShift ? Optional.of("R3") : direct ? Optional.of("R2") : Optional.empty();
-            case SHIFT_RESISTOR -> levelShift ? Optional.of("R1") : Optional.empty();
-            case CLAMP -> suppressorPart(template, suppressor, drive, stage, PartKind.ZENER, PartKind.TVS);
-            case SUPPRESSOR_RESISTOR -> suppressorPart(template, suppressor, drive, stage, PartKind.RESISTOR);
-            case SNUBBER_CAPACITOR -> suppressorPart(template, suppressor, drive, stage, PartKind.CAPACITOR);
+            case PIN -> roles.drivePinRef();
+            case SUPPLY -> roles.coilSupplyRef();
+            case RELAY -> Optional.of(roles.relayRef());
+            case SWITCH -> Optional.of(roles.switchRef());
+            case BASE_RESISTOR -> levelShift ? roles.switchBaseResistorRef() : roles.inputResistorRef();
+            case PULL_DOWN -> highSide && !levelShift ? Optional.empty() : roles.inputPullRef();
+            case PULL_UP -> levelShift ? roles.switchPullUpRef() : highSide ? roles.inputPullRef() : Optional.empty();
+            case SHIFT_RESISTOR -> levelShift ? roles.inputResistorRef() : Optional.empty();
+            case CLAMP -> suppressorPart(stage, roles, PartKind.ZENER, PartKind.TVS);
+            case SUPPRESSOR_RESISTOR -> suppressorPart(stage, roles, PartKind.RESISTOR);
+            case SNUBBER_CAPACITOR -> suppressorPart(stage, roles, PartKind.CAPACITOR);
         };
     }
 
-    /** A part the suppressor variant adds to the template: present with it, absent without it. */
-    private static Optional<String> suppressorPart(StageTemplate template, Suppressor suppressor, HighSideDrive drive,
-                                                   Stage stage, PartKind... kinds) {
-        Set<String> bare = Templates.build(template, Suppressor.NONE, drive).parts().stream()
-                .map(Part::ref).collect(Collectors.toSet());
+    /** The first suppressor part of one of these kinds. */
+    private static Optional<String> suppressorPart(Stage stage, StageRoles roles, PartKind... kinds) {
         Set<PartKind> wanted = Set.of(kinds);
-        return stage.parts().stream()
-                .filter(p -> !bare.contains(p.ref()) && wanted.contains(p.kind()))
-                .map(Part::ref)
+        return roles.suppressorRefs().stream()
+                .filter(ref -> stage.part(ref).map(p -> wanted.contains(p.kind())).orElse(false))
                 .findFirst();
     }
 }

@@ -5,10 +5,10 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.armature.model.StageRoles;
-import org.armature.analysis.TopologyCheck;
 import org.armature.model.Connectivity;
 import org.armature.model.Part;
 import org.armature.model.Stage;
+import org.armature.model.StageRecognition;
 import org.armature.solver.timedomain.TransientEvent;
 import org.armature.solver.timedomain.Trace;
 import org.armature.solver.timedomain.Waveform;
@@ -113,8 +113,8 @@ public final class EdgePlot {
 
     /** The switch voltage over the run, from its terminals' node voltages; empty without a switch. */
     public static Optional<double[]> switchVolts(Stage stage, Waveform w) {
-        Optional<String> ref = TopologyCheck.recognise(stage).map(StageRoles::switchRef);
-        Optional<Part> sw = ref.flatMap(stage::part).or(() -> stage.parts().stream().filter(p -> p.kind().isSwitch()).findFirst());
+        StageRecognition recognition = StageRecognition.of(stage);
+        Optional<Part> sw = recognition.roles().map(StageRoles::switchRef).flatMap(stage::part);
         if (sw.isEmpty()) {
             return Optional.empty();
         }
@@ -129,7 +129,7 @@ public final class EdgePlot {
         if (pins.length == 0) {
             return Optional.empty();
         }
-        Connectivity c = Connectivity.of(stage);
+        Connectivity c = recognition.connectivity();
         Optional<double[]> hi = nodeVolts(w, c.net(p.ref(), pins[0]));
         Optional<double[]> lo = nodeVolts(w, c.net(p.ref(), pins[1]));
         if (hi.isEmpty() || lo.isEmpty()) {

@@ -12,6 +12,7 @@ import org.armature.model.PartKind;
 import org.armature.model.PinRef;
 import org.armature.model.Severity;
 import org.armature.model.Stage;
+import org.armature.model.StageRecognition;
 import org.armature.model.TestPoint;
 import org.armature.solver.OperatingPoint;
 import org.armature.solver.PartResult;
@@ -23,7 +24,9 @@ import org.armature.solver.SwitchVerdict;
  *
  * <p>What it shows:
  * <ul>
- *   <li>a voltage tag at every test point's net;</li>
+ *   <li>a voltage tag at every test point's net, and at the nets the stage's roles name (the drive
+ *       pin's output, the switch's control input, the switch's terminal on the coil, the coil
+ *       supply), so a stage drawn part by part without test points reads like its template;</li>
  *   <li>a current arrow with its magnitude at the drive pin's output, at each transistor's control
  *       pin (base, gate, channel input) and main terminal (collector, drain, channel output), and at
  *       the contact-side load; the arrow points the way conventional current flows;</li>
@@ -70,12 +73,37 @@ public final class ReadoutBuilder {
      * @return the annotations; never null
      */
     public static Annotations build(Stage stage, OperatingPoint op, List<Finding> findings) {
+        return build(stage, StageRecognition.of(stage), op, findings);
+    }
+
+    /**
+     * The readouts of a stage at an operating point, with the stage's roles already found (a
+     * caller that keeps one recognition per stage version passes it here).
+     *
+     * @param stage the stage that was solved
+     * @param recognition {@link StageRecognition#of} of that stage (or of one with the same structure)
+     * @param op the operating point of exactly that stage
+     * @param findings findings to mark on the drawing, as for {@link #build(Stage, OperatingPoint, List)}
+     * @return the annotations; never null
+     */
+    public static Annotations build(Stage stage, StageRecognition recognition, OperatingPoint op,
+                                    List<Finding> findings) {
         List<Annotations.NodeVoltage> voltages = new ArrayList<>();
         Set<String> seen = new LinkedHashSet<>();
+        List<String> nets = new ArrayList<>();
         for (TestPoint tp : stage.testPoints()) {
-            Double v = op.nodeVoltages().get(tp.net());
-            if (v != null && seen.add(tp.net())) {
-                voltages.add(new Annotations.NodeVoltage(tp.net(), v));
+            nets.add(tp.net());
+        }
+        recognition.roles().ifPresent(r -> {
+            r.pinNet().ifPresent(nets::add);
+            nets.add(r.switchControlNet());
+            nets.add(r.switchNet());
+            r.coilSupplyRef().ifPresent(v -> nets.add(recognition.connectivity().net(v, "p")));
+        });
+        for (String net : nets) {
+            Double v = op.nodeVoltages().get(net);
+            if (v != null && seen.add(net)) {
+                voltages.add(new Annotations.NodeVoltage(net, v));
             }
         }
         List<Annotations.BranchCurrent> currents = new ArrayList<>();

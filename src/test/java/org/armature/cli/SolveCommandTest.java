@@ -1,6 +1,7 @@
 package org.armature.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -52,6 +53,27 @@ class SolveCommandTest {
         assertEquals(0, r.status(), r.err());
         assertEquals("", r.err());
         return JSON.readTree(r.out());
+    }
+
+    @Test
+    @DisplayName("a stage drawn with other designators and no test points: readable net names, no n1, n2, n3, and a switch verdict"
+            + " (failed before: nets n1…n9 and switch null)")
+    void netsPeopleCanFind() throws Exception {
+        Stage s = org.armature.model.StageDisguise.of(Templates.build(StageTemplate.LOW_SIDE_NPN), 3, 8, 8, false).stage();
+        StageFiles.save(StageDocument.of(s), file);
+        JsonNode j = solveJson();
+        List<String> nets = new java.util.ArrayList<>();
+        j.get("nodes").fieldNames().forEachRemaining(nets::add);
+        for (String net : nets) {
+            assertFalse(net.matches("n[0-9]+"), "numbered net " + net + " in " + nets);
+            assertTrue(j.get("nets").get(net).isTextual(), net);
+        }
+        assertTrue(nets.containsAll(List.of("pin", "control", "switch", "supply", "contact-common", "contact-no")),
+                nets.toString());
+        assertTrue(j.get("nets").get("switch").asText().startsWith("coil low side at Q"), j.get("nets").toString());
+        assertTrue(j.get("switch").get("fullyOn").asBoolean(), "the template's NPN saturates (see TemplatesSolveTest)");
+        CliRun table = CliRun.of("solve", file.toString());
+        assertTrue(table.out().contains("coil low side at Q"), table.out());
     }
 
     @Test
