@@ -2,6 +2,7 @@ package org.armature.model;
 
 import java.util.List;
 import java.util.Optional;
+import org.armature.units.Unit;
 
 /**
  * The kinds of part the editor allows: only what relay driver stages contain.
@@ -20,18 +21,18 @@ public enum PartKind {
             "Microcontroller or logic output, modelled as a source with output resistance (typical 3.3 V CMOS output).",
             List.of(pin("out", 2, 0, "output")),
             List.of(
-                    p("highVolts", "High level (open circuit)", "V", 3.5, 0, 60,
+                    p("highVolts", "High level (open circuit)", Unit.VOLT, 3.5, 0, 60,
                             "Thevenin voltage of the high level; fit it with VOH at two currents from the datasheet."),
-                    p("lowVolts", "Low level (open circuit)", "V", 0, -1, 60, "Thevenin voltage of the low level."),
-                    p("outputResistanceOhms", "Output resistance", "Ω", 75, 0.01, 1e6,
+                    p("lowVolts", "Low level (open circuit)", Unit.VOLT, 0, -1, 60, "Thevenin voltage of the low level."),
+                    p("outputResistanceOhms", "Output resistance", Unit.OHM, 75, 0.01, 1e6,
                             "Thevenin resistance of the output (typical 3.3 V microcontroller pin: 75 Ω)."),
-                    p("highToleranceVolts", "High level spread", "V", 0.1, 0, 10,
+                    p("highToleranceVolts", "High level spread", Unit.VOLT, 0.1, 0, 10,
                             "How far the open-circuit high level may fall below nominal at the worst corner."),
-                    p("pinCurrentLimitAmps", "Pin current limit", "A", 0.020, 1e-6, 1,
+                    p("pinCurrentLimitAmps", "Pin current limit", Unit.AMPERE, 0.020, 1e-6, 1,
                             "Largest current the datasheet allows per pin (many pins: 20 mA, some 40 mA)."),
-                    p("packageCurrentLimitAmps", "Package current limit", "A", 0.100, 1e-6, 10,
+                    p("packageCurrentLimitAmps", "Package current limit", Unit.AMPERE, 0.100, 1e-6, 10,
                             "Largest total current of all pins of the device."),
-                    p("channelCount", "Channels driven", "", 1, 1, 64,
+                    p("channelCount", "Channels driven", Unit.RATIO, 1, 1, 64,
                             "How many identical stages this device drives at once (for the package budget).")),
             List.of()),
 
@@ -39,8 +40,8 @@ public enum PartKind {
     SUPPLY("V", "Supply rail", "DC rail referenced to ground (coil supply or contact-side supply).",
             List.of(pin("p", 0, 0, "rail")),
             List.of(
-                    p("volts", "Voltage", "V", 12, -1000, 1000, "Nominal rail voltage."),
-                    p("tolerancePercent", "Tolerance", "%", 10, 0, 50,
+                    p("volts", "Voltage", Unit.VOLT, 12, -1000, 1000, "Nominal rail voltage."),
+                    p("tolerancePercent", "Tolerance", Unit.PERCENT, 10, 0, 50,
                             "Rail tolerance used by the corner checks (±).")),
             List.of(new OptionSpec("waveform", "Waveform", List.of("dc", "ac-rms"),
                     "ac-rms marks a mains or AC contact side: the value is the RMS voltage. The solver uses it as DC."))),
@@ -53,10 +54,10 @@ public enum PartKind {
     RESISTOR("R", "Resistor", "Fixed film resistor (typical 0.25 W, ±5 %).",
             List.of(pin("a", 0, -2, "end a"), pin("b", 0, 2, "end b")),
             List.of(
-                    p("resistanceOhms", "Resistance", "Ω", 10_000, 1e-3, 1e12, "Nominal resistance."),
-                    p("tolerancePercent", "Tolerance", "%", 5, 0, 50,
+                    p("resistanceOhms", "Resistance", Unit.OHM, 10_000, 1e-3, 1e12, "Nominal resistance."),
+                    p("tolerancePercent", "Tolerance", Unit.PERCENT, 5, 0, 50,
                             "Manufacturing tolerance; E24 parts are ±5 %, E96 ±1 % (IEC 60063)."),
-                    p("powerRatingWatts", "Power rating", "W", 0.25, 1e-3, 100, "Rated dissipation.")),
+                    p("powerRatingWatts", "Power rating", Unit.WATT, 0.25, 1e-3, 100, "Rated dissipation.")),
             List.of()),
 
     /** A rectifier or signal diode. */
@@ -75,29 +76,29 @@ public enum PartKind {
     TVS("D", "TVS diode", "Bidirectional transient voltage suppressor, 400 W class (typical values).",
             List.of(pin("a", 0, -2, "terminal 1"), pin("b", 0, 2, "terminal 2")),
             List.of(
-                    p("breakdownVolts", "Breakdown voltage", "V", 24, 1, 1000, "Breakdown voltage at the test current."),
-                    p("breakdownCurrentAmps", "Test current", "A", 1e-3, 1e-9, 1, "Current at which the breakdown voltage is stated."),
-                    p("clampResistanceOhms", "Dynamic resistance", "Ω", 0.5, 1e-4, 1000,
+                    p("breakdownVolts", "Breakdown voltage", Unit.VOLT, 24, 1, 1000, "Breakdown voltage at the test current."),
+                    p("breakdownCurrentAmps", "Test current", Unit.AMPERE, 1e-3, 1e-9, 1, "Current at which the breakdown voltage is stated."),
+                    p("clampResistanceOhms", "Dynamic resistance", Unit.OHM, 0.5, 1e-4, 1000,
                             "Slope of the clamp above breakdown."),
-                    p("peakPulsePowerWatts", "Peak pulse power", "W", 400, 1, 1e5, "Rated peak pulse power.")),
+                    p("peakPulsePowerWatts", "Peak pulse power", Unit.WATT, 400, 1, 1e5, "Rated peak pulse power.")),
             List.of()),
 
     /** A capacitor (for an RC snubber). */
     CAPACITOR("C", "Capacitor", "Film capacitor for an RC snubber (typical values).",
             List.of(pin("a", 0, -2, "terminal 1"), pin("b", 0, 2, "terminal 2")),
             List.of(
-                    p("capacitanceFarads", "Capacitance", "F", 100e-9, 1e-15, 1, "Nominal capacitance."),
-                    p("ratedVolts", "Rated voltage", "V", 100, 1, 10_000, "Rated DC voltage.")),
+                    p("capacitanceFarads", "Capacitance", Unit.FARAD, 100e-9, 1e-15, 1, "Nominal capacitance."),
+                    p("ratedVolts", "Rated voltage", Unit.VOLT, 100, 1, 10_000, "Rated DC voltage.")),
             List.of()),
 
     /** An indicator LED, fitted from its forward voltage at a stated current. */
     LED("D", "LED", "Indicator LED, 3 mm (typical values).",
             List.of(pin("a", 0, -2, "anode"), pin("k", 0, 2, "cathode")),
             List.of(
-                    p("forwardVolts", "Forward voltage", "V", 2.0, 0.5, 10, "Forward voltage at the stated current."),
-                    p("forwardCurrentAmps", "At current", "A", 0.010, 1e-6, 1, "Current at which the forward voltage is stated."),
-                    p("emissionCoefficient", "Emission coefficient", "", 2.0, 0.5, 10, "Ideality factor N of the fitted junction."),
-                    p("maxCurrentAmps", "Maximum current", "A", 0.020, 1e-6, 1, "Rated continuous forward current.")),
+                    p("forwardVolts", "Forward voltage", Unit.VOLT, 2.0, 0.5, 10, "Forward voltage at the stated current."),
+                    p("forwardCurrentAmps", "At current", Unit.AMPERE, 0.010, 1e-6, 1, "Current at which the forward voltage is stated."),
+                    p("emissionCoefficient", "Emission coefficient", Unit.RATIO, 2.0, 0.5, 10, "Ideality factor N of the fitted junction."),
+                    p("maxCurrentAmps", "Maximum current", Unit.AMPERE, 0.020, 1e-6, 1, "Rated continuous forward current.")),
             List.of()),
 
     /** An NPN bipolar transistor. */
@@ -114,19 +115,19 @@ public enum PartKind {
     NMOS("Q", "N-channel MOSFET", "Logic-level small-signal N-channel MOSFET, SOT-23 (typical values).",
             List.of(pin("g", -2, 0, "gate"), pin("d", 1, -2, "drain"), pin("s", 1, 2, "source")),
             List.of(
-                    p("thresholdVolts", "Threshold VT0", "V", 1.2, 0.1, 10, "Shichman–Hodges threshold voltage (model)."),
-                    p("transconductanceAmpsPerVoltSquared", "β (KP)", "A/V²", 0.25, 1e-6, 1000,
+                    p("thresholdVolts", "Threshold VT0", Unit.VOLT, 1.2, 0.1, 10, "Shichman–Hodges threshold voltage (model)."),
+                    p("transconductanceAmpsPerVoltSquared", "β (KP)", Unit.AMPERE_PER_VOLT_SQUARED, 0.25, 1e-6, 1000,
                             "Shichman–Hodges β: ID = β/2·(VGS − VT0)² in saturation."),
-                    p("lambdaPerVolt", "λ", "1/V", 0.01, 0, 1, "Channel-length modulation."),
-                    p("thresholdTempcoVoltsPerKelvin", "Threshold tempco", "V/K", -0.004, -0.05, 0.05,
+                    p("lambdaPerVolt", "λ", Unit.PER_VOLT, 0.01, 0, 1, "Channel-length modulation."),
+                    p("thresholdTempcoVoltsPerKelvin", "Threshold tempco", Unit.VOLT_PER_KELVIN, -0.004, -0.05, 0.05,
                             "Change of threshold with temperature (typical −4 mV/K)."),
-                    p("vgsThMaxVolts", "VGS(th) max", "V", 1.5, 0.1, 10, "Datasheet maximum gate threshold voltage."),
-                    p("rdsOnOhms", "RDS(on) max", "Ω", 3.0, 1e-4, 1e4, "Datasheet maximum on-resistance at the stated gate voltage."),
-                    p("rdsOnGateVolts", "RDS(on) at VGS", "V", 2.5, 0.5, 20, "Gate voltage at which RDS(on) is specified."),
-                    p("vdssVolts", "VDSS", "V", 60, 1, 2000, "Drain–source breakdown rating."),
-                    p("idMaxAmps", "ID max", "A", 0.3, 1e-4, 1000, "Continuous drain current rating."),
-                    p("thermalResistanceKelvinPerWatt", "RθJA", "K/W", 350, 0.1, 2000, "Junction-to-ambient thermal resistance."),
-                    p("tjMaxCelsius", "Tj max", "°C", 150, 50, 250, "Maximum junction temperature.")),
+                    p("vgsThMaxVolts", "VGS(th) max", Unit.VOLT, 1.5, 0.1, 10, "Datasheet maximum gate threshold voltage."),
+                    p("rdsOnOhms", "RDS(on) max", Unit.OHM, 3.0, 1e-4, 1e4, "Datasheet maximum on-resistance at the stated gate voltage."),
+                    p("rdsOnGateVolts", "RDS(on) at VGS", Unit.VOLT, 2.5, 0.5, 20, "Gate voltage at which RDS(on) is specified."),
+                    p("vdssVolts", "VDSS", Unit.VOLT, 60, 1, 2000, "Drain–source breakdown rating."),
+                    p("idMaxAmps", "ID max", Unit.AMPERE, 0.3, 1e-4, 1000, "Continuous drain current rating."),
+                    p("thermalResistanceKelvinPerWatt", "RθJA", Unit.KELVIN_PER_WATT, 350, 0.1, 2000, "Junction-to-ambient thermal resistance."),
+                    p("tjMaxCelsius", "Tj max", Unit.CELSIUS, 150, 50, 250, "Maximum junction temperature.")),
             List.of()),
 
     /** One channel of a seven-channel Darlington array, with input resistor and clamp diode. */
@@ -135,18 +136,18 @@ public enum PartKind {
             List.of(pin("in", -3, 0, "input"), pin("out", 1, -3, "output (collector)"),
                     pin("com", 3, -3, "clamp common"), pin("e", 1, 3, "emitter / array ground")),
             List.of(
-                    p("inputResistanceOhms", "Input resistor", "Ω", 2700, 1, 1e6, "Series input resistor inside the channel."),
-                    p("firstBaseEmitterOhms", "Q1 base–emitter resistor", "Ω", 7200, 1, 1e7, "Resistor across the first transistor's base–emitter."),
-                    p("secondBaseEmitterOhms", "Q2 base–emitter resistor", "Ω", 3000, 1, 1e7, "Resistor across the output transistor's base–emitter."),
-                    p("saturationCurrentAmps", "IS", "A", 3e-14, 1e-18, 1e-6, "Saturation current of each transistor (model)."),
-                    p("betaForward", "βF (each)", "", 100, 1, 10_000, "Forward current gain of each transistor (model)."),
-                    p("hfeMin", "Channel hFE min", "", 1000, 1, 1e6, "Datasheet minimum gain of the channel."),
-                    p("collectorResistanceOhms", "Output resistance", "Ω", 1.3, 0, 100, "Collector series resistance of the output transistor."),
-                    p("vceoVolts", "VCE max", "V", 50, 1, 1000, "Output sustaining voltage rating."),
-                    p("icMaxAmps", "Output current max", "A", 0.5, 1e-3, 10, "Rated output current per channel."),
-                    p("channelCount", "Channels on", "", 1, 1, 8, "Channels of the same package on at once (thermal check)."),
-                    p("thermalResistanceKelvinPerWatt", "Package RθJA", "K/W", 67, 0.1, 1000, "Package junction-to-ambient thermal resistance."),
-                    p("tjMaxCelsius", "Tj max", "°C", 150, 50, 250, "Maximum junction temperature.")),
+                    p("inputResistanceOhms", "Input resistor", Unit.OHM, 2700, 1, 1e6, "Series input resistor inside the channel."),
+                    p("firstBaseEmitterOhms", "Q1 base–emitter resistor", Unit.OHM, 7200, 1, 1e7, "Resistor across the first transistor's base–emitter."),
+                    p("secondBaseEmitterOhms", "Q2 base–emitter resistor", Unit.OHM, 3000, 1, 1e7, "Resistor across the output transistor's base–emitter."),
+                    p("saturationCurrentAmps", "IS", Unit.AMPERE, 3e-14, 1e-18, 1e-6, "Saturation current of each transistor (model)."),
+                    p("betaForward", "βF (each)", Unit.RATIO, 100, 1, 10_000, "Forward current gain of each transistor (model)."),
+                    p("hfeMin", "Channel hFE min", Unit.RATIO, 1000, 1, 1e6, "Datasheet minimum gain of the channel."),
+                    p("collectorResistanceOhms", "Output resistance", Unit.OHM, 1.3, 0, 100, "Collector series resistance of the output transistor."),
+                    p("vceoVolts", "VCE max", Unit.VOLT, 50, 1, 1000, "Output sustaining voltage rating."),
+                    p("icMaxAmps", "Output current max", Unit.AMPERE, 0.5, 1e-3, 10, "Rated output current per channel."),
+                    p("channelCount", "Channels on", Unit.RATIO, 1, 1, 8, "Channels of the same package on at once (thermal check)."),
+                    p("thermalResistanceKelvinPerWatt", "Package RθJA", Unit.KELVIN_PER_WATT, 67, 0.1, 1000, "Package junction-to-ambient thermal resistance."),
+                    p("tjMaxCelsius", "Tj max", Unit.CELSIUS, 150, 50, 250, "Maximum junction temperature.")),
             List.of()),
 
     /** A relay: coil between A1 and A2, and one changeover contact set linked to it. */
@@ -155,44 +156,44 @@ public enum PartKind {
                     pin("com", 5, -2, "contact common"), pin("nc", 4, 2, "normally closed"),
                     pin("no", 6, 2, "normally open")),
             List.of(
-                    p("ratedVolts", "Rated coil voltage", "V", 12, 0.5, 500, "Nominal coil voltage."),
-                    p("coilResistanceOhms", "Coil resistance", "Ω", 400, 0.1, 1e6, "Coil resistance at the reference temperature."),
-                    p("coilResistanceTolerancePercent", "Coil resistance tolerance", "%", 10, 0, 50, "± spread of coil resistance (typical ±10 %)."),
-                    p("mustOperateVolts", "Must-operate voltage", "V", 9.0, 0.01, 500,
+                    p("ratedVolts", "Rated coil voltage", Unit.VOLT, 12, 0.5, 500, "Nominal coil voltage."),
+                    p("coilResistanceOhms", "Coil resistance", Unit.OHM, 400, 0.1, 1e6, "Coil resistance at the reference temperature."),
+                    p("coilResistanceTolerancePercent", "Coil resistance tolerance", Unit.PERCENT, 10, 0, 50, "± spread of coil resistance (typical ±10 %)."),
+                    p("mustOperateVolts", "Must-operate voltage", Unit.VOLT, 9.0, 0.01, 500,
                             "Highest coil voltage at which every sample operates, at the reference temperature (typical ≤ 75 % of rated)."),
-                    p("mustReleaseVolts", "Must-release voltage", "V", 1.2, 0.001, 500,
+                    p("mustReleaseVolts", "Must-release voltage", Unit.VOLT, 1.2, 0.001, 500,
                             "Lowest coil voltage at which every sample releases, at the reference temperature (typical ≥ 10 % of rated)."),
-                    p("referenceTemperatureCelsius", "Reference temperature", "°C", 20, -60, 150,
+                    p("referenceTemperatureCelsius", "Reference temperature", Unit.CELSIUS, 20, -60, 150,
                             "Temperature at which the datasheet coil values hold."),
-                    p("coilThermalResistanceKelvinPerWatt", "Coil thermal resistance", "K/W", 100, 0, 10_000,
+                    p("coilThermalResistanceKelvinPerWatt", "Coil thermal resistance", Unit.KELVIN_PER_WATT, 100, 0, 10_000,
                             "Coil temperature rise per watt of coil power; 0 means no self-heating."),
-                    p("inductanceReleasedHenries", "Inductance, released", "H", 1.2, 1e-6, 100, "Coil inductance with the armature released."),
-                    p("inductanceAttractedHenries", "Inductance, attracted", "H", 0, 0, 100,
+                    p("inductanceReleasedHenries", "Inductance, released", Unit.HENRY, 1.2, 1e-6, 100, "Coil inductance with the armature released."),
+                    p("inductanceAttractedHenries", "Inductance, attracted", Unit.HENRY, 0, 0, 100,
                             "Coil inductance with the armature attracted; 0 means constant inductance."),
-                    p("coilCapacitanceFarads", "Coil self-capacitance", "F", 100e-12, 0, 1e-6, "Self-capacitance across the winding."),
-                    p("coreLossOhms", "Core-loss resistance", "Ω", 0, 0, 1e9, "Parallel resistance for core losses; 0 means none."),
-                    p("operateTimeSeconds", "Operate time", "s", 0.008, 0, 1,
+                    p("coilCapacitanceFarads", "Coil self-capacitance", Unit.FARAD, 100e-12, 0, 1e-6, "Self-capacitance across the winding."),
+                    p("coreLossOhms", "Core-loss resistance", Unit.OHM, 0, 0, 1e9, "Parallel resistance for core losses; 0 means none."),
+                    p("operateTimeSeconds", "Operate time", Unit.SECOND, 0.008, 0, 1,
                             "Datasheet operate time; sets the transit with constant inductance (no attracted inductance)."),
-                    p("releaseTimeSeconds", "Release time", "s", 0.004, 0, 1,
+                    p("releaseTimeSeconds", "Release time", Unit.SECOND, 0.004, 0, 1,
                             "Datasheet release time without suppressor; sets the transit with constant inductance."),
-                    p("travelMetres", "Armature travel", "m", 0.3e-3, 1e-6, 0.01, "Armature travel between released and attracted."),
-                    p("springForceRatio", "Spring force ratio", "", 2, 1.01, 20,
+                    p("travelMetres", "Armature travel", Unit.METRE, 0.3e-3, 1e-6, 0.01, "Armature travel between released and attracted."),
+                    p("springForceRatio", "Spring force ratio", Unit.RATIO, 2, 1.01, 20,
                             "Spring force attracted ÷ released (typical 1.5–3, from memory)."),
-                    p("armatureMassGrams", "Armature mass", "g", 1, 0.01, 100,
+                    p("armatureMassGrams", "Armature mass", Unit.GRAM, 1, 0.01, 100,
                             "Effective moving mass of armature and contact spring (typical about 1 g for a small PCB relay); "
                                     + "sets the flight time with an attracted inductance."),
-                    p("armatureDampingNewtonSecondsPerMetre", "Armature damping", "N·s/m", 0.1, 0, 100,
+                    p("armatureDampingNewtonSecondsPerMetre", "Armature damping", Unit.NEWTON_SECOND_PER_METRE, 0.1, 0, 100,
                             "Viscous damping of the armature's motion (default 0.1 N·s/m: light air and pivot damping)."),
-                    p("contactRatedVolts", "Contact rating, voltage", "V", 250, 1, 1000, "Contact switching voltage rating."),
-                    p("contactRatedAmps", "Contact rating, current", "A", 10, 1e-3, 100, "Contact switching current rating.")),
+                    p("contactRatedVolts", "Contact rating, voltage", Unit.VOLT, 250, 1, 1000, "Contact switching voltage rating."),
+                    p("contactRatedAmps", "Contact rating, current", Unit.AMPERE, 10, 1e-3, 100, "Contact switching current rating.")),
             List.of()),
 
     /** What the contacts switch: a resistive load, a lamp or an LED with its resistor. */
     LOAD("E", "Contact-side load", "Load switched by the relay contacts.",
             List.of(pin("a", 0, -2, "terminal 1"), pin("b", 0, 2, "terminal 2")),
             List.of(
-                    p("resistanceOhms", "Resistance", "Ω", 48, 1e-3, 1e9, "Load resistance when on (a lamp: hot filament)."),
-                    p("ratedWatts", "Rated power", "W", 3, 0, 1e5, "Rated load power, for the contact check.")),
+                    p("resistanceOhms", "Resistance", Unit.OHM, 48, 1e-3, 1e9, "Load resistance when on (a lamp: hot filament)."),
+                    p("ratedWatts", "Rated power", Unit.WATT, 3, 0, 1e5, "Rated load power, for the contact check.")),
             List.of(new OptionSpec("loadKind", "Kind", List.of("resistive", "lamp", "led"),
                     "What the load is; a lamp draws several times its hot current when cold.")));
 
@@ -278,7 +279,7 @@ public enum PartKind {
         return new PinSpec(name, x, y, description);
     }
 
-    private static ParamSpec p(String key, String label, String unit, double def, double min, double max,
+    private static ParamSpec p(String key, String label, Unit unit, double def, double min, double max,
                                String description) {
         return new ParamSpec(key, label, unit, def, min, max, description);
     }
@@ -286,35 +287,35 @@ public enum PartKind {
     private static List<ParamSpec> junctionParams(double is, double n, double rs, double bv, double ibv,
                                                   double ifMax, double pMax) {
         return List.of(
-                p("saturationCurrentAmps", "IS", "A", is, 1e-20, 1e-3, "Shockley saturation current (model)."),
-                p("emissionCoefficient", "N", "", n, 0.5, 10, "Emission coefficient (model)."),
-                p("seriesResistanceOhms", "Series resistance", "Ω", rs, 0, 1e4, "Ohmic series resistance (model)."),
-                p("breakdownVolts", "Reverse breakdown", "V", bv, 0.5, 5000,
+                p("saturationCurrentAmps", "IS", Unit.AMPERE, is, 1e-20, 1e-3, "Shockley saturation current (model)."),
+                p("emissionCoefficient", "N", Unit.RATIO, n, 0.5, 10, "Emission coefficient (model)."),
+                p("seriesResistanceOhms", "Series resistance", Unit.OHM, rs, 0, 1e4, "Ohmic series resistance (model)."),
+                p("breakdownVolts", "Reverse breakdown", Unit.VOLT, bv, 0.5, 5000,
                         "Reverse breakdown voltage (a zener's VZ; a rectifier's reverse rating)."),
-                p("breakdownCurrentAmps", "Breakdown test current", "A", ibv, 1e-12, 10,
+                p("breakdownCurrentAmps", "Breakdown test current", Unit.AMPERE, ibv, 1e-12, 10,
                         "Reverse current at which the breakdown voltage is stated."),
-                p("maxCurrentAmps", "Peak current rating", "A", ifMax, 1e-4, 1000, "Repetitive peak current rating."),
-                p("powerRatingWatts", "Power rating", "W", pMax, 1e-3, 1000, "Rated dissipation."));
+                p("maxCurrentAmps", "Peak current rating", Unit.AMPERE, ifMax, 1e-4, 1000, "Repetitive peak current rating."),
+                p("powerRatingWatts", "Power rating", Unit.WATT, pMax, 1e-3, 1000, "Rated dissipation."));
     }
 
     private static List<ParamSpec> bjtParams() {
         return List.of(
-                p("saturationCurrentAmps", "IS", "A", 1e-14, 1e-20, 1e-6, "Transport saturation current (model)."),
-                p("betaForward", "βF", "", 200, 1, 10_000, "Ideal forward gain of the model (typical hFE)."),
-                p("betaReverse", "βR", "", 2, 0.01, 1000, "Reverse gain (model)."),
-                p("earlyVolts", "VAF", "V", 100, 1, 10_000, "Forward Early voltage (model)."),
-                p("kneeCurrentAmps", "IKF", "A", 0.3, 1e-4, 100, "High-injection knee current (model): gain falls above it."),
-                p("baseResistanceOhms", "RB", "Ω", 10, 0, 1e4, "Base spreading resistance (model)."),
-                p("collectorResistanceOhms", "RC", "Ω", 1, 0, 1e3, "Collector series resistance (model)."),
-                p("emitterResistanceOhms", "RE", "Ω", 0.2, 0, 1e3, "Emitter series resistance (model)."),
-                p("gainTempExponent", "XTB", "", 1.5, 0, 10, "Gain temperature exponent: βF·(T/Tnom)^XTB (from memory)."),
-                p("hfeMin", "hFE min", "", 100, 1, 1e5, "Datasheet minimum DC gain at the relevant collector current."),
-                p("vbeSatVolts", "VBE(sat) max", "V", 0.95, 0.3, 3, "Datasheet maximum VBE(sat) at IC/IB = 10."),
-                p("vceSatVolts", "VCE(sat) max", "V", 0.3, 0.01, 5, "Datasheet maximum VCE(sat) at IC/IB = 10."),
-                p("vceoVolts", "VCEO", "V", 40, 1, 2000, "Collector–emitter breakdown rating (base open)."),
-                p("icMaxAmps", "IC max", "A", 0.6, 1e-4, 100, "Continuous collector current rating."),
-                p("thermalResistanceKelvinPerWatt", "RθJA", "K/W", 200, 0.1, 2000,
+                p("saturationCurrentAmps", "IS", Unit.AMPERE, 1e-14, 1e-20, 1e-6, "Transport saturation current (model)."),
+                p("betaForward", "βF", Unit.RATIO, 200, 1, 10_000, "Ideal forward gain of the model (typical hFE)."),
+                p("betaReverse", "βR", Unit.RATIO, 2, 0.01, 1000, "Reverse gain (model)."),
+                p("earlyVolts", "VAF", Unit.VOLT, 100, 1, 10_000, "Forward Early voltage (model)."),
+                p("kneeCurrentAmps", "IKF", Unit.AMPERE, 0.3, 1e-4, 100, "High-injection knee current (model): gain falls above it."),
+                p("baseResistanceOhms", "RB", Unit.OHM, 10, 0, 1e4, "Base spreading resistance (model)."),
+                p("collectorResistanceOhms", "RC", Unit.OHM, 1, 0, 1e3, "Collector series resistance (model)."),
+                p("emitterResistanceOhms", "RE", Unit.OHM, 0.2, 0, 1e3, "Emitter series resistance (model)."),
+                p("gainTempExponent", "XTB", Unit.RATIO, 1.5, 0, 10, "Gain temperature exponent: βF·(T/Tnom)^XTB (from memory)."),
+                p("hfeMin", "hFE min", Unit.RATIO, 100, 1, 1e5, "Datasheet minimum DC gain at the relevant collector current."),
+                p("vbeSatVolts", "VBE(sat) max", Unit.VOLT, 0.95, 0.3, 3, "Datasheet maximum VBE(sat) at IC/IB = 10."),
+                p("vceSatVolts", "VCE(sat) max", Unit.VOLT, 0.3, 0.01, 5, "Datasheet maximum VCE(sat) at IC/IB = 10."),
+                p("vceoVolts", "VCEO", Unit.VOLT, 40, 1, 2000, "Collector–emitter breakdown rating (base open)."),
+                p("icMaxAmps", "IC max", Unit.AMPERE, 0.6, 1e-4, 100, "Continuous collector current rating."),
+                p("thermalResistanceKelvinPerWatt", "RθJA", Unit.KELVIN_PER_WATT, 200, 0.1, 2000,
                         "Junction-to-ambient thermal resistance (TO-92 typical 200 °C/W)."),
-                p("tjMaxCelsius", "Tj max", "°C", 150, 50, 250, "Maximum junction temperature."));
+                p("tjMaxCelsius", "Tj max", Unit.CELSIUS, 150, 50, 250, "Maximum junction temperature."));
     }
 }

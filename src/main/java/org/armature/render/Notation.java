@@ -22,6 +22,12 @@ public final class Notation {
     private Notation() {
     }
 
+    /** The value with an SI prefix where the unit takes one, e.g. {@code format(4700, Unit.OHM)} is {@code 4.7 kΩ}. */
+    public static String format(double value, Unit unit) {
+        int digits = Double.isFinite(value) && value != 0 ? digitsNeeded(value) : LABEL_DIGITS;
+        return EngineeringNotation.format(value, unit, digits);
+    }
+
     /** The value with an SI prefix and the unit symbol, e.g. {@code format(4700, "Ω")} is {@code 4.7 kΩ}. */
     public static String format(double value, String unitSymbol) {
         int digits = Double.isFinite(value) && value != 0 ? digitsNeeded(value) : LABEL_DIGITS;

@@ -1,7 +1,6 @@
 package org.armature.ui;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import javafx.scene.control.Button;
@@ -121,7 +120,7 @@ public final class PartSheet extends VBox {
                     commit(p.ref(), f, s);
                 }
             });
-            if (s.unitSymbol().equals("Ω")) {
+            if (s.unit() == Unit.OHM) {
                 f.addEventFilter(KeyEvent.KEY_PRESSED, e -> {
                     if (e.getCode() == KeyCode.UP || e.getCode() == KeyCode.DOWN) {
                         vm.stepPreferred(p.ref(), s.key(), e.getCode() == KeyCode.UP ? 1 : -1);
@@ -254,7 +253,7 @@ public final class PartSheet extends VBox {
     }
 
     private static Unit unitOf(ParamSpec s) {
-        return Arrays.stream(Unit.values()).filter(u -> u.symbol().equals(s.unitSymbol())).findFirst().orElse(Unit.RATIO);
+        return s.unit();
     }
 
     /** Parses a field's text; empty when it cannot be read or is out of range (the field shows why). */

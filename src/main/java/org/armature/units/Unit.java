@@ -51,6 +51,12 @@ public enum Unit {
     CELSIUS("°C", "temperature", true, false, "25, -40 °C, 85 or 125", "degC"),
     /** Kelvin per watt, thermal resistance; never negative; printed without prefixes. */
     KELVIN_PER_WATT("K/W", "thermal resistance", false, false, "200, 417 K/W or 62.5"),
+    /** Volt per kelvin, a temperature coefficient of a voltage; negatives allowed; printed without prefixes. */
+    VOLT_PER_KELVIN("V/K", "temperature coefficient", true, false, "-0.004, -4m V/K or -4e-3"),
+    /** Reciprocal volt, a channel-length modulation coefficient; never negative; printed without prefixes. */
+    PER_VOLT("1/V", "voltage coefficient", false, false, "0.01, 0.02 1/V or 1e-2"),
+    /** Ampere per volt squared, a MOSFET's transconductance parameter; never negative; printed without prefixes. */
+    AMPERE_PER_VOLT_SQUARED("A/V²", "transconductance parameter", false, false, "0.25, 0.2 A/V² or 2e-1", "A/V^2"),
     /** Percent (value 5 means 5 %); negatives allowed; printed without prefixes. */
     PERCENT("%", "percentage", true, false, "5, 10 %, 0.5 or 75"),
     /** Dimensionless ratio or gain (no symbol); negatives allowed; printed without prefixes. */
