@@ -1,5 +1,6 @@
 package org.armature.analysis;
 
+import org.armature.netlist.Readings;
 import org.armature.model.DriverTopology;
 import org.armature.model.StageRoles;
 import static org.armature.analysis.Quantities.volts;
@@ -136,18 +137,18 @@ public final class StageChecks {
             String q = roles.switchRef();
             boolean bipolar = switchKind == PartKind.NPN || switchKind == PartKind.PNP;
             boolean mos = switchKind == PartKind.NMOS;
-            return new Readout(op.quantity(k, "coilVoltage"), op.quantity(k, "coilTemperature"),
-                    op.quantity(k, "coilCurrent"), mos ? Double.NaN : op.quantity(q, "ic"),
-                    bipolar ? op.quantity(q, "ib") : Double.NaN, mos ? op.quantity(q, "id") : Double.NaN,
-                    op.powerWatts(q), roles.drivePinRef().map(pin -> op.quantity(pin, "current")).orElse(Double.NaN),
+            return new Readout(op.quantity(k, Readings.COIL_VOLTAGE), op.quantity(k, Readings.COIL_TEMPERATURE),
+                    op.quantity(k, Readings.COIL_CURRENT), mos ? Double.NaN : op.quantity(q, Readings.IC),
+                    bipolar ? op.quantity(q, Readings.IB) : Double.NaN, mos ? op.quantity(q, Readings.ID) : Double.NaN,
+                    op.powerWatts(q), roles.drivePinRef().map(pin -> op.quantity(pin, Readings.CURRENT)).orElse(Double.NaN),
                     bipolar ? Optional.empty() : op.switchVerdict());
         }
 
         /** The readout of a pin-low point: the relay only. */
         static Readout off(OperatingPoint op, StageRoles roles) {
             String k = roles.relayRef();
-            return new Readout(op.quantity(k, "coilVoltage"), op.quantity(k, "coilTemperature"),
-                    op.quantity(k, "coilCurrent"), Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
+            return new Readout(op.quantity(k, Readings.COIL_VOLTAGE), op.quantity(k, Readings.COIL_TEMPERATURE),
+                    op.quantity(k, Readings.COIL_CURRENT), Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
                     Optional.empty());
         }
     }

@@ -11,6 +11,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import java.util.concurrent.Callable;
+import org.armature.netlist.Readings;
 import org.armature.io.StageFiles;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
@@ -180,7 +181,7 @@ final class SolveCommand implements Callable<Integer> {
     /** The unit of a part quantity, by its key (see {@link org.armature.netlist.PartNetwork}). */
     static Unit unitOf(String key) {
         String k = key.toLowerCase(Locale.ROOT);
-        if (k.equals("ic") || k.equals("ib") || k.equals("id") || k.equals("iin") || k.endsWith("current")) {
+        if (k.equals(Readings.IC) || k.equals(Readings.IB) || k.equals(Readings.ID) || k.equals(Readings.IIN) || k.endsWith("current")) {
             return Unit.AMPERE;
         }
         if (k.startsWith("v") || k.endsWith("voltage") || k.endsWith("volts")) {

@@ -463,7 +463,7 @@ public final class NetlistBuilder {
             done(x -> {
                 double sourced = -x.branchCurrent(branch);
                 double volts = x.voltage(p);
-                return new PartReading(Map.of("current", sourced, "volts", volts, "deliveredPower", volts * sourced),
+                return new PartReading(Map.of(Readings.CURRENT, sourced, "volts", volts, Readings.DELIVERED_POWER, volts * sourced),
                         Map.of(), Map.of("p", -sourced), -volts * sourced);
             }, null);
         }
@@ -476,7 +476,7 @@ public final class NetlistBuilder {
             done(x -> {
                 double i = src.currentOut(x, 1.0);
                 double volts = x.voltage(out);
-                return new PartReading(Map.of("current", i, "volts", volts, "deliveredPower", volts * i),
+                return new PartReading(Map.of(Readings.CURRENT, i, "volts", volts, Readings.DELIVERED_POWER, volts * i),
                         Map.of(), Map.of("out", -i), -volts * i);
             }, null);
         }
@@ -497,8 +497,7 @@ public final class NetlistBuilder {
         }
 
         private DiodeParams junctionParams() {
-            return DiodeParams.junction(v("saturationCurrentAmps"), v("emissionCoefficient"))
-                    .withBreakdown(v("breakdownVolts"), v("breakdownCurrentAmps"), v("emissionCoefficient"));
+            return DeviceParameters.junction(part);
         }
 
         private void diode(DiodeParams params) {
@@ -524,17 +523,12 @@ public final class NetlistBuilder {
 
         private PartReading twoTerminal(Solution x, int a, int bb, double current, String pa, String pb) {
             double volts = x.voltage(a) - x.voltage(bb);
-            return new PartReading(Map.of("current", current, "voltage", volts, "power", volts * current),
+            return new PartReading(Map.of(Readings.CURRENT, current, Readings.VOLTAGE, volts, Readings.POWER, volts * current),
                     Map.of(), Map.of(pa, current, pb, -current), volts * current);
         }
 
         private void bjt(BjtPolarity polarity) {
-            double inf = Double.POSITIVE_INFINITY;
-            BjtParams params = new BjtParams(polarity, v("saturationCurrentAmps"), v("betaForward"), v("betaReverse"),
-                    1.0, 1.0, v("earlyVolts"), inf, v("kneeCurrentAmps"), inf, v("baseResistanceOhms"),
-                    v("collectorResistanceOhms"), v("emitterResistanceOhms"), DiodeParams.PN_JUNCTION_TEMP_EXPONENT,
-                    v("gainTempExponent"), DiodeParams.SILICON_BAND_GAP_ELECTRON_VOLTS,
-                    DiodeParams.DATASHEET_TEMPERATURE_KELVIN);
+            BjtParams params = DeviceParameters.bjt(part);
             int c = pin("c");
             int bb = pin("b");
             int e = pin("e");
@@ -553,22 +547,20 @@ public final class NetlistBuilder {
                 double vce = sign * (x.voltage(c) - x.voltage(e));
                 double vbe = sign * (x.voltage(bb) - x.voltage(e));
                 double power = x.voltage(c) * i[0] + x.voltage(bb) * i[1] + x.voltage(e) * i[2];
-                String region = bipolarRegion(sign * q.vbe(x), sign * q.vbc(x), rt);
+                Region region = bipolarRegion(sign * q.vbe(x), sign * q.vbc(x), rt);
                 Map<String, Double> qs = new HashMap<>();
-                qs.put("ic", ic);
-                qs.put("ib", ib);
-                qs.put("vce", vce);
-                qs.put("vbe", vbe);
-                qs.put("forcedBeta", ib > 0 ? ic / ib : 0.0);
-                qs.put("power", power);
-                return new PartReading(qs, Map.of("region", region), Map.of("c", i[0], "b", i[1], "e", i[2]), power);
+                qs.put(Readings.IC, ic);
+                qs.put(Readings.IB, ib);
+                qs.put(Readings.VCE, vce);
+                qs.put(Readings.VBE, vbe);
+                qs.put(Readings.FORCED_BETA, ib > 0 ? ic / ib : 0.0);
+                qs.put(Readings.POWER, power);
+                return new PartReading(qs, Map.of(Readings.REGION, region.key()), Map.of("c", i[0], "b", i[1], "e", i[2]), power);
             }, null);
         }
 
         private void nmos() {
-            MosfetParams params = MosfetParams.level1(v("thresholdVolts"), v("transconductanceAmpsPerVoltSquared"),
-                    v("lambdaPerVolt")).withTemperatureScaling(v("thresholdTempcoVoltsPerKelvin"),
-                    MosfetParams.DEFAULT_MOBILITY_TEMP_EXPONENT);
+            MosfetParams params = DeviceParameters.mosfet(part);
             int d = pin("d");
             int g = pin("g");
             int s = pin("s");
@@ -585,9 +577,10 @@ public final class NetlistBuilder {
                 double vgs = x.voltage(g) - x.voltage(s);
                 double vds = x.voltage(d) - x.voltage(s);
                 double power = vds * id;
-                String region = vgs <= threshold ? "cutoff" : (Math.abs(vds) < vgs - threshold ? "triode" : "saturation");
-                return new PartReading(Map.of("id", id, "vgs", vgs, "vds", vds, "power", power),
-                        Map.of("region", region), Map.of("d", id, "g", 0.0, "s", -id), power);
+                Region region = vgs <= threshold ? Region.CUTOFF
+                        : (Math.abs(vds) < vgs - threshold ? Region.TRIODE : Region.SATURATION);
+                return new PartReading(Map.of(Readings.ID, id, Readings.VGS, vgs, Readings.VDS, vds, Readings.POWER, power),
+                        Map.of(Readings.REGION, region.key()), Map.of("d", id, "g", 0.0, "s", -id), power);
             }, null);
         }
 
@@ -631,16 +624,16 @@ public final class NetlistBuilder {
                 double vce = x.voltage(out) - x.voltage(e);
                 double vin = x.voltage(in) - x.voltage(e);
                 double power = x.voltage(in) * iin + x.voltage(out) * ic + x.voltage(com) * (-iclamp) + x.voltage(e) * ie;
-                String region;
+                Region region;
                 if (q2.vbe(x) < rt.junctionOnVolts()) {
-                    region = "cutoff";
+                    region = Region.CUTOFF;
                 } else if (q1.vbc(x) >= rt.saturationBaseCollectorVolts()) {
-                    region = "saturation";
+                    region = Region.SATURATION;
                 } else {
-                    region = "active";
+                    region = Region.ACTIVE;
                 }
-                return new PartReading(Map.of("ic", ic, "iin", iin, "vce", vce, "vin", vin, "power", power),
-                        Map.of("region", region), Map.of("in", iin, "out", ic, "com", -iclamp, "e", ie), power);
+                return new PartReading(Map.of(Readings.IC, ic, Readings.IIN, iin, Readings.VCE, vce, Readings.VIN, vin, Readings.POWER, power),
+                        Map.of(Readings.REGION, region.key()), Map.of("in", iin, "out", ic, "com", -iclamp, "e", ie), power);
             }, null);
         }
 
@@ -674,15 +667,15 @@ public final class NetlistBuilder {
                 double power = vCoil * i + (x.voltage(com) - x.voltage(no)) * iNo + (x.voltage(com) - x.voltage(nc)) * iNc
                         + (x.voltage(com) - x.voltage(a2)) * iIns;
                 Map<String, Double> qs = new HashMap<>();
-                qs.put("coilCurrent", i);
-                qs.put("coilVoltage", vCoil);
-                qs.put("coilResistance", coil.ohmsAt(coilT));
-                qs.put("coilTemperature", coilT);
-                qs.put("pickUpCurrent", handle.pickUpAmps());
-                qs.put("dropOutCurrent", handle.dropOutAmps());
-                qs.put("power", power);
-                String contacts = x.state(contactSlot) > 0.5 ? "operated" : "released";
-                return new PartReading(qs, Map.of("state", handle.stateFor(i).key(), "contacts", contacts),
+                qs.put(Readings.COIL_CURRENT, i);
+                qs.put(Readings.COIL_VOLTAGE, vCoil);
+                qs.put(Readings.COIL_RESISTANCE, coil.ohmsAt(coilT));
+                qs.put(Readings.COIL_TEMPERATURE, coilT);
+                qs.put(Readings.PICK_UP_CURRENT, handle.pickUpAmps());
+                qs.put(Readings.DROP_OUT_CURRENT, handle.dropOutAmps());
+                qs.put(Readings.POWER, power);
+                String contacts = ContactState.of(x.state(contactSlot)).key();
+                return new PartReading(qs, Map.of(Readings.STATE, handle.stateFor(i).key(), Readings.CONTACTS, contacts),
                         Map.of("a1", i, "a2", -i - iIns, "com", iNo + iNc + iIns, "no", -iNo, "nc", -iNc), power);
             }, handle);
         }
@@ -694,13 +687,13 @@ public final class NetlistBuilder {
      */
     private static final double TVS_LIMITING_SATURATION_AMPS = 1e-12;
 
-    static String bipolarRegion(double vbe, double vbc, RegionThresholds rt) {
+    static Region bipolarRegion(double vbe, double vbc, RegionThresholds rt) {
         if (vbe < rt.junctionOnVolts()) {
-            return "cutoff";
+            return Region.CUTOFF;
         }
         if (vbc >= rt.saturationBaseCollectorVolts()) {
-            return "saturation";
+            return Region.SATURATION;
         }
-        return "active";
+        return Region.ACTIVE;
     }
 }

@@ -33,7 +33,7 @@ public final class SwitchedResistor extends TwoTerminalElement {
      * @return resistance in that state, Ω
      */
     public double ohms(Solution x) {
-        return ohms(x.state(stateSlot) > 0.5);
+        return ohms(ContactState.of(x.state(stateSlot)).operated());
     }
 
     /**

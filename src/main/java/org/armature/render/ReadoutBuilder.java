@@ -6,6 +6,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
+import org.armature.netlist.Readings;
+import org.armature.netlist.Region;
 import org.armature.model.Finding;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
@@ -168,8 +170,7 @@ public final class ReadoutBuilder {
     public static String verdictWords(SwitchVerdict v, Part part, PartResult r) {
         PartKind kind = part.kind();
         boolean mos = kind == PartKind.NMOS;
-        String region = r.states().getOrDefault("region", "");
-        if (region.equals("cutoff") || v.margin() == 0 && !v.fullyOn()) {
+        if (r.region().orElse(Region.ACTIVE) == Region.CUTOFF || v.margin() == 0 && !v.fullyOn()) {
             return mos ? "off" : "cut off";
         }
         String margin = "×" + String.format(Locale.ROOT, "%.2g", v.margin()) + " margin";
@@ -180,8 +181,8 @@ public final class ReadoutBuilder {
             return "not fully on: " + margin;
         }
         boolean darlington = kind == PartKind.DARLINGTON;
-        double ic = r.quantity("ic");
-        double drive = r.quantity(darlington ? "iin" : "ib");
+        double ic = r.quantity(Readings.IC);
+        double drive = r.quantity(darlington ? Readings.IIN : Readings.IB);
         double lacking = ic / part.value("hfeMin") - drive;
         return "not saturated: needs " + Notation.format(lacking, "A") + " more " + (darlington ? "input" : "base")
                 + " current";
@@ -198,8 +199,8 @@ public final class ReadoutBuilder {
 
     private static Annotations.PartBadge transistorBadge(Part p, PartResult r, Optional<SwitchVerdict> verdict,
                                                          boolean pinHigh) {
-        String region = r.states().getOrDefault("region", "");
-        boolean conducting = !region.equals("cutoff");
+        Optional<Region> region = r.region();
+        boolean conducting = region.map(Region::conducts).orElse(true);
         if (verdict.isPresent() && verdict.get().ref().equals(p.ref())) {
             SwitchVerdict v = verdict.get();
             String words = verdictWords(v, p, r);
@@ -211,26 +212,16 @@ public final class ReadoutBuilder {
                 state = conducting ? Annotations.State.FAIL : Annotations.State.OK;
             }
             if (!pinHigh && conducting) {
-                words = "conducts with the pin low (" + region + ")";
+                words = "conducts with the pin low (" + region.map(Region::key).orElse("") + ")";
             }
             return new Annotations.PartBadge(p.ref(), words, state);
         }
-        return new Annotations.PartBadge(p.ref(), regionWords(region), Annotations.State.OK);
-    }
-
-    private static String regionWords(String region) {
-        return switch (region) {
-            case "saturation" -> "saturated";
-            case "cutoff" -> "cut off";
-            case "active" -> "active region";
-            case "triode" -> "triode region";
-            default -> region;
-        };
+        return new Annotations.PartBadge(p.ref(), region.map(Region::words).orElse(""), Annotations.State.OK);
     }
 
     private static Optional<Annotations.PartBadge> pinBadge(Part p, PartResult r) {
         double limit = p.value("pinCurrentLimitAmps");
-        Double out = r.quantities().get("current");
+        Double out = r.quantities().get(Readings.CURRENT);
         if (out == null || !(limit > 0)) {
             return Optional.empty();
         }
@@ -242,9 +233,9 @@ public final class ReadoutBuilder {
     }
 
     private static Optional<Annotations.RelayGauge> gauge(Part p, PartResult r, OperatingPoint op) {
-        Double coil = r.quantities().get("coilCurrent");
-        Double pick = r.quantities().get("pickUpCurrent");
-        Double drop = r.quantities().get("dropOutCurrent");
+        Double coil = r.quantities().get(Readings.COIL_CURRENT);
+        Double pick = r.quantities().get(Readings.PICK_UP_CURRENT);
+        Double drop = r.quantities().get(Readings.DROP_OUT_CURRENT);
         if (coil == null || pick == null || drop == null || !(drop >= 0 && pick > drop)) {
             return Optional.empty();
         }

@@ -8,6 +8,9 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import java.util.function.Supplier;
+import org.armature.netlist.ContactState;
+import org.armature.netlist.Readings;
+import org.armature.netlist.Region;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
 import org.armature.netlist.ArraySolution;
@@ -221,7 +224,7 @@ public final class OperatingPoint {
         Map<String, String> st = r.states();
         if (p.relay().isPresent()) {
             st = new HashMap<>(st);
-            st.put("contactsFrom", contactsFrom[netlist.relays().indexOf(p.relay().get())]);
+            st.put(Readings.CONTACTS_FROM, contactsFrom[netlist.relays().indexOf(p.relay().get())]);
         }
         PartResult made = new PartResult(p.ref(), p.part().kind(), pinV, r.pinCurrents(), r.powerWatts(),
                 r.quantities(), st);
@@ -242,7 +245,7 @@ public final class OperatingPoint {
     public Map<String, Boolean> relayOperated() {
         Map<String, Boolean> m = new TreeMap<>();
         for (RelayHandle h : netlist.relays()) {
-            m.put(h.ref(), states[h.contactSlot()] > 0.5);
+            m.put(h.ref(), ContactState.of(states[h.contactSlot()]).operated());
         }
         return m;
     }
@@ -327,9 +330,9 @@ public final class OperatingPoint {
         String ref = part.ref();
         PartKind kind = part.kind();
         if (kind == PartKind.NMOS) {
-            double vgs = r.quantity("vgs");
-            double id = r.quantity("id");
-            if (r.state("region").equals("cutoff") || !(id > 0)) {
+            double vgs = r.quantity(Readings.VGS);
+            double id = r.quantity(Readings.ID);
+            if (r.region().orElse(Region.CUTOFF) == Region.CUTOFF || !(id > 0)) {
                 return new SwitchVerdict(ref, false, 0.0, () -> ref + " is off: VGS " + volts(vgs) + " is below threshold.");
             }
             double thMax = part.value("vgsThMaxVolts");
@@ -353,10 +356,10 @@ public final class OperatingPoint {
             return new SwitchVerdict(ref, on, margin, reason);
         }
         boolean darlington = kind == PartKind.DARLINGTON;
-        double ic = r.quantity("ic");
-        double drive = r.quantity(darlington ? "iin" : "ib");
+        double ic = r.quantity(Readings.IC);
+        double drive = r.quantity(darlington ? Readings.IIN : Readings.IB);
         double hfeMin = part.value("hfeMin");
-        if (r.state("region").equals("cutoff") || !(ic > 0) || !(drive > 0)) {
+        if (r.region().orElse(Region.CUTOFF) == Region.CUTOFF || !(ic > 0) || !(drive > 0)) {
             return new SwitchVerdict(ref, false, 0.0, () -> ref + " is cut off: " + (darlington ? "input" : "base")
                     + " current " + amps(Math.max(drive, 0.0)) + ", the coil is not energised.");
         }

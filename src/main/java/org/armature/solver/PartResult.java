@@ -3,6 +3,9 @@ package org.armature.solver;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.Optional;
+import org.armature.netlist.Readings;
+import org.armature.netlist.Region;
 import org.armature.model.PartKind;
 
 /**
@@ -39,6 +42,14 @@ public record PartResult(String ref, PartKind kind, Map<String, Double> pinVolta
             throw new IllegalArgumentException(ref + " has no quantity " + key + "; it has " + quantities.keySet());
         }
         return v;
+    }
+
+    /**
+     * @return the transistor's region ({@link Readings#REGION}); empty for a part that has none
+     */
+    public Optional<Region> region() {
+        String key = states.get(Readings.REGION);
+        return key == null ? Optional.empty() : Region.byKey(key);
     }
 
     /**

@@ -14,6 +14,7 @@ import org.armature.devices.MosfetFit;
 import org.armature.devices.MosfetParams;
 import org.armature.model.ParamSpec;
 import org.armature.model.Part;
+import org.armature.netlist.DeviceParameters;
 import org.armature.model.PartKind;
 import org.armature.ui.edit.Editor;
 
@@ -151,14 +152,7 @@ public final class DatasheetFit {
         if (part.kind() != PartKind.NPN && part.kind() != PartKind.PNP) {
             throw new IllegalArgumentException(part.ref() + " is not a bipolar transistor");
         }
-        BjtPolarity polarity = part.kind() == PartKind.NPN ? BjtPolarity.NPN : BjtPolarity.PNP;
-        double inf = Double.POSITIVE_INFINITY;
-        return new BjtParams(polarity, part.value("saturationCurrentAmps"), part.value("betaForward"),
-                part.value("betaReverse"), 1.0, 1.0, part.value("earlyVolts"), inf, part.value("kneeCurrentAmps"),
-                inf, part.value("baseResistanceOhms"), part.value("collectorResistanceOhms"),
-                part.value("emitterResistanceOhms"), DiodeParams.PN_JUNCTION_TEMP_EXPONENT,
-                part.value("gainTempExponent"), DiodeParams.SILICON_BAND_GAP_ELECTRON_VOLTS,
-                DiodeParams.DATASHEET_TEMPERATURE_KELVIN);
+        return DeviceParameters.bjt(part);
     }
 
     /** Fits VT0 and β of an N-channel MOSFET part and writes the datasheet figures as entered. */
@@ -167,10 +161,7 @@ public final class DatasheetFit {
             return Result.refused(part.ref() + " is not an N-channel MOSFET.");
         }
         try {
-            MosfetParams base = MosfetParams.level1(part.value("thresholdVolts"),
-                    part.value("transconductanceAmpsPerVoltSquared"), part.value("lambdaPerVolt"))
-                    .withTemperatureScaling(part.value("thresholdTempcoVoltsPerKelvin"),
-                            MosfetParams.DEFAULT_MOBILITY_TEMP_EXPONENT);
+            MosfetParams base = DeviceParameters.mosfet(part);
             MosfetFit fit = MosfetFit.fit(base, f.rdsOnOhms(), f.rdsOnGateVolts(), f.rdsOnDrainAmps(),
                     f.thresholdVolts(), f.thresholdDrainAmps());
             if (fit.params().isEmpty()) {

@@ -11,6 +11,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.function.ToDoubleFunction;
 import java.util.stream.IntStream;
+import org.armature.netlist.Readings;
 import org.armature.devices.BreakdownClamp;
 import org.armature.devices.DeviceFinding;
 import org.armature.devices.MovingArmature;
@@ -23,6 +24,7 @@ import org.armature.model.Stage;
 import org.armature.model.StageRecognition;
 import org.armature.model.StageRoles;
 import org.armature.netlist.Capacitor;
+import org.armature.netlist.ContactState;
 import org.armature.netlist.Element;
 import org.armature.netlist.FlattenOptions;
 import org.armature.netlist.Netlist;
@@ -69,8 +71,8 @@ final class StageCircuit {
         Netlist high = initialHigh ? here : other;
         double[] states = here.initialStates();
         for (RelayHandle r : here.relays()) {
-            states[r.contactSlot()] = operated.getOrDefault(r.ref(), false) ? 1.0 : 0.0;
-            Double t = op.requirePart(r.ref()).quantities().get("coilTemperature");
+            states[r.contactSlot()] = ContactState.of(operated.getOrDefault(r.ref(), false)).slotValue();
+            Double t = op.requirePart(r.ref()).quantities().get(Readings.COIL_TEMPERATURE);
             if (t != null) {
                 states[r.temperatureSlot()] = t;
             }
@@ -146,7 +148,7 @@ final class StageCircuit {
         double rRef = relay.value("coilResistanceOhms");
         double lRel = relay.value("inductanceReleasedHenries");
         RelayHandle handle = net.relays().stream().filter(h -> h.ref().equals(relay.ref())).findFirst().orElseThrow();
-        boolean operated = states[handle.contactSlot()] > 0.5;
+        boolean operated = ContactState.of(states[handle.contactSlot()]).operated();
         TransientCoil tc = c.add(new TransientCoil(relay.ref(), a1, a2, ohms, lRel, lRel, c.step));
         double cap = relay.value("coilCapacitanceFarads");
         if (cap > 0) {
