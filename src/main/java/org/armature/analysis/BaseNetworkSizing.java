@@ -1,5 +1,6 @@
 package org.armature.analysis;
 
+import org.armature.model.ParamKeys;
 import org.armature.model.DriverTopology;
 import org.armature.model.StageRoles;
 import static org.armature.analysis.Quantities.volts;
@@ -88,6 +89,8 @@ public final class BaseNetworkSizing {
         private final List<SizingStep> steps = new ArrayList<>();
         private final List<Suggestion> suggestions = new ArrayList<>();
         private final List<Finding> findings = new ArrayList<>();
+        /** Designators proposed for resistors the stage lacks, so that two missing ones get two names. */
+        private final java.util.Set<String> proposed = new java.util.HashSet<>();
 
         Run(Stage stage, SizingOptions options) {
             this.stage = stage;
@@ -113,8 +116,8 @@ public final class BaseNetworkSizing {
             Part sw = stage.require(r.switchRef());
             switch (r.topology()) {
                 case LOW_SIDE_NPN -> {
-                    double ic = coilCurrent(relay, supply, sw.value("vceSatVolts"), "VCE(sat)");
-                    bipolarInput(sw, pin, ic, r.inputResistorRef().orElse("R1"), r.inputPullRef().orElse("R2"), "");
+                    double ic = coilCurrent(relay, supply, sw.value(ParamKeys.VCE_SAT_VOLTS), "VCE(sat)");
+                    bipolarInput(sw, pin, ic, refOrNew(r.inputResistorRef()), refOrNew(r.inputPullRef()), "");
                 }
                 case LOW_SIDE_NMOS -> mosfet(relay, supply, sw, pin, r);
                 case DARLINGTON_CHANNEL -> darlington(relay, supply, sw, pin, r);
@@ -122,6 +125,23 @@ public final class BaseNetworkSizing {
                 default -> throw new IllegalStateException("unknown topology " + r.topology());
             }
             return result(Optional.of(r.topology()));
+        }
+
+        /**
+         * The resistor doing a role, or, when the stage has none, a designator for the one to add:
+         * the lowest free "R" number, never a part that is already there (a missing role must not
+         * name some other resistor of the drawing).
+         */
+        private String refOrNew(Optional<String> role) {
+            if (role.isPresent()) {
+                return role.get();
+            }
+            for (int i = 1; ; i++) {
+                String candidate = "R" + i;
+                if (stage.part(candidate).isEmpty() && proposed.add(candidate)) {
+                    return candidate;
+                }
+            }
         }
 
         private SizingResult result(Optional<DriverTopology> t) {
@@ -132,7 +152,7 @@ public final class BaseNetworkSizing {
 
         /** Steps 1–3: coldest coil, highest supply, largest coil current. */
         private double coilCurrent(Part relay, Part supply, double switchDropVolts, String dropSymbol) {
-            double tol = relay.value("coilResistanceTolerancePercent") / 100;
+            double tol = relay.value(ParamKeys.COIL_RESISTANCE_TOLERANCE_PERCENT) / 100;
             double tMin = stage.conditions().ambientMinCelsius();
             double rMin = PartPhysics.coilOhms(relay, 1 - tol, tMin);
             step("coil resistance, coldest", "Rcoil,min = Rcoil·(1 − tol)·(234.5 + Ta,min)/(234.5 + Tref), Ta,min = "
@@ -152,9 +172,9 @@ public final class BaseNetworkSizing {
         private void bipolarInput(Part q, Part pin, double collectorAmps, String seriesRef, String pullRef,
                                   String prefix) {
             double tMin = stage.conditions().ambientMinCelsius();
-            double hfeCold = q.value("hfeMin") * PartPhysics.gainFactor(q, tMin);
+            double hfeCold = q.value(ParamKeys.HFE_MIN) * PartPhysics.gainFactor(q, tMin);
             step(prefix + "hFE(min) at the coldest ambient", "hFE(min)·(Ta,min/Tnom)^XTB, hFE(min) = "
-                    + ratio(q.value("hfeMin")) + ", XTB = " + ratio(q.value("gainTempExponent")), hfeCold, Unit.RATIO);
+                    + ratio(q.value(ParamKeys.HFE_MIN)) + ", XTB = " + ratio(q.value(ParamKeys.GAIN_TEMP_EXPONENT)), hfeCold, Unit.RATIO);
             double ib = o.baseDrive().baseAmps(collectorAmps, hfeCold);
             step(prefix + "base current", o.baseDrive().formula(), ib, Unit.AMPERE);
             double ibMin = collectorAmps / hfeCold;
@@ -164,16 +184,16 @@ public final class BaseNetworkSizing {
                                 + ": with a low-gain sample at the coldest ambient " + q.ref()
                                 + " does not saturate. Ask for a forced β well below hFE(min).");
             }
-            double vbe = q.value("vbeSatVolts");
+            double vbe = q.value(ParamKeys.VBE_SAT_VOLTS);
             double pullOhms = pullDown(q, vbe, ib, pullRef, prefix);
             double ipd = pullOhms > 0 ? vbe / pullOhms : 0;
             double iR = ib + ipd;
             step(prefix + "base resistor current", "IR = IB + Ipd", iR, Unit.AMPERE);
             LogicOutputPin low = PartPhysics.pin(pin, true);
             double voh = low.voltsAt(iR);
-            step(prefix + "pin high level under load", "VOH = V0 − ΔV0 − IR·Rout, V0 = " + volts(pin.value("highVolts"))
-                    + ", ΔV0 = " + volts(pin.value("highToleranceVolts")) + ", Rout = "
-                    + ohms(pin.value("outputResistanceOhms")), voh, Unit.VOLT);
+            step(prefix + "pin high level under load", "VOH = V0 − ΔV0 − IR·Rout, V0 = " + volts(pin.value(ParamKeys.HIGH_VOLTS))
+                    + ", ΔV0 = " + volts(pin.value(ParamKeys.HIGH_TOLERANCE_VOLTS)) + ", Rout = "
+                    + ohms(pin.value(ParamKeys.OUTPUT_RESISTANCE_OHMS)), voh, Unit.VOLT);
             step(prefix + "VBE(sat)", "datasheet maximum at IC/IB = 10", vbe, Unit.VOLT);
             double vr = voh - vbe;
             step(prefix + "voltage across the base resistor", "VR = VOH − VBE(sat)", vr, Unit.VOLT);
@@ -188,7 +208,7 @@ public final class BaseNetworkSizing {
             ESeries s = o.series();
             double rbPref = s.roundDown(rb);
             step(prefix + "base resistor, preferred", s.name() + ", rounded down (more drive)", rbPref, Unit.OHM);
-            suggestions.add(new Suggestion(seriesRef, "resistanceOhms", rbPref, s.tolerancePercent(),
+            suggestions.add(new Suggestion(seriesRef, ParamKeys.RESISTANCE_OHMS, rbPref, s.tolerancePercent(),
                     prefix + "base resistor", "RB = (VOH − VBE(sat)) / (IB + Ipd), rounded down to " + s.name()));
             double tol = s.toleranceFraction();
             double ipdHigh = pullOhms > 0 ? vbe / (pullOhms * (1 - tol)) : 0;
@@ -228,7 +248,7 @@ public final class BaseNetworkSizing {
                                 + " favours holding it off.");
             }
             step(prefix + word + ", preferred", s.name() + ", rounded up (less current taken)", pref, Unit.OHM);
-            suggestions.add(new Suggestion(pullRef, "resistanceOhms", pref, s.tolerancePercent(), prefix + word,
+            suggestions.add(new Suggestion(pullRef, ParamKeys.RESISTANCE_OHMS, pref, s.tolerancePercent(), prefix + word,
                     "smallest " + s.name() + " value taking ≤ " + ratio(o.pullDownFraction() * 100)
                             + " % of IB, and ≤ Voff / Ileak"));
             double ipd = holdVolts / pref;
@@ -238,16 +258,16 @@ public final class BaseNetworkSizing {
 
         private void pinBudget(Part pin, double iPin, String label, String formula) {
             step(label, formula, iPin, Unit.AMPERE);
-            double limit = pin.value("pinCurrentLimitAmps");
+            double limit = pin.value(ParamKeys.PIN_CURRENT_LIMIT_AMPS);
             if (iPin > limit) {
                 finding(Severity.WARNING, "sizing.pin-current-over-limit", pin.ref(),
                         pin.ref() + " would source up to " + amps(iPin) + ", above its per-pin limit of " + amps(limit) + ".");
             }
-            double channels = pin.value("channelCount");
+            double channels = pin.value(ParamKeys.CHANNEL_COUNT);
             double total = channels * iPin;
             step("package current, all channels", "Ipkg = channels · Ipin, channels = " + ratio(channels), total,
                     Unit.AMPERE);
-            double pkg = pin.value("packageCurrentLimitAmps");
+            double pkg = pin.value(ParamKeys.PACKAGE_CURRENT_LIMIT_AMPS);
             if (total > pkg) {
                 finding(Severity.WARNING, "sizing.package-current-over-limit", pin.ref(),
                         ratio(channels) + " channels would draw " + amps(total) + " from " + pin.ref()
@@ -265,10 +285,10 @@ public final class BaseNetworkSizing {
                 return;
             }
             Part shift = stage.require(r.levelShiftRef().get());
-            double ic = coilCurrent(relay, supply, pnp.value("vceSatVolts"), "VCE(sat)");
+            double ic = coilCurrent(relay, supply, pnp.value(ParamKeys.VCE_SAT_VOLTS), "VCE(sat)");
             String p = pnp.ref() + ": ";
             double tMin = stage.conditions().ambientMinCelsius();
-            double hfeCold = pnp.value("hfeMin") * PartPhysics.gainFactor(pnp, tMin);
+            double hfeCold = pnp.value(ParamKeys.HFE_MIN) * PartPhysics.gainFactor(pnp, tMin);
             step(p + "hFE(min) at the coldest ambient", "hFE(min)·(Ta,min/Tnom)^XTB", hfeCold, Unit.RATIO);
             double ib = o.baseDrive().baseAmps(ic, hfeCold);
             step(p + "base current", o.baseDrive().formula(), ib, Unit.AMPERE);
@@ -276,13 +296,13 @@ public final class BaseNetworkSizing {
                 finding(Severity.WARNING, "sizing.below-minimum-gain", pnp.ref(),
                         "The base current asked for is below IC / hFE(min, cold): " + pnp.ref() + " does not saturate.");
             }
-            double veb = pnp.value("vbeSatVolts");
-            double pull = pullDown(pnp, veb, ib, r.switchPullUpRef().orElse("R3"), p);
+            double veb = pnp.value(ParamKeys.VBE_SAT_VOLTS);
+            double pull = pullDown(pnp, veb, ib, refOrNew(r.switchPullUpRef()), p);
             double iR = ib + (pull > 0 ? veb / pull : 0);
             step(p + "base resistor current", "IR = IB + Ipu", iR, Unit.AMPERE);
             double vMin = PartPhysics.supplyMin(supply);
             step("supply, minimum", "VS,min = VS·(1 − tol)", vMin, Unit.VOLT);
-            double vr = vMin - veb - shift.value("vceSatVolts");
+            double vr = vMin - veb - shift.value(ParamKeys.VCE_SAT_VOLTS);
             step(p + "voltage across the base resistor", "VR = VS,min − VEB(sat) − VCE(sat)," + shift.ref(), vr, Unit.VOLT);
             if (!(vr > 0)) {
                 finding(Severity.ERROR, "sizing.pin-too-low", supply.ref(),
@@ -294,30 +314,30 @@ public final class BaseNetworkSizing {
             step(p + "base resistor", "RB = VR / IR", rb, Unit.OHM);
             double rbPref = s.roundDown(rb);
             step(p + "base resistor, preferred", s.name() + ", rounded down (more drive)", rbPref, Unit.OHM);
-            suggestions.add(new Suggestion(r.switchBaseResistorRef().orElse("R4"), "resistanceOhms", rbPref,
+            suggestions.add(new Suggestion(refOrNew(r.switchBaseResistorRef()), ParamKeys.RESISTANCE_OHMS, rbPref,
                     s.tolerancePercent(), p + "base resistor", "RB = (VS,min − VEB(sat) − VCE(sat)) / (IB + Ipu), rounded down"));
-            double ic2 = (PartPhysics.supplyMax(supply) - veb - shift.value("vceSatVolts"))
+            double ic2 = (PartPhysics.supplyMax(supply) - veb - shift.value(ParamKeys.VCE_SAT_VOLTS))
                     / (rbPref * (1 - s.toleranceFraction()));
             step(shift.ref() + " collector current, largest", "IC2 = (VS,max − VEB(sat) − VCE(sat)) / (RB·(1 − tol))",
                     ic2, Unit.AMPERE);
-            bipolarInput(shift, pin, ic2, r.inputResistorRef().orElse("R1"), r.inputPullRef().orElse("R2"),
+            bipolarInput(shift, pin, ic2, refOrNew(r.inputResistorRef()), refOrNew(r.inputPullRef()),
                     shift.ref() + ": ");
         }
 
         // ------------------------------------------------------------------ MOSFET
 
         private void mosfet(Part relay, Part supply, Part q, Part pin, StageRoles r) {
-            double rds = q.value("rdsOnOhms");
+            double rds = q.value(ParamKeys.RDS_ON_OHMS);
             double ic = coilCurrent(relay, supply, 0, "VDS(on)");
             ESeries s = o.series();
             LogicOutputPin nominal = PartPhysics.pin(pin, false);
-            double rgMin = (nominal.openCircuitVolts() / pin.value("pinCurrentLimitAmps") - nominal.outputResistanceOhms())
+            double rgMin = (nominal.openCircuitVolts() / pin.value(ParamKeys.PIN_CURRENT_LIMIT_AMPS) - nominal.outputResistanceOhms())
                     / (1 - s.toleranceFraction());
             step("gate resistor, smallest", "RG,min = (V0 / Ilim − Rout) / (1 − tol) (uncharged gate at the edge)", rgMin,
                     Unit.OHM);
             double rg = s.roundUp(Math.max(rgMin, o.minimumGateOhms()));
             step("gate resistor, preferred", s.name() + ", rounded up, at least " + ohms(o.minimumGateOhms()), rg, Unit.OHM);
-            suggestions.add(new Suggestion(r.inputResistorRef().orElse("R1"), "resistanceOhms", rg, s.tolerancePercent(),
+            suggestions.add(new Suggestion(refOrNew(r.inputResistorRef()), ParamKeys.RESISTANCE_OHMS, rg, s.tolerancePercent(),
                     "gate resistor", "smallest " + s.name() + " value keeping the gate-charging peak within the pin limit"));
             double peak = nominal.currentInto(rg * (1 - s.toleranceFraction()), 0);
             pinBudget(pin, peak, "pin current, peak at the edge", "Ipk = V0 / (Rout + RG·(1 − tol))");
@@ -333,14 +353,14 @@ public final class BaseNetworkSizing {
                         "No gate pull-down both keeps the divider loss small and holds the gate against leakage.");
             }
             step("gate pull-down, preferred", s.name() + ", rounded up", pd, Unit.OHM);
-            suggestions.add(new Suggestion(r.inputPullRef().orElse("R2"), "resistanceOhms", pd, s.tolerancePercent(),
+            suggestions.add(new Suggestion(refOrNew(r.inputPullRef()), ParamKeys.RESISTANCE_OHMS, pd, s.tolerancePercent(),
                     "gate pull-down", "smallest " + s.name() + " value losing ≤ " + ratio(f * 100) + " % of the gate drive"));
             LogicOutputPin low = PartPhysics.pin(pin, true);
             double vgs = low.openCircuitVolts() * pd / (pd + rg + low.outputResistanceOhms());
             step("gate voltage available", "VGS = (V0 − ΔV0)·Rpd / (Rpd + RG + Rout)", vgs, Unit.VOLT);
-            double th = q.value("vgsThMaxVolts");
+            double th = q.value(ParamKeys.VGS_TH_MAX_VOLTS);
             step("gate overdrive", "VGS − VGS(th),max, VGS(th),max = " + volts(th), vgs - th, Unit.VOLT);
-            double spec = q.value("rdsOnGateVolts");
+            double spec = q.value(ParamKeys.RDS_ON_GATE_VOLTS);
             if (vgs <= th) {
                 finding(Severity.ERROR, "sizing.gate-below-threshold", q.ref(),
                         "The gate voltage available, " + volts(vgs) + ", does not exceed VGS(th) max (" + volts(th) + "): "
@@ -356,7 +376,7 @@ public final class BaseNetworkSizing {
                                 + volts(vgs) + " available.");
                 step("drain voltage, on", "VDS = IC · RDS(on)", ic * rds, Unit.VOLT);
             }
-            double idMax = q.value("idMaxAmps");
+            double idMax = q.value(ParamKeys.ID_MAX_AMPS);
             if (ic > idMax) {
                 finding(Severity.WARNING, "sizing.drain-current-over-rating", q.ref(),
                         "The coil current " + amps(ic) + " exceeds " + q.ref() + "'s ID max " + amps(idMax) + ".");
@@ -366,22 +386,22 @@ public final class BaseNetworkSizing {
         // ------------------------------------------------------------------ Darlington
 
         private void darlington(Part relay, Part supply, Part u, Part pin, StageRoles r) {
-            double tol = relay.value("coilResistanceTolerancePercent") / 100;
+            double tol = relay.value(ParamKeys.COIL_RESISTANCE_TOLERANCE_PERCENT) / 100;
             double guess = PartPhysics.supplyMax(supply) / PartPhysics.coilOhms(relay, 1 - tol,
                     stage.conditions().ambientMinCelsius());
             double ic = coilCurrent(relay, supply, DarlingtonSaturation.typicalVolts(guess), "VCE(sat),typ (DA-2)");
-            double hfe = u.value("hfeMin") * PartPhysics.gainFactor(u, stage.conditions().ambientMinCelsius());
+            double hfe = u.value(ParamKeys.HFE_MIN) * PartPhysics.gainFactor(u, stage.conditions().ambientMinCelsius());
             step("channel hFE(min) at the coldest ambient", "hFE(min)·(Ta,min/Tnom)^XTB", hfe, Unit.RATIO);
             double need = ic / hfe;
             step("input current needed", "Iin,min = IC / hFE(min, cold)", need, Unit.AMPERE);
-            double rExt = r.inputResistorRef().map(ref -> stage.require(ref).value("resistanceOhms")).orElse(0.0);
-            double rin = u.value("inputResistanceOhms");
+            double rExt = r.inputResistorRef().map(ref -> stage.require(ref).value(ParamKeys.RESISTANCE_OHMS)).orElse(0.0);
+            double rin = u.value(ParamKeys.INPUT_RESISTANCE_OHMS);
             LogicOutputPin low = PartPhysics.pin(pin, true);
             double vbe2 = 2 * o.darlingtonVbeVolts();
             double iin = Math.max(0, (low.openCircuitVolts() - vbe2) / (low.outputResistanceOhms() + rExt + rin));
             step("input current available", "Iin = (V0 − ΔV0 − 2·VBE) / (Rout + Rext + Rin), VBE = "
                     + volts(o.darlingtonVbeVolts()) + ", Rin = " + ohms(rin) + ", Rext = " + ohms(rExt), iin, Unit.AMPERE);
-            double steal = o.darlingtonVbeVolts() / u.value("firstBaseEmitterOhms");
+            double steal = o.darlingtonVbeVolts() / u.value(ParamKeys.FIRST_BASE_EMITTER_OHMS);
             step("input current into the first base", "Iin − VBE / RBE1", iin - steal, Unit.AMPERE);
             if (iin - steal < need) {
                 finding(Severity.WARNING, "sizing.input-current-short", u.ref(),
@@ -391,12 +411,12 @@ public final class BaseNetworkSizing {
             LogicOutputPin nominal = PartPhysics.pin(pin, false);
             double iPin = Math.max(0, (nominal.openCircuitVolts() - vbe2) / (nominal.outputResistanceOhms() + rExt + rin));
             pinBudget(pin, iPin, "pin current, largest", "Ipin = (V0 − 2·VBE) / (Rout + Rext + Rin)");
-            double limit = pin.value("pinCurrentLimitAmps");
+            double limit = pin.value(ParamKeys.PIN_CURRENT_LIMIT_AMPS);
             if (iPin > limit) {
-                double smallest = PartKind.RESISTOR.param("resistanceOhms").orElseThrow().min();
+                double smallest = PartKind.RESISTOR.param(ParamKeys.RESISTANCE_OHMS).orElseThrow().min();
                 double add = o.series().roundUp(Math.max(smallest, (nominal.openCircuitVolts() - vbe2) / limit - rin
                         - nominal.outputResistanceOhms()));
-                suggestions.add(new Suggestion(r.inputResistorRef().orElse("R1"), "resistanceOhms", add,
+                suggestions.add(new Suggestion(refOrNew(r.inputResistorRef()), ParamKeys.RESISTANCE_OHMS, add,
                         o.series().tolerancePercent(), "input resistor", "smallest value keeping the pin within its limit"));
             }
         }

@@ -1,5 +1,6 @@
 package org.armature.analysis;
 
+import org.armature.model.ParamKeys;
 import org.armature.model.StageRoles;
 import java.util.ArrayList;
 import java.util.Iterator;
@@ -172,11 +173,11 @@ public final class Corners {
         List<Factor> out = new ArrayList<>();
         Optional<Part> supply = roles.flatMap(StageRoles::coilSupplyRef).flatMap(stage::part);
         supply.ifPresent(v -> {
-            double tol = v.value("tolerancePercent") / 100;
-            double volts = v.value("volts");
+            double tol = v.value(ParamKeys.TOLERANCE_PERCENT) / 100;
+            double volts = v.value(ParamKeys.VOLTS);
             if (tol > 0) {
                 out.add(new Factor("supply", "coil supply " + v.ref(), Unit.VOLT, List.of(v.ref()), Spread.NORMAL_3_SIGMA,
-                        u -> volts * (1 + u * tol), (s, u) -> s.updatePart(v.ref(), p -> p.with("volts", volts * (1 + u * tol)))));
+                        u -> volts * (1 + u * tol), (s, u) -> s.updatePart(v.ref(), p -> p.with(ParamKeys.VOLTS, volts * (1 + u * tol)))));
             }
         });
         Conditions c = stage.conditions();
@@ -190,12 +191,12 @@ public final class Corners {
         }
         Optional<Part> relay = roles.map(StageRoles::relayRef).flatMap(stage::part);
         relay.ifPresent(k -> {
-            double tol = k.value("coilResistanceTolerancePercent") / 100;
-            double ohms = k.value("coilResistanceOhms");
+            double tol = k.value(ParamKeys.COIL_RESISTANCE_TOLERANCE_PERCENT) / 100;
+            double ohms = k.value(ParamKeys.COIL_RESISTANCE_OHMS);
             if (tol > 0) {
                 out.add(new Factor("coil-resistance", "coil resistance " + k.ref(), Unit.OHM, List.of(k.ref()),
                         Spread.NORMAL_3_SIGMA, u -> ohms * (1 + u * tol),
-                        (s, u) -> s.updatePart(k.ref(), p -> p.with("coilResistanceOhms", ohms * (1 + u * tol)))));
+                        (s, u) -> s.updatePart(k.ref(), p -> p.with(ParamKeys.COIL_RESISTANCE_OHMS, ohms * (1 + u * tol)))));
             }
         });
         List<Part> transistors = new ArrayList<>();
@@ -211,24 +212,24 @@ public final class Corners {
             }
         }
         transistors.stream().filter(p -> p.kind() == PartKind.NMOS).findFirst().ifPresent(q -> {
-            double nom = q.value("thresholdVolts");
-            double max = Math.max(nom, q.value("vgsThMaxVolts"));
+            double nom = q.value(ParamKeys.THRESHOLD_VOLTS);
+            double max = Math.max(nom, q.value(ParamKeys.VGS_TH_MAX_VOLTS));
             double span = max - nom;
             if (span > 0) {
-                double floor = q.kind().param("thresholdVolts").orElseThrow().min();
+                double floor = q.kind().param(ParamKeys.THRESHOLD_VOLTS).orElseThrow().min();
                 out.add(new Factor("threshold", "gate threshold " + q.ref(), Unit.VOLT, List.of(q.ref()),
                         Spread.NORMAL_3_SIGMA, u -> Math.max(floor, nom + u * span),
-                        (s, u) -> s.updatePart(q.ref(), p -> p.with("thresholdVolts", Math.max(floor, nom + u * span)))));
+                        (s, u) -> s.updatePart(q.ref(), p -> p.with(ParamKeys.THRESHOLD_VOLTS, Math.max(floor, nom + u * span)))));
             }
         });
         Optional<Part> pin = roles.flatMap(StageRoles::drivePinRef).flatMap(stage::part);
         pin.ifPresent(u1 -> {
-            double high = u1.value("highVolts");
-            double tol = u1.value("highToleranceVolts");
+            double high = u1.value(ParamKeys.HIGH_VOLTS);
+            double tol = u1.value(ParamKeys.HIGH_TOLERANCE_VOLTS);
             if (tol > 0) {
                 out.add(new Factor("pin-level", "pin high level " + u1.ref(), Unit.VOLT, List.of(u1.ref()), Spread.UNIFORM,
                         u -> high - tol * (1 - u) / 2,
-                        (s, u) -> s.updatePart(u1.ref(), p -> p.with("highVolts", high - tol * (1 - u) / 2))));
+                        (s, u) -> s.updatePart(u1.ref(), p -> p.with(ParamKeys.HIGH_VOLTS, high - tol * (1 - u) / 2))));
             }
         });
         if (options.includeResistors()) {
@@ -238,11 +239,11 @@ public final class Corners {
                     continue;
                 }
                 double tol = resistorTolerancePercent(r) / 100;
-                double ohms = r.value("resistanceOhms");
+                double ohms = r.value(ParamKeys.RESISTANCE_OHMS);
                 if (tol > 0) {
                     resistors.add(new Factor("resistor:" + r.ref(), "resistor " + r.ref(), Unit.OHM, List.of(r.ref()),
                             Spread.NORMAL_3_SIGMA, u -> ohms * (1 + u * tol),
-                            (s, u) -> s.updatePart(r.ref(), p -> p.with("resistanceOhms", ohms * (1 + u * tol)))));
+                            (s, u) -> s.updatePart(r.ref(), p -> p.with(ParamKeys.RESISTANCE_OHMS, ohms * (1 + u * tol)))));
                 }
             }
             if ((1L << (out.size() + resistors.size())) <= options.maxCorners()) {
@@ -259,16 +260,16 @@ public final class Corners {
      * values include it (IEC 60063, PV-7), else the kind's default.
      */
     public static double resistorTolerancePercent(Part resistor) {
-        if (resistor.values().containsKey("tolerancePercent")) {
-            return resistor.value("tolerancePercent");
+        if (resistor.values().containsKey(ParamKeys.TOLERANCE_PERCENT)) {
+            return resistor.value(ParamKeys.TOLERANCE_PERCENT);
         }
-        double ohms = resistor.value("resistanceOhms");
+        double ohms = resistor.value(ParamKeys.RESISTANCE_OHMS);
         for (ESeries s : List.of(ESeries.E24, ESeries.E48, ESeries.E96, ESeries.E192)) {
             if (s.contains(ohms)) {
                 return s.tolerancePercent();
             }
         }
-        return resistor.value("tolerancePercent");
+        return resistor.value(ParamKeys.TOLERANCE_PERCENT);
     }
 
     private static Factor gain(List<Part> bipolar, double tMin, double tMax) {
@@ -279,8 +280,8 @@ public final class Corners {
                     Stage out = s;
                     for (Part q : bipolar) {
                         double beta = gainAt(q, u, tMin, tMax);
-                        out = out.updatePart(q.ref(), p -> q.kind() == PartKind.DARLINGTON ? p.with("betaForward", beta)
-                                : p.with("betaForward", beta).with("gainTempExponent", 0));
+                        out = out.updatePart(q.ref(), p -> q.kind() == PartKind.DARLINGTON ? p.with(ParamKeys.BETA_FORWARD, beta)
+                                : p.with(ParamKeys.BETA_FORWARD, beta).with(ParamKeys.GAIN_TEMP_EXPONENT, 0));
                     }
                     return out;
                 });
@@ -290,13 +291,13 @@ public final class Corners {
     private static double gainAt(Part q, double u, double tMin, double tMax) {
         double w = (u + 1) / 2;
         if (q.kind() == PartKind.DARLINGTON) {
-            double low = Math.sqrt(q.value("hfeMin"));
-            double high = Math.max(low, 2 * q.value("betaForward") - low);
+            double low = Math.sqrt(q.value(ParamKeys.HFE_MIN));
+            double high = Math.max(low, 2 * q.value(ParamKeys.BETA_FORWARD) - low);
             return low + w * (high - low);
         }
-        double min = q.value("hfeMin");
+        double min = q.value(ParamKeys.HFE_MIN);
         double low = min * PartPhysics.gainFactor(q, tMin);
-        double high = Math.max(min, 2 * q.value("betaForward") - min) * PartPhysics.gainFactor(q, tMax);
+        double high = Math.max(min, 2 * q.value(ParamKeys.BETA_FORWARD) - min) * PartPhysics.gainFactor(q, tMax);
         return Math.max(1, low + w * (high - low));
     }
 
@@ -307,8 +308,8 @@ public final class Corners {
                 u -> u * spreadVolts, (s, u) -> {
                     Stage out = s;
                     for (Part q : bipolar) {
-                        double is = q.value("saturationCurrentAmps") * Math.exp(-u * spreadVolts / vt);
-                        out = out.updatePart(q.ref(), p -> p.with("saturationCurrentAmps", is));
+                        double is = q.value(ParamKeys.SATURATION_CURRENT_AMPS) * Math.exp(-u * spreadVolts / vt);
+                        out = out.updatePart(q.ref(), p -> p.with(ParamKeys.SATURATION_CURRENT_AMPS, is));
                     }
                     return out;
                 }).describedAs("vbe shift");

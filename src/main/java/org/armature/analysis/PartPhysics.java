@@ -1,5 +1,6 @@
 package org.armature.analysis;
 
+import org.armature.model.ParamKeys;
 import org.armature.devices.Bjt;
 import org.armature.devices.BjtParams;
 import org.armature.devices.BjtPolarity;
@@ -21,8 +22,8 @@ final class PartPhysics {
 
     /** Copper coil law of a relay with its resistance scaled by {@code factor} (1 − tol, 1 + tol). */
     static CoilResistance coil(Part relay, double factor) {
-        return CoilResistance.copper(relay.value("coilResistanceOhms") * factor,
-                PhysicalConstants.celsiusToKelvin(relay.value("referenceTemperatureCelsius")));
+        return CoilResistance.copper(relay.value(ParamKeys.COIL_RESISTANCE_OHMS) * factor,
+                PhysicalConstants.celsiusToKelvin(relay.value(ParamKeys.REFERENCE_TEMPERATURE_CELSIUS)));
     }
 
     /** Coil resistance at a temperature, with the resistance scaled by {@code factor}, ohms. */
@@ -43,7 +44,7 @@ final class PartPhysics {
     /** The hFE temperature factor (T/Tnom)^XTB of a bipolar part at a junction temperature (BJ-13). */
     static double gainFactor(Part bjt, double celsius) {
         double xtb = bjt.kind() == PartKind.DARLINGTON ? BjtParams.DEFAULT_BETA_TEMP_EXPONENT
-                : bjt.value("gainTempExponent");
+                : bjt.value(ParamKeys.GAIN_TEMP_EXPONENT);
         BjtParams p = BjtParams.ebersMoll(bjt.kind() == PartKind.PNP ? BjtPolarity.PNP : BjtPolarity.NPN, 1e-14, 100, 1)
                 .withTemperatureScaling(DiodeParams.PN_JUNCTION_TEMP_EXPONENT, xtb,
                         DiodeParams.SILICON_BAND_GAP_ELECTRON_VOLTS);
@@ -52,17 +53,17 @@ final class PartPhysics {
 
     /** The pin's high level as a Thevenin source, at its lowest (nominal minus spread) or nominal. */
     static LogicOutputPin pin(Part drivePin, boolean lowest) {
-        double v0 = drivePin.value("highVolts") - (lowest ? drivePin.value("highToleranceVolts") : 0);
-        return new LogicOutputPin(v0, drivePin.value("outputResistanceOhms"));
+        double v0 = drivePin.value(ParamKeys.HIGH_VOLTS) - (lowest ? drivePin.value(ParamKeys.HIGH_TOLERANCE_VOLTS) : 0);
+        return new LogicOutputPin(v0, drivePin.value(ParamKeys.OUTPUT_RESISTANCE_OHMS));
     }
 
     /** Largest coil-supply voltage, volts. */
     static double supplyMax(Part supply) {
-        return Math.abs(supply.value("volts")) * (1 + supply.value("tolerancePercent") / 100);
+        return Math.abs(supply.value(ParamKeys.VOLTS)) * (1 + supply.value(ParamKeys.TOLERANCE_PERCENT) / 100);
     }
 
     /** Smallest coil-supply voltage, volts. */
     static double supplyMin(Part supply) {
-        return Math.abs(supply.value("volts")) * (1 - supply.value("tolerancePercent") / 100);
+        return Math.abs(supply.value(ParamKeys.VOLTS)) * (1 - supply.value(ParamKeys.TOLERANCE_PERCENT) / 100);
     }
 }

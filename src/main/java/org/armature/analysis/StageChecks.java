@@ -1,5 +1,6 @@
 package org.armature.analysis;
 
+import org.armature.model.ParamKeys;
 import org.armature.netlist.Readings;
 import org.armature.model.DriverTopology;
 import org.armature.model.StageRoles;
@@ -308,7 +309,7 @@ public final class StageChecks {
             Readout op = s.on().get();
             double v = Math.abs(op.coilVoltage());
             double t = op.coilTemperature();
-            double mo = PartPhysics.coilVoltsAt(k, k.value("mustOperateVolts"), t);
+            double mo = PartPhysics.coilVoltsAt(k, k.value(ParamKeys.MUST_OPERATE_VOLTS), t);
             double limit = mo * (1 + o.operateMarginFraction());
             CheckStatus st = v >= limit ? CheckStatus.PASS : v >= mo ? CheckStatus.WARN : CheckStatus.FAIL;
             return Optional.of(new Measure(v, limit, st, v / mo - 1,
@@ -325,7 +326,7 @@ public final class StageChecks {
             Readout op = s.off().get();
             double v = Math.abs(op.coilVoltage());
             double t = op.coilTemperature();
-            double mr = PartPhysics.coilVoltsAt(k, k.value("mustReleaseVolts"), t);
+            double mr = PartPhysics.coilVoltsAt(k, k.value(ParamKeys.MUST_RELEASE_VOLTS), t);
             double limit = mr * (1 - o.releaseMarginFraction());
             CheckStatus st = v <= limit ? CheckStatus.PASS : v <= mr ? CheckStatus.WARN : CheckStatus.FAIL;
             return Optional.of(new Measure(v, limit, st, 1 - v / mr,
@@ -344,7 +345,7 @@ public final class StageChecks {
             if (q.kind() == PartKind.NPN || q.kind() == PartKind.PNP) {
                 double ic = op.ic();
                 double ib = op.ib();
-                double beta = q.value("betaForward");
+                double beta = q.value(ParamKeys.BETA_FORWARD);
                 double m = ic > 0 && ib > 0 ? beta * ib / ic : 0;
                 margin = m;
                 why = () -> "gain " + ratio(beta) + " × IB " + amps(ib) + " ÷ IC " + amps(ic) + " = ×" + ratio(m) + ".";
@@ -364,7 +365,7 @@ public final class StageChecks {
             }
             Part q = s.switchPart();
             double i = Math.abs(q.kind() == PartKind.NMOS ? s.on().get().id() : s.on().get().ic());
-            double rating = q.value(q.kind() == PartKind.NMOS ? "idMaxAmps" : "icMaxAmps");
+            double rating = q.value(q.kind() == PartKind.NMOS ? ParamKeys.ID_MAX_AMPS : ParamKeys.IC_MAX_AMPS);
             return Optional.of(rated(i, rating, () -> amps(i) + " against a rating of " + amps(rating) + "."));
         }
 
@@ -373,7 +374,7 @@ public final class StageChecks {
                 return Optional.empty();
             }
             double i = Math.abs(s.on().get().pinCurrent());
-            double limit = s.pin().value("pinCurrentLimitAmps");
+            double limit = s.pin().value(ParamKeys.PIN_CURRENT_LIMIT_AMPS);
             return Optional.of(rated(i, limit, () -> "The pin sources " + amps(i) + "; its limit is " + amps(limit) + "."));
         }
 
@@ -382,9 +383,9 @@ public final class StageChecks {
                 return Optional.empty();
             }
             Part u = s.pin();
-            double n = u.value("channelCount");
+            double n = u.value(ParamKeys.CHANNEL_COUNT);
             double i = n * Math.abs(s.on().get().pinCurrent());
-            double limit = u.value("packageCurrentLimitAmps");
+            double limit = u.value(ParamKeys.PACKAGE_CURRENT_LIMIT_AMPS);
             return Optional.of(rated(i, limit, () -> ratio(n) + " channels draw " + amps(i) + " from the package; its limit is "
                     + amps(limit) + "."));
         }
@@ -401,11 +402,11 @@ public final class StageChecks {
             }
             Part q = s.switchPart();
             double ta = s.variant().stage().conditions().ambientCelsius();
-            double n = q.kind() == PartKind.DARLINGTON ? q.value("channelCount") : 1;
+            double n = q.kind() == PartKind.DARLINGTON ? q.value(ParamKeys.CHANNEL_COUNT) : 1;
             double p = Math.max(0, s.on().get().switchPowerWatts()) * n;
-            double rth = q.value("thermalResistanceKelvinPerWatt");
+            double rth = q.value(ParamKeys.THERMAL_RESISTANCE_KELVIN_PER_WATT);
             double tj = ThermalBudget.junctionCelsius(ta, p, rth);
-            double max = q.value("tjMaxCelsius");
+            double max = q.value(ParamKeys.TJ_MAX_CELSIUS);
             double pass = max - o.thermalMarginKelvin();
             CheckStatus st = tj <= pass ? CheckStatus.PASS : tj <= max ? CheckStatus.WARN : CheckStatus.FAIL;
             return Optional.of(new Measure(tj, pass, st, max - tj,
@@ -420,7 +421,7 @@ public final class StageChecks {
             Part q = stage.require(roles.switchRef());
             Part v = stage.require(roles.coilSupplyRef().orElseThrow());
             double vs = PartPhysics.supplyMax(v);
-            double rating = q.value(q.kind() == PartKind.NMOS ? "vdssVolts" : "vceoVolts");
+            double rating = q.value(q.kind() == PartKind.NMOS ? ParamKeys.VDSS_VOLTS : ParamKeys.VCEO_VOLTS);
             List<String> refs = new ArrayList<>(List.of(q.ref()));
             refs.addAll(sup.refs());
             if (!sup.clamps()) {
@@ -447,7 +448,7 @@ public final class StageChecks {
                 return Optional.empty();
             }
             boolean channel = diode.get().kind() == PartKind.DARLINGTON;
-            double rating = diode.get().value(channel ? "icMaxAmps" : "maxCurrentAmps");
+            double rating = diode.get().value(channel ? ParamKeys.IC_MAX_AMPS : ParamKeys.MAX_CURRENT_AMPS);
             Measure m = rated(i0, rating, () -> (channel ? diode.get().ref() + "'s clamp diode" : diode.get().ref())
                     + " carries the coil current at turn-off, " + amps(i0) + ", against a peak rating of " + amps(rating)
                     + (channel ? " (taken as the channel's output rating)." : "."));
@@ -458,10 +459,10 @@ public final class StageChecks {
 
         private CheckResult releaseTime(SuppressorEstimate sup, double i0, double requirement) {
             Part k = stage.require(roles.relayRef());
-            double l = k.value("inductanceAttractedHenries") > 0 ? k.value("inductanceAttractedHenries")
-                    : k.value("inductanceReleasedHenries");
-            double r = k.value("coilResistanceOhms");
-            double drop = k.value("mustReleaseVolts") / r;
+            double l = k.value(ParamKeys.INDUCTANCE_ATTRACTED_HENRIES) > 0 ? k.value(ParamKeys.INDUCTANCE_ATTRACTED_HENRIES)
+                    : k.value(ParamKeys.INDUCTANCE_RELEASED_HENRIES);
+            double r = k.value(ParamKeys.COIL_RESISTANCE_OHMS);
+            double drop = k.value(ParamKeys.MUST_RELEASE_VOLTS) / r;
             double t = Double.isNaN(i0) ? Double.NaN : sup.decaySeconds(r, l, i0, drop);
             CheckStatus st = t <= requirement ? CheckStatus.PASS : CheckStatus.FAIL;
             return new CheckResult("relay.release-time", st, t, requirement, Unit.SECOND, Map.of(),
@@ -488,12 +489,12 @@ public final class StageChecks {
             }
             Stage s = Corners.at(stage, factors, present);
             Part k = s.require(roles.relayRef());
-            double l = Math.max(k.value("inductanceReleasedHenries"), k.value("inductanceAttractedHenries"));
-            double guess = sup.decaySeconds(k.value("coilResistanceOhms"), l, Double.isNaN(i0) ? 0.03 : i0,
-                    k.value("mustReleaseVolts") / k.value("coilResistanceOhms"));
+            double l = Math.max(k.value(ParamKeys.INDUCTANCE_RELEASED_HENRIES), k.value(ParamKeys.INDUCTANCE_ATTRACTED_HENRIES));
+            double guess = sup.decaySeconds(k.value(ParamKeys.COIL_RESISTANCE_OHMS), l, Double.isNaN(i0) ? 0.03 : i0,
+                    k.value(ParamKeys.MUST_RELEASE_VOLTS) / k.value(ParamKeys.COIL_RESISTANCE_OHMS));
             double window = Math.min(TRANSIENT_MAX_WINDOW_SECONDS, Math.max(TransientOptions.DEFAULT_DURATION_SECONDS,
                     TransientOptions.DEFAULT_EDGE_SECONDS + 3 * (Double.isFinite(guess) ? guess : 0)
-                            + k.value("releaseTimeSeconds") * 2));
+                            + k.value(ParamKeys.RELEASE_TIME_SECONDS) * 2));
             try {
                 TransientResult r = TransientAnalysis.run(s, TransientOptions.turnOff().withDuration(window));
                 Map<String, Double> corner = new LinkedHashMap<>();
@@ -515,7 +516,7 @@ public final class StageChecks {
 
         private CheckResult transientSwitchVoltage(TurnOff t, SuppressorEstimate sup) {
             Part q = t.stage().require(roles.switchRef());
-            double rating = q.value(q.kind() == PartKind.NMOS ? "vdssVolts" : "vceoVolts");
+            double rating = q.value(q.kind() == PartKind.NMOS ? ParamKeys.VDSS_VOLTS : ParamKeys.VCEO_VOLTS);
             double peak = t.metrics().peakSwitchVolts();
             Measure m = rated(peak, rating, () -> "Peak switch voltage at turn-off " + volts(peak) + " (" + sup.description()
                     + ") against " + volts(rating) + ".");
@@ -539,7 +540,7 @@ public final class StageChecks {
                 return Optional.empty();
             }
             boolean channel = diode.get().kind() == PartKind.DARLINGTON;
-            double rating = diode.get().value(channel ? "icMaxAmps" : "maxCurrentAmps");
+            double rating = diode.get().value(channel ? ParamKeys.IC_MAX_AMPS : ParamKeys.MAX_CURRENT_AMPS);
             double peak = t.metrics().peakSuppressorAmps();
             Measure m = rated(peak, rating, () -> "Peak suppressor current " + amps(peak) + " against " + amps(rating)
                     + (channel ? " (the channel's output rating)." : "."));
@@ -668,8 +669,8 @@ public final class StageChecks {
             List<String> supplies = topo.roles().map(StageRoles::contactSupplyRefs).orElse(List.of());
             for (String ref : supplies) {
                 Part v = stage.require(ref);
-                boolean ac = v.option("waveform").equals("ac-rms");
-                double volts = Math.abs(v.value("volts")) * (1 + v.value("tolerancePercent") / 100);
+                boolean ac = v.option(ParamKeys.WAVEFORM).equals("ac-rms");
+                double volts = Math.abs(v.value(ParamKeys.VOLTS)) * (1 + v.value(ParamKeys.TOLERANCE_PERCENT) / 100);
                 double limit = ac ? o.selvAcRmsVolts() : o.selvDcVolts();
                 if (volts <= limit) {
                     continue;

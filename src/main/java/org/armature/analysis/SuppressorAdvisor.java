@@ -1,5 +1,6 @@
 package org.armature.analysis;
 
+import org.armature.model.ParamKeys;
 import org.armature.model.StageRoles;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -155,8 +156,8 @@ public final class SuppressorAdvisor {
         Part q = stage.require(roles.switchRef());
         Part v = stage.require(roles.coilSupplyRef().get());
         Part k = stage.require(roles.relayRef());
-        double rating = q.value(q.kind() == PartKind.NMOS ? "vdssVolts" : "vceoVolts");
-        double vs = Math.abs(v.value("volts"));
+        double rating = q.value(q.kind() == PartKind.NMOS ? ParamKeys.VDSS_VOLTS : ParamKeys.VCEO_VOLTS);
+        double vs = Math.abs(v.value(ParamKeys.VOLTS));
         double vsMax = PartPhysics.supplyMax(v);
         double clampMax = options.ratingUseFraction() * rating - vsMax;
         ESeries e24 = ESeries.E24;
@@ -184,32 +185,32 @@ public final class SuppressorAdvisor {
         levels.put("supply", 1.0);
         levels.put("coil-resistance", -1.0);
         levels.put("ambient", -1.0);
-        double coilMin = PartPhysics.coilOhms(k, 1 - k.value("coilResistanceTolerancePercent") / 100,
+        double coilMin = PartPhysics.coilOhms(k, 1 - k.value(ParamKeys.COIL_RESISTANCE_TOLERANCE_PERCENT) / 100,
                 stage.conditions().ambientMinCelsius());
         double i0 = vsMax / coilMin;
-        double henries = k.value("inductanceAttractedHenries") > 0 ? k.value("inductanceAttractedHenries")
-                : k.value("inductanceReleasedHenries");
-        double dropOut = k.value("mustReleaseVolts") / k.value("coilResistanceOhms");
+        double henries = k.value(ParamKeys.INDUCTANCE_ATTRACTED_HENRIES) > 0 ? k.value(ParamKeys.INDUCTANCE_ATTRACTED_HENRIES)
+                : k.value(ParamKeys.INDUCTANCE_RELEASED_HENRIES);
+        double dropOut = k.value(ParamKeys.MUST_RELEASE_VOLTS) / k.value(ParamKeys.COIL_RESISTANCE_OHMS);
         List<Candidate> out = new ArrayList<>();
         for (Suppressor s : options.candidates()) {
             if ((s == Suppressor.DIODE_ZENER && Double.isNaN(zener)) || (s == Suppressor.TVS && Double.isNaN(tvs))
                     || s == Suppressor.NONE) {
                 continue;
             }
-            Stage candidate = Corners.at(build(stage, roles, s, zener, tvs, k.value("coilResistanceOhms")), factors, levels);
+            Stage candidate = Corners.at(build(stage, roles, s, zener, tvs, k.value(ParamKeys.COIL_RESISTANCE_OHMS)), factors, levels);
             Optional<StageRoles> cr = TopologyCheck.recognise(candidate);
             if (cr.isEmpty()) {
                 continue;
             }
             SuppressorEstimate est = SuppressorEstimate.of(candidate, cr.get(), vf);
             double peak = est.peakSwitchVolts(vsMax, i0);
-            double release = est.decaySeconds(k.value("coilResistanceOhms"), henries, i0, dropOut);
+            double release = est.decaySeconds(k.value(ParamKeys.COIL_RESISTANCE_OHMS), henries, i0, dropOut);
             boolean breakdown = false;
             String method = "closed form (decay to drop-out through a constant clamp, before the armature moves)";
             if (options.useTransient()) {
                 try {
                     double window = Math.min(MAX_WINDOW_SECONDS, Math.max(TransientOptions.DEFAULT_DURATION_SECONDS,
-                            TransientOptions.DEFAULT_EDGE_SECONDS + 3 * release + 2 * k.value("releaseTimeSeconds")));
+                            TransientOptions.DEFAULT_EDGE_SECONDS + 3 * release + 2 * k.value(ParamKeys.RELEASE_TIME_SECONDS)));
                     TransientMetrics m = TransientAnalysis.run(candidate, TransientOptions.turnOff().withDuration(window))
                             .metrics();
                     peak = m.peakSwitchVolts();
@@ -254,11 +255,11 @@ public final class SuppressorAdvisor {
         for (String ref : fresh) {
             Part p = built.require(ref);
             if (p.kind() == PartKind.ZENER && !Double.isNaN(zenerVolts)) {
-                built = built.withPart(p.with("breakdownVolts", zenerVolts));
+                built = built.withPart(p.with(ParamKeys.BREAKDOWN_VOLTS, zenerVolts));
             } else if (p.kind() == PartKind.TVS && !Double.isNaN(tvsVolts)) {
-                built = built.withPart(p.with("breakdownVolts", tvsVolts));
+                built = built.withPart(p.with(ParamKeys.BREAKDOWN_VOLTS, tvsVolts));
             } else if (p.kind() == PartKind.RESISTOR && s == Suppressor.RESISTOR) {
-                built = built.withPart(p.with("resistanceOhms", coilOhms));
+                built = built.withPart(p.with(ParamKeys.RESISTANCE_OHMS, coilOhms));
             }
         }
         return built;

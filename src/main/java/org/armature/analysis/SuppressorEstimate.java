@@ -1,5 +1,6 @@
 package org.armature.analysis;
 
+import org.armature.model.ParamKeys;
 import org.armature.model.StageRoles;
 import java.util.List;
 import org.armature.model.Part;
@@ -65,17 +66,17 @@ public record SuppressorEstimate(String description, double clampVolts, double s
                 case ZENER -> {
                     // a zener entered at its cathode from the coil's high end breaks down; otherwise it conducts forward
                     boolean breaks = parts.size() > 1;
-                    vc += breaks ? p.value("breakdownVolts") : forwardDropVolts;
-                    w = breaks ? Quantities.volts(p.value("breakdownVolts")) + " zener" : "zener (as a diode)";
+                    vc += breaks ? p.value(ParamKeys.BREAKDOWN_VOLTS) : forwardDropVolts;
+                    w = breaks ? Quantities.volts(p.value(ParamKeys.BREAKDOWN_VOLTS)) + " zener" : "zener (as a diode)";
                 }
                 case TVS -> {
-                    vc += p.value("breakdownVolts");
-                    w = Quantities.volts(p.value("breakdownVolts")) + " TVS";
+                    vc += p.value(ParamKeys.BREAKDOWN_VOLTS);
+                    w = Quantities.volts(p.value(ParamKeys.BREAKDOWN_VOLTS)) + " TVS";
                 }
                 case RESISTOR -> {
-                    rs += p.value("resistanceOhms");
+                    rs += p.value(ParamKeys.RESISTANCE_OHMS);
                     linear = true;
-                    w = Quantities.ohms(p.value("resistanceOhms")) + " resistor";
+                    w = Quantities.ohms(p.value(ParamKeys.RESISTANCE_OHMS)) + " resistor";
                 }
                 case CAPACITOR -> w = "capacitor";
                 case DARLINGTON -> {

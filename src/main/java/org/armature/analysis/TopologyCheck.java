@@ -5,6 +5,7 @@ import static org.armature.analysis.Quantities.volts;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.armature.model.ParamKeys;
 import org.armature.model.HighSideDrive;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
@@ -116,7 +117,7 @@ public final class TopologyCheck {
         }
 
         private void highSideTurnOff(Part pin, double supplyMax) {
-            double high = pin.value("highVolts");
+            double high = pin.value(ParamKeys.HIGH_VOLTS);
             double needed = supplyMax - options.pnpOffMarginVolts();
             if (high < needed) {
                 List<String> refs = new ArrayList<>(List.of(sw.ref(), pin.ref()));
@@ -143,7 +144,7 @@ public final class TopologyCheck {
             for (StageRoles.Oriented o : chain) {
                 boolean forward = isForward(o);
                 allForward &= forward;
-                conduct += forward ? options.forwardDropVolts() : part(o).value("breakdownVolts");
+                conduct += forward ? options.forwardDropVolts() : part(o).value(ParamKeys.BREAKDOWN_VOLTS);
             }
             if (Double.isNaN(supplyMax) || conduct > supplyMax) {
                 return;
@@ -177,9 +178,9 @@ public final class TopologyCheck {
                         p.ref() + " across " + sw.ref() + " conducts forward whenever " + sw.ref() + " is off: it"
                                 + " holds " + k.ref() + " energised. Turn it so its cathode faces the switch node.",
                         List.of(p.ref(), sw.ref(), k.ref()));
-            } else if (p.value("breakdownVolts") <= supplyMax) {
+            } else if (p.value(ParamKeys.BREAKDOWN_VOLTS) <= supplyMax) {
                 add(Severity.WARNING, "topology.suppressor-conducts", "",
-                        p.ref() + " across " + sw.ref() + " breaks down at " + volts(p.value("breakdownVolts"))
+                        p.ref() + " across " + sw.ref() + " breaks down at " + volts(p.value(ParamKeys.BREAKDOWN_VOLTS))
                                 + ", not above the coil supply's maximum " + volts(supplyMax) + ": it energises "
                                 + k.ref() + " while " + sw.ref() + " is off. Choose a breakdown voltage above the"
                                 + " supply's maximum.", List.of(p.ref(), sw.ref(), k.ref()));
@@ -206,6 +207,6 @@ public final class TopologyCheck {
     }
 
     private static double supplyMaxVolts(Part supply) {
-        return Math.abs(supply.value("volts")) * (1 + supply.value("tolerancePercent") / 100);
+        return Math.abs(supply.value(ParamKeys.VOLTS)) * (1 + supply.value(ParamKeys.TOLERANCE_PERCENT) / 100);
     }
 }

@@ -9,6 +9,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.armature.model.ParamKeys;
 import org.armature.analysis.CheckOptions;
 import org.armature.analysis.CheckReport;
 import org.armature.analysis.CheckResult;
@@ -128,7 +129,7 @@ final class CheckCommand implements Callable<Integer> {
                     .orElseThrow(() -> new CommandFailedException("Stage \"" + stage.name()
                             + "\" has no coil supply to give a tolerance."));
             double tol = supplyTolerance;
-            s = s.updatePart(supply, p -> p.with("tolerancePercent", tol));
+            s = s.updatePart(supply, p -> p.with(ParamKeys.TOLERANCE_PERCENT, tol));
         }
         if (ambientMin != null || ambientMax != null) {
             Conditions c = s.conditions();

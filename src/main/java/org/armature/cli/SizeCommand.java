@@ -9,6 +9,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.armature.model.ParamKeys;
 import org.armature.analysis.BaseDriveRule;
 import org.armature.analysis.BaseNetworkSizing;
 import org.armature.analysis.SizingOptions;
@@ -34,7 +35,7 @@ import picocli.CommandLine.Spec;
  *
  * <pre>{@code
  * {"stage": "...", "topology": "LOW_SIDE_NPN", "forcedBeta": 10, "series": "E24",
- *  "suggestions": [{"ref": "R1", "param": "resistanceOhms", "value": 430, "tolerancePercent": 5,
+ *  "suggestions": [{"ref": "R1", "param": ParamKeys.RESISTANCE_OHMS, "value": 430, ParamKeys.TOLERANCE_PERCENT: 5,
  *                   "role": "base resistor", "rule": "..."}],
  *  "steps": [{"label": "coil current, worst case", "formula": "...", "value": 0.0425, "unit": "A"}, ...],
  *  "findings": [{"severity": "warning", "key": "sizing....", "ref": "Q1", "message": "..."}]}
@@ -98,7 +99,7 @@ final class SizeCommand implements Callable<Integer> {
             n.put("ref", s.ref());
             n.put("param", s.paramKey());
             n.put("value", s.value());
-            n.put("tolerancePercent", s.tolerancePercent());
+            n.put(ParamKeys.TOLERANCE_PERCENT, s.tolerancePercent());
             n.put("role", s.role());
             n.put("rule", s.rule());
         }

@@ -11,6 +11,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import java.util.concurrent.Callable;
+import org.armature.model.ParamKeys;
 import org.armature.netlist.Readings;
 import org.armature.io.StageFiles;
 import org.armature.model.Stage;

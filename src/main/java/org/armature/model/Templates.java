@@ -61,7 +61,7 @@ public final class Templates {
 
     private static void lowSide(Builder b, PartKind switchKind, Suppressor s) {
         boolean mos = switchKind == PartKind.NMOS;
-        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set("volts", 12).set("tolerancePercent", 5);
+        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set(ParamKeys.VOLTS, 12).set(ParamKeys.TOLERANCE_PERCENT, 5);
         relay(b, 20, 6);
         b.wire(20, 0, 20, 4);
         suppressorAcrossCoil(b, s, 20, 4, 8);
@@ -69,11 +69,11 @@ public final class Templates {
         b.wire(20, 8, 20, 10);
         b.part("GND1", PartKind.GROUND, Placement.at(20, 16));
         b.wire(20, 14, 20, 16);
-        b.part("R1", PartKind.RESISTOR, Placement.at(12, 12).rotated(90)).set("resistanceOhms", mos ? 100 : 1000);
+        b.part("R1", PartKind.RESISTOR, Placement.at(12, 12).rotated(90)).set(ParamKeys.RESISTANCE_OHMS, mos ? 100 : 1000);
         b.wire(14, 12, 17, 12);
         pin33(b, 6, 12);
         b.wire(8, 12, 10, 12);
-        b.part("R2", PartKind.RESISTOR, Placement.at(15, 16)).set("resistanceOhms", mos ? 100_000 : 10_000);
+        b.part("R2", PartKind.RESISTOR, Placement.at(15, 16)).set(ParamKeys.RESISTANCE_OHMS, mos ? 100_000 : 10_000);
         b.wire(15, 12, 15, 14);
         b.part("GND2", PartKind.GROUND, Placement.at(15, 18));
         contactSide(b, 20, 6);
@@ -82,7 +82,7 @@ public final class Templates {
     }
 
     private static void darlington(Builder b, Suppressor s) {
-        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set("volts", 12).set("tolerancePercent", 5);
+        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set(ParamKeys.VOLTS, 12).set(ParamKeys.TOLERANCE_PERCENT, 5);
         relay(b, 20, 6);
         b.wire(20, 0, 20, 4);
         b.part("U2", PartKind.DARLINGTON, Placement.at(19, 13));
@@ -94,24 +94,24 @@ public final class Templates {
             b.wire(22, 2, 20, 2);
         } else if (s == Suppressor.DIODE_ZENER) {
             // zener in the common line: COM -> zener cathode ... anode -> supply
-            b.part("D2", PartKind.ZENER, Placement.at(22, 5)).set("breakdownVolts", 12);
+            b.part("D2", PartKind.ZENER, Placement.at(22, 5)).set(ParamKeys.BREAKDOWN_VOLTS, 12);
             b.wire(22, 10, 22, 7);
             b.wire(22, 3, 22, 2);
             b.wire(22, 2, 20, 2);
         } else {
             suppressorAcrossCoil(b, s, 20, 4, 8);
         }
-        b.part("R1", PartKind.RESISTOR, Placement.at(12, 13).rotated(90)).set("resistanceOhms", 100);
+        b.part("R1", PartKind.RESISTOR, Placement.at(12, 13).rotated(90)).set(ParamKeys.RESISTANCE_OHMS, 100);
         b.wire(14, 13, 16, 13);
-        b.part("U1", PartKind.DRIVE_PIN, Placement.at(6, 13)).set("highVolts", 5.05).set("outputResistanceOhms", 50)
-                .set("pinCurrentLimitAmps", 0.020).set("packageCurrentLimitAmps", 0.2);
+        b.part("U1", PartKind.DRIVE_PIN, Placement.at(6, 13)).set(ParamKeys.HIGH_VOLTS, 5.05).set(ParamKeys.OUTPUT_RESISTANCE_OHMS, 50)
+                .set(ParamKeys.PIN_CURRENT_LIMIT_AMPS, 0.020).set(ParamKeys.PACKAGE_CURRENT_LIMIT_AMPS, 0.2);
         b.wire(8, 13, 10, 13);
         contactSide(b, 20, 6);
         b.tp("pin", "U1", "out").tp("control", "U2", "in").tp("switch", "U2", "out").tp("supply", "V1", "p");
     }
 
     private static void highSide(Builder b, Suppressor s, HighSideDrive drive) {
-        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set("volts", 12).set("tolerancePercent", 5);
+        b.part("V1", PartKind.SUPPLY, Placement.at(20, 0)).set(ParamKeys.VOLTS, 12).set(ParamKeys.TOLERANCE_PERCENT, 5);
         b.part("Q1", PartKind.PNP, Placement.at(19, 4));
         b.wire(20, 0, 20, 2);
         relay(b, 20, 10);
@@ -120,26 +120,26 @@ public final class Templates {
         b.wire(20, 12, 20, 14);
         suppressorAcrossCoil(b, s, 20, 8, 12);
         if (drive == HighSideDrive.DIRECT) {
-            b.part("R2", PartKind.RESISTOR, Placement.at(15, 2)).set("resistanceOhms", 10_000);
+            b.part("R2", PartKind.RESISTOR, Placement.at(15, 2)).set(ParamKeys.RESISTANCE_OHMS, 10_000);
             b.wire(15, 0, 20, 0);
-            b.part("R1", PartKind.RESISTOR, Placement.at(11, 4).rotated(90)).set("resistanceOhms", 2200);
+            b.part("R1", PartKind.RESISTOR, Placement.at(11, 4).rotated(90)).set(ParamKeys.RESISTANCE_OHMS, 2200);
             b.wire(13, 4, 17, 4);
             pin33(b, 5, 4);
             b.wire(7, 4, 9, 4);
         } else {
-            b.part("R3", PartKind.RESISTOR, Placement.at(15, 2)).set("resistanceOhms", 10_000);
+            b.part("R3", PartKind.RESISTOR, Placement.at(15, 2)).set(ParamKeys.RESISTANCE_OHMS, 10_000);
             b.wire(15, 0, 20, 0);
-            b.part("R4", PartKind.RESISTOR, Placement.at(12, 4).rotated(90)).set("resistanceOhms", 2200);
+            b.part("R4", PartKind.RESISTOR, Placement.at(12, 4).rotated(90)).set(ParamKeys.RESISTANCE_OHMS, 2200);
             b.wire(14, 4, 17, 4);
             b.part("Q2", PartKind.NPN, Placement.at(9, 8));
             b.wire(10, 4, 10, 6);
             b.part("GND2", PartKind.GROUND, Placement.at(10, 12));
             b.wire(10, 10, 10, 12);
-            b.part("R1", PartKind.RESISTOR, Placement.at(3, 8).rotated(90)).set("resistanceOhms", 4700);
+            b.part("R1", PartKind.RESISTOR, Placement.at(3, 8).rotated(90)).set(ParamKeys.RESISTANCE_OHMS, 4700);
             b.wire(5, 8, 7, 8);
             pin33(b, -3, 8);
             b.wire(-1, 8, 1, 8);
-            b.part("R2", PartKind.RESISTOR, Placement.at(6, 12)).set("resistanceOhms", 47_000);
+            b.part("R2", PartKind.RESISTOR, Placement.at(6, 12)).set(ParamKeys.RESISTANCE_OHMS, 47_000);
             b.wire(6, 8, 6, 10);
             b.part("GND3", PartKind.GROUND, Placement.at(6, 14));
         }
@@ -148,7 +148,7 @@ public final class Templates {
     }
 
     private static void pin33(Builder b, int x, int y) {
-        b.part("U1", PartKind.DRIVE_PIN, Placement.at(x, y)).set("highVolts", 3.5).set("outputResistanceOhms", 75);
+        b.part("U1", PartKind.DRIVE_PIN, Placement.at(x, y)).set(ParamKeys.HIGH_VOLTS, 3.5).set(ParamKeys.OUTPUT_RESISTANCE_OHMS, 75);
     }
 
     /**
@@ -160,19 +160,19 @@ public final class Templates {
      */
     private static void relay(Builder b, int x, int y) {
         b.part("K1", PartKind.RELAY, Placement.at(x, y))
-                .set("ratedVolts", 12).set("coilResistanceOhms", 400)
-                .set("mustOperateVolts", 9.0).set("mustReleaseVolts", 1.2)
-                .set("inductanceReleasedHenries", 1.2).set("inductanceAttractedHenries", 2.4).set("coreLossOhms", 100e3);
+                .set(ParamKeys.RATED_VOLTS, 12).set(ParamKeys.COIL_RESISTANCE_OHMS, 400)
+                .set(ParamKeys.MUST_OPERATE_VOLTS, 9.0).set(ParamKeys.MUST_RELEASE_VOLTS, 1.2)
+                .set(ParamKeys.INDUCTANCE_RELEASED_HENRIES, 1.2).set(ParamKeys.INDUCTANCE_ATTRACTED_HENRIES, 2.4).set(ParamKeys.CORE_LOSS_OHMS, 100e3);
     }
 
     /** Contact side: a 24 V rail through the normally-open contact to a lamp. */
     private static void contactSide(Builder b, int coilX, int coilY) {
         int comX = coilX + 5;
         int noX = coilX + 6;
-        b.part("V2", PartKind.SUPPLY, Placement.at(comX, coilY - 5)).set("volts", 24).set("tolerancePercent", 10);
+        b.part("V2", PartKind.SUPPLY, Placement.at(comX, coilY - 5)).set(ParamKeys.VOLTS, 24).set(ParamKeys.TOLERANCE_PERCENT, 10);
         b.wire(comX, coilY - 5, comX, coilY - 2);
-        b.part("E1", PartKind.LOAD, Placement.at(noX, coilY + 6)).set("resistanceOhms", 48).set("ratedWatts", 12)
-                .option("loadKind", "lamp");
+        b.part("E1", PartKind.LOAD, Placement.at(noX, coilY + 6)).set(ParamKeys.RESISTANCE_OHMS, 48).set(ParamKeys.RATED_WATTS, 12)
+                .option(ParamKeys.LOAD_KIND, "lamp");
         b.wire(noX, coilY + 2, noX, coilY + 4);
         b.part(b.nextRef("GND"), PartKind.GROUND, Placement.at(noX, coilY + 10));
         b.wire(noX, coilY + 8, noX, coilY + 10);
@@ -192,13 +192,13 @@ public final class Templates {
                 b.wire(x - 4, bottom, x, bottom);
             }
             case TVS -> {
-                b.part("D1", PartKind.TVS, Placement.at(x - 4, mid)).set("breakdownVolts", 24);
+                b.part("D1", PartKind.TVS, Placement.at(x - 4, mid)).set(ParamKeys.BREAKDOWN_VOLTS, 24);
                 b.wire(x - 4, top, x, top);
                 b.wire(x - 4, bottom, x, bottom);
             }
             case RESISTOR -> {
-                b.part(b.nextRef("R"), PartKind.RESISTOR, Placement.at(x - 4, mid)).set("resistanceOhms", 1200)
-                        .set("powerRatingWatts", 0.5);
+                b.part(b.nextRef("R"), PartKind.RESISTOR, Placement.at(x - 4, mid)).set(ParamKeys.RESISTANCE_OHMS, 1200)
+                        .set(ParamKeys.POWER_RATING_WATTS, 0.5);
                 b.wire(x - 4, top, x, top);
                 b.wire(x - 4, bottom, x, bottom);
             }
@@ -207,11 +207,11 @@ public final class Templates {
                 if (s == Suppressor.DIODE_ZENER) {
                     b.part("D1", PartKind.DIODE, Placement.at(x - 6, mid).rotated(180));
                     // zener: cathode (left) meets the diode's cathode, anode (right) to the supply end
-                    b.part("D2", PartKind.ZENER, Placement.at(x - 3, top - 2).rotated(90)).set("breakdownVolts", 12);
+                    b.part("D2", PartKind.ZENER, Placement.at(x - 3, top - 2).rotated(90)).set(ParamKeys.BREAKDOWN_VOLTS, 12);
                 } else {
-                    b.part("C1", PartKind.CAPACITOR, Placement.at(x - 6, mid)).set("capacitanceFarads", 100e-9);
+                    b.part("C1", PartKind.CAPACITOR, Placement.at(x - 6, mid)).set(ParamKeys.CAPACITANCE_FARADS, 100e-9);
                     b.part(b.nextRef("R"), PartKind.RESISTOR, Placement.at(x - 3, top - 2).rotated(90))
-                            .set("resistanceOhms", 470).set("powerRatingWatts", 0.5);
+                            .set(ParamKeys.RESISTANCE_OHMS, 470).set(ParamKeys.POWER_RATING_WATTS, 0.5);
                 }
                 b.wire(x - 6, bottom, x, bottom);
                 b.wire(x - 6, top, x - 6, top - 2);

@@ -83,22 +83,22 @@ public final class Validator {
     }
 
     private static void relayFigures(Part k, List<Finding> out) {
-        double operate = k.value("mustOperateVolts");
-        double release = k.value("mustReleaseVolts");
-        double rated = k.value("ratedVolts");
+        double operate = k.value(ParamKeys.MUST_OPERATE_VOLTS);
+        double release = k.value(ParamKeys.MUST_RELEASE_VOLTS);
+        double rated = k.value(ParamKeys.RATED_VOLTS);
         if (release >= operate) {
-            out.add(new Finding(Severity.ERROR, "relay.release-above-operate", k.ref(), "mustReleaseVolts",
+            out.add(new Finding(Severity.ERROR, "relay.release-above-operate", k.ref(), ParamKeys.MUST_RELEASE_VOLTS,
                     k.ref() + " must-release voltage (" + release + " V) must be below its must-operate voltage ("
                             + operate + " V)."));
         }
         if (operate > rated) {
-            out.add(new Finding(Severity.WARNING, "relay.operate-above-rated", k.ref(), "mustOperateVolts",
+            out.add(new Finding(Severity.WARNING, "relay.operate-above-rated", k.ref(), ParamKeys.MUST_OPERATE_VOLTS,
                     k.ref() + " must-operate voltage (" + operate + " V) is above the rated coil voltage (" + rated
                             + " V); check the datasheet figures."));
         }
-        double lAtt = k.value("inductanceAttractedHenries");
-        if (lAtt > 0 && lAtt < k.value("inductanceReleasedHenries")) {
-            out.add(new Finding(Severity.WARNING, "relay.inductance-falls", k.ref(), "inductanceAttractedHenries",
+        double lAtt = k.value(ParamKeys.INDUCTANCE_ATTRACTED_HENRIES);
+        if (lAtt > 0 && lAtt < k.value(ParamKeys.INDUCTANCE_RELEASED_HENRIES)) {
+            out.add(new Finding(Severity.WARNING, "relay.inductance-falls", k.ref(), ParamKeys.INDUCTANCE_ATTRACTED_HENRIES,
                     k.ref() + " attracted inductance is below the released one; closing the gap normally raises it 2–3×."));
         }
     }

@@ -1,5 +1,6 @@
 package org.armature.netlist;
 
+import org.armature.model.ParamKeys;
 import org.armature.devices.BjtParams;
 import org.armature.devices.BjtPolarity;
 import org.armature.devices.DiodeParams;
@@ -29,11 +30,11 @@ public final class DeviceParameters {
         }
         BjtPolarity polarity = part.kind() == PartKind.NPN ? BjtPolarity.NPN : BjtPolarity.PNP;
         double inf = Double.POSITIVE_INFINITY;
-        return new BjtParams(polarity, part.value("saturationCurrentAmps"), part.value("betaForward"),
-                part.value("betaReverse"), 1.0, 1.0, part.value("earlyVolts"), inf, part.value("kneeCurrentAmps"),
-                inf, part.value("baseResistanceOhms"), part.value("collectorResistanceOhms"),
-                part.value("emitterResistanceOhms"), DiodeParams.PN_JUNCTION_TEMP_EXPONENT,
-                part.value("gainTempExponent"), DiodeParams.SILICON_BAND_GAP_ELECTRON_VOLTS,
+        return new BjtParams(polarity, part.value(ParamKeys.SATURATION_CURRENT_AMPS), part.value(ParamKeys.BETA_FORWARD),
+                part.value(ParamKeys.BETA_REVERSE), 1.0, 1.0, part.value(ParamKeys.EARLY_VOLTS), inf, part.value(ParamKeys.KNEE_CURRENT_AMPS),
+                inf, part.value(ParamKeys.BASE_RESISTANCE_OHMS), part.value(ParamKeys.COLLECTOR_RESISTANCE_OHMS),
+                part.value(ParamKeys.EMITTER_RESISTANCE_OHMS), DiodeParams.PN_JUNCTION_TEMP_EXPONENT,
+                part.value(ParamKeys.GAIN_TEMP_EXPONENT), DiodeParams.SILICON_BAND_GAP_ELECTRON_VOLTS,
                 DiodeParams.DATASHEET_TEMPERATURE_KELVIN);
     }
 
@@ -47,8 +48,8 @@ public final class DeviceParameters {
         if (part.kind() != PartKind.NMOS) {
             throw new IllegalArgumentException(part.ref() + " is not an N-channel MOSFET");
         }
-        return MosfetParams.level1(part.value("thresholdVolts"), part.value("transconductanceAmpsPerVoltSquared"),
-                part.value("lambdaPerVolt")).withTemperatureScaling(part.value("thresholdTempcoVoltsPerKelvin"),
+        return MosfetParams.level1(part.value(ParamKeys.THRESHOLD_VOLTS), part.value(ParamKeys.TRANSCONDUCTANCE_AMPS_PER_VOLT_SQUARED),
+                part.value(ParamKeys.LAMBDA_PER_VOLT)).withTemperatureScaling(part.value(ParamKeys.THRESHOLD_TEMPCO_VOLTS_PER_KELVIN),
                 MosfetParams.DEFAULT_MOBILITY_TEMP_EXPONENT);
     }
 
@@ -62,8 +63,8 @@ public final class DeviceParameters {
         if (part.kind() != PartKind.DIODE && part.kind() != PartKind.ZENER) {
             throw new IllegalArgumentException(part.ref() + " is not a diode or zener");
         }
-        return DiodeParams.junction(part.value("saturationCurrentAmps"), part.value("emissionCoefficient"))
-                .withBreakdown(part.value("breakdownVolts"), part.value("breakdownCurrentAmps"),
-                        part.value("emissionCoefficient"));
+        return DiodeParams.junction(part.value(ParamKeys.SATURATION_CURRENT_AMPS), part.value(ParamKeys.EMISSION_COEFFICIENT))
+                .withBreakdown(part.value(ParamKeys.BREAKDOWN_VOLTS), part.value(ParamKeys.BREAKDOWN_CURRENT_AMPS),
+                        part.value(ParamKeys.EMISSION_COEFFICIENT));
     }
 }

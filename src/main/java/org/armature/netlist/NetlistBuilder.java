@@ -7,6 +7,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.armature.model.ParamKeys;
 import org.armature.devices.Bjt;
 import org.armature.devices.BjtParams;
 import org.armature.devices.BjtPolarity;
@@ -443,8 +444,8 @@ public final class NetlistBuilder {
                 case RESISTOR, LOAD -> resistor();
                 case CAPACITOR -> capacitor();
                 case DIODE, ZENER -> diode(junctionParams());
-                case LED -> diode(DiodeParams.fromForwardPoint(v("forwardVolts"), v("forwardCurrentAmps"),
-                        v("emissionCoefficient"), DiodeParams.DATASHEET_TEMPERATURE_KELVIN));
+                case LED -> diode(DiodeParams.fromForwardPoint(v(ParamKeys.FORWARD_VOLTS), v(ParamKeys.FORWARD_CURRENT_AMPS),
+                        v(ParamKeys.EMISSION_COEFFICIENT), DiodeParams.DATASHEET_TEMPERATURE_KELVIN));
                 case TVS -> tvs();
                 case NPN -> bjt(BjtPolarity.NPN);
                 case PNP -> bjt(BjtPolarity.PNP);
@@ -458,25 +459,25 @@ public final class NetlistBuilder {
         private void supply() {
             int p = pin("p");
             int branch = b.allocateBranch(ref());
-            VoltageSource src = new VoltageSource(ref(), p, Netlist.GROUND, branch, v("volts"));
+            VoltageSource src = new VoltageSource(ref(), p, Netlist.GROUND, branch, v(ParamKeys.VOLTS));
             els.add(src);
             done(x -> {
                 double sourced = -x.branchCurrent(branch);
                 double volts = x.voltage(p);
-                return new PartReading(Map.of(Readings.CURRENT, sourced, "volts", volts, Readings.DELIVERED_POWER, volts * sourced),
+                return new PartReading(Map.of(Readings.CURRENT, sourced, Readings.VOLTS, volts, Readings.DELIVERED_POWER, volts * sourced),
                         Map.of(), Map.of("p", -sourced), -volts * sourced);
             }, null);
         }
 
         private void drivePin() {
             int out = pin("out");
-            double level = o.pinHigh() ? v("highVolts") : v("lowVolts");
-            NortonSource src = new NortonSource(ref(), out, Netlist.GROUND, level, v("outputResistanceOhms"));
+            double level = o.pinHigh() ? v(ParamKeys.HIGH_VOLTS) : v(ParamKeys.LOW_VOLTS);
+            NortonSource src = new NortonSource(ref(), out, Netlist.GROUND, level, v(ParamKeys.OUTPUT_RESISTANCE_OHMS));
             els.add(src);
             done(x -> {
                 double i = src.currentOut(x, 1.0);
                 double volts = x.voltage(out);
-                return new PartReading(Map.of(Readings.CURRENT, i, "volts", volts, Readings.DELIVERED_POWER, volts * i),
+                return new PartReading(Map.of(Readings.CURRENT, i, Readings.VOLTS, volts, Readings.DELIVERED_POWER, volts * i),
                         Map.of(), Map.of("out", -i), -volts * i);
             }, null);
         }
@@ -484,7 +485,7 @@ public final class NetlistBuilder {
         private void resistor() {
             int a = pin("a");
             int bb = pin("b");
-            Resistor r = new Resistor(ref(), a, bb, v("resistanceOhms"));
+            Resistor r = new Resistor(ref(), a, bb, v(ParamKeys.RESISTANCE_OHMS));
             els.add(r);
             done(x -> twoTerminal(x, a, bb, r.current(x), "a", "b"), null);
         }
@@ -492,7 +493,7 @@ public final class NetlistBuilder {
         private void capacitor() {
             int a = pin("a");
             int bb = pin("b");
-            els.add(new Capacitor(ref(), a, bb, v("capacitanceFarads")));
+            els.add(new Capacitor(ref(), a, bb, v(ParamKeys.CAPACITANCE_FARADS)));
             done(x -> twoTerminal(x, a, bb, 0.0, "a", "b"), null);
         }
 
@@ -503,7 +504,7 @@ public final class NetlistBuilder {
         private void diode(DiodeParams params) {
             int a = pin("a");
             int k = pin("k");
-            double rs = part.kind().param("seriesResistanceOhms").isPresent() ? v("seriesResistanceOhms") : 0.0;
+            double rs = part.kind().param(ParamKeys.SERIES_RESISTANCE_OHMS).isPresent() ? v(ParamKeys.SERIES_RESISTANCE_OHMS) : 0.0;
             int ai = series(a, rs, "series");
             JunctionElement j = new JunctionElement(ref(), ai, k, new Diode(params), kelvin, o.junctionGminSiemens());
             els.add(j);
@@ -513,9 +514,9 @@ public final class NetlistBuilder {
         private void tvs() {
             int a = pin("a");
             int bb = pin("b");
-            int ai = series(a, v("clampResistanceOhms"), "clamp");
+            int ai = series(a, v(ParamKeys.CLAMP_RESISTANCE_OHMS), "clamp");
             DiodeParams params = DiodeParams.junction(TVS_LIMITING_SATURATION_AMPS, 1.0)
-                    .asBidirectionalClamp(v("breakdownVolts"), v("breakdownCurrentAmps"), 1.0);
+                    .asBidirectionalClamp(v(ParamKeys.BREAKDOWN_VOLTS), v(ParamKeys.BREAKDOWN_CURRENT_AMPS), 1.0);
             JunctionElement j = new JunctionElement(ref(), ai, bb, new Diode(params), kelvin, o.junctionGminSiemens());
             els.add(j);
             done(x -> twoTerminal(x, a, bb, j.current(x), "a", "b"), null);
@@ -590,18 +591,18 @@ public final class NetlistBuilder {
             int com = pin("com");
             int e = pin("e");
             DarlingtonInternals di = o.darlington();
-            BjtParams tp = BjtParams.ebersMoll(BjtPolarity.NPN, v("saturationCurrentAmps"), v("betaForward"),
+            BjtParams tp = BjtParams.ebersMoll(BjtPolarity.NPN, v(ParamKeys.SATURATION_CURRENT_AMPS), v(ParamKeys.BETA_FORWARD),
                     di.betaReverse());
             BjtParams tp1 = tp.withKneeCurrents(di.driverKneeCurrentAmps(), Double.POSITIVE_INFINITY);
             BjtParams tp2 = tp.withKneeCurrents(di.outputKneeCurrentAmps(), Double.POSITIVE_INFINITY);
             int b1 = b.node(ref() + ".b1");
             int b2 = b.node(ref() + ".b2");
-            els.add(new Resistor(ref() + " input resistor", in, b1, v("inputResistanceOhms")));
-            els.add(new Resistor(ref() + " Q1 base-emitter resistor", b1, b2, v("firstBaseEmitterOhms")));
-            els.add(new Resistor(ref() + " Q2 base-emitter resistor", b2, e, v("secondBaseEmitterOhms")));
+            els.add(new Resistor(ref() + " input resistor", in, b1, v(ParamKeys.INPUT_RESISTANCE_OHMS)));
+            els.add(new Resistor(ref() + " Q1 base-emitter resistor", b1, b2, v(ParamKeys.FIRST_BASE_EMITTER_OHMS)));
+            els.add(new Resistor(ref() + " Q2 base-emitter resistor", b2, e, v(ParamKeys.SECOND_BASE_EMITTER_OHMS)));
             // the output resistance is the collector lead both transistors share (joined collectors
             // behind it): VCE(sat) = IC·R + VCE(sat) of Q1 + VBE of Q2, the shape of array datasheets
-            int c2 = series(out, v("collectorResistanceOhms"), "c2");
+            int c2 = series(out, v(ParamKeys.COLLECTOR_RESISTANCE_OHMS), "c2");
             BjtElement q1 = new BjtElement(ref() + " Q1", c2, b1, b2, new Bjt(tp1), kelvin, o.junctionGminSiemens());
             BjtElement q2 = new BjtElement(ref() + " Q2", c2, b2, e, new Bjt(tp2), kelvin, o.junctionGminSiemens());
             JunctionElement clamp = new JunctionElement(ref() + " clamp diode", out, com,
@@ -610,7 +611,7 @@ public final class NetlistBuilder {
             els.add(q1);
             els.add(q2);
             els.add(clamp);
-            double rin = v("inputResistanceOhms");
+            double rin = v(ParamKeys.INPUT_RESISTANCE_OHMS);
             RegionThresholds rt = o.regions();
             done(x -> {
                 double iin = (x.voltage(in) - x.voltage(b1)) / rin;
@@ -643,10 +644,10 @@ public final class NetlistBuilder {
             int com = pin("com");
             int no = pin("no");
             int nc = pin("nc");
-            double rRef = v("coilResistanceOhms");
+            double rRef = v(ParamKeys.COIL_RESISTANCE_OHMS);
             int tempSlot = b.allocateState(o.ambientCelsius());
             int contactSlot = b.allocateState(o.relayOperated() ? 1.0 : 0.0);
-            RelayCoil coil = new RelayCoil(ref(), a1, a2, rRef, v("referenceTemperatureCelsius"), tempSlot);
+            RelayCoil coil = new RelayCoil(ref(), a1, a2, rRef, v(ParamKeys.REFERENCE_TEMPERATURE_CELSIUS), tempSlot);
             SwitchedResistor toNo = new SwitchedResistor(ref() + " contact com-no", com, no, contactSlot, true, o.contacts());
             SwitchedResistor toNc = new SwitchedResistor(ref() + " contact com-nc", com, nc, contactSlot, false, o.contacts());
             Resistor insulation = new Resistor(ref() + " coil-contact insulation", com, a2, o.contacts().insulationOhms());
@@ -655,8 +656,8 @@ public final class NetlistBuilder {
             els.add(toNc);
             els.add(insulation);
             RelayHandle handle = new RelayHandle(ref(), coil, tempSlot, contactSlot,
-                    v("coilThermalResistanceKelvinPerWatt"),
-                    RelayThresholds.fromVolts(v("mustOperateVolts"), v("mustReleaseVolts"), rRef));
+                    v(ParamKeys.COIL_THERMAL_RESISTANCE_KELVIN_PER_WATT),
+                    RelayThresholds.fromVolts(v(ParamKeys.MUST_OPERATE_VOLTS), v(ParamKeys.MUST_RELEASE_VOLTS), rRef));
             done(x -> {
                 double coilT = x.state(tempSlot);
                 double i = coil.current(x);

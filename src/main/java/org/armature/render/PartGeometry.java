@@ -2,6 +2,7 @@ package org.armature.render;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.armature.model.ParamKeys;
 import org.armature.model.GridPoint;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
@@ -52,7 +53,7 @@ public final class PartGeometry {
             case NMOS -> List.of(new Box(-0.75, -1.3, 2.05, 1.3));
             case DARLINGTON -> List.of(new Box(-2, -2, 3.6, 2));
             case RELAY -> List.of(new Box(-0.8, -0.55, 0.8, 0.55), new Box(3.65, -0.75, 6.35, 0.95));
-            case LOAD -> switch (part.option("loadKind")) {
+            case LOAD -> switch (part.option(ParamKeys.LOAD_KIND)) {
                 case "lamp" -> List.of(new Box(-0.75, -0.75, 0.75, 0.75));
                 case "led" -> List.of(new Box(-0.6, -0.55, 1.45, 0.6));
                 default -> List.of(new Box(-0.4, -1.05, 0.4, 1.05));

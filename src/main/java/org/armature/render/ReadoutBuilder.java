@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
+import org.armature.model.ParamKeys;
 import org.armature.netlist.Readings;
 import org.armature.netlist.Region;
 import org.armature.model.Finding;
@@ -183,7 +184,7 @@ public final class ReadoutBuilder {
         boolean darlington = kind == PartKind.DARLINGTON;
         double ic = r.quantity(Readings.IC);
         double drive = r.quantity(darlington ? Readings.IIN : Readings.IB);
-        double lacking = ic / part.value("hfeMin") - drive;
+        double lacking = ic / part.value(ParamKeys.HFE_MIN) - drive;
         return "not saturated: needs " + Notation.format(lacking, "A") + " more " + (darlington ? "input" : "base")
                 + " current";
     }
@@ -220,7 +221,7 @@ public final class ReadoutBuilder {
     }
 
     private static Optional<Annotations.PartBadge> pinBadge(Part p, PartResult r) {
-        double limit = p.value("pinCurrentLimitAmps");
+        double limit = p.value(ParamKeys.PIN_CURRENT_LIMIT_AMPS);
         Double out = r.quantities().get(Readings.CURRENT);
         if (out == null || !(limit > 0)) {
             return Optional.empty();

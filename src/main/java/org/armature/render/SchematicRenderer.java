@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import org.armature.model.ParamKeys;
 import org.armature.model.Connectivity;
 import org.armature.model.GridPoint;
 import org.armature.model.Part;
@@ -164,21 +165,21 @@ public final class SchematicRenderer {
     /** The short value line of a part ("1 kΩ", "+12 V"); empty for kinds that show none. */
     public static String valueText(Part p) {
         return switch (p.kind()) {
-            case RESISTOR -> Notation.format(p.value("resistanceOhms"), "Ω");
-            case CAPACITOR -> Notation.format(p.value("capacitanceFarads"), "F");
-            case ZENER, TVS -> Notation.format(p.value("breakdownVolts"), "V");
-            case LED -> Notation.format(p.value("forwardVolts"), "V");
+            case RESISTOR -> Notation.format(p.value(ParamKeys.RESISTANCE_OHMS), "Ω");
+            case CAPACITOR -> Notation.format(p.value(ParamKeys.CAPACITANCE_FARADS), "F");
+            case ZENER, TVS -> Notation.format(p.value(ParamKeys.BREAKDOWN_VOLTS), "V");
+            case LED -> Notation.format(p.value(ParamKeys.FORWARD_VOLTS), "V");
             case DIODE, GROUND -> "";
-            case NPN, PNP, DARLINGTON -> "hFE ≥ " + Notation.format(p.value("hfeMin"), "");
-            case NMOS -> "VT " + Notation.format(p.value("thresholdVolts"), "V");
-            case RELAY -> Notation.format(p.value("ratedVolts"), "V") + ", " + Notation.format(p.value("coilResistanceOhms"), "Ω");
-            case LOAD -> Notation.format(p.value("ratedWatts"), "W") + " " + p.option("loadKind");
+            case NPN, PNP, DARLINGTON -> "hFE ≥ " + Notation.format(p.value(ParamKeys.HFE_MIN), "");
+            case NMOS -> "VT " + Notation.format(p.value(ParamKeys.THRESHOLD_VOLTS), "V");
+            case RELAY -> Notation.format(p.value(ParamKeys.RATED_VOLTS), "V") + ", " + Notation.format(p.value(ParamKeys.COIL_RESISTANCE_OHMS), "Ω");
+            case LOAD -> Notation.format(p.value(ParamKeys.RATED_WATTS), "W") + " " + p.option(ParamKeys.LOAD_KIND);
             case SUPPLY -> {
-                double v = p.value("volts");
-                String sign = p.option("waveform").equals("ac-rms") ? "~" : v > 0 ? "+" : "";
+                double v = p.value(ParamKeys.VOLTS);
+                String sign = p.option(ParamKeys.WAVEFORM).equals("ac-rms") ? "~" : v > 0 ? "+" : "";
                 yield sign + Notation.format(v, "V");
             }
-            case DRIVE_PIN -> Notation.format(p.value("highVolts"), "V") + ", " + Notation.format(p.value("outputResistanceOhms"), "Ω");
+            case DRIVE_PIN -> Notation.format(p.value(ParamKeys.HIGH_VOLTS), "V") + ", " + Notation.format(p.value(ParamKeys.OUTPUT_RESISTANCE_OHMS), "Ω");
         };
     }
 

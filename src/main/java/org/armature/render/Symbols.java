@@ -1,5 +1,6 @@
 package org.armature.render;
 
+import org.armature.model.ParamKeys;
 import org.armature.model.Part;
 
 /**
@@ -47,7 +48,7 @@ final class Symbols {
             case DARLINGTON -> darlington(pen, ink, s);
             case RELAY -> relay(pen, ink, s, relayOperated);
             case LOAD -> {
-                switch (part.option("loadKind")) {
+                switch (part.option(ParamKeys.LOAD_KIND)) {
                     case "lamp" -> lamp(pen, ink, s);
                     case "led" -> {
                         diode(pen, ink, s, Bar.PLAIN);

@@ -8,6 +8,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import java.util.function.Supplier;
+import org.armature.model.ParamKeys;
 import org.armature.netlist.ContactState;
 import org.armature.netlist.Readings;
 import org.armature.netlist.Region;
@@ -335,9 +336,9 @@ public final class OperatingPoint {
             if (r.region().orElse(Region.CUTOFF) == Region.CUTOFF || !(id > 0)) {
                 return new SwitchVerdict(ref, false, 0.0, () -> ref + " is off: VGS " + volts(vgs) + " is below threshold.");
             }
-            double thMax = part.value("vgsThMaxVolts");
-            double rdsOn = part.value("rdsOnOhms");
-            double spec = part.value("rdsOnGateVolts");
+            double thMax = part.value(ParamKeys.VGS_TH_MAX_VOLTS);
+            double rdsOn = part.value(ParamKeys.RDS_ON_OHMS);
+            double spec = part.value(ParamKeys.RDS_ON_GATE_VOLTS);
             double needed = (spec - thMax) + id * rdsOn / 2.0;
             if (!(spec > thMax)) {
                 return new SwitchVerdict(ref, false, 0.0, () -> ref + " RDS(on) is stated at VGS " + volts(spec)
@@ -358,7 +359,7 @@ public final class OperatingPoint {
         boolean darlington = kind == PartKind.DARLINGTON;
         double ic = r.quantity(Readings.IC);
         double drive = r.quantity(darlington ? Readings.IIN : Readings.IB);
-        double hfeMin = part.value("hfeMin");
+        double hfeMin = part.value(ParamKeys.HFE_MIN);
         if (r.region().orElse(Region.CUTOFF) == Region.CUTOFF || !(ic > 0) || !(drive > 0)) {
             return new SwitchVerdict(ref, false, 0.0, () -> ref + " is cut off: " + (darlington ? "input" : "base")
                     + " current " + amps(Math.max(drive, 0.0)) + ", the coil is not energised.");

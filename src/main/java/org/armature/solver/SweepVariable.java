@@ -1,5 +1,7 @@
 package org.armature.solver;
 
+import org.armature.model.ParamKeys;
+
 /** What a DC sweep varies. */
 public sealed interface SweepVariable permits SweepVariable.PartParameter, SweepVariable.Ambient {
 
@@ -21,7 +23,7 @@ public sealed interface SweepVariable permits SweepVariable.PartParameter, Sweep
      * @return the supply's voltage
      */
     static SweepVariable supplyVolts(String ref) {
-        return new PartParameter(ref, "volts");
+        return new PartParameter(ref, ParamKeys.VOLTS);
     }
 
     /**
@@ -30,7 +32,7 @@ public sealed interface SweepVariable permits SweepVariable.PartParameter, Sweep
      * @return the pin's open-circuit level
      */
     static SweepVariable pinLevel(String ref, boolean high) {
-        return new PartParameter(ref, high ? "highVolts" : "lowVolts");
+        return new PartParameter(ref, high ? ParamKeys.HIGH_VOLTS : ParamKeys.LOW_VOLTS);
     }
 
     /** @return the ambient temperature */

@@ -228,4 +228,21 @@ class BaseNetworkSizingTest {
         assertTrue(keys(r).contains("sizing.package-current-over-limit"));
         assertEquals(8 * value(r, "pin current, largest"), value(r, "package current, all channels"), 1e-12);
     }
+
+    @Test
+    @DisplayName("a missing pull-down is proposed under a free designator, never one the drawing already uses"
+            + " (failed before: it was proposed as R2 even when R2 was the base resistor)")
+    void missingRoleGetsAFreeDesignator() {
+        Stage template = Templates.build(StageTemplate.LOW_SIDE_NPN);
+        // no pull-down; the base resistor is called R2 and the template's R1 name is free
+        Stage stage = template.withoutPart("R2");
+        stage = stage.withoutPart("R1").withPart(template.require("R1").withRef("R2"));
+        SizingResult r = BaseNetworkSizing.size(stage);
+        Set<String> refs = r.suggestions().stream().map(Suggestion::ref).collect(Collectors.toSet());
+        assertTrue(refs.contains("R2"), "the base resistor, by its role: " + refs);
+        String pull = r.suggestions().stream().filter(x -> x.role().contains("pull")).map(Suggestion::ref)
+                .findFirst().orElseThrow(() -> new AssertionError(r.suggestions().toString()));
+        assertFalse(pull.equals("R2"), "the pull-down must not be given the base resistor's designator");
+        assertTrue(stage.part(pull).isEmpty(), pull + " is a new part");
+    }
 }

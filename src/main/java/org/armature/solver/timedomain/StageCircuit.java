@@ -11,6 +11,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.function.ToDoubleFunction;
 import java.util.stream.IntStream;
+import org.armature.model.ParamKeys;
 import org.armature.netlist.Readings;
 import org.armature.devices.BreakdownClamp;
 import org.armature.devices.DeviceFinding;
@@ -145,23 +146,23 @@ final class StageCircuit {
         int a1 = coil.terminals()[0];
         int a2 = coil.terminals()[1];
         double ohms = coil.ohmsAt(states[coil.temperatureSlot()]);
-        double rRef = relay.value("coilResistanceOhms");
-        double lRel = relay.value("inductanceReleasedHenries");
+        double rRef = relay.value(ParamKeys.COIL_RESISTANCE_OHMS);
+        double lRel = relay.value(ParamKeys.INDUCTANCE_RELEASED_HENRIES);
         RelayHandle handle = net.relays().stream().filter(h -> h.ref().equals(relay.ref())).findFirst().orElseThrow();
         boolean operated = ContactState.of(states[handle.contactSlot()]).operated();
         TransientCoil tc = c.add(new TransientCoil(relay.ref(), a1, a2, ohms, lRel, lRel, c.step));
-        double cap = relay.value("coilCapacitanceFarads");
+        double cap = relay.value(ParamKeys.COIL_CAPACITANCE_FARADS);
         if (cap > 0) {
             c.add(new TransientCapacitor(relay.ref() + " self-capacitance", a1, a2, cap, c.step));
         }
-        double core = relay.value("coreLossOhms");
+        double core = relay.value(ParamKeys.CORE_LOSS_OHMS);
         if (core > 0) {
             c.add(new Resistor(relay.ref() + " core loss", a1, a2, core));
         }
         double pickUp = handle.pickUpAmps();
         double dropOut = handle.dropOutAmps();
         Optional<MovingArmature> moving = Optional.empty();
-        if (relay.value("inductanceAttractedHenries") > lRel && dropOut < pickUp) {
+        if (relay.value(ParamKeys.INDUCTANCE_ATTRACTED_HENRIES) > lRel && dropOut < pickUp) {
             RelayArmatureFit fit = RelayArmatureFit.fit(armatureDatasheet(relay, ohms, pickUp, dropOut));
             moving = fit.moving();
             if (moving.isEmpty()) {
@@ -179,12 +180,12 @@ final class StageCircuit {
             return tc;
         }
         double tau = lRel / rRef;
-        double rated = relay.value("ratedVolts") / rRef;
+        double rated = relay.value(ParamKeys.RATED_VOLTS) / rRef;
         double rise = pickUp < rated ? tau * Math.log(rated / (rated - pickUp)) : 0;
-        double operateTransit = Math.max(0, relay.value("operateTimeSeconds") - rise);
-        double releaseTransit = relay.value("releaseTimeSeconds");
+        double operateTransit = Math.max(0, relay.value(ParamKeys.OPERATE_TIME_SECONDS) - rise);
+        double releaseTransit = relay.value(ParamKeys.RELEASE_TIME_SECONDS);
         c.relays.add(new RelayDynamics(relay.ref(), tc, handle.contactSlot(), pickUp, dropOut, operateTransit,
-                releaseTransit, relay.value("travelMetres"), operated));
+                releaseTransit, relay.value(ParamKeys.TRAVEL_METRES), operated));
         return tc;
     }
 
@@ -197,11 +198,11 @@ final class StageCircuit {
      */
     static RelayArmatureDatasheet armatureDatasheet(Part relay, double coilOhms, double pickUpAmps,
                                                     double dropOutAmps) {
-        return RelayArmatureDatasheet.typical(coilOhms, relay.value("inductanceReleasedHenries"),
-                        relay.value("inductanceAttractedHenries"), pickUpAmps, dropOutAmps, relay.value("travelMetres"))
-                .withSpringForceRatio(relay.value("springForceRatio"))
-                .withMechanics(GRAMS_TO_KILOGRAMS * relay.value("armatureMassGrams"),
-                        relay.value("armatureDampingNewtonSecondsPerMetre"), 0.0);
+        return RelayArmatureDatasheet.typical(coilOhms, relay.value(ParamKeys.INDUCTANCE_RELEASED_HENRIES),
+                        relay.value(ParamKeys.INDUCTANCE_ATTRACTED_HENRIES), pickUpAmps, dropOutAmps, relay.value(ParamKeys.TRAVEL_METRES))
+                .withSpringForceRatio(relay.value(ParamKeys.SPRING_FORCE_RATIO))
+                .withMechanics(GRAMS_TO_KILOGRAMS * relay.value(ParamKeys.ARMATURE_MASS_GRAMS),
+                        relay.value(ParamKeys.ARMATURE_DAMPING_NEWTON_SECONDS_PER_METRE), 0.0);
     }
 
     /** Part whose pins are the switch's high and low terminals, with the rating of its breakdown. */
@@ -210,10 +211,10 @@ final class StageCircuit {
 
     private static SwitchPins switchPins(PartKind k) {
         return switch (k) {
-            case NPN -> new SwitchPins("c", "e", "vceoVolts");
-            case PNP -> new SwitchPins("e", "c", "vceoVolts");
-            case NMOS -> new SwitchPins("d", "s", "vdssVolts");
-            case DARLINGTON -> new SwitchPins("out", "e", "vceoVolts");
+            case NPN -> new SwitchPins("c", "e", ParamKeys.VCEO_VOLTS);
+            case PNP -> new SwitchPins("e", "c", ParamKeys.VCEO_VOLTS);
+            case NMOS -> new SwitchPins("d", "s", ParamKeys.VDSS_VOLTS);
+            case DARLINGTON -> new SwitchPins("out", "e", ParamKeys.VCEO_VOLTS);
             default -> throw new IllegalArgumentException("not a switch: " + k);
         };
     }
@@ -223,7 +224,7 @@ final class StageCircuit {
         int a1 = coil.a1();
         int a2 = coil.a2();
         double ohms = coil.ohms();
-        double core = relay.part().value("coreLossOhms");
+        double core = relay.part().value(ParamKeys.CORE_LOSS_OHMS);
         Probe channelClamp = null;
         Probe channelClampPower = null;
         c.coilRef = relay.ref();
