@@ -1,0 +1,13 @@
+package org.armature.model;
+
+/** Test access to {@link Connectivity#drawn(Stage)} (package-private: callers use the named nets). */
+public final class ConnectivityProbe {
+
+    private ConnectivityProbe() {
+    }
+
+    /** The nets as drawn, before role names. */
+    public static Connectivity drawn(Stage stage) {
+        return Connectivity.drawn(stage);
+    }
+}
