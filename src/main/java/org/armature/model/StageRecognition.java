@@ -503,7 +503,6 @@ public record StageRecognition(Connectivity connectivity, Optional<StageRoles> r
                 }
                 s.refs.add(r.sw.ref());
                 s.refs.add(chain.get(0).ref());
-                s.clampCommonNet = Optional.of(com);
                 mechanisms.add(SuppressorKind.CHANNEL_CLAMP_IN_SERIES);
                 return;
             }
@@ -806,7 +805,6 @@ public record StageRecognition(Connectivity connectivity, Optional<StageRoles> r
         final Set<String> refs = new LinkedHashSet<>();
         final List<List<StageRoles.Oriented>> chains = new ArrayList<>();
         final List<StageRoles.Oriented> switchClamps = new ArrayList<>();
-        Optional<String> clampCommonNet = Optional.empty();
         List<SuppressorKind> mechanisms = List.of();
 
         SuppressorKind kind() {

@@ -27,6 +27,18 @@ public record StageDisguise(Stage stage, Map<String, String> refs) {
      * @param keepTestPoints true to keep the test points (on the renamed parts), false to drop them
      */
     public static StageDisguise of(Stage original, long seed, int dx, int dy, boolean keepTestPoints) {
+        return of(original, seed, dx, dy, keepTestPoints, 0, false);
+    }
+
+    /**
+     * As {@link #of(Stage, long, int, int, boolean)}, with the whole drawing first mirrored
+     * left-right (if asked) and turned clockwise by quarter turns.
+     *
+     * @param quarterTurns clockwise quarter turns of the whole drawing, 0 to 3
+     * @param mirror true to mirror the whole drawing left-right first
+     */
+    public static StageDisguise of(Stage original, long seed, int dx, int dy, boolean keepTestPoints,
+                                   int quarterTurns, boolean mirror) {
         Random random = new Random(seed);
         Map<String, String> refs = new HashMap<>();
         Set<String> used = new HashSet<>();
@@ -40,13 +52,18 @@ public record StageDisguise(Stage stage, Map<String, String> refs) {
         }
         List<Part> parts = new ArrayList<>();
         for (Part p : original.parts()) {
-            Placement at = p.placement().movedTo(p.placement().origin().plus(dx, dy));
+            Placement was = p.placement();
+            // mirror: (x, y) -> (-x, y), so M·R(r)·M(m) = R(-r)·M(!m); a quarter turn: R(90)·R(r) = R(r + 90)
+            int rotation = mirror ? (360 - was.rotationDegrees()) % 360 : was.rotationDegrees();
+            boolean mirrored = mirror != was.mirrored();
+            rotation = (rotation + 90 * quarterTurns) % 360;
+            Placement at = new Placement(move(was.origin(), dx, dy, quarterTurns, mirror), rotation, mirrored);
             parts.add(p.withRef(refs.get(p.ref())).withPlacement(at));
         }
         Collections.shuffle(parts, random);
         List<Wire> wires = new ArrayList<>();
         for (Wire w : original.wires()) {
-            wires.add(new Wire(w.from().plus(dx, dy), w.to().plus(dx, dy)));
+            wires.add(new Wire(move(w.from(), dx, dy, quarterTurns, mirror), move(w.to(), dx, dy, quarterTurns, mirror)));
         }
         Collections.shuffle(wires, random);
         List<TestPoint> tps = new ArrayList<>();
@@ -57,6 +74,18 @@ public record StageDisguise(Stage stage, Map<String, String> refs) {
         }
         return new StageDisguise(new Stage(original.name(), original.description(), parts, wires, tps,
                 original.conditions()), Map.copyOf(refs));
+    }
+
+    /** A grid point mirrored, turned clockwise on screen ((x, y) -> (-y, x) per quarter turn), then moved. */
+    private static GridPoint move(GridPoint p, int dx, int dy, int quarterTurns, boolean mirror) {
+        int x = mirror ? -p.gridX() : p.gridX();
+        int y = p.gridY();
+        for (int i = 0; i < quarterTurns; i++) {
+            int t = x;
+            x = -y;
+            y = t;
+        }
+        return new GridPoint(x + dx, y + dy);
     }
 
     /** The new designator of an original one. */

@@ -105,11 +105,12 @@ class StageRecognitionTest {
 
     @ParameterizedTest(name = "{0}, {1}, {2}")
     @MethodSource("variants")
-    @DisplayName("designators shuffled, drawing moved, parts reordered, test points removed: the same roles")
+    @DisplayName("designators shuffled, drawing moved, turned and mirrored, parts reordered, test points removed: the same roles")
     void disguisedRoles(StageTemplate t, Suppressor s, HighSideDrive d) {
         Stage stage = Templates.build(t, s, d);
         for (long seed = 1; seed <= 3; seed++) {
-            StageDisguise x = StageDisguise.of(stage, seed, (int) (5 * seed) - 11, 3 - (int) seed, seed != 2);
+            StageDisguise x = StageDisguise.of(stage, seed, (int) (5 * seed) - 11, 3 - (int) seed, seed != 2,
+                    (int) seed, seed == 3);
             StageRoles r = roles(x.stage());
             assertTemplateRoles(t, s, d, r, x::ref);
             StageRoles o = roles(stage);

@@ -84,7 +84,7 @@ class DrawnStageReadoutsTest {
     @DisplayName("disguised template, no test points: the same tags, verdict badge and coil gauge, pin high and low")
     void sameReadouts(StageTemplate t) {
         Stage template = Templates.build(t);
-        StageDisguise x = StageDisguise.of(template, 42, -9, 13, false);
+        StageDisguise x = StageDisguise.of(template, 42, -9, 13, false, 1, true);
         for (boolean high : new boolean[] {true, false}) {
             Annotations expected = readouts(template, high);
             Annotations actual = readouts(x.stage(), high);
@@ -98,7 +98,7 @@ class DrawnStageReadoutsTest {
     @DisplayName("disguised template, no test points: the same switch verdict and margin")
     void sameVerdict(StageTemplate t) {
         Stage template = Templates.build(t);
-        StageDisguise x = StageDisguise.of(template, 5, 17, -4, false);
+        StageDisguise x = StageDisguise.of(template, 5, 17, -4, false, 3, false);
         SwitchVerdict e = new DcAnalysis().solve(template).switchVerdict().orElseThrow();
         SwitchVerdict a = new DcAnalysis().solve(x.stage()).switchVerdict()
                 .orElseThrow(() -> new AssertionError("no verdict for the disguised " + t));
