@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.armature.model.StageRoles;
+import org.armature.netlist.ContactState;
 import org.armature.model.Connectivity;
 import org.armature.model.Part;
 import org.armature.model.Stage;
@@ -327,7 +328,7 @@ public final class EdgePlot {
         for (int k = 0; k < plot.channels().size(); k++) {
             Channel c = plot.channels().get(k);
             double v = plot.valueAt(c, t);
-            String text = c.binary() ? (v > 0.5 ? "closed" : "open") : Notation.format(v * c.scale(), c.displayUnit());
+            String text = c.binary() ? (ContactState.of(v).operated() ? "closed" : "open") : Notation.format(v * c.scale(), c.displayUnit());
             double sy0 = top + k * (stripH + STRIP_GAP);
             double w = tag.width(text) + 8;
             double bx = leftSide ? x - 6 - w : x + 6;
