@@ -2,6 +2,7 @@ package org.armature.io;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.core.StreamReadFeature;
@@ -10,6 +11,7 @@ import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.json.JsonMapper;
+import java.io.IOException;
 import org.armature.model.StageDocument;
 
 /**
@@ -84,12 +86,20 @@ public final class StageJson {
                     "The file is empty; a stage file holds one JSON object.");
         }
         JsonNode root;
-        try {
-            root = MAPPER.readTree(text);
-        } catch (StreamConstraintsException e) {
-            throw overLimit(e);
+        try (JsonParser parser = MAPPER.createParser(text)) {
+            try {
+                root = MAPPER.readTree(parser);
+                if (root != null && parser.nextToken() != null) {
+                    throw new StageFileException(StageFileException.MALFORMED_JSON, "The file is not valid JSON"
+                            + where(parser.currentLocation()) + ": there is more after the top-level object.");
+                }
+            } catch (StreamConstraintsException e) {
+                throw overLimit(e, parser.currentLocation());
+            }
         } catch (JsonProcessingException e) {
             throw malformed(e);
+        } catch (IOException e) {
+            throw new IllegalStateException("reading from a string in memory does not fail with I/O", e);
         }
         if (root == null || root.isMissingNode()) {
             throw new StageFileException(StageFileException.MALFORMED_JSON,
@@ -104,7 +114,7 @@ public final class StageJson {
     }
 
     /** A limit of the reader was passed: said in our words, with the place. */
-    private static StageFileException overLimit(StreamConstraintsException e) {
+    private static StageFileException overLimit(StreamConstraintsException e, JsonLocation at) {
         String m = e.getOriginalMessage() == null ? "" : e.getOriginalMessage().toLowerCase(java.util.Locale.ROOT);
         String what;
         if (m.contains("nesting")) {
@@ -117,7 +127,7 @@ public final class StageJson {
             what = "the file exceeds a size limit of the reader";
         }
         return new StageFileException(StageFileException.MALFORMED_JSON,
-                "The file cannot be read" + where(e.getLocation()) + ": " + what + ".", e);
+                "The file cannot be read" + where(at) + ": " + what + ".", e);
     }
 
     private static String where(JsonLocation at) {
