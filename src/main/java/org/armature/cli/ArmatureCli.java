@@ -140,6 +140,10 @@ public final class ArmatureCli {
         if (e instanceof java.io.UncheckedIOException u) {
             return sentence("A file could not be read or written: " + describe(u.getCause()));
         }
+        if (e instanceof org.armature.solver.SolverException
+                || e instanceof org.armature.solver.timedomain.TransientFailureException) {
+            return sentence("The stage could not be solved: " + describe(e));
+        }
         if (e instanceof OutOfMemoryError) {
             return "The command ran out of memory; give the Java runtime more (-Xmx) or a smaller input.";
         }

@@ -198,6 +198,19 @@ class BadCommandLinesTest {
     }
 
     @org.junit.jupiter.api.Test
+    void anyExceptionOfACommandIsOneSentence() {
+        // the one failure path: engine and record exceptions are said plainly, never "internal error"
+        for (Throwable t : List.<Throwable>of(new IllegalArgumentException("ambientCelsius must be finite"),
+                new IllegalStateException(), new NullPointerException(), new java.io.UncheckedIOException(
+                        new IOException("No space left on device")), new OutOfMemoryError("Java heap space"),
+                new StackOverflowError(), new CommandFailedException("Stage \"x\" cannot be solved: R1 is 0 Ω"))) {
+            String s = ArmatureCli.failureSentence(t);
+            assertFalse(s.contains("\n") || s.toLowerCase().contains("internal error") || s.contains("Exception"), s);
+            assertTrue(s.endsWith("."), s);
+        }
+    }
+
+    @org.junit.jupiter.api.Test
     void tableHasAtLeastSixtyRows() throws IOException {
         assertTrue(badLines().count() >= 60);
     }
