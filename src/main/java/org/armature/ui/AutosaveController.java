@@ -5,6 +5,7 @@ import java.time.format.DateTimeFormatter;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.function.Function;
 import javafx.animation.KeyFrame;
 import javafx.animation.Timeline;
 import javafx.scene.control.Alert;
@@ -132,28 +133,54 @@ public final class AutosaveController {
         discardQuietly(r.key());
     }
 
+    /** What the user chose for one autosave. */
+    public enum Choice {
+        /** Show it in the editor (the other autosaves wait for the next start). */
+        RECOVER,
+        /** Throw it away. */
+        DISCARD,
+        /** Keep it for the next start. */
+        LATER
+    }
+
     /**
-     * Asks about each autosave left behind, newest first: recover it (then the others wait for the
-     * next start), discard it, or keep it for later (FX thread).
+     * Asks about each autosave left behind, newest first, with a dialog (FX thread).
      */
     public void offerRecovery(Window owner) {
-        ButtonType recover = new ButtonType("Recover", ButtonBar.ButtonData.YES);
-        ButtonType discard = new ButtonType("Discard", ButtonBar.ButtonData.NO);
-        ButtonType later = new ButtonType("Later", ButtonBar.ButtonData.CANCEL_CLOSE);
+        offerRecovery(r -> ask(owner, r));
+    }
+
+    /**
+     * Asks about each autosave left behind, newest first: recover one (then the others wait for the
+     * next start), discard, or keep for later.
+     *
+     * @param ask the question; the window shows a dialog, tests answer directly
+     */
+    public void offerRecovery(Function<Autosave.Recovery, Choice> ask) {
         for (Autosave.Recovery r : pending()) {
-            Alert a = new Alert(Alert.AlertType.CONFIRMATION, question(r), recover, discard, later);
-            a.setTitle("Recover unsaved work");
-            a.setHeaderText("Unsaved work was found");
-            a.initOwner(owner);
-            Optional<ButtonType> choice = a.showAndWait();
-            if (choice.isPresent() && choice.get() == recover) {
-                if (recover(r)) {
-                    return;
-                }
-            } else if (choice.isPresent() && choice.get() == discard) {
+            Choice c = ask.apply(r);
+            if (c == Choice.RECOVER && recover(r)) {
+                return;
+            }
+            if (c == Choice.DISCARD) {
                 discard(r);
             }
         }
+    }
+
+    private static Choice ask(Window owner, Autosave.Recovery r) {
+        ButtonType recover = new ButtonType("Recover", ButtonBar.ButtonData.YES);
+        ButtonType discard = new ButtonType("Discard", ButtonBar.ButtonData.NO);
+        ButtonType later = new ButtonType("Later", ButtonBar.ButtonData.CANCEL_CLOSE);
+        Alert a = new Alert(Alert.AlertType.CONFIRMATION, question(r), recover, discard, later);
+        a.setTitle("Recover unsaved work");
+        a.setHeaderText("Unsaved work was found");
+        a.initOwner(owner);
+        Optional<ButtonType> choice = a.showAndWait();
+        if (choice.isPresent() && choice.get() == recover) {
+            return Choice.RECOVER;
+        }
+        return choice.isPresent() && choice.get() == discard ? Choice.DISCARD : Choice.LATER;
     }
 
     /** The question for one autosave: what, when, and against which saved file. */

@@ -105,4 +105,31 @@ class AutosaveControllerTest {
         c.stop();
         assertEquals(List.of(), store.pending(), "a normal close leaves nothing");
     }
+
+    @Test
+    @DisplayName("the start-up question: later keeps, discard removes, recover shows the work and stops asking")
+    void startUpQuestion() {
+        Autosave store = new Autosave(dir.resolve("recovery"));
+        for (int i = 0; i < 3; i++) {
+            EditorViewModel crashed = vm();
+            AutosaveController c = new AutosaveController(crashed, store);
+            crashed.setValue("R1", "resistanceOhms", 1100 + i);
+            c.autosaveNow();
+        }
+        EditorViewModel next = vm();
+        AutosaveController c = new AutosaveController(next, store);
+        java.util.List<AutosaveController.Choice> answers = new java.util.ArrayList<>(
+                List.of(AutosaveController.Choice.LATER, AutosaveController.Choice.DISCARD,
+                        AutosaveController.Choice.RECOVER));
+        java.util.List<String> asked = new java.util.ArrayList<>();
+        c.offerRecovery(r -> {
+            asked.add(r.key());
+            return answers.remove(0);
+        });
+        assertEquals(3, asked.size());
+        assertTrue(next.dirtyProperty().get(), "the third was recovered");
+        assertEquals(2, store.pending().size(), "the one kept for later and this window's own");
+        assertTrue(store.exists(asked.get(0)), "later keeps it");
+        assertFalse(store.exists(asked.get(1)), "discard removes it");
+    }
 }
