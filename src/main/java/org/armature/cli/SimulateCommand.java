@@ -108,7 +108,11 @@ final class SimulateCommand implements Callable<Integer> {
         };
         TransientResult result;
         try {
-            result = TransientAnalysis.run(stage, new TransientOptions(drive, window, StepOptions.DEFAULTS, Double.NaN));
+            TransientOptions options = new TransientOptions(drive, window, StepOptions.DEFAULTS, Double.NaN);
+            Stage simulated = stage;
+            result = Progress.run(() -> TransientAnalysis.run(simulated, options), spec.commandLine().getErr(), "simulate",
+                    org.armature.units.EngineeringNotation.format(window, Unit.SECOND) + " of the "
+                            + edge.name().toLowerCase(Locale.ROOT) + " edge");
         } catch (SolverException | TransientFailureException e) {
             throw new CommandFailedException("Stage \"" + stage.name() + "\" could not be simulated: "
                     + e.getMessage(), e);
