@@ -49,8 +49,30 @@ public final class Launcher {
                 && args[0].toLowerCase(java.util.Locale.ROOT).endsWith(org.armature.io.StageFiles.EXTENSION);
     }
 
+    /**
+     * Why the window cannot open for want of a display, or null when one may be there. Checked
+     * before JavaFX is loaded, so its toolkit prints none of its own log lines: on Linux and other
+     * X11/Wayland systems a window needs {@code DISPLAY} or {@code WAYLAND_DISPLAY} (unless a
+     * headless glass platform such as Monocle is chosen).
+     */
+    static String missingDisplay(String osName, String display, String waylandDisplay, String glassPlatform) {
+        String os = osName.toLowerCase(java.util.Locale.ROOT);
+        boolean x11 = !(os.startsWith("windows") || os.startsWith("mac"));
+        boolean blank = (display == null || display.isBlank()) && (waylandDisplay == null || waylandDisplay.isBlank());
+        if (x11 && blank && glassPlatform == null) {
+            return "The window needs a display and none is available (DISPLAY is not set).";
+        }
+        return null;
+    }
+
     /** Starts the window; returns 0 once it has closed, or a failure status after saying why. */
     static int openWindow(String[] args) {
+        String noDisplay = missingDisplay(System.getProperty("os.name", ""), System.getenv("DISPLAY"),
+                System.getenv("WAYLAND_DISPLAY"), System.getProperty("glass.platform"));
+        if (noDisplay != null) {
+            String hint = args.length == 1 ? " To check the file without a window: armature check " + args[0] + "." : "";
+            return ArmatureCli.windowUnavailable(noDisplay + hint);
+        }
         Method main;
         try {
             main = Class.forName(WINDOW_CLASS).getMethod("main", String[].class);

@@ -28,4 +28,20 @@ class LauncherTest {
         // two arguments are always a command (README, headless commands)
         assertEquals(false, Launcher.opensFile(new String[] {"solve", file}));
     }
+
+    @ParameterizedTest(name = "{0}, DISPLAY={1}, WAYLAND_DISPLAY={2}, glass={3}: refused={4}")
+    @CsvSource(textBlock = """
+            Linux,      ,      ,      , true
+            Linux,    :0,      ,      , false
+            Linux,      , wayland-0,  , false
+            Linux,      ,      , Monocle, false
+            FreeBSD,    ,      ,      , true
+            Windows 11, ,      ,      , false
+            Mac OS X,   ,      ,      , false
+            """)
+    void noDisplayIsSaidBeforeJavaFxLoads(String os, String display, String wayland, String glass, boolean refused) {
+        // reproduction: with no display the toolkit printed three log lines before the sentence
+        String why = Launcher.missingDisplay(os, display, wayland, glass);
+        assertEquals(refused, why != null, String.valueOf(why));
+    }
 }

@@ -270,7 +270,7 @@ public final class BaseNetworkSizing {
             double pkg = pin.value(ParamKeys.PACKAGE_CURRENT_LIMIT_AMPS);
             if (total > pkg) {
                 finding(Severity.WARNING, "sizing.package-current-over-limit", pin.ref(),
-                        ratio(channels) + " channels would draw " + amps(total) + " from " + pin.ref()
+                        channelWords(channels) + " would draw " + amps(total) + " from " + pin.ref()
                                 + "'s package, above its total limit of " + amps(pkg) + ".");
             }
         }
@@ -436,4 +436,12 @@ public final class BaseNetworkSizing {
 
 
 
+
+    /** "1 channel", "6 channels"; a fraction (a share of a package) keeps its digits. */
+    static String channelWords(double n) {
+        if (n == Math.rint(n) && Math.abs(n) < 1e9) {
+            return (long) n + (n == 1 ? " channel" : " channels");
+        }
+        return org.armature.units.EngineeringNotation.format(n, org.armature.units.Unit.RATIO) + " channels";
+    }
 }

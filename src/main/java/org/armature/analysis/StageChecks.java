@@ -386,7 +386,7 @@ public final class StageChecks {
             double n = u.value(ParamKeys.CHANNEL_COUNT);
             double i = n * Math.abs(s.on().get().pinCurrent());
             double limit = u.value(ParamKeys.PACKAGE_CURRENT_LIMIT_AMPS);
-            return Optional.of(rated(i, limit, () -> ratio(n) + " channels draw " + amps(i) + " from the package; its limit is "
+            return Optional.of(rated(i, limit, () -> channelWords(n) + (n == 1 ? " draws " : " draw ") + amps(i) + " from the package; its limit is "
                     + amps(limit) + "."));
         }
 
@@ -703,4 +703,12 @@ public final class StageChecks {
 
 
 
+
+    /** "1 channel", "6 channels"; a fraction (a share of a package) keeps its digits. */
+    static String channelWords(double n) {
+        if (n == Math.rint(n) && Math.abs(n) < 1e9) {
+            return (long) n + (n == 1 ? " channel" : " channels");
+        }
+        return org.armature.units.EngineeringNotation.format(n, org.armature.units.Unit.RATIO) + " channels";
+    }
 }

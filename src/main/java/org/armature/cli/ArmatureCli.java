@@ -11,8 +11,10 @@ import picocli.CommandLine;
  * Entry point of the headless command line ({@code armature COMMAND ...}), built on picocli.
  *
  * <p>Exit status: 0 success, 1 failure ({@link CommandFailedException}, {@link StageFileException},
- * solver failures), 2 usage error (unknown option, bad number, unknown template, option not
- * applicable). Every error is one sentence on the error stream, never a stack trace.
+ * solver failures, any other exception of a command), 2 usage error (unknown option, bad number,
+ * unknown template, option not applicable). Every error is one sentence on the error stream, never a
+ * stack trace: usage errors go through one handler ({@code usageError}), every other failure through
+ * one other ({@link #failureSentence(Throwable)}), so a new command needs no error handling of its own.
  *
  * <p><b>Adding a subcommand:</b> write one class per subcommand in this package, annotated
  * {@code @Command(name = "...")} and implementing {@code Callable<Integer>}; write results through
@@ -23,6 +25,9 @@ import picocli.CommandLine;
  * <p>Nothing here loads a JavaFX class.
  */
 public final class ArmatureCli {
+
+    /** Longest part of an engine's own message repeated in a failure sentence. */
+    private static final int MAX_DETAIL_CHARS = 300;
 
     /** What {@code armature --version} prints. */
     public static final String VERSION = "armature 0.1.0";
@@ -60,7 +65,14 @@ public final class ArmatureCli {
      * @return the exit status: 0, 1 (failure) or 2 (usage error)
      */
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
-        int status = commandLine(out, err).execute(args);
+        int status;
+        try {
+            status = commandLine(out, err).execute(args);
+        } catch (OutOfMemoryError | StackOverflowError e) {
+            // picocli hands only Exceptions to the handler; these two still get one sentence
+            err.println("armature: " + failureSentence(e));
+            status = CommandLine.ExitCode.SOFTWARE;
+        }
         out.flush();
         err.flush();
         return status;
@@ -72,6 +84,7 @@ public final class ArmatureCli {
         for (Supplier<Object> sub : SUBCOMMANDS) {
             cl.addSubcommand(sub.get());
         }
+        WholeNumbers.register(cl);
         cl.setOut(out);
         cl.setErr(err);
         cl.setParameterExceptionHandler(ArmatureCli::usageError);
@@ -109,16 +122,44 @@ public final class ArmatureCli {
 
     private static int failure(Exception e, CommandLine cmd, CommandLine.ParseResult parsed) {
         PrintWriter err = cmd.getErr();
-        String command = cmd.getCommandSpec().qualifiedName();
-        if (e instanceof CommandFailedException || e instanceof StageFileException) {
-            err.println(command + ": " + sentence(e.getMessage()));
-        } else {
-            // a bug, not a user error: say so plainly, still without a stack trace
-            err.println(command + ": internal error (" + e.getClass().getSimpleName() + ": " + e.getMessage()
-                    + "); please report it.");
-        }
+        err.println(cmd.getCommandSpec().qualifiedName() + ": " + failureSentence(e));
         err.flush();
         return CommandLine.ExitCode.SOFTWARE;
+    }
+
+    /**
+     * The one sentence for any failure of a command. Our own failures carry their sentence; an
+     * engine failure or an invariant of the document records says what stopped the command in the
+     * exception's own words. Never a stack trace, never a request to report an "internal error":
+     * the user is told what could not be done and what to look at.
+     */
+    static String failureSentence(Throwable e) {
+        if (e instanceof CommandFailedException || e instanceof StageFileException) {
+            return sentence(e.getMessage());
+        }
+        if (e instanceof java.io.UncheckedIOException u) {
+            return sentence("A file could not be read or written: " + describe(u.getCause()));
+        }
+        if (e instanceof org.armature.solver.SolverException
+                || e instanceof org.armature.solver.timedomain.TransientFailureException) {
+            return sentence("The stage could not be solved: " + describe(e));
+        }
+        if (e instanceof OutOfMemoryError) {
+            return "The command ran out of memory; give the Java runtime more (-Xmx) or a smaller input.";
+        }
+        if (e instanceof StackOverflowError) {
+            return "The command's input nests too deeply to be processed.";
+        }
+        return sentence("The command stopped: " + describe(e));
+    }
+
+    private static String describe(Throwable e) {
+        String m = e == null ? null : e.getMessage();
+        if (m == null || m.isBlank()) {
+            return "the calculation could not be completed with these values";
+        }
+        String firstLine = m.strip().lines().findFirst().orElse(m.strip());
+        return firstLine.length() > MAX_DETAIL_CHARS ? firstLine.substring(0, MAX_DETAIL_CHARS) + "…" : firstLine;
     }
 
     /** A message as one sentence: one line, ending in a full stop. */

@@ -4,9 +4,8 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.UncheckedIOException;
+import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -14,6 +13,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.armature.io.SafeWrite;
 import org.armature.io.StageFiles;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
@@ -43,7 +43,7 @@ import picocli.CommandLine.Spec;
  * {@code --json} exactly one object:
  *
  * <pre>{@code
- * {"metrics": {"peakSwitchVoltage": V, "peakCoilReverseVoltage": V, "decayToReleaseCurrent": s,
+ * {"metrics": {"peakSwitchVoltage": V, "peakCoilReverseVoltage": V, "decayToDropOutCurrent": s,
  *              "decayToZero": s, "releaseTime": s, "operateTime": s, "suppressorEnergy": J,
  *              "switchEnergy": J, "switchBreakdown": true|false},
  *  "events": [{"time": s, "what": "..."}], "samples": N}
@@ -89,6 +89,9 @@ final class SimulateCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (csv != null) {
+            checkCsvTarget(spec.commandLine());
+        }
         StageDocument doc = StageFiles.open(file);
         Stage stage = StageSelection.select(doc, stageSelector, file, spec.commandLine());
         StageSelection.requireValid(stage, "simulated");
@@ -105,7 +108,11 @@ final class SimulateCommand implements Callable<Integer> {
         };
         TransientResult result;
         try {
-            result = TransientAnalysis.run(stage, new TransientOptions(drive, window, StepOptions.DEFAULTS, Double.NaN));
+            TransientOptions options = new TransientOptions(drive, window, StepOptions.DEFAULTS, Double.NaN);
+            Stage simulated = stage;
+            result = Progress.run(() -> TransientAnalysis.run(simulated, options), spec.commandLine().getErr(), "simulate",
+                    org.armature.units.EngineeringNotation.format(window, Unit.SECOND) + " of the "
+                            + edge.name().toLowerCase(Locale.ROOT) + " edge");
         } catch (SolverException | TransientFailureException e) {
             throw new CommandFailedException("Stage \"" + stage.name() + "\" could not be simulated: "
                     + e.getMessage(), e);
@@ -126,7 +133,7 @@ final class SimulateCommand implements Callable<Integer> {
         ObjectNode metrics = root.putObject("metrics");
         put(metrics, "peakSwitchVoltage", m.peakSwitchVolts());
         put(metrics, "peakCoilReverseVoltage", m.peakCoilReverseVolts());
-        put(metrics, "decayToReleaseCurrent", m.decayToReleaseCurrentSeconds());
+        put(metrics, "decayToDropOutCurrent", m.decayToReleaseCurrentSeconds());
         put(metrics, "decayToZero", m.decayToZeroSeconds());
         put(metrics, "releaseTime", m.releaseTimeSeconds());
         put(metrics, "operateTime", m.operateTimeSeconds());
@@ -169,7 +176,8 @@ final class SimulateCommand implements Callable<Integer> {
         line(b, "switch energy", m.switchEnergyJoules(), "J");
         b.append(String.format(Locale.ROOT, "%-28s %s%n", "switch breakdown", m.switchBreakdown() ? "yes" : "no"));
         for (TransientEvent e : r.waveform().events()) {
-            b.append(String.format(Locale.ROOT, "  %12.6f s  %s %s%n", e.timeSeconds(), e.what(), e.subject()));
+            String subject = e.subject() == null || e.subject().isBlank() ? "" : " " + e.subject();
+            b.append(String.format(Locale.ROOT, "  %12.6f s  %s%s%n", e.timeSeconds(), e.what(), subject));
         }
         b.append(String.format(Locale.ROOT, "%d time points%n", r.waveform().size()));
         for (String note : r.notes()) {
@@ -191,9 +199,15 @@ final class SimulateCommand implements Callable<Integer> {
         };
     }
 
-    /** Writes the waveform as CSV: a header with units, then one row per time point. */
+    /**
+     * Writes the waveform as CSV through {@link SafeWrite} (temporary file, sync, backup
+     * {@code FILE~}, atomic move): a header with units, then one row per time point.
+     *
+     * @throws org.armature.io.StageFileException {@code file.unwritable}; an existing file is untouched
+     */
     static void writeCsv(Waveform w, Path target) {
-        try (Writer out = Files.newBufferedWriter(target, StandardCharsets.UTF_8)) {
+        SafeWrite.write(target, stream -> {
+            Writer out = new OutputStreamWriter(stream, StandardCharsets.UTF_8);
             StringBuilder header = new StringBuilder("time [s]");
             List<Trace> traces = w.traces();
             for (Trace t : traces) {
@@ -209,8 +223,20 @@ final class SimulateCommand implements Callable<Integer> {
                 }
                 out.write(row.append('\n').toString());
             }
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write " + target, e);
+            out.flush();
+        });
+    }
+
+    /** Refuses a CSV target that cannot be written before the run spends its time. */
+    private void checkCsvTarget(CommandLine cl) {
+        Path abs = csv.toAbsolutePath().normalize();
+        Path dir = abs.getParent();
+        if (dir == null || Files.isDirectory(abs)) {
+            throw new CommandLine.ParameterException(cl, "--csv " + csv + " is a folder; expected a file name such as wave.csv.");
+        }
+        if (!Files.isDirectory(dir)) {
+            throw new CommandLine.ParameterException(cl, "--csv " + csv + ": the folder " + dir
+                    + " does not exist; expected a file in an existing folder.");
         }
     }
 

@@ -34,12 +34,15 @@ import picocli.CommandLine.Spec;
  * network values and the calculation behind them. With {@code --json}, exactly one JSON object:
  *
  * <pre>{@code
- * {"stage": "...", "topology": "LOW_SIDE_NPN", "forcedBeta": 10, "series": "E24",
- *  "suggestions": [{"ref": "R1", "param": ParamKeys.RESISTANCE_OHMS, "value": 430, ParamKeys.TOLERANCE_PERCENT: 5,
+ * {"stage": "...", "topology": "low-side-npn", "forcedBeta": 10, "series": "E24",
+ *  "suggestions": [{"ref": "R1", "param": "resistanceOhms", "value": 430, "tolerancePercent": 5,
  *                   "role": "base resistor", "rule": "..."}],
  *  "steps": [{"label": "coil current, worst case", "formula": "...", "value": 0.0425, "unit": "A"}, ...],
  *  "findings": [{"severity": "warning", "key": "sizing....", "ref": "Q1", "message": "..."}]}
  * }</pre>
+ * {@code topology} uses the ids the {@code new} command takes. A stage the assistant cannot size (a
+ * high side driven straight from the pin, no switch recognised) is a failure (exit 1) whose sentence
+ * says why, not an empty calculation.
  */
 @Command(name = "size", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Size the base or gate network of a stage and show the calculation step by step."})
@@ -77,6 +80,12 @@ final class SizeCommand implements Callable<Integer> {
         SizingOptions options = SizingOptions.DEFAULT.withBaseDrive(new BaseDriveRule.ForcedBeta(forcedBeta))
                 .withSeries(series);
         SizingResult r = BaseNetworkSizing.size(stage, options);
+        if (r.suggestions().isEmpty() && r.steps().isEmpty()) {
+            String why = r.findings().stream().map(Finding::message).findFirst()
+                    .orElse("no switch and base or gate network were recognised.");
+            throw new CommandFailedException("Nothing to size in stage \"" + org.armature.model.Validator.shorten(stage.name())
+                    + "\": " + why);
+        }
         PrintWriter out = cl.getOut();
         out.print(json ? json(stage, r) : text(stage, r));
         out.flush();
@@ -87,7 +96,7 @@ final class SizeCommand implements Callable<Integer> {
         ObjectNode root = JSON.createObjectNode();
         root.put("stage", stage.name());
         if (r.topology().isPresent()) {
-            root.put("topology", r.topology().get().name());
+            root.put("topology", r.topology().get().name().toLowerCase(Locale.ROOT).replace('_', '-'));
         } else {
             root.putNull("topology");
         }

@@ -164,13 +164,13 @@ final class SolveCommand implements Callable<Integer> {
             }
             StringBuilder line = new StringBuilder("  ").append(r.ref()).append(" (").append(r.kind().title())
                     .append(')');
-            new TreeMap<>(r.states()).forEach((k, v) -> line.append(", ").append(k).append(' ').append(v));
+            new TreeMap<>(r.states()).forEach((k, v) -> line.append(", ").append(PartWords.state(k, v)));
             b.append(line).append(nl);
-            StringBuilder values = new StringBuilder("     ");
-            new TreeMap<>(r.quantities()).forEach((k, v) -> values.append(' ').append(k).append(' ')
-                    .append(EngineeringNotation.format(v, unitOf(k))).append(';'));
-            if (!r.quantities().isEmpty()) {
-                b.append(values, 0, values.length() - 1).append(nl);
+            java.util.List<String> values = new java.util.ArrayList<>();
+            new TreeMap<>(r.quantities()).forEach((k, v) -> values.add(PartWords.label(k) + " "
+                    + EngineeringNotation.format(v, PartWords.unit(k))));
+            if (!values.isEmpty()) {
+                b.append("      ").append(String.join("; ", values)).append(nl);
             }
         }
         Optional<SwitchVerdict> v = op.switchVerdict();

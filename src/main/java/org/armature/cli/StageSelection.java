@@ -11,6 +11,9 @@ import picocli.CommandLine;
  */
 final class StageSelection {
 
+    /** Validation errors quoted in a refusal; the rest are counted. */
+    private static final int MAX_ERRORS_SHOWN = 3;
+
     private StageSelection() {
     }
 
@@ -26,17 +29,20 @@ final class StageSelection {
         if (selector == null) {
             return doc.first();
         }
-        if (selector.matches("\\d+")) {
-            int n = Integer.parseInt(selector);
-            if (n < 1 || n > doc.stages().size()) {
-                throw new CommandLine.ParameterException(cl, "--stage " + n + " is not in " + file.getFileName()
-                        + ", which holds " + doc.stages().size() + " stage(s).");
+        int count = doc.stages().size();
+        String holds = ", which holds " + count + (count == 1 ? " stage" : " stages") + "; expected a number from 1 to "
+                + count + " or a stage's name";
+        if (selector.strip().matches("[+-]?\\d+")) {
+            java.math.BigInteger n = new java.math.BigInteger(selector.strip());
+            if (n.signum() < 1 || n.compareTo(java.math.BigInteger.valueOf(count)) > 0) {
+                throw new CommandLine.ParameterException(cl, "--stage " + WholeNumbers.shortened(selector.strip())
+                        + " is not in " + file.getFileName() + holds + ".");
             }
-            return doc.stages().get(n - 1);
+            return doc.stages().get(n.intValueExact() - 1);
         }
         return doc.stages().stream().filter(s -> s.name().equals(selector)).findFirst()
                 .orElseThrow(() -> new CommandLine.ParameterException(cl, "No stage of " + file.getFileName()
-                        + " is named \"" + selector + "\"."));
+                        + " is named \"" + org.armature.model.Validator.shorten(selector) + "\"" + holds + "."));
     }
 
     /**
@@ -52,8 +58,10 @@ final class StageSelection {
                 .filter(f -> f.severity() == org.armature.model.Severity.ERROR)
                 .map(org.armature.model.Finding::message).toList();
         if (!errors.isEmpty()) {
-            throw new CommandFailedException("Stage \"" + stage.name() + "\" cannot be " + verb + ": "
-                    + String.join(" ", errors));
+            java.util.List<String> shown = errors.subList(0, Math.min(errors.size(), MAX_ERRORS_SHOWN));
+            String more = errors.size() > shown.size() ? " (and " + (errors.size() - shown.size()) + " more errors)" : "";
+            throw new CommandFailedException("Stage \"" + org.armature.model.Validator.shorten(stage.name())
+                    + "\" cannot be " + verb + ": " + String.join(" ", shown) + more);
         }
         return stage;
     }

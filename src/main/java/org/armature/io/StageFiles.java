@@ -1,29 +1,21 @@
 package org.armature.io;
 
 import java.io.IOException;
-import java.nio.ByteBuffer;
-import java.nio.channels.FileChannel;
+import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
-import java.nio.file.attribute.PosixFileAttributeView;
-import java.util.UUID;
+import java.util.Locale;
 import org.armature.model.StageDocument;
 
 /**
  * Opens and saves stage files ({@code *.stage.json}).
  *
- * <p>Saving is atomic: the text goes to a temporary file in the target's directory, is forced to the
- * storage device ({@code fsync}), and is then moved over the target with
- * {@link StandardCopyOption#ATOMIC_MOVE}; where the file system cannot move atomically it falls back
- * to {@link StandardCopyOption#REPLACE_EXISTING}. A failed save leaves the previous file untouched and
- * removes the temporary file.
+ * <p>Saving goes through {@link SafeWrite}: a temporary file in the target's folder, forced to the
+ * storage device, a backup of the previous version ({@code FILE~}), an atomic move and a sync of the
+ * folder. A failed save leaves the previous file untouched and removes the temporary file.
  */
 public final class StageFiles {
 
@@ -34,7 +26,14 @@ public final class StageFiles {
     }
 
     /**
-     * Reads a stage file.
+     * The largest stage file read, in bytes (8 MiB). A stage of a few dozen parts is 5–20 KB; the
+     * cap is checked before reading, so a huge or endless file is refused at once.
+     */
+    public static final long MAX_FILE_BYTES = 8L << 20;
+
+    /**
+     * Reads a stage file. Only regular files are read (a folder, a pipe or a device is refused
+     * without being opened), and only up to {@link #MAX_FILE_BYTES}.
      *
      * @param file path of the file
      * @return the document
@@ -42,18 +41,7 @@ public final class StageFiles {
      *     {@link StageJson#parse(byte[])}; the message names the file
      */
     public static StageDocument open(Path file) {
-        byte[] bytes;
-        try {
-            bytes = Files.readAllBytes(file);
-        } catch (NoSuchFileException e) {
-            throw new StageFileException(StageFileException.NOT_FOUND, "There is no file " + file + ".", e);
-        } catch (AccessDeniedException e) {
-            throw new StageFileException(StageFileException.UNREADABLE,
-                    "Cannot read " + file + ": permission denied.", e);
-        } catch (IOException e) {
-            throw new StageFileException(StageFileException.UNREADABLE,
-                    "Cannot read " + file + ": " + reason(e) + ".", e);
-        }
+        byte[] bytes = readBounded(file);
         try {
             return StageJson.parse(bytes);
         } catch (StageFileException e) {
@@ -61,84 +49,67 @@ public final class StageFiles {
         }
     }
 
+    /** The bytes of a regular file of at most {@link #MAX_FILE_BYTES}. */
+    static byte[] readBounded(Path file) {
+        try {
+            if (!Files.exists(file)) {
+                throw new StageFileException(StageFileException.NOT_FOUND, "There is no file " + file + ".");
+            }
+            if (Files.isDirectory(file)) {
+                throw new StageFileException(StageFileException.UNREADABLE,
+                        file + " is a folder; expected a stage file (*.stage.json).");
+            }
+            if (!Files.isRegularFile(file)) {
+                throw new StageFileException(StageFileException.UNREADABLE,
+                        file + " is a special file (a device, pipe or socket); expected a plain stage file.");
+            }
+            long size = Files.size(file);
+            if (size > MAX_FILE_BYTES) {
+                throw tooLarge(file, size);
+            }
+            try (InputStream in = Files.newInputStream(file)) {
+                byte[] bytes = in.readNBytes((int) MAX_FILE_BYTES + 1);
+                if (bytes.length > MAX_FILE_BYTES) {
+                    throw tooLarge(file, bytes.length);
+                }
+                return bytes;
+            }
+        } catch (AccessDeniedException e) {
+            throw new StageFileException(StageFileException.UNREADABLE,
+                    "Cannot read " + file + ": permission denied.", e);
+        } catch (NoSuchFileException e) {
+            throw new StageFileException(StageFileException.NOT_FOUND, "There is no file " + file + ".", e);
+        } catch (IOException e) {
+            throw new StageFileException(StageFileException.UNREADABLE,
+                    "Cannot read " + file + ": " + reason(e) + ".", e);
+        }
+    }
+
+    private static StageFileException tooLarge(Path file, long size) {
+        return new StageFileException(StageFileException.UNREADABLE, String.format(Locale.ROOT,
+                "%s is %,d bytes; a stage file is at most %,d bytes (8 MiB).", file, size, MAX_FILE_BYTES));
+    }
+
     /**
-     * Saves a document atomically, replacing the file if it exists.
+     * Saves a document through {@link SafeWrite}: temporary file, sync, backup {@code FILE~}, atomic
+     * move, folder sync. A symbolic link's target is updated.
      *
      * @param document what to save
-     * @param file where; its directory must exist
-     * @throws StageFileException {@code file.unwritable} with the reason
+     * @param file where; its folder must exist
+     * @throws StageFileException {@code file.unwritable} with the reason; the old file is untouched
      */
     public static void save(StageDocument document, Path file) {
-        writeAtomically(StageJson.write(document).getBytes(StandardCharsets.UTF_8), file);
+        byte[] content = StageJson.write(document).getBytes(StandardCharsets.UTF_8);
+        SafeWrite.write(file, out -> out.write(content), true);
     }
 
-    /**
-     * Writes bytes to a file atomically (temporary file, fsync, atomic move).
-     *
-     * @throws StageFileException {@code file.unwritable} with the reason
-     */
+    /** Writes bytes safely without a backup (autosaves). */
     static void writeAtomically(byte[] content, Path file) {
-        Path target = file.toAbsolutePath();
-        Path dir = target.getParent();
-        Path temp = null;
-        try {
-            temp = dir.resolve("." + target.getFileName() + "." + UUID.randomUUID() + ".tmp");
-            // CREATE_NEW gives the usual permissions for new files (umask); a replaced file keeps its own
-            try (FileChannel ch = FileChannel.open(temp, StandardOpenOption.WRITE, StandardOpenOption.CREATE_NEW)) {
-                ByteBuffer buffer = ByteBuffer.wrap(content);
-                while (buffer.hasRemaining()) {
-                    ch.write(buffer);
-                }
-                ch.force(true);
-            }
-            keepPermissions(target, temp);
-            move(temp, target);
-            temp = null;
-        } catch (AccessDeniedException e) {
-            throw new StageFileException(StageFileException.UNWRITABLE,
-                    "Cannot save " + file + ": permission denied.", e);
-        } catch (NoSuchFileException e) {
-            throw new StageFileException(StageFileException.UNWRITABLE,
-                    "Cannot save " + file + ": the folder " + dir + " does not exist.", e);
-        } catch (IOException e) {
-            throw new StageFileException(StageFileException.UNWRITABLE,
-                    "Cannot save " + file + ": " + reason(e) + ".", e);
-        } finally {
-            if (temp != null) {
-                deleteQuietly(temp);
-            }
-        }
-    }
-
-    private static void keepPermissions(Path target, Path temp) throws IOException {
-        if (Files.exists(target) && Files.getFileAttributeView(target, PosixFileAttributeView.class) != null) {
-            Files.setPosixFilePermissions(temp, Files.getPosixFilePermissions(target));
-        }
-    }
-
-    private static void move(Path temp, Path target) throws IOException {
-        try {
-            Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE);
-        } catch (AtomicMoveNotSupportedException | FileAlreadyExistsException e) {
-            Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
-        }
-    }
-
-    /** Removes a leftover temporary file; the save has already failed and says why. */
-    private static void deleteQuietly(Path temp) {
-        try {
-            Files.deleteIfExists(temp);
-        } catch (IOException ignored) {
-            // the original failure is being reported; a stray temporary file is the lesser problem
-        }
+        SafeWrite.write(file, out -> out.write(content), false);
     }
 
     /** The reason of an I/O failure in a few words. */
     static String reason(IOException e) {
-        String m = e.getMessage();
-        if (e instanceof FileAlreadyExistsException) {
-            return "a file of that name is in the way";
-        }
-        return m == null || m.isBlank() ? e.getClass().getSimpleName() : m;
+        return SafeWrite.reason(e);
     }
 }

@@ -1,14 +1,17 @@
 package org.armature.io;
 
+import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.core.StreamReadFeature;
+import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import org.armature.model.StageDocument;
 
 /**
@@ -32,7 +35,23 @@ public final class StageJson {
     /** The format version this program writes and the newest it reads. */
     public static final int VERSION = 1;
 
-    private static final ObjectMapper MAPPER = JsonMapper.builder()
+    /**
+     * Deepest nesting of lists and objects read. A stage file nests 5 levels (document, stages, stage,
+     * parts, part values); the limit leaves room and stops a hostile file long before the stack does.
+     */
+    public static final int MAX_NESTING = 32;
+    /** Longest number read, in characters (a double needs at most 25). */
+    public static final int MAX_NUMBER_CHARS = 100;
+
+    /** Longest piece of the file's own text quoted in a message. */
+    static final int EXCERPT_CHARS = 80;
+
+    private static final ObjectMapper MAPPER = JsonMapper.builder(JsonFactory.builder()
+                    .streamReadConstraints(StreamReadConstraints.builder()
+                            .maxNestingDepth(MAX_NESTING)
+                            .maxNumberLength(MAX_NUMBER_CHARS)
+                            .build())
+                    .build())
             .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
             .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
             .build();
@@ -47,23 +66,40 @@ public final class StageJson {
      *     JSON path of a structural problem
      */
     public static StageDocument parse(String text) {
-        return parse(text.getBytes(StandardCharsets.UTF_8));
+        return parseText(text.startsWith("\uFEFF") ? text.substring(1) : text);
     }
 
     /**
-     * Reads a stage document from the bytes of a file (UTF-8; Jackson also detects UTF-16 and UTF-32).
+     * Reads a stage document from the bytes of a file, which must be UTF-8 (a byte-order mark is
+     * allowed): UTF-16, UTF-32 and other encodings are refused and named as such, with the place of
+     * the first byte that is not UTF-8.
      *
      * @throws StageFileException as {@link #parse(String)}
      */
     public static StageDocument parse(byte[] content) {
+        return parseText(Utf8Text.decode(content));
+    }
+
+    private static StageDocument parseText(String text) {
+        if (text.isBlank()) {
+            throw new StageFileException(StageFileException.MALFORMED_JSON,
+                    "The file is empty; a stage file holds one JSON object.");
+        }
         JsonNode root;
-        try {
-            root = MAPPER.readTree(content);
+        try (JsonParser parser = MAPPER.createParser(text)) {
+            try {
+                root = MAPPER.readTree(parser);
+                if (root != null && parser.nextToken() != null) {
+                    throw new StageFileException(StageFileException.MALFORMED_JSON, "The file is not valid JSON"
+                            + where(parser.currentLocation()) + ": there is more after the top-level object.");
+                }
+            } catch (StreamConstraintsException e) {
+                throw overLimit(e, parser.currentLocation());
+            }
         } catch (JsonProcessingException e) {
             throw malformed(e);
         } catch (IOException e) {
-            throw new StageFileException(StageFileException.UNREADABLE,
-                    "The stage file could not be read: " + e.getMessage() + ".", e);
+            throw new IllegalStateException("reading from a string in memory does not fail with I/O", e);
         }
         if (root == null || root.isMissingNode()) {
             throw new StageFileException(StageFileException.MALFORMED_JSON,
@@ -77,6 +113,39 @@ public final class StageJson {
         return StageWriter.write(document);
     }
 
+    /** A limit of the reader was passed: said in our words, with the place. */
+    private static StageFileException overLimit(StreamConstraintsException e, JsonLocation at) {
+        String m = e.getOriginalMessage() == null ? "" : e.getOriginalMessage().toLowerCase(java.util.Locale.ROOT);
+        String what;
+        if (m.contains("nesting")) {
+            what = "lists and objects nest deeper than " + MAX_NESTING + " levels; a stage file nests 5";
+        } else if (m.contains("number")) {
+            what = "a number is longer than " + MAX_NUMBER_CHARS + " characters";
+        } else if (m.contains("string") || m.contains("name")) {
+            what = "a text or field name is longer than the reader allows";
+        } else {
+            what = "the file exceeds a size limit of the reader";
+        }
+        return new StageFileException(StageFileException.MALFORMED_JSON,
+                "The file cannot be read" + where(at) + ": " + what + ".", e);
+    }
+
+    private static String where(JsonLocation at) {
+        return at == null || at.getLineNr() < 1 ? "" : " at line " + at.getLineNr() + ", column " + at.getColumnNr();
+    }
+
+    /** At most {@value #EXCERPT_CHARS} characters of a text, with an ellipsis where cut. */
+    static String excerpt(String text) {
+        if (text.length() <= EXCERPT_CHARS) {
+            return text;
+        }
+        int end = EXCERPT_CHARS;
+        if (Character.isHighSurrogate(text.charAt(end - 1))) {
+            end--;
+        }
+        return text.substring(0, end) + "…";
+    }
+
     private static StageFileException malformed(JsonProcessingException e) {
         JsonLocation at = e.getLocation();
         String what = e.getOriginalMessage();
@@ -84,13 +153,11 @@ public final class StageJson {
         if (newline >= 0) {
             what = what.substring(0, newline);
         }
-        what = what.strip();
+        what = excerpt(what.strip());
         if (what.endsWith(".")) {
             what = what.substring(0, what.length() - 1);
         }
-        String where = at == null || at.getLineNr() < 1
-                ? ""
-                : " at line " + at.getLineNr() + ", column " + at.getColumnNr();
+        String where = where(at);
         return new StageFileException(StageFileException.MALFORMED_JSON,
                 "The file is not valid JSON" + where + ": " + what + ".", e);
     }

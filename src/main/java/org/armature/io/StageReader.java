@@ -134,7 +134,7 @@ final class StageReader {
                 pinHigh = state.equals("high");
             } else {
                 throw new StageFileException(StageFileException.INVALID_VALUE,
-                        path + ".pinState is \"" + state + "\"; it must be \"high\" or \"low\".");
+                        path + ".pinState is \"" + StageJson.excerpt(state) + "\"; it must be \"high\" or \"low\".");
             }
         }
         double ambient = optionalNumber(node, "ambientCelsius", path, d.ambientCelsius());
@@ -157,12 +157,12 @@ final class StageReader {
         if (ref.isBlank()) {
             throw new StageFileException(StageFileException.INVALID_VALUE, path + ".ref must not be blank.");
         }
-        String where = path + " (" + ref + ")";
+        String where = path + " (" + StageJson.excerpt(ref) + ")";
         checkFields(node, PART_FIELDS, where);
         String kindId = requiredText(node, "kind", where);
         PartKind kind = PartKindIds.byId(kindId).orElseThrow(() -> new StageFileException(
                 StageFileException.UNKNOWN_KIND,
-                where + " has kind \"" + kindId + "\", which is not a part kind; the kinds are "
+                where + " has kind \"" + StageJson.excerpt(kindId) + "\", which is not a part kind; the kinds are "
                         + String.join(", ", PartKindIds.all()) + "."));
         JsonNode at = required(node, "at", where);
         if (!at.isArray() || at.size() != 2 || !isInt(at.get(0)) || !isInt(at.get(1))) {
@@ -196,7 +196,7 @@ final class StageReader {
             JsonNode v = node.get("values");
             expectObject(v, where + ".values");
             for (Map.Entry<String, JsonNode> e : v.properties()) {
-                values.put(e.getKey(), number(e.getValue(), where + ".values." + e.getKey()));
+                values.put(e.getKey(), number(e.getValue(), where + ".values." + StageJson.excerpt(e.getKey())));
             }
         }
         Map<String, String> options = new LinkedHashMap<>();
@@ -204,7 +204,7 @@ final class StageReader {
             JsonNode o = node.get("options");
             expectObject(o, where + ".options");
             for (Map.Entry<String, JsonNode> e : o.properties()) {
-                options.put(e.getKey(), text(e.getValue(), where + ".options." + e.getKey()));
+                options.put(e.getKey(), text(e.getValue(), where + ".options." + StageJson.excerpt(e.getKey())));
             }
         }
         Placement placement = new Placement(new GridPoint(at.get(0).intValue(), at.get(1).intValue()),
@@ -241,7 +241,7 @@ final class StageReader {
         String pin = requiredText(node, "pin", path);
         if (!net.matches("[A-Za-z][A-Za-z0-9_\\-]*")) {
             throw new StageFileException(StageFileException.INVALID_VALUE,
-                    path + ".net is \"" + net + "\"; a net name starts with a letter and uses letters, digits, _ or -.");
+                    path + ".net is \"" + StageJson.excerpt(net) + "\"; a net name starts with a letter and uses letters, digits, _ or -.");
         }
         return new TestPoint(net, ref, pin);
     }
@@ -251,7 +251,7 @@ final class StageReader {
             String name = e.getKey();
             if (!allowed.contains(name)) {
                 throw new StageFileException(StageFileException.UNKNOWN_FIELD,
-                        where + " has a field \"" + name + "\" that stage files do not define; the fields are "
+                        where + " has a field \"" + StageJson.excerpt(name) + "\" that stage files do not define; the fields are "
                                 + String.join(", ", allowed.stream().sorted().toList()) + ".");
             }
         }

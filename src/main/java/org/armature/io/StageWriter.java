@@ -133,7 +133,35 @@ final class StageWriter {
 
     /** A JSON string literal. */
     static String quote(String s) {
-        return '"' + new String(JsonStringEncoder.getInstance().quoteAsString(s)) + '"';
+        return '"' + escapeLoneSurrogates(new String(JsonStringEncoder.getInstance().quoteAsString(s))) + '"';
+    }
+
+    /**
+     * Writes a UTF-16 surrogate that is not half of a pair as a JSON backslash-u escape: as a raw
+     * character it has no UTF-8 form (it would be saved as {@code ?}), escaped it reads back as the
+     * same character, so the text round-trips exactly.
+     */
+    static String escapeLoneSurrogates(String s) {
+        StringBuilder b = null;
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            boolean paired = Character.isHighSurrogate(c) && i + 1 < s.length()
+                    && Character.isLowSurrogate(s.charAt(i + 1));
+            if (paired) {
+                if (b != null) {
+                    b.append(c).append(s.charAt(i + 1));
+                }
+                i++;
+            } else if (Character.isSurrogate(c)) {
+                if (b == null) {
+                    b = new StringBuilder(s.length() + 8).append(s, 0, i);
+                }
+                b.append(String.format(java.util.Locale.ROOT, "\\u%04x", (int) c));
+            } else if (b != null) {
+                b.append(c);
+            }
+        }
+        return b == null ? s : b.toString();
     }
 
     /** A JSON number (or stand-in text for a non-finite value) that reads back as exactly {@code v}. */

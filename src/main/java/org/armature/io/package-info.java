@@ -1,6 +1,8 @@
 /**
  * Stage files: the JSON form of {@link org.armature.model.StageDocument} ({@link StageJson}, schema
- * in {@code docs/stage-format.md}), atomic open and save ({@link StageFiles}), autosave and recovery
+ * in {@code docs/stage-format.md}), bounded UTF-8 reading and saving ({@link StageFiles}), the one
+ * safe write path for every file the program writes ({@link SafeWrite}: temporary file, sync, backup
+ * {@code FILE~}, atomic move, folder sync), and autosave and recovery in a per-user folder
  * ({@link Autosave}).
  *
  * <p>Mapping is explicit, field by field; no type information is read from files. Errors are one

@@ -3,6 +3,7 @@ package org.armature.model;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -105,31 +106,30 @@ public record Connectivity(Map<PinRef, String> netOfPin, List<String> netOfWire,
         for (int i = 0; i < parent.length; i++) {
             parent[i] = i;
         }
-        for (Wire w : stage.wires()) {
-            int a = index.get(w.from());
-            for (int i = 0; i < points.size(); i++) {
-                if (w.contains(points.get(i))) {
-                    union(parent, a, i);
-                }
-            }
-        }
+        joinAlongWires(stage.wires(), index, points, parent);
         Map<Integer, String> names = new HashMap<>();
         for (Part part : stage.parts()) {
             if (part.kind() == PartKind.GROUND) {
                 names.put(find(parent, index.get(part.pinPoint("g"))), GROUND);
             }
         }
+        Set<String> used = new HashSet<>(names.values());
+        Map<String, Part> byRef = new HashMap<>();
+        for (Part p : stage.parts()) {
+            byRef.putIfAbsent(p.ref(), p);
+        }
         List<TestPoint> conflicts = new ArrayList<>();
         for (TestPoint tp : stage.testPoints()) {
-            var part = stage.part(tp.ref());
+            var part = java.util.Optional.ofNullable(byRef.get(tp.ref()));
             if (part.isEmpty() || part.get().kind().pin(tp.pin()).isEmpty()) {
                 conflicts.add(tp);
                 continue;
             }
             int root = find(parent, index.get(part.get().pinPoint(tp.pin())));
             String existing = names.get(root);
-            if (existing == null && !names.containsValue(tp.net())) {
+            if (existing == null && !used.contains(tp.net())) {
                 names.put(root, tp.net());
+                used.add(tp.net());
             } else if (existing == null || !existing.equals(tp.net())) {
                 conflicts.add(tp);
             }
@@ -148,8 +148,9 @@ public record Connectivity(Map<PinRef, String> netOfPin, List<String> netOfWire,
             String candidate;
             do {
                 candidate = "n" + counter++;
-            } while (names.containsValue(candidate));
+            } while (used.contains(candidate));
             names.put(r, candidate);
+            used.add(candidate);
         }
         Map<PinRef, String> netOfPin = new HashMap<>();
         for (Part part : stage.parts()) {
@@ -167,6 +168,73 @@ public record Connectivity(Map<PinRef, String> netOfPin, List<String> netOfWire,
         nets.add(GROUND);
         all.stream().filter(n -> !n.equals(GROUND)).forEach(nets::add);
         return new Connectivity(netOfPin, netOfWire, nets, conflicts);
+    }
+
+    /**
+     * Joins every point lying on a wire with that wire, in O(n log n) for n points and wires: per
+     * row (horizontal wires) and per column (vertical wires) the wires are merged into runs of
+     * overlapping or touching segments, and each point on the row or column joins the run covering
+     * it (found by binary search). A zero-length wire joins only its own point.
+     */
+    private static void joinAlongWires(List<Wire> wires, Map<GridPoint, Integer> index, List<GridPoint> points,
+                                       int[] parent) {
+        Map<Integer, List<int[]>> rows = new HashMap<>();
+        Map<Integer, List<int[]>> columns = new HashMap<>();
+        for (Wire w : wires) {
+            int a = index.get(w.from());
+            if (w.from().gridY() == w.to().gridY()) {
+                rows.computeIfAbsent(w.from().gridY(), k -> new ArrayList<>()).add(
+                        new int[] {Math.min(w.from().gridX(), w.to().gridX()), Math.max(w.from().gridX(), w.to().gridX()), a});
+            }
+            if (w.from().gridX() == w.to().gridX() && !w.isPoint()) {
+                columns.computeIfAbsent(w.from().gridX(), k -> new ArrayList<>()).add(
+                        new int[] {Math.min(w.from().gridY(), w.to().gridY()), Math.max(w.from().gridY(), w.to().gridY()), a});
+            }
+        }
+        Map<Integer, List<int[]>> pointsOnRow = new HashMap<>();
+        Map<Integer, List<int[]>> pointsOnColumn = new HashMap<>();
+        for (int i = 0; i < points.size(); i++) {
+            GridPoint p = points.get(i);
+            if (rows.containsKey(p.gridY())) {
+                pointsOnRow.computeIfAbsent(p.gridY(), k -> new ArrayList<>()).add(new int[] {p.gridX(), i});
+            }
+            if (columns.containsKey(p.gridX())) {
+                pointsOnColumn.computeIfAbsent(p.gridX(), k -> new ArrayList<>()).add(new int[] {p.gridY(), i});
+            }
+        }
+        rows.forEach((y, segs) -> joinLine(segs, pointsOnRow.getOrDefault(y, List.of()), parent));
+        columns.forEach((x, segs) -> joinLine(segs, pointsOnColumn.getOrDefault(x, List.of()), parent));
+    }
+
+    /** One row or column: segments {lo, hi, point} and points {position, point}. */
+    private static void joinLine(List<int[]> segments, List<int[]> onLine, int[] parent) {
+        segments.sort(Comparator.comparingInt((int[] s) -> s[0]));
+        List<int[]> runs = new ArrayList<>(); // {lo, hi, representative point}
+        for (int[] s : segments) {
+            int[] last = runs.isEmpty() ? null : runs.get(runs.size() - 1);
+            if (last != null && s[0] <= last[1]) {
+                last[1] = Math.max(last[1], s[1]);
+                union(parent, last[2], s[2]);
+            } else {
+                runs.add(new int[] {s[0], s[1], s[2]});
+            }
+        }
+        for (int[] p : onLine) {
+            int lo = 0;
+            int hi = runs.size() - 1;
+            while (lo <= hi) {
+                int mid = (lo + hi) >>> 1;
+                int[] r = runs.get(mid);
+                if (p[0] < r[0]) {
+                    hi = mid - 1;
+                } else if (p[0] > r[1]) {
+                    lo = mid + 1;
+                } else {
+                    union(parent, r[2], p[1]);
+                    break;
+                }
+            }
+        }
     }
 
     private static int compare(GridPoint a, GridPoint b) {

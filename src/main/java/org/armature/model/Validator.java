@@ -1,6 +1,7 @@
 package org.armature.model;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
@@ -23,18 +24,18 @@ public final class Validator {
         for (Part part : stage.parts()) {
             if (!refs.add(part.ref())) {
                 out.add(new Finding(Severity.ERROR, "part.duplicate-ref", part.ref(), "",
-                        "Designator " + part.ref() + " is used by more than one part; give each part its own."));
+                        "Designator " + shorten(part.ref()) + " is used by more than one part; give each part its own."));
             }
             for (Map.Entry<String, Double> e : part.values().entrySet()) {
                 var spec = part.kind().param(e.getKey());
                 if (spec.isEmpty()) {
                     out.add(new Finding(Severity.WARNING, "param.unknown", part.ref(), e.getKey(),
-                            part.ref() + " (" + part.kind().title() + ") has no parameter " + e.getKey()
+                            shorten(part.ref()) + " (" + part.kind().title() + ") has no parameter " + shorten(e.getKey())
                                     + "; it is ignored."));
                 } else if (!spec.get().accepts(e.getValue())) {
                     ParamSpec s = spec.get();
                     out.add(new Finding(Severity.ERROR, "param.out-of-range", part.ref(), e.getKey(),
-                            part.ref() + " " + s.label() + " is " + e.getValue() + " " + s.unitSymbol()
+                            shorten(part.ref()) + " " + s.label() + " is " + e.getValue() + " " + s.unitSymbol()
                                     + "; expected a value from " + s.min() + " to " + s.max() + " " + s.unitSymbol() + "."));
                 }
             }
@@ -42,10 +43,10 @@ public final class Validator {
                 var spec = part.kind().option(e.getKey());
                 if (spec.isEmpty()) {
                     out.add(new Finding(Severity.WARNING, "option.unknown", part.ref(), e.getKey(),
-                            part.ref() + " has no setting " + e.getKey() + "; it is ignored."));
+                            shorten(part.ref()) + " has no setting " + shorten(e.getKey()) + "; it is ignored."));
                 } else if (!spec.get().allowed().contains(e.getValue())) {
                     out.add(new Finding(Severity.ERROR, "option.not-allowed", part.ref(), e.getKey(),
-                            part.ref() + " " + spec.get().label() + " is \"" + e.getValue() + "\"; expected one of "
+                            shorten(part.ref()) + " " + spec.get().label() + " is \"" + shorten(e.getValue()) + "\"; expected one of "
                                     + String.join(", ", spec.get().allowed()) + "."));
                 }
             }
@@ -56,19 +57,39 @@ public final class Validator {
         Connectivity c = Connectivity.of(stage);
         for (TestPoint tp : c.nameConflicts()) {
             out.add(new Finding(Severity.WARNING, "testpoint.conflict", tp.ref(), tp.pin(),
-                    "Test point \"" + tp.net() + "\" at " + tp.ref() + "." + tp.pin()
+                    "Test point \"" + shorten(tp.net()) + "\" at " + shorten(tp.ref()) + "." + shorten(tp.pin())
                             + " cannot name its net: the part or pin is missing or the net already has a name."));
         }
+        Map<String, Integer> pinsPerNet = new HashMap<>();
+        for (String net : c.netOfPin().values()) {
+            pinsPerNet.merge(net, 1, Integer::sum);
+        }
+        Set<String> seen = new HashSet<>();
         for (Part part : stage.parts()) {
+            if (!seen.add(part.ref())) {
+                continue; // a duplicate designator: its pins share the first part's names, reported above
+            }
             for (PinSpec pin : part.kind().pins()) {
                 String net = c.net(part.ref(), pin.name());
-                if (c.pinsOn(net).size() < 2 && !net.equals(Connectivity.GROUND) && !optionalPin(part.kind(), pin.name())) {
+                if (pinsPerNet.getOrDefault(net, 0) < 2 && !net.equals(Connectivity.GROUND) && !optionalPin(part.kind(), pin.name())) {
                     out.add(new Finding(Severity.WARNING, "pin.unconnected", part.ref(), pin.name(),
-                            part.ref() + " " + pin.description() + " is not connected to anything."));
+                            shorten(part.ref()) + " " + pin.description() + " is not connected to anything."));
                 }
             }
         }
         return List.copyOf(out);
+    }
+
+    /** Longest piece of a user's own text quoted in a message. */
+    public static final int QUOTED_CHARS = 80;
+
+    /** At most {@value #QUOTED_CHARS} characters of a text, with an ellipsis where cut. */
+    public static String shorten(String text) {
+        if (text.length() <= QUOTED_CHARS) {
+            return text;
+        }
+        int end = Character.isHighSurrogate(text.charAt(QUOTED_CHARS - 1)) ? QUOTED_CHARS - 1 : QUOTED_CHARS;
+        return text.substring(0, end) + "\u2026";
     }
 
     /** True when no finding is an error. */
@@ -88,18 +109,18 @@ public final class Validator {
         double rated = k.value(ParamKeys.RATED_VOLTS);
         if (release >= operate) {
             out.add(new Finding(Severity.ERROR, "relay.release-above-operate", k.ref(), ParamKeys.MUST_RELEASE_VOLTS,
-                    k.ref() + " must-release voltage (" + release + " V) must be below its must-operate voltage ("
+                    shorten(k.ref()) + " must-release voltage (" + release + " V) must be below its must-operate voltage ("
                             + operate + " V)."));
         }
         if (operate > rated) {
             out.add(new Finding(Severity.WARNING, "relay.operate-above-rated", k.ref(), ParamKeys.MUST_OPERATE_VOLTS,
-                    k.ref() + " must-operate voltage (" + operate + " V) is above the rated coil voltage (" + rated
+                    shorten(k.ref()) + " must-operate voltage (" + operate + " V) is above the rated coil voltage (" + rated
                             + " V); check the datasheet figures."));
         }
         double lAtt = k.value(ParamKeys.INDUCTANCE_ATTRACTED_HENRIES);
         if (lAtt > 0 && lAtt < k.value(ParamKeys.INDUCTANCE_RELEASED_HENRIES)) {
             out.add(new Finding(Severity.WARNING, "relay.inductance-falls", k.ref(), ParamKeys.INDUCTANCE_ATTRACTED_HENRIES,
-                    k.ref() + " attracted inductance is below the released one; closing the gap normally raises it 2–3×."));
+                    shorten(k.ref()) + " attracted inductance is below the released one; closing the gap normally raises it 2–3×."));
         }
     }
 }

@@ -9,6 +9,7 @@ import javafx.application.Platform;
 import javafx.geometry.Rectangle2D;
 import javafx.stage.Screen;
 import javafx.stage.Stage;
+import org.armature.io.Autosave;
 import org.armature.model.Templates;
 
 /**
@@ -16,7 +17,8 @@ import org.armature.model.Templates;
  * on the stage file given as its one parameter (when it cannot be read, the default stage stays and
  * the status line says why).
  * Readouts are computed by the DC engine on one background thread and published on the FX thread;
- * the checks and edges run on a second, low-priority thread once edits settle.
+ * the checks and edges run on a second, low-priority thread once edits settle. Unsaved work is
+ * autosaved and offered for recovery at the next start ({@link AutosaveController}).
  */
 public final class ArmatureApp extends Application {
 
@@ -32,6 +34,7 @@ public final class ArmatureApp extends Application {
     private ExecutorService analyses;
     private Stage primary;
     private MainWindow window;
+    private AutosaveController autosave;
 
     /** Starts the JavaFX application (the jar's launcher calls this by reflection). */
     public static void main(String[] args) {
@@ -80,8 +83,11 @@ public final class ArmatureApp extends Application {
                 w.rememberRecent(path);
             }
         }
+        autosave = new AutosaveController(vm, Autosave.forUser());
+        autosave.start(primary);
         primary.show();
         Platform.runLater(w.canvas()::fit);
+        Platform.runLater(() -> autosave.offerRecovery(primary));
     }
 
     private static void restoreLayout(Stage stage, MainWindow w) {
@@ -119,6 +125,9 @@ public final class ArmatureApp extends Application {
     @Override
     public void stop() {
         saveLayout();
+        if (autosave != null) {
+            autosave.stop();
+        }
         if (solver != null) {
             solver.shutdownNow();
         }

@@ -278,6 +278,23 @@ public final class EditorViewModel {
         }
     }
 
+    /**
+     * Shows recovered work (an autosave): the document with its file, unsaved until the user saves
+     * (history cleared, dirty).
+     *
+     * @param doc the recovered document
+     * @param path the file it belongs to; empty for untitled work
+     * @param note what {@link #messageProperty()} says
+     */
+    public void restore(StageDocument doc, Optional<Path> path, String note) {
+        document = doc;
+        editor.load(doc.first());
+        editor.history().markUnsaved();
+        file.set(path);
+        message.set(note);
+        refresh();
+    }
+
     /** Saves to the present file; false when there is none yet (use {@link #saveAs}) or saving failed. */
     public boolean save() {
         return file.get().map(this::saveAs).orElse(false);

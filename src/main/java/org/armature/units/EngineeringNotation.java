@@ -30,7 +30,10 @@ import java.util.regex.Pattern;
  *           be separated by blanks: {@code -12}, {@code 1.5e3}, {@code 16.7 m}, {@code 4.7µ};</li>
  *       <li>an IEC 60062 letter code: digits, one letter standing for the decimal point and the
  *           multiplier ({@code R} for one, or an SI prefix), digits: {@code 4k7}, {@code 2R2},
- *           {@code R47}, {@code 100R}, {@code 4n7}.</li>
+ *           {@code R47}, {@code 100R}, {@code 4n7};</li>
+ *       <li>the same with the unit's own letter for the decimal point, as the trade writes rails
+ *           and currents: {@code 3V3}, {@code 1V8}, {@code 1A5} (volts, amperes, watts, henries,
+ *           farads).</li>
  *     </ul></li>
  * </ol>
  * Prefixes are {@code f p n u µ m k M G T}; {@code m} (milli) and {@code M} (mega) differ. An
@@ -81,6 +84,9 @@ public final class EngineeringNotation {
 
     private static final Pattern LETTER_CODE = Pattern.compile(
             "([+-]?)(\\d*)([Rrfpnu\\u00B5mkKMGT])(\\d*)");
+
+    /** Unit letter standing for the decimal point: {@code 3V3}, {@code 1A5}, {@code 12V}. */
+    private static final Pattern UNIT_LETTER_CODE = Pattern.compile("([+-]?)(\\d*)([VAWHF])(\\d*)");
 
     private static final Pattern NOT_FINITE_WORD = Pattern.compile(
             "[+-]?(nan|inf|infinity|\\u221E)", Pattern.CASE_INSENSITIVE);
@@ -203,7 +209,26 @@ public final class EngineeringNotation {
                     : SiPrefix.forTypedLetter(letter).exponent;
             return decimalValue(c.group(1), c.group(2), c.group(4), "", exponent, input, unit);
         }
+        Matcher u = UNIT_LETTER_CODE.matcher(number);
+        if (u.matches() && u.group(3).charAt(0) == unitLetter(unit) && !(u.group(2).isEmpty() && u.group(4).isEmpty())) {
+            return decimalValue(u.group(1), u.group(2), u.group(4), "", 0, input, unit);
+        }
         return failure(ParseErrorKind.MALFORMED, input, unit, "");
+    }
+
+    /**
+     * The letter that stands for the decimal point in the trade's codes for this unit ({@code 3V3},
+     * {@code 1A5}), or 0 where the trade writes none.
+     */
+    private static char unitLetter(Unit unit) {
+        return switch (unit) {
+            case VOLT -> 'V';
+            case AMPERE -> 'A';
+            case WATT -> 'W';
+            case HENRY -> 'H';
+            case FARAD -> 'F';
+            default -> 0;
+        };
     }
 
     private static String orEmpty(String group) {

@@ -94,7 +94,7 @@ class CheckCommandTest {
         CliRun r = CliRun.of("size", npn.toString(), "--json", "--series", "E12", "--forced-beta", "20");
         assertEquals(0, r.status(), r.err());
         JsonNode j = JSON.readTree(r.out());
-        assertEquals("LOW_SIDE_NPN", j.get("topology").asText());
+        assertEquals("low-side-npn", j.get("topology").asText(), "the id the new command takes (was LOW_SIDE_NPN)");
         assertEquals("E12", j.get("series").asText());
         JsonNode rb = null;
         for (JsonNode s : j.get("suggestions")) {

@@ -205,7 +205,7 @@ class NewCommandTest {
         Path file = dir.resolve("missing-folder").resolve("u.stage.json");
         CliRun r = newStage("low-side-npn", file);
         assertEquals(1, r.status());
-        assertTrue(r.err().startsWith("armature new: Cannot save "), r.err());
+        assertTrue(r.err().startsWith("armature new: Cannot write "), r.err());
         assertTrue(r.err().contains("does not exist"), r.err());
         assertTrue(r.noStackTrace(), r.err());
     }

@@ -44,7 +44,7 @@ class SimulateCommandTest {
         assertEquals("", r.err());
         JsonNode j = JSON.readTree(r.out());
         JsonNode m = j.get("metrics");
-        assertEquals(List.of("peakSwitchVoltage", "peakCoilReverseVoltage", "decayToReleaseCurrent", "decayToZero",
+        assertEquals(List.of("peakSwitchVoltage", "peakCoilReverseVoltage", "decayToDropOutCurrent", "decayToZero",
                 "releaseTime", "operateTime", "suppressorEnergy", "switchEnergy", "switchBreakdown"),
                 iterate(m));
         // 12 V rail plus a rectifier's forward drop at ~30 mA (check-values.md: switch peak = Vsupply + Vc)

@@ -181,10 +181,10 @@ class SolveCommandTest {
         assertEquals("second", solveJson("--stage", "second").get("stage").asText());
         CliRun r = CliRun.of("solve", file.toString(), "--stage", "3");
         assertEquals(2, r.status());
-        assertTrue(r.err().contains("--stage 3 is not in channel.stage.json, which holds 2 stage(s)."), r.err());
+        assertTrue(r.err().contains("--stage 3 is not in channel.stage.json, which holds 2 stages; expected a number from 1 to 2"), r.err());
         CliRun n = CliRun.of("solve", file.toString(), "--stage", "third");
         assertEquals(2, n.status());
-        assertTrue(n.err().contains("No stage of channel.stage.json is named \"third\"."), n.err());
+        assertTrue(n.err().contains("No stage of channel.stage.json is named \"third\", which holds 2 stages"), n.err());
     }
 
     @Test

@@ -1,7 +1,6 @@
 package org.armature.io;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -9,11 +8,8 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.attribute.FileTime;
 import java.nio.file.attribute.PosixFilePermissions;
-import java.time.Instant;
 import java.util.List;
-import java.util.Optional;
 import java.util.stream.Stream;
 import org.armature.model.HighSideDrive;
 import org.armature.model.StageDocument;
@@ -47,7 +43,9 @@ class StageFilesTest {
         assertEquals(DOC, StageFiles.open(file));
         StageFiles.save(OTHER, file);
         assertEquals(OTHER, StageFiles.open(file));
-        assertEquals(List.of(file), listing(), "no temporary file is left behind");
+        assertEquals(List.of(file, SafeWrite.backupOf(file)), listing(),
+                "no temporary file is left behind; the previous version is the backup");
+        assertEquals(StageJson.write(DOC), Files.readString(SafeWrite.backupOf(file), StandardCharsets.UTF_8));
         assertEquals(StageJson.write(OTHER), Files.readString(file, StandardCharsets.UTF_8));
     }
 
@@ -83,6 +81,7 @@ class StageFilesTest {
         assertEquals(StageFileException.UNWRITABLE, e.key());
         assertEquals(DOC, StageFiles.open(file));
         assertEquals(List.of(file, blocker), listing());
+        assertTrue(e.getMessage().contains("is a folder"), e.getMessage());
     }
 
     @Test
@@ -110,49 +109,5 @@ class StageFilesTest {
         assertEquals(StageFileException.NEWER_VERSION, e.key());
         assertTrue(e.getMessage().startsWith("bad.stage.json: The file was written by a newer Armature"),
                 e.getMessage());
-    }
-
-    @Test
-    @DisplayName("autosave sits beside the file: valves.stage.json -> valves.autosave.json")
-    void autosaveName() {
-        assertEquals(dir.resolve("valves.autosave.json"), Autosave.pathFor(dir.resolve("valves.stage.json")));
-        assertEquals(dir.resolve("x.autosave.json"), Autosave.pathFor(dir.resolve("x.json")));
-        assertEquals(dir.resolve("notes.autosave.json"), Autosave.pathFor(dir.resolve("notes")));
-    }
-
-    @Test
-    @DisplayName("a newer autosave is offered for recovery; an older one is not; discard removes it")
-    void recovery() throws IOException {
-        Path file = dir.resolve("valves.stage.json");
-        assertEquals(Optional.empty(), Autosave.find(file), "nothing at all");
-        StageFiles.save(DOC, file);
-        Autosave.write(OTHER, file);
-        Path auto = Autosave.pathFor(file);
-        Instant t0 = Instant.parse("2026-03-01T10:00:00Z");
-        Files.setLastModifiedTime(file, FileTime.from(t0));
-        Files.setLastModifiedTime(auto, FileTime.from(t0.plusSeconds(30)));
-        Autosave.Recovery r = Autosave.find(file).orElseThrow();
-        assertEquals(auto, r.autosaveFile());
-        assertEquals(Optional.of(FileTime.from(t0)), r.savedAt());
-        assertEquals(OTHER, StageFiles.open(r.autosaveFile()));
-
-        Files.setLastModifiedTime(auto, FileTime.from(t0.minusSeconds(30)));
-        assertEquals(Optional.empty(), Autosave.find(file), "older autosave is stale");
-        Files.setLastModifiedTime(auto, FileTime.from(t0));
-        assertEquals(Optional.empty(), Autosave.find(file), "same time is not newer");
-
-        Autosave.discard(file);
-        assertFalse(Files.exists(auto));
-        Autosave.discard(file);
-    }
-
-    @Test
-    @DisplayName("an autosave of a never-saved file is offered, with no saved time")
-    void recoveryWithoutFile() {
-        Path file = dir.resolve("untitled.stage.json");
-        Autosave.write(DOC, file);
-        Autosave.Recovery r = Autosave.find(file).orElseThrow();
-        assertEquals(Optional.empty(), r.savedAt());
-        assertEquals(DOC, StageFiles.open(r.autosaveFile()));
     }
 }

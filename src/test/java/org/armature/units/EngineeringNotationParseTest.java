@@ -19,6 +19,34 @@ class EngineeringNotationParseTest {
                 0.0, text);
     }
 
+    @ParameterizedTest(name = "{0} as {1} -> {2}")
+    @DisplayName("reproduction: the trade's unit-letter codes (3V3 = 3.3 V, 1A5 = 1.5 A) are read; 3V3 was refused")
+    @CsvSource(delimiter = '|', textBlock = """
+            3V3    | VOLT    | 3.3
+            1V8    | VOLT    | 1.8
+            12V0   | VOLT    | 12
+            V6     | VOLT    | 0.6
+            -3V3   | VOLT    | -3.3
+            3V3 V  | VOLT    | 3.3
+            1A5    | AMPERE  | 1.5
+            0W25   | WATT    | 0.25
+            4H7    | HENRY   | 4.7
+            2R2    | OHM     | 2.2
+            4k7    | OHM     | 4700
+            4n7    | FARAD   | 4.7e-9
+            4u7    | HENRY   | 4.7e-6
+            """)
+    void readsUnitLetterCodes(String text, Unit unit, String expected) {
+        // trade practice (schematic rail names 3V3, 1V8): common practice; RKM codes: IEC 60062
+        assertReads(text, unit, expected);
+    }
+
+    @ParameterizedTest(name = "{0} as {1} is refused")
+    @CsvSource({"3V3, OHM", "1A5, VOLT", "3V3V3, VOLT", "V, VOLT", "3VV3, VOLT"})
+    void unitLetterOfAnotherUnitIsRefused(String text, Unit unit) {
+        assertFalse(EngineeringNotation.tryParse(text, unit).isValid(), text);
+    }
+
     @ParameterizedTest(name = "{0} -> {1}")
     @DisplayName("RKM: IEC 60062 letter codes (4k7 = 4700, 2R2 = 2.2, 1M0 = 1e6, 0R47 = 0.47)")
     @CsvSource(delimiter = '|', textBlock = """

@@ -96,9 +96,29 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
             return new RemovePart(p, s.parts().indexOf(p), tps);
         }
 
+        /**
+         * Removes this one part (at its index, else the first equal part) and the test points listed,
+         * so that with duplicate designators (a file may have them) only the part meant goes and
+         * undo puts back exactly what was there.
+         */
         @Override
         public Stage apply(Stage s) {
-            return s.withoutPart(part.ref());
+            List<Part> parts = new ArrayList<>(s.parts());
+            int at = index < parts.size() && parts.get(index).equals(part) ? index : parts.indexOf(part);
+            if (at < 0) {
+                return s;
+            }
+            parts.remove(at);
+            List<TestPoint> tps = new ArrayList<>(s.testPoints());
+            for (int i = testPoints.size() - 1; i >= 0; i--) {
+                IndexedTestPoint t = testPoints.get(i);
+                if (t.index() < tps.size() && tps.get(t.index()).equals(t.testPoint())) {
+                    tps.remove(t.index());
+                } else {
+                    tps.remove(t.testPoint());
+                }
+            }
+            return new Stage(s.name(), s.description(), parts, s.wires(), tps, s.conditions());
         }
 
         @Override

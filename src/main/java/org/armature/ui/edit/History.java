@@ -88,6 +88,14 @@ public final class History {
         savedSerial = top == null ? 0 : top.serial;
     }
 
+    /**
+     * Records that the document as it stands now is not saved anywhere (work recovered from an
+     * autosave): it stays dirty until the next {@link #markSaved()}.
+     */
+    public void markUnsaved() {
+        savedSerial = -1;
+    }
+
     /** True when the document differs from the last saved state (or was never saved and has been edited). */
     public boolean isDirty() {
         Step top = undo.peek();
