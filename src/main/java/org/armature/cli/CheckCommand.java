@@ -19,6 +19,7 @@ import org.armature.io.StageFiles;
 import org.armature.model.Conditions;
 import org.armature.model.Finding;
 import org.armature.model.Stage;
+import org.armature.model.StageSettings;
 import org.armature.solver.DcAnalysis;
 import org.armature.units.EngineeringNotation;
 import org.armature.units.Unit;
@@ -79,14 +80,16 @@ final class CheckCommand implements Callable<Integer> {
             description = "Hottest ambient of the corners, °C (default: as stored).")
     Double ambientMax;
 
-    @Option(names = "--monte-carlo", paramLabel = "N", description = "Monte Carlo samples for a yield estimate.")
+    @Option(names = "--monte-carlo", paramLabel = "N",
+            description = "Monte Carlo samples for a yield estimate (default: as stored in the file, else none).")
     Integer monteCarlo;
 
-    @Option(names = "--seed", paramLabel = "S", description = "Seed of the Monte Carlo sampler (default 1).")
-    long seed = 1;
+    @Option(names = "--seed", paramLabel = "S",
+            description = "Seed of the Monte Carlo sampler (default: as stored in the file, else 1).")
+    Long seed;
 
     @Option(names = "--release-time", paramLabel = "SECONDS", converter = Seconds.class,
-            description = "Release-time requirement (for example 10m), checked at turn-off.")
+            description = "Release-time requirement (for example 10m), checked at turn-off (default: as stored).")
     Double releaseTime;
 
     @Option(names = "--no-transient",
@@ -107,18 +110,32 @@ final class CheckCommand implements Callable<Integer> {
         Stage stage = StageSelection.select(StageFiles.open(file), stageSelector, file, cl);
         stage = withOverrides(stage, cl);
         StageSelection.requireValid(stage, "checked");
-        CheckOptions options = CheckOptions.DEFAULT.withTransient(!noTransient);
-        if (monteCarlo != null) {
-            options = options.withMonteCarlo(monteCarlo, seed);
-        }
-        if (releaseTime != null) {
-            options = options.withReleaseTimeRequirement(releaseTime);
-        }
+        CheckOptions options = options(stage.settings(), monteCarlo, seed, releaseTime)
+                .withTransient(!noTransient);
         CheckReport report = StageChecks.run(stage, options, new DcAnalysis());
         PrintWriter out = cl.getOut();
         out.print(json ? json(stage, report) : text(stage, report));
         out.flush();
         return CommandLine.ExitCode.OK;
+    }
+
+    /**
+     * The check options of a stage's own settings, each overridden by its command-line option when
+     * that was given (null: not given).
+     */
+    static CheckOptions options(StageSettings settings, Integer samples, Long seed, Double releaseSeconds) {
+        CheckOptions o = CheckOptions.DEFAULT;
+        int n = samples != null ? samples : settings.monteCarloSamples();
+        long s = seed != null ? seed : settings.monteCarloSeed();
+        if (n > 0) {
+            o = o.withMonteCarlo(n, s);
+        }
+        if (releaseSeconds != null) {
+            o = o.withReleaseTimeRequirement(releaseSeconds);
+        } else if (settings.releaseTimeRequirementSeconds().isPresent()) {
+            o = o.withReleaseTimeRequirement(settings.releaseTimeRequirementSeconds().getAsDouble());
+        }
+        return o;
     }
 
     private Stage withOverrides(Stage stage, CommandLine cl) {

@@ -58,7 +58,7 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
             for (IndexedTestPoint t : testPoints) {
                 tps.add(Math.min(t.index(), tps.size()), t.testPoint());
             }
-            return new Stage(s.name(), s.description(), parts, s.wires(), tps, s.conditions());
+            return new Stage(s.name(), s.description(), parts, s.wires(), tps, s.conditions(), s.settings());
         }
 
         @Override
