@@ -124,16 +124,13 @@ final class CheckCommand implements Callable<Integer> {
      * that was given (null: not given).
      */
     static CheckOptions options(StageSettings settings, Integer samples, Long seed, Double releaseSeconds) {
-        CheckOptions o = CheckOptions.DEFAULT;
-        int n = samples != null ? samples : settings.monteCarloSamples();
-        long s = seed != null ? seed : settings.monteCarloSeed();
-        if (n > 0) {
-            o = o.withMonteCarlo(n, s);
+        CheckOptions o = CheckOptions.DEFAULT.withSettings(settings);
+        if (samples != null || seed != null) {
+            int n = samples != null ? samples : settings.monteCarloSamples();
+            o = o.withMonteCarlo(n, seed != null ? seed : settings.monteCarloSeed());
         }
         if (releaseSeconds != null) {
             o = o.withReleaseTimeRequirement(releaseSeconds);
-        } else if (settings.releaseTimeRequirementSeconds().isPresent()) {
-            o = o.withReleaseTimeRequirement(settings.releaseTimeRequirementSeconds().getAsDouble());
         }
         return o;
     }

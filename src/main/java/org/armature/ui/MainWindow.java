@@ -417,7 +417,8 @@ public final class MainWindow {
     private Region statusBar() {
         Label solver = new Label();
         solver.setId("status-solver");
-        solver.textProperty().bind(vm.solverStatusProperty());
+        solver.setText(vm.evaluation().status());
+        vm.evaluationProperty().addListener((o, a, b) -> solver.setText(b.status()));
         Label message = new Label();
         message.getStyleClass().add("status-message");
         message.textProperty().bind(vm.messageProperty());
@@ -499,10 +500,12 @@ public final class MainWindow {
             return;
         }
         try {
+            // the evaluation on the screen, whole: its stage with its own readouts
+            Evaluation shown = canvas.drawnEvaluation();
             if (kind.equals("svg")) {
-                ImageExport.writeSvg(vm.stage(), vm.annotationsProperty().get(), canvas.palette(), f.toPath());
+                ImageExport.writeSvg(shown.stage(), vm.annotations(shown), canvas.palette(), f.toPath());
             } else {
-                ImageExport.writePng(vm.stage(), vm.annotationsProperty().get(), canvas.palette(), 2, f.toPath());
+                ImageExport.writePng(shown.stage(), vm.annotations(shown), canvas.palette(), 2, f.toPath());
             }
             vm.say("Exported " + f.getName());
         } catch (java.io.UncheckedIOException ex) {
