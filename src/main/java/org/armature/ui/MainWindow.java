@@ -93,6 +93,7 @@ public final class MainWindow {
         root.setTop(top);
         palette = new PartPalette(vm, Palette.LIGHT);
         palette.setPrefWidth(64);
+        palette.setOnDrop(this::dropOnCanvas);
         root.setLeft(palette);
         root.setCenter(canvas);
         root.setRight(rightSide());
@@ -100,6 +101,15 @@ public final class MainWindow {
         edgesDrawer.setExpanded(false);
         edges.setPrefHeight(270);
         root.setBottom(new VBox(edgesDrawer, statusBar()));
+    }
+
+    /** Places a kind dragged from the palette where it was dropped, when that is on the drawing. */
+    private void dropOnCanvas(org.armature.model.PartKind kind, javafx.geometry.Point2D scenePoint) {
+        javafx.geometry.Point2D local = canvas.sceneToLocal(scenePoint);
+        if (local != null && canvas.getLayoutBounds().contains(local)) {
+            vm.place(kind, org.armature.render.Snap.toGrid(canvas.gridX(local.getX()), canvas.gridY(local.getY())));
+            canvas.requestFocus();
+        }
     }
 
     /** The verdicts panel. */
@@ -301,7 +311,8 @@ public final class MainWindow {
         pin.setTooltip(new Tooltip("Drive pin state for the operating point"));
         Runnable syncPin = () -> {
             boolean high = vm.stage().conditions().pinHigh();
-            if (pin.getGraphic() != null && pin.isSelected() == high) {
+            // the click has already flipped the toggle's own state: compare the words shown, not the state
+            if (pin.getGraphic() != null && pin.isSelected() == high && pin.getText().equals(high ? "Pin HIGH" : "Pin LOW")) {
                 return;
             }
             pin.setSelected(high);
