@@ -66,6 +66,7 @@ public final class MainWindow {
     private final PartPalette palette;
     private final EdgesPane edges;
     private final TitledPane edgesDrawer;
+    private final StageTabs stageTabs;
     private final MenuBar menuBar = new MenuBar();
     private final RecentFiles recent;
     private final Menu recentMenu = new Menu("Recent");
@@ -89,13 +90,16 @@ public final class MainWindow {
         this.edges = new EdgesPane(vm);
         this.edgesDrawer = new TitledPane("Edges: turn-on and turn-off", edges);
         root.getStyleClass().add("armature-root");
+        this.stageTabs = new StageTabs(vm);
         VBox top = new VBox(buildMenus(), toolBar());
         root.setTop(top);
         palette = new PartPalette(vm, Palette.LIGHT);
         palette.setPrefWidth(64);
         palette.setOnDrop(this::dropOnCanvas);
         root.setLeft(palette);
-        root.setCenter(canvas);
+        BorderPane centre = new BorderPane(canvas);
+        centre.setTop(stageTabs);
+        root.setCenter(centre);
         root.setRight(rightSide());
         edgesDrawer.setId("edges-drawer");
         edgesDrawer.setExpanded(false);
@@ -110,6 +114,11 @@ public final class MainWindow {
             vm.place(kind, org.armature.render.Snap.toGrid(canvas.gridX(local.getX()), canvas.gridY(local.getY())));
             canvas.requestFocus();
         }
+    }
+
+    /** The tabs of the document's stages. */
+    public StageTabs stageTabs() {
+        return stageTabs;
     }
 
     /** The verdicts panel. */
@@ -244,9 +253,12 @@ public final class MainWindow {
         MenuItem showEdges = item("Show edges", "Shortcut+E", e -> edgesDrawer.setExpanded(true));
         tools.getItems().addAll(size, showEdges);
 
+        Menu stages = new Menu("Stage");
+        stages.getItems().setAll(stageTabs.menuItems());
+
         Menu help = new Menu("Help");
         help.getItems().add(item("About Armature", null, e -> about()));
-        menuBar.getMenus().addAll(file, edit, view, tools, help);
+        menuBar.getMenus().addAll(file, edit, view, stages, tools, help);
         return menuBar;
     }
 
