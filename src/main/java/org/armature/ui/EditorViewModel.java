@@ -509,6 +509,22 @@ public final class EditorViewModel {
         return true;
     }
 
+    /**
+     * Gives a part another designator, undoably. A designator that is not one, or is taken, changes
+     * nothing and the message says why.
+     *
+     * @return true when the part was renamed
+     */
+    public boolean renamePart(String ref, String newRef) {
+        try {
+            edit(() -> editor.renamePart(ref, newRef));
+            return true;
+        } catch (IllegalArgumentException e) {
+            message.set(e.getMessage());
+            return false;
+        }
+    }
+
     /** Removes the test point of a net name, undoably. */
     public void removeTestPoint(String net) {
         edit(() -> editor.removeTestPoint(net));

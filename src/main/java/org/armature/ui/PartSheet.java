@@ -132,6 +132,22 @@ public final class PartSheet extends VBox {
         title.setText(p.ref() + " · " + p.kind().title());
         description.setText(p.kind().description());
         int row = 0;
+        TextField designator = new TextField(p.ref());
+        designator.setId("part-ref");
+        designator.getStyleClass().add("param-field");
+        Runnable rename = () -> {
+            if (!designator.getText().strip().equals(p.ref()) && vm.stage().part(p.ref()).isPresent()
+                    && !vm.renamePart(p.ref(), designator.getText())) {
+                designator.setText(p.ref());
+            }
+        };
+        designator.setOnAction(e -> rename.run());
+        designator.focusedProperty().addListener((o, was, now) -> {
+            if (was && !now) {
+                rename.run();
+            }
+        });
+        grid.addRow(row++, new Label("Designator"), designator);
         for (OptionSpec o : p.kind().options()) {
             ComboBox<String> box = new ComboBox<>();
             box.getItems().setAll(o.allowed());

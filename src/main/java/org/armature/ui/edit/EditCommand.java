@@ -24,7 +24,7 @@ import org.armature.render.Notation;
  */
 public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.RemovePart, EditCommand.MovePart,
         EditCommand.SetValue, EditCommand.SetOption, EditCommand.AddWire, EditCommand.RemoveWire,
-        EditCommand.SetConditions, EditCommand.SetHeader, EditCommand.SetTestPoints, EditCommand.Compound {
+        EditCommand.SetConditions, EditCommand.SetHeader, EditCommand.SetTestPoints, EditCommand.RenamePart, EditCommand.Compound {
 
     /** The stage after this edit. */
     Stage apply(Stage stage);
@@ -396,6 +396,38 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
         /** The header of a stage. */
         public static Header of(Stage s) {
             return new Header(s.name(), s.description(), s.settings());
+        }
+    }
+
+    /**
+     * Gives a part another designator; the test points anchored to it follow.
+     *
+     * @param index the part's position in {@link Stage#parts()}
+     * @param from the designator before
+     * @param to the designator after
+     */
+    record RenamePart(int index, String from, String to) implements EditCommand {
+        @Override
+        public Stage apply(Stage s) {
+            List<Part> parts = new ArrayList<>(s.parts());
+            if (index >= parts.size() || !parts.get(index).ref().equals(from)) {
+                return s;
+            }
+            parts.set(index, parts.get(index).withRef(to));
+            boolean shared = parts.stream().anyMatch(p -> p.ref().equals(from));
+            List<TestPoint> tps = s.testPoints().stream()
+                    .map(t -> !shared && t.ref().equals(from) ? new TestPoint(t.net(), to, t.pin()) : t).toList();
+            return new Stage(s.name(), s.description(), parts, s.wires(), tps, s.conditions(), s.settings());
+        }
+
+        @Override
+        public EditCommand inverse() {
+            return new RenamePart(index, to, from);
+        }
+
+        @Override
+        public String label() {
+            return "Rename " + from + " to " + to;
         }
     }
 

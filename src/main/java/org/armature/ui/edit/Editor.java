@@ -398,6 +398,32 @@ public final class Editor {
                 EditCommand.SetConditions.AMBIENT_RANGE));
     }
 
+    /**
+     * Gives a part another designator (its test points follow) and keeps it selected.
+     *
+     * @throws IllegalArgumentException when the designator is blank or taken by another part
+     */
+    public void renamePart(String ref, String newRef) {
+        String to = newRef.strip();
+        Part p = stage.require(ref);
+        if (to.equals(ref)) {
+            return;
+        }
+        if (to.isEmpty() || !to.matches("[A-Za-z][A-Za-z0-9_]*")) {
+            throw new IllegalArgumentException("A designator is a letter followed by letters, digits or _ (K1, Q7, R12).");
+        }
+        if (stage.part(to).isPresent()) {
+            throw new IllegalArgumentException("The designator " + to + " is already used.");
+        }
+        boolean selected = selection.refs().contains(ref);
+        execute(new EditCommand.RenamePart(stage.parts().indexOf(p), ref, to));
+        if (selected) {
+            Set<String> refs = new LinkedHashSet<>(selection.refs());
+            refs.add(to);
+            select(new Selection(refs, selection.wires()));
+        }
+    }
+
     /** Renames the stage; nothing for an unchanged or blank name. */
     public void rename(String name) {
         String n = name.strip();
