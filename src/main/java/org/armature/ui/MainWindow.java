@@ -96,6 +96,11 @@ public final class MainWindow {
         palette = new PartPalette(vm, Palette.LIGHT);
         palette.setPrefWidth(64);
         palette.setOnDrop(this::dropOnCanvas);
+        canvas.addEventHandler(javafx.scene.input.MouseEvent.MOUSE_CLICKED, e -> {
+            if (e.getButton() == javafx.scene.input.MouseButton.PRIMARY && e.getClickCount() == 2) {
+                nameTestPointAt(canvas.gridX(e.getX()), canvas.gridY(e.getY()));
+            }
+        });
         root.setLeft(palette);
         BorderPane centre = new BorderPane(canvas);
         centre.setTop(stageTabs);
@@ -105,6 +110,43 @@ public final class MainWindow {
         edgesDrawer.setExpanded(false);
         edges.setPrefHeight(270);
         root.setBottom(new VBox(edgesDrawer, statusBar()));
+    }
+
+    /**
+     * A double click on a pin names the net there as a test point: the question shows the present
+     * name (empty for none); a new name adds or renames it, an empty one removes it. Undoable.
+     */
+    private void nameTestPointAt(double gridX, double gridY) {
+        var hit = org.armature.render.HitTester.at(vm.stage(), gridX, gridY,
+                SchematicCanvas.HIT_PIXELS / canvas.scale());
+        if (hit instanceof org.armature.render.HitTester.PinHit pin) {
+            String ref = pin.pin().ref();
+            String name = pin.pin().pin();
+            String now = vm.stage().testPoints().stream().filter(t -> t.ref().equals(ref) && t.pin().equals(name))
+                    .map(org.armature.model.TestPoint::net).findFirst().orElse("");
+            testPointQuestion.apply(ref + " pin " + name, now).ifPresent(net -> vm.nameTestPoint(ref, name, net));
+        }
+    }
+
+    private java.util.function.BiFunction<String, String, Optional<String>> testPointQuestion = this::askTestPoint;
+
+    private Optional<String> askTestPoint(String where, String now) {
+        javafx.scene.control.TextInputDialog d = new javafx.scene.control.TextInputDialog(now);
+        d.setTitle("Test point");
+        d.setHeaderText(null);
+        d.setContentText("Name of the net at " + where + " (empty removes it):");
+        if (window() != null) {
+            d.initOwner(window());
+        }
+        return d.showAndWait();
+    }
+
+    /**
+     * Replaces the question a double click on a pin asks (tests answer without a dialog): it gets
+     * the pin ("Q1 pin b") and the present name, and returns the new name, or empty to cancel.
+     */
+    public void setTestPointQuestion(java.util.function.BiFunction<String, String, Optional<String>> question) {
+        this.testPointQuestion = java.util.Objects.requireNonNull(question, "question");
     }
 
     /** Places a kind dragged from the palette where it was dropped, when that is on the drawing. */

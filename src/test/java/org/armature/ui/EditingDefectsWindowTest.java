@@ -124,4 +124,34 @@ class EditingDefectsWindowTest {
         assertEquals(Math.round(c.gridX(local.getX())), placed.placement().origin().gridX(), 1);
         assertEquals(Math.round(c.gridY(local.getY())), placed.placement().origin().gridY(), 1);
     }
+
+    @Test
+    @DisplayName("a double click on a pin adds, renames and removes a test point there, each undoable")
+    void testPointOnCanvas(FxRobot robot) {
+        java.util.concurrent.atomic.AtomicReference<String> answer = new java.util.concurrent.atomic.AtomicReference<>();
+        robot.interact(() -> window.setTestPointQuestion((where, now) -> java.util.Optional.of(answer.get())));
+        var q1 = vm.stage().require("Q1");
+        var b = q1.pinPoint("b");
+        SchematicCanvas c = window.canvas();
+        var v = c.view();
+        Point2D screen = c.localToScreen(v.mapX(b.gridX(), b.gridY()), v.mapY(b.gridX(), b.gridY()));
+        int before = vm.stage().testPoints().size();
+        answer.set("base");
+        robot.doubleClickOn(screen);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(vm.stage().testPoints().contains(new org.armature.model.TestPoint("base", "Q1", "b")),
+                vm.stage().testPoints().toString());
+        answer.set("b_node");
+        robot.doubleClickOn(screen);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals("Undo Rename test point base to b_node", vm.undoLabelProperty().get());
+        answer.set("");
+        robot.doubleClickOn(screen);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(before, vm.stage().testPoints().size());
+        robot.interact(vm::undo);
+        robot.interact(vm::undo);
+        robot.interact(vm::undo);
+        assertEquals(Templates.defaultStage(), vm.stage());
+    }
 }
