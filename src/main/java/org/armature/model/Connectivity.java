@@ -53,8 +53,53 @@ public record Connectivity(Map<PinRef, String> netOfPin, List<String> netOfWire,
                 .toList();
     }
 
-    /** Finds the nets of a stage. */
+    /** The drawing whose nets were found last, with them (an immutable pair, swapped whole). */
+    private record Memo(Stage stage, Connectivity nets) {
+    }
+
+    /**
+     * The last drawing's nets. The validator, the topology check, the engine and the renderer each
+     * ask for the nets of the stage on the screen, on the FX and the solver threads; the answer
+     * depends on the drawing only (parts' designators, kinds and placements, wires, test points), so
+     * it is found once per drawing and a value edit finds none anew. One entry, replaced whole
+     * through a volatile reference: thread-safe without locks, and it keeps at most one stage alive.
+     */
+    private static volatile Memo last;
+
+    /**
+     * Finds the nets of a stage. Computed once per drawing: a stage that differs from the last one
+     * asked about only in values and conditions gets the same (immutable) answer.
+     */
     public static Connectivity of(Stage stage) {
+        Memo m = last;
+        if (m != null && (m.stage == stage || sameDrawing(m.stage, stage))) {
+            return m.nets;
+        }
+        Connectivity c = compute(stage);
+        last = new Memo(stage, c);
+        return c;
+    }
+
+    /** True when two stages have the same nets: same parts (designator, kind, placement) in order, wires, test points. */
+    static boolean sameDrawing(Stage a, Stage b) {
+        if (a.parts() != b.parts()) {
+            if (a.parts().size() != b.parts().size()) {
+                return false;
+            }
+            for (int i = 0; i < a.parts().size(); i++) {
+                Part pa = a.parts().get(i);
+                Part pb = b.parts().get(i);
+                if (pa != pb && (pa.kind() != pb.kind() || !pa.ref().equals(pb.ref())
+                        || !pa.placement().equals(pb.placement()))) {
+                    return false;
+                }
+            }
+        }
+        return a.wires().equals(b.wires()) && a.testPoints().equals(b.testPoints());
+    }
+
+    /** Finds the nets of a stage, without the memo. */
+    static Connectivity compute(Stage stage) {
         Map<GridPoint, Integer> index = new LinkedHashMap<>();
         List<GridPoint> points = new ArrayList<>();
         for (Part part : stage.parts()) {

@@ -41,6 +41,9 @@ public final class PartSheet extends VBox {
     /** Style class of a field whose text cannot be taken. */
     public static final String INVALID = "invalid";
 
+    /** Key of a value field's last parsed value in its properties. */
+    private static final String PARSED = "armature.parsed";
+
     private final EditorViewModel vm;
     private final Label title = new Label();
     private final Label description = new Label();
@@ -171,7 +174,9 @@ public final class PartSheet extends VBox {
             f.setId("param-" + s.key());
             f.getStyleClass().add("param-field");
             f.setTooltip(new Tooltip(s.description()));
-            f.textProperty().addListener((o, a, b) -> check(f, s));
+            // the text is parsed and range-checked once, as it is typed; a commit takes that value
+            f.textProperty().addListener((o, a, b) -> f.getProperties().put(PARSED, check(f, s)));
+            f.getProperties().put(PARSED, Optional.of(p.value(s.key())));
             f.setOnAction(e -> commit(p.ref(), f, s));
             valueFields.put(s.key(), f);
             f.focusedProperty().addListener((o, was, now) -> {
@@ -408,7 +413,9 @@ public final class PartSheet extends VBox {
         if (shownRef.isEmpty() || !shownRef.get().equals(ref) || vm.stage().part(ref).isEmpty()) {
             return;
         }
-        Optional<Double> v = check(f, s);
+        Object parsed = f.getProperties().get(PARSED);
+        Optional<Double> v = parsed instanceof Optional<?> o && o.isPresent() && o.get() instanceof Double d
+                ? Optional.of(d) : Optional.empty();
         if (v.isPresent() && v.get() != vm.stage().require(ref).value(s.key())) {
             vm.setValue(ref, s.key(), v.get());
         }

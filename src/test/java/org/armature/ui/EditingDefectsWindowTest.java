@@ -131,20 +131,23 @@ class EditingDefectsWindowTest {
         java.util.concurrent.atomic.AtomicReference<String> answer = new java.util.concurrent.atomic.AtomicReference<>();
         robot.interact(() -> window.setTestPointQuestion((where, now) -> java.util.Optional.of(answer.get())));
         var q1 = vm.stage().require("Q1");
-        var b = q1.pinPoint("b");
+        var b = q1.pinPoint("e");
         SchematicCanvas c = window.canvas();
         var v = c.view();
         Point2D screen = c.localToScreen(v.mapX(b.gridX(), b.gridY()), v.mapY(b.gridX(), b.gridY()));
         int before = vm.stage().testPoints().size();
-        answer.set("base");
+        // pauses longer than the double-click interval keep the three double clicks apart
+        answer.set("emitter");
         robot.doubleClickOn(screen);
         WaitForAsyncUtils.waitForFxEvents();
-        assertTrue(vm.stage().testPoints().contains(new org.armature.model.TestPoint("base", "Q1", "b")),
+        assertTrue(vm.stage().testPoints().contains(new org.armature.model.TestPoint("emitter", "Q1", "e")),
                 vm.stage().testPoints().toString());
-        answer.set("b_node");
+        robot.sleep(1000);
+        answer.set("e_node");
         robot.doubleClickOn(screen);
         WaitForAsyncUtils.waitForFxEvents();
-        assertEquals("Undo Rename test point base to b_node", vm.undoLabelProperty().get());
+        assertEquals("Undo Rename test point emitter to e_node", vm.undoLabelProperty().get());
+        robot.sleep(1000);
         answer.set("");
         robot.doubleClickOn(screen);
         WaitForAsyncUtils.waitForFxEvents();
