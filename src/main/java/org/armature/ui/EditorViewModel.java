@@ -314,6 +314,7 @@ public final class EditorViewModel {
         editors.remove(i);
         editors.add(j, editor);
         stagesChanged = true;
+        message.set("");
         publishDocument();
     }
 
@@ -359,6 +360,7 @@ public final class EditorViewModel {
         editors.add(at, e);
         editor = e;
         stagesChanged = true;
+        message.set("");
         publishDocument();
     }
 
