@@ -48,6 +48,10 @@ public final class FindingsPane extends VBox {
         });
         list.getItems().setAll(vm.evaluation().findings());
         vm.evaluationProperty().addListener((o, a, b) -> {
+            // a pending evaluation lacks the solver's findings: wait for them rather than flicker
+            if (!b.readoutsReady()) {
+                return;
+            }
             List<Finding> f = b.findings();
             if (!f.equals(list.getItems())) {
                 list.getItems().setAll(f);

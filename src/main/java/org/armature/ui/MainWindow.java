@@ -482,8 +482,10 @@ public final class MainWindow {
     private Region statusBar() {
         Label solver = new Label();
         solver.setId("status-solver");
-        solver.setText(vm.evaluation().status());
-        vm.evaluationProperty().addListener((o, a, b) -> solver.setText(b.status()));
+        // the status of the evaluation on the canvas: a value edit whose solve is pending keeps the
+        // last status instead of flickering to "Solving…" on every slider step
+        solver.setText(canvas.drawnEvaluation().status());
+        vm.evaluationProperty().addListener((o, a, b) -> solver.setText(canvas.drawnEvaluation().status()));
         Label message = new Label();
         message.getStyleClass().add("status-message");
         message.textProperty().bind(vm.messageProperty());
