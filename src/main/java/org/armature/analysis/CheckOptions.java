@@ -1,6 +1,7 @@
 package org.armature.analysis;
 
 import java.util.OptionalDouble;
+import org.armature.model.StageSettings;
 
 /**
  * Limits and margins of the checks, each with its default and where it comes from.
@@ -83,6 +84,21 @@ public record CheckOptions(double operateMarginFraction, double releaseMarginFra
         return new CheckOptions(operateMarginFraction, releaseMarginFraction, saturationPassMargin, ratingUseFraction,
                 thermalMarginKelvin, forwardDropVolts, releaseTimeRequirementSeconds, monteCarloSamples, seed, c,
                 selvAcRmsVolts, selvDcVolts, useTransient);
+    }
+
+    /**
+     * The same options with a stage's own settings: its release-time requirement (when it has one)
+     * and its Monte Carlo run (when it asks for samples).
+     */
+    public CheckOptions withSettings(StageSettings settings) {
+        CheckOptions o = this;
+        if (settings.monteCarloSamples() > 0) {
+            o = o.withMonteCarlo(settings.monteCarloSamples(), settings.monteCarloSeed());
+        }
+        if (settings.releaseTimeRequirementSeconds().isPresent()) {
+            o = o.withReleaseTimeRequirement(settings.releaseTimeRequirementSeconds().getAsDouble());
+        }
+        return o;
     }
 
     /** The same options with a release-time requirement, seconds. */

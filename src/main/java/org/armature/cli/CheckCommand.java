@@ -20,6 +20,7 @@ import org.armature.io.StageFiles;
 import org.armature.model.Conditions;
 import org.armature.model.Finding;
 import org.armature.model.Stage;
+import org.armature.model.StageSettings;
 import org.armature.solver.DcAnalysis;
 import org.armature.units.EngineeringNotation;
 import org.armature.units.Unit;
@@ -81,14 +82,15 @@ final class CheckCommand implements Callable<Integer> {
     Double ambientMax;
 
     @Option(names = "--monte-carlo", paramLabel = "N",
-            description = "Monte Carlo samples for a yield estimate, at most " + MAX_MONTE_CARLO_TEXT + ".")
+            description = "Monte Carlo samples for a yield estimate, at most " + MAX_MONTE_CARLO_TEXT + " (default: as stored in the file, else none).")
     Integer monteCarlo;
 
-    @Option(names = "--seed", paramLabel = "S", description = "Seed of the Monte Carlo sampler (default 1).")
-    long seed = 1;
+    @Option(names = "--seed", paramLabel = "S",
+            description = "Seed of the Monte Carlo sampler (default: as stored in the file, else 1).")
+    Long seed;
 
     @Option(names = "--release-time", paramLabel = "SECONDS", converter = Seconds.class,
-            description = "Release-time requirement (for example 10m), checked at turn-off.")
+            description = "Release-time requirement (for example 10m), checked at turn-off (default: as stored).")
     Double releaseTime;
 
     @Option(names = "--no-transient",
@@ -115,21 +117,31 @@ final class CheckCommand implements Callable<Integer> {
         Stage stage = StageSelection.select(StageFiles.open(file), stageSelector, file, cl);
         stage = withOverrides(stage, cl);
         StageSelection.requireValid(stage, "checked");
-        CheckOptions options = CheckOptions.DEFAULT.withTransient(!noTransient);
-        if (monteCarlo != null) {
-            options = options.withMonteCarlo(monteCarlo, seed);
-        }
-        if (releaseTime != null) {
-            options = options.withReleaseTimeRequirement(releaseTime);
-        }
-        CheckOptions chosen = options;
+        CheckOptions chosen = options(stage.settings(), monteCarlo, seed, releaseTime)
+                .withTransient(!noTransient);
         Stage checked = stage;
         CheckReport report = Progress.run(() -> StageChecks.run(checked, chosen, new DcAnalysis()), cl.getErr(),
-                "check", monteCarlo == null ? "" : String.format(Locale.ROOT, "%,d Monte Carlo samples", monteCarlo));
+                "check", chosen.monteCarloSamples() == 0 ? "" : String.format(Locale.ROOT, "%,d Monte Carlo samples", chosen.monteCarloSamples()));
         PrintWriter out = cl.getOut();
         out.print(json ? json(stage, report) : text(stage, report));
         out.flush();
         return CommandLine.ExitCode.OK;
+    }
+
+    /**
+     * The check options of a stage's own settings, each overridden by its command-line option when
+     * that was given (null: not given).
+     */
+    static CheckOptions options(StageSettings settings, Integer samples, Long seed, Double releaseSeconds) {
+        CheckOptions o = CheckOptions.DEFAULT.withSettings(settings);
+        if (samples != null || seed != null) {
+            int n = samples != null ? samples : settings.monteCarloSamples();
+            o = o.withMonteCarlo(n, seed != null ? seed : settings.monteCarloSeed());
+        }
+        if (releaseSeconds != null) {
+            o = o.withReleaseTimeRequirement(releaseSeconds);
+        }
+        return o;
     }
 
     private Stage withOverrides(Stage stage, CommandLine cl) {

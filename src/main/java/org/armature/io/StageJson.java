@@ -32,8 +32,15 @@ public final class StageJson {
     /** The value of the top-level {@code format} field. */
     public static final String FORMAT = "armature-stage";
 
-    /** The format version this program writes and the newest it reads. */
-    public static final int VERSION = 1;
+    /**
+     * The newest format version this program reads and writes. Version 2 added a stage's
+     * {@code settings}; a document whose stages all keep the default settings is still written as
+     * {@link #VERSION_WITHOUT_SETTINGS}, so that older programs open it.
+     */
+    public static final int VERSION = 2;
+
+    /** The version written when no stage has settings of its own (the first format version). */
+    public static final int VERSION_WITHOUT_SETTINGS = 1;
 
     /**
      * Deepest nesting of lists and objects read. A stage file nests 5 levels (document, stages, stage,

@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.OptionalDouble;
 import java.util.Set;
 import org.armature.model.Conditions;
 import org.armature.model.GridPoint;
@@ -13,6 +14,7 @@ import org.armature.model.PartKind;
 import org.armature.model.Placement;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
+import org.armature.model.StageSettings;
 import org.armature.model.TestPoint;
 import org.armature.model.Wire;
 
@@ -24,7 +26,9 @@ final class StageReader {
 
     private static final Set<String> TOP_FIELDS = Set.of("format", "version", "title", "stages");
     private static final Set<String> STAGE_FIELDS =
-            Set.of("name", "description", "conditions", "parts", "wires", "testPoints");
+            Set.of("name", "description", "conditions", "settings", "parts", "wires", "testPoints");
+    private static final Set<String> SETTINGS_FIELDS =
+            Set.of("releaseTimeSeconds", "monteCarloSamples", "monteCarloSeed");
     private static final Set<String> CONDITION_FIELDS =
             Set.of("pinState", "ambientCelsius", "ambientMinCelsius", "ambientMaxCelsius");
     private static final Set<String> PART_FIELDS =
@@ -80,8 +84,8 @@ final class StageReader {
         }
         if (!version.isIntegralNumber() || !version.canConvertToInt() || version.intValue() < 1) {
             throw new StageFileException(StageFileException.UNKNOWN_VERSION,
-                    "The file's \"version\" is " + version + ", which is not a stage file version; this program reads version "
-                            + StageJson.VERSION + ".");
+                    "The file's \"version\" is " + version + ", which is not a stage file version; this program reads versions "
+                            + StageJson.VERSION_WITHOUT_SETTINGS + " to " + StageJson.VERSION + ".");
         }
         if (version.intValue() > StageJson.VERSION) {
             throw new StageFileException(StageFileException.NEWER_VERSION,
@@ -98,6 +102,9 @@ final class StageReader {
         Conditions conditions = node.has("conditions")
                 ? readConditions(node.get("conditions"), path + ".conditions")
                 : Conditions.DEFAULT;
+        StageSettings settings = node.has("settings")
+                ? readSettings(node.get("settings"), path + ".settings")
+                : StageSettings.DEFAULT;
         JsonNode partsNode = required(node, "parts", path);
         expectArray(partsNode, path + ".parts");
         List<Part> parts = new ArrayList<>();
@@ -120,7 +127,43 @@ final class StageReader {
                 testPoints.add(readTestPoint(tpNode.get(i), path + ".testPoints[" + i + "]"));
             }
         }
-        return new Stage(name, description, parts, wires, testPoints, conditions);
+        return new Stage(name, description, parts, wires, testPoints, conditions, settings);
+    }
+
+    /** The stage's own check settings (format version 2). */
+    private static StageSettings readSettings(JsonNode node, String path) {
+        expectObject(node, path);
+        checkFields(node, SETTINGS_FIELDS, path);
+        StageSettings d = StageSettings.DEFAULT;
+        OptionalDouble release = d.releaseTimeRequirementSeconds();
+        if (node.has("releaseTimeSeconds")) {
+            double t = number(node.get("releaseTimeSeconds"), path + ".releaseTimeSeconds");
+            if (!(t > 0) || !Double.isFinite(t)) {
+                throw new StageFileException(StageFileException.INVALID_VALUE,
+                        path + ".releaseTimeSeconds must be a positive time in seconds (for example 0.01).");
+            }
+            release = OptionalDouble.of(t);
+        }
+        int samples = d.monteCarloSamples();
+        if (node.has("monteCarloSamples")) {
+            JsonNode n = node.get("monteCarloSamples");
+            if (!isInt(n) || n.intValue() < 0 || n.intValue() > StageSettings.MAX_MONTE_CARLO_SAMPLES) {
+                throw new StageFileException(isInt(n) ? StageFileException.INVALID_VALUE : StageFileException.WRONG_TYPE,
+                        path + ".monteCarloSamples must be a whole number from 0 to "
+                                + StageSettings.MAX_MONTE_CARLO_SAMPLES + ", not " + describe(n) + ".");
+            }
+            samples = n.intValue();
+        }
+        long seed = d.monteCarloSeed();
+        if (node.has("monteCarloSeed")) {
+            JsonNode n = node.get("monteCarloSeed");
+            if (!n.isIntegralNumber() || !n.canConvertToLong()) {
+                throw new StageFileException(StageFileException.WRONG_TYPE,
+                        path + ".monteCarloSeed must be a whole number, not " + describe(n) + ".");
+            }
+            seed = n.longValue();
+        }
+        return new StageSettings(release, samples, seed);
     }
 
     private static Conditions readConditions(JsonNode node, String path) {

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.core.io.JsonStringEncoder;
 import java.util.Iterator;
 import java.util.Map;
 import org.armature.model.Conditions;
+import org.armature.model.StageSettings;
 import org.armature.model.Part;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
@@ -44,7 +45,9 @@ final class StageWriter {
         StringBuilder b = new StringBuilder();
         b.append("{\n");
         b.append(INDENT).append("\"format\": ").append(quote(StageJson.FORMAT)).append(",\n");
-        b.append(INDENT).append("\"version\": ").append(StageJson.VERSION).append(",\n");
+        boolean settings = doc.stages().stream().anyMatch(st -> !st.settings().isDefault());
+        b.append(INDENT).append("\"version\": ")
+                .append(settings ? StageJson.VERSION : StageJson.VERSION_WITHOUT_SETTINGS).append(",\n");
         b.append(INDENT).append("\"title\": ").append(quote(doc.title())).append(",\n");
         b.append(INDENT).append("\"stages\": [\n");
         for (int i = 0; i < doc.stages().size(); i++) {
@@ -67,6 +70,16 @@ final class StageWriter {
                 .append(", \"ambientCelsius\": ").append(number(c.ambientCelsius()))
                 .append(", \"ambientMinCelsius\": ").append(number(c.ambientMinCelsius()))
                 .append(", \"ambientMaxCelsius\": ").append(number(c.ambientMaxCelsius())).append("},\n");
+        StageSettings st = s.settings();
+        if (!st.isDefault()) {
+            b.append(in1).append("\"settings\": {");
+            if (st.releaseTimeRequirementSeconds().isPresent()) {
+                b.append("\"releaseTimeSeconds\": ").append(number(st.releaseTimeRequirementSeconds().getAsDouble()))
+                        .append(", ");
+            }
+            b.append("\"monteCarloSamples\": ").append(st.monteCarloSamples())
+                    .append(", \"monteCarloSeed\": ").append(st.monteCarloSeed()).append("},\n");
+        }
         b.append(in1).append("\"parts\": [");
         b.append(s.parts().isEmpty() ? "" : "\n");
         for (int i = 0; i < s.parts().size(); i++) {

@@ -17,9 +17,10 @@ import java.util.function.UnaryOperator;
  * @param wires the wire segments
  * @param testPoints named nets anchored to pins
  * @param conditions drive state and ambient temperatures
+ * @param settings the stage's own check settings (release-time requirement, Monte Carlo)
  */
 public record Stage(String name, String description, List<Part> parts, List<Wire> wires,
-                    List<TestPoint> testPoints, Conditions conditions) {
+                    List<TestPoint> testPoints, Conditions conditions, StageSettings settings) {
 
     public Stage {
         name = name == null ? "" : name;
@@ -30,6 +31,15 @@ public record Stage(String name, String description, List<Part> parts, List<Wire
         if (conditions == null) {
             conditions = Conditions.DEFAULT;
         }
+        if (settings == null) {
+            settings = StageSettings.DEFAULT;
+        }
+    }
+
+    /** A stage with the default settings. */
+    public Stage(String name, String description, List<Part> parts, List<Wire> wires, List<TestPoint> testPoints,
+                 Conditions conditions) {
+        this(name, description, parts, wires, testPoints, conditions, StageSettings.DEFAULT);
     }
 
     /** The part with this designator. */
@@ -62,7 +72,7 @@ public record Stage(String name, String description, List<Part> parts, List<Wire
         if (!replaced) {
             list.add(part);
         }
-        return new Stage(name, description, list, wires, testPoints, conditions);
+        return new Stage(name, description, list, wires, testPoints, conditions, settings);
     }
 
     /** Applies a change to one part; unchanged if there is no such part. */
@@ -74,43 +84,58 @@ public record Stage(String name, String description, List<Part> parts, List<Wire
     public Stage withoutPart(String ref) {
         List<Part> list = parts.stream().filter(p -> !p.ref().equals(ref)).toList();
         List<TestPoint> tps = testPoints.stream().filter(t -> !t.ref().equals(ref)).toList();
-        return new Stage(name, description, list, wires, tps, conditions);
+        return new Stage(name, description, list, wires, tps, conditions, settings);
     }
 
     /** Adds a wire segment. */
     public Stage withWire(Wire wire) {
         List<Wire> list = new ArrayList<>(wires);
         list.add(wire);
-        return new Stage(name, description, parts, list, testPoints, conditions);
+        return new Stage(name, description, parts, list, testPoints, conditions, settings);
     }
 
     /** Removes one wire segment (the first equal one). */
     public Stage withoutWire(Wire wire) {
         List<Wire> list = new ArrayList<>(wires);
         list.remove(wire);
-        return new Stage(name, description, parts, list, testPoints, conditions);
+        return new Stage(name, description, parts, list, testPoints, conditions, settings);
     }
 
     /** Replaces all wires. */
     public Stage withWires(List<Wire> newWires) {
-        return new Stage(name, description, parts, newWires, testPoints, conditions);
+        return new Stage(name, description, parts, newWires, testPoints, conditions, settings);
     }
 
     /** Adds or replaces (by net name) a test point. */
     public Stage withTestPoint(TestPoint tp) {
         List<TestPoint> list = new ArrayList<>(testPoints.stream().filter(t -> !t.net().equals(tp.net())).toList());
         list.add(tp);
-        return new Stage(name, description, parts, wires, list, conditions);
+        return new Stage(name, description, parts, wires, list, conditions, settings);
     }
 
     /** The same stage under other conditions. */
     public Stage withConditions(Conditions c) {
-        return new Stage(name, description, parts, wires, testPoints, c);
+        return new Stage(name, description, parts, wires, testPoints, c, settings);
     }
 
     /** The same stage with another name. */
     public Stage withName(String newName) {
-        return new Stage(newName, description, parts, wires, testPoints, conditions);
+        return new Stage(newName, description, parts, wires, testPoints, conditions, settings);
+    }
+
+    /** The same stage with another description. */
+    public Stage withDescription(String newDescription) {
+        return new Stage(name, newDescription, parts, wires, testPoints, conditions, settings);
+    }
+
+    /** The same stage with other check settings. */
+    public Stage withSettings(StageSettings s) {
+        return new Stage(name, description, parts, wires, testPoints, conditions, s);
+    }
+
+    /** The same stage with other test points. */
+    public Stage withTestPoints(List<TestPoint> newTestPoints) {
+        return new Stage(name, description, parts, wires, newTestPoints, conditions, settings);
     }
 
     /** The first part of a kind, in drawing order. */

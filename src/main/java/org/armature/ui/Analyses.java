@@ -90,7 +90,7 @@ public record Analyses(VerdictSource verdicts, EdgeSource edges, Executor execut
     public static VerdictSource engineVerdicts() {
         DcAnalysis dc = new DcAnalysis();
         return stage -> {
-            CheckReport r = StageChecks.run(stage, CheckOptions.DEFAULT, dc);
+            CheckReport r = StageChecks.run(stage, CheckOptions.DEFAULT.withSettings(stage.settings()), dc);
             return new Verdicts(Optional.of(r), r.cornerCount() + " corners judged");
         };
     }

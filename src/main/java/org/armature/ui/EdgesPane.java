@@ -39,6 +39,8 @@ public final class EdgesPane extends BorderPane {
     private Palette palette = Palette.LIGHT;
     private double cursorSeconds = Double.NaN;
     private Optional<EdgePlot.Plot> plot = Optional.empty();
+    private Evaluation edgesOf;
+    private boolean running;
 
     /** A drawer following the view model's edges. */
     public EdgesPane(EditorViewModel vm) {
@@ -75,8 +77,9 @@ public final class EdgesPane extends BorderPane {
         canvasHolder.heightProperty().addListener((o, a, b) -> resize());
         canvas.addEventHandler(MouseEvent.MOUSE_PRESSED, this::moveCursor);
         canvas.addEventHandler(MouseEvent.MOUSE_DRAGGED, this::moveCursor);
-        vm.edgesProperty().addListener((o, a, b) -> rebuild());
-        vm.edgesRunningProperty().addListener((o, a, b) -> syncStatus());
+        edgesOf = vm.evaluation();
+        running = edgesOf.edges().isEmpty();
+        vm.evaluationProperty().addListener((o, a, b) -> evaluated(b));
         rebuild();
     }
 
@@ -108,22 +111,37 @@ public final class EdgesPane extends BorderPane {
         plot.ifPresent(p -> figuresFor(selected()));
     }
 
+    /**
+     * Takes a published evaluation: its edges when they are in; while they are pending, the edges of
+     * the last evaluation that had them stay (plotted over that evaluation's own stage), marked as
+     * running.
+     */
+    private void evaluated(Evaluation e) {
+        running = e.edges().isEmpty();
+        if (e.edges().isPresent() && e.edges().get() != edgesOf.edgesOrNone()) {
+            edgesOf = e;
+            rebuild();
+        } else {
+            syncStatus();
+        }
+    }
+
     private Optional<TransientResult> selected() {
-        Analyses.Edges e = vm.edgesProperty().get();
+        Analyses.Edges e = edgesOf.edgesOrNone();
         return turnOn.isSelected() ? e.turnOn() : e.turnOff();
     }
 
     private void rebuild() {
         Optional<TransientResult> r = selected();
-        plot = r.map(t -> EdgePlot.of(vm.stage(), t.waveform()));
+        plot = r.map(t -> EdgePlot.of(edgesOf.stage(), t.waveform()));
         figuresFor(r);
         syncStatus();
         redraw();
     }
 
     private void syncStatus() {
-        String s = vm.edgesProperty().get().status();
-        status.setText(vm.edgesRunningProperty().get() ? "Running…" : s);
+        String s = edgesOf.edgesOrNone().status();
+        status.setText(running ? "Running…" : s);
     }
 
     private void figuresFor(Optional<TransientResult> r) {

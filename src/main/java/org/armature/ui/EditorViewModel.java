@@ -9,6 +9,8 @@ import java.util.Set;
 import java.util.concurrent.Executor;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
+import javafx.beans.property.ReadOnlyIntegerProperty;
+import javafx.beans.property.ReadOnlyIntegerWrapper;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
@@ -17,18 +19,16 @@ import org.armature.model.StageRoles;
 import org.armature.analysis.Suggestion;
 import org.armature.analysis.TopologyCheck;
 import org.armature.io.StageFileException;
-import org.armature.model.Finding;
 import org.armature.model.GridPoint;
 import org.armature.model.HighSideDrive;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
-import org.armature.model.Severity;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
+import org.armature.model.StageSettings;
 import org.armature.model.StageTemplate;
 import org.armature.model.Suppressor;
 import org.armature.model.Templates;
-import org.armature.model.Validator;
 import org.armature.render.Annotations;
 import org.armature.render.Selection;
 import org.armature.ui.edit.EditCommand;
@@ -36,41 +36,38 @@ import org.armature.ui.edit.Editor;
 
 /**
  * The editor window's state and actions. Views bind to the read-only properties and call the action
- * methods; every document change goes through the {@link Editor}'s commands.
+ * methods; every document change goes through an {@link Editor}'s commands.
  *
- * <p>Readouts are computed by the {@link ReadoutSource} on the injected solve executor, through a
- * {@link LatestWins}: while one solve runs, further edits only replace the one waiting, so a slider
- * drag never builds a backlog and the FX thread never waits. The result is handed back through the
- * FX executor and dropped if the stage changed meanwhile. The verdicts and edges ({@link Analyses})
- * run the same way on their own executor, debounced. The application passes background executors
- * and {@code Platform::runLater}; tests pass same-thread or hand-stepped executors.
+ * <p>Two kinds of state, kept apart. The <em>document state</em> changes at once with each action:
+ * the stages of the document (one {@link Editor}, with its own undo history, per stage), which one
+ * is active, its stage as it stands, the selection, the file, dirty and the undo labels. The
+ * <em>evaluation</em> is everything computed about the active stage: one immutable
+ * {@link Evaluation} per stage version, built by {@link Evaluations} on the injected executors and
+ * published whole through {@link #evaluationProperty()}. The canvas, part sheet readouts, verdicts,
+ * edges and exports read only evaluations, so none of them shows half of one stage version and half
+ * of another.
+ *
+ * <p>The application passes background executors and {@code Platform::runLater}; tests pass
+ * same-thread or hand-stepped executors.
  */
 public final class EditorViewModel {
 
     /** Which readouts to show (View menu toggles). */
     public enum ReadoutKind { VOLTAGES, CURRENTS, BADGES, GAUGES, MARKERS }
 
-    private final Editor editor;
     private final DocumentStore store;
-    private final ReadoutSource readouts;
-    private final Executor fxExecutor;
-    private final LatestWins solves;
-    private final Analyses analyses;
-    private final LatestWins verdictRuns;
-    private final LatestWins edgeRuns;
-    private StageDocument document;
-    private long generation;
-    private Annotations rawAnnotations = Annotations.NONE;
-    private List<Finding> validation = List.of();
-    private List<Finding> solveFindings = List.of();
-    private Stage coilSupplyOf;
-    private Optional<String> coilSupplyRef = Optional.empty();
+    private final Evaluations evaluations;
+    private final List<Editor> editors = new ArrayList<>();
+    private String title = "";
+    private boolean stagesChanged;
+    private Editor editor;
 
+    private final ReadOnlyObjectWrapper<Evaluation> evaluation = new ReadOnlyObjectWrapper<>(this, "evaluation");
     private final ReadOnlyObjectWrapper<Stage> stage = new ReadOnlyObjectWrapper<>(this, "stage");
+    private final ReadOnlyObjectWrapper<List<String>> stageNames = new ReadOnlyObjectWrapper<>(this, "stageNames", List.of());
+    private final ReadOnlyIntegerWrapper activeStage = new ReadOnlyIntegerWrapper(this, "activeStage");
     private final ReadOnlyObjectWrapper<Optional<Stage>> preview = new ReadOnlyObjectWrapper<>(this, "preview", Optional.empty());
     private final ReadOnlyObjectWrapper<Selection> selection = new ReadOnlyObjectWrapper<>(this, "selection", Selection.EMPTY);
-    private final ReadOnlyObjectWrapper<Annotations> annotations = new ReadOnlyObjectWrapper<>(this, "annotations", Annotations.NONE);
-    private final ReadOnlyObjectWrapper<List<Finding>> findings = new ReadOnlyObjectWrapper<>(this, "findings", List.of());
     private final ReadOnlyObjectWrapper<Optional<Path>> file = new ReadOnlyObjectWrapper<>(this, "file", Optional.empty());
     private final ReadOnlyObjectWrapper<Set<ReadoutKind>> shownReadouts =
             new ReadOnlyObjectWrapper<>(this, "shownReadouts", EnumSet.allOf(ReadoutKind.class));
@@ -80,16 +77,10 @@ public final class EditorViewModel {
     private final ReadOnlyBooleanWrapper canRedo = new ReadOnlyBooleanWrapper(this, "canRedo");
     private final ReadOnlyStringWrapper undoLabel = new ReadOnlyStringWrapper(this, "undoLabel", "Undo");
     private final ReadOnlyStringWrapper redoLabel = new ReadOnlyStringWrapper(this, "redoLabel", "Redo");
-    private final ReadOnlyStringWrapper solverStatus = new ReadOnlyStringWrapper(this, "solverStatus", "");
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "");
-    private final javafx.beans.property.ReadOnlyLongWrapper shownGeneration =
-            new javafx.beans.property.ReadOnlyLongWrapper(this, "shownGeneration", 0);
-    private final ReadOnlyObjectWrapper<Analyses.Verdicts> verdicts =
-            new ReadOnlyObjectWrapper<>(this, "verdicts", Analyses.Verdicts.NONE);
-    private final ReadOnlyObjectWrapper<Analyses.Edges> edges = new ReadOnlyObjectWrapper<>(this, "edges", Analyses.Edges.NONE);
-    private final ReadOnlyBooleanWrapper verdictsRunning = new ReadOnlyBooleanWrapper(this, "verdictsRunning");
-    private final ReadOnlyBooleanWrapper edgesRunning = new ReadOnlyBooleanWrapper(this, "edgesRunning");
     private Editor.Clip clipboard = new Editor.Clip(List.of(), List.of());
+    private Stage coilSupplyOf;
+    private Optional<String> coilSupplyRef = Optional.empty();
 
     /**
      * @param initial the stage shown first (not from a file: the document is untitled and clean)
@@ -113,21 +104,40 @@ public final class EditorViewModel {
      */
     public EditorViewModel(Stage initial, DocumentStore store, ReadoutSource readouts, Executor solveExecutor,
                            Executor fxExecutor, Analyses analyses) {
-        this.editor = new Editor(initial);
         this.store = store;
-        this.readouts = readouts;
-        this.fxExecutor = fxExecutor;
-        this.solves = new LatestWins(solveExecutor);
-        this.analyses = analyses;
-        this.verdictRuns = new LatestWins(analyses.executor(), analyses.settleMillis());
-        this.edgeRuns = new LatestWins(analyses.executor(), analyses.settleMillis());
-        this.document = StageDocument.of(initial);
-        refresh();
+        this.evaluations = new Evaluations(readouts, analyses, solveExecutor, fxExecutor, evaluation::set);
+        load(StageDocument.of(initial));
     }
 
     // ------------------------------------------------------------------ properties
 
-    /** The stage being edited. */
+    /**
+     * The evaluation of the active stage: the newest published, whole. Its readouts, verdicts and
+     * edges may each still be pending (a newer stage version was submitted and is being solved).
+     */
+    public ReadOnlyObjectProperty<Evaluation> evaluationProperty() {
+        return evaluation.getReadOnlyProperty();
+    }
+
+    /** The evaluation shown now. */
+    public Evaluation evaluation() {
+        return evaluation.get();
+    }
+
+    /**
+     * The annotations of the newest evaluation, filtered by the View toggles (only the validator's
+     * markers while its readouts are pending).
+     */
+    public Annotations annotations() {
+        return annotations(evaluation.get());
+    }
+
+    /** The annotations of an evaluation, filtered by the View toggles. */
+    public Annotations annotations(Evaluation e) {
+        return filter(e.annotations(), shownReadouts.get());
+    }
+
+    /** The stage being edited (document state: changes with each action, before it is solved). */
     public ReadOnlyObjectProperty<Stage> stageProperty() {
         return stage.getReadOnlyProperty();
     }
@@ -137,29 +147,24 @@ public final class EditorViewModel {
         return stage.get();
     }
 
+    /** The names of the document's stages, in tab order. */
+    public ReadOnlyObjectProperty<List<String>> stageNamesProperty() {
+        return stageNames.getReadOnlyProperty();
+    }
+
+    /** Which stage of the document is being edited (index into {@link #stageNamesProperty()}). */
+    public ReadOnlyIntegerProperty activeStageProperty() {
+        return activeStage.getReadOnlyProperty();
+    }
+
     /** A stage to show instead of the document while a drag is in progress; empty otherwise. */
     public ReadOnlyObjectProperty<Optional<Stage>> previewProperty() {
         return preview.getReadOnlyProperty();
     }
 
-    /** The stage the canvas shows: the drag preview if any, else the document's. */
-    public Stage shownStage() {
-        return preview.get().orElse(stage.get());
-    }
-
     /** The selection. */
     public ReadOnlyObjectProperty<Selection> selectionProperty() {
         return selection.getReadOnlyProperty();
-    }
-
-    /** Readouts from the last finished solve of the present stage, filtered by the View toggles. */
-    public ReadOnlyObjectProperty<Annotations> annotationsProperty() {
-        return annotations.getReadOnlyProperty();
-    }
-
-    /** Validation findings of the present stage. */
-    public ReadOnlyObjectProperty<List<Finding>> findingsProperty() {
-        return findings.getReadOnlyProperty();
     }
 
     /** The file the document came from or was saved to. */
@@ -177,22 +182,22 @@ public final class EditorViewModel {
         return armedKind.getReadOnlyProperty();
     }
 
-    /** True when the document has unsaved changes. */
+    /** True when the document has unsaved changes (in any stage, or in the list of stages). */
     public ReadOnlyBooleanProperty dirtyProperty() {
         return dirty.getReadOnlyProperty();
     }
 
-    /** True when there is something to undo. */
+    /** True when the active stage has something to undo. */
     public ReadOnlyBooleanProperty canUndoProperty() {
         return canUndo.getReadOnlyProperty();
     }
 
-    /** True when there is something to redo. */
+    /** True when the active stage has something to redo. */
     public ReadOnlyBooleanProperty canRedoProperty() {
         return canRedo.getReadOnlyProperty();
     }
 
-    /** "Undo Move Q1". */
+    /** "Undo R1 resistance 1 kΩ → 1.5 kΩ". */
     public ReadOnlyStringProperty undoLabelProperty() {
         return undoLabel.getReadOnlyProperty();
     }
@@ -202,48 +207,17 @@ public final class EditorViewModel {
         return redoLabel.getReadOnlyProperty();
     }
 
-    /** The solver's state line. */
-    public ReadOnlyStringProperty solverStatusProperty() {
-        return solverStatus.getReadOnlyProperty();
-    }
-
-    /** The last message for the user (a failed save, an export written). */
+    /**
+     * The last message for the user (a failed save, an export written). The next edit of the
+     * document clears it, so it never describes a state that has moved on.
+     */
     public ReadOnlyStringProperty messageProperty() {
         return message.getReadOnlyProperty();
     }
 
-    /**
-     * The generation of the readouts shown: each edit (and each readout toggle) makes a new one; the
-     * annotations property carries those of this generation. Latency probes compare it with
-     * {@link #requestedGeneration()}.
-     */
-    public javafx.beans.property.ReadOnlyLongProperty shownGenerationProperty() {
-        return shownGeneration.getReadOnlyProperty();
-    }
-
-    /** The generation of the last solve asked for. */
+    /** The generation of the last stage version submitted for evaluation (latency probes). */
     public long requestedGeneration() {
-        return generation;
-    }
-
-    /** The verdicts of the present stage (the last finished run; may lag behind edits). */
-    public ReadOnlyObjectProperty<Analyses.Verdicts> verdictsProperty() {
-        return verdicts.getReadOnlyProperty();
-    }
-
-    /** The edges of the present stage (the last finished run; may lag behind edits). */
-    public ReadOnlyObjectProperty<Analyses.Edges> edgesProperty() {
-        return edges.getReadOnlyProperty();
-    }
-
-    /** True while the checks of a newer stage are being run. */
-    public ReadOnlyBooleanProperty verdictsRunningProperty() {
-        return verdictsRunning.getReadOnlyProperty();
-    }
-
-    /** True while the edges of a newer stage are being run. */
-    public ReadOnlyBooleanProperty edgesRunningProperty() {
-        return edgesRunning.getReadOnlyProperty();
+        return evaluations.requestedGeneration();
     }
 
     /** The file name for the title and status bar ("untitled" before the first save). */
@@ -255,22 +229,21 @@ public final class EditorViewModel {
 
     /** Replaces the document by a template variant (history cleared, untitled). */
     public void newFromTemplate(StageTemplate t, Suppressor s, HighSideDrive d) {
-        Stage st = Templates.build(t, s, d);
-        document = StageDocument.of(st);
-        editor.load(st);
+        load(StageDocument.of(Templates.build(t, s, d)));
         file.set(Optional.empty());
-        refresh();
+        message.set("");
+        publishDocument();
     }
 
     /** Opens a stage file; on failure the document stays and {@link #messageProperty()} says why. */
     public boolean open(Path path) {
         try {
             StageDocument doc = store.load(path);
-            document = doc;
-            editor.load(doc.first());
+            load(doc);
             file.set(Optional.of(path));
-            message.set("Opened " + path.getFileName());
-            refresh();
+            message.set("Opened " + path.getFileName()
+                    + (doc.stages().size() > 1 ? " (" + doc.stages().size() + " stages)" : ""));
+            publishDocument();
             return true;
         } catch (StageFileException e) {
             message.set(e.getMessage());
@@ -303,12 +276,12 @@ public final class EditorViewModel {
     /** Saves to a file and makes it the document's file. */
     public boolean saveAs(Path path) {
         try {
-            document = document.withStage(0, editor.stage());
-            store.save(document, path);
-            editor.history().markSaved();
+            store.save(document(), path);
+            editors.forEach(e -> e.history().markSaved());
+            stagesChanged = false;
             file.set(Optional.of(path));
+            publishDocument();
             message.set("Saved " + path.getFileName());
-            refresh();
             return true;
         } catch (StageFileException e) {
             message.set(e.getMessage());
@@ -316,23 +289,121 @@ public final class EditorViewModel {
         }
     }
 
-    /** The document as it would be saved now. */
+    /** The document as it would be saved now: every stage as it stands, in tab order. */
     public StageDocument document() {
-        return document.withStage(0, editor.stage());
+        return new StageDocument(title, editors.stream().map(Editor::stage).toList());
+    }
+
+    // ------------------------------------------------------------------ stages of the document
+
+    /** Makes another stage of the document the one edited; its own selection and undo history come with it. */
+    public void selectStage(int index) {
+        if (index < 0 || index >= editors.size() || editors.get(index) == editor) {
+            return;
+        }
+        editor = editors.get(index);
+        preview.set(Optional.empty());
+        armedKind.set(Optional.empty());
+        publishDocument();
+    }
+
+    /** Adds a stage from a template after the active one and opens it. */
+    public void addStage(StageTemplate t, Suppressor s, HighSideDrive d) {
+        Stage st = Templates.build(t, s, d);
+        insertStage(st.withName(freeName(st.name())));
+    }
+
+    /** Adds a copy of the active stage after it ("… (copy)") and opens it. */
+    public void duplicateStage() {
+        insertStage(editor.stage().withName(freeName(editor.stage().name() + " (copy)")));
+    }
+
+    /**
+     * Moves the active stage one place earlier (-1) or later (+1) in the tab order; nothing at the
+     * ends.
+     */
+    public void moveStage(int delta) {
+        int i = editors.indexOf(editor);
+        int j = i + delta;
+        if (delta == 0 || j < 0 || j >= editors.size()) {
+            return;
+        }
+        editors.remove(i);
+        editors.add(j, editor);
+        stagesChanged = true;
+        message.set("");
+        publishDocument();
+    }
+
+    /** Deletes the active stage; the last stage of a document cannot be deleted (the message says so). */
+    public boolean deleteStage() {
+        if (editors.size() == 1) {
+            message.set("A document keeps at least one stage; add another before deleting this one.");
+            return false;
+        }
+        int i = editors.indexOf(editor);
+        String name = editor.stage().name();
+        editors.remove(i);
+        editor = editors.get(Math.min(i, editors.size() - 1));
+        stagesChanged = true;
+        publishDocument();
+        message.set("Deleted stage " + name);
+        return true;
+    }
+
+    /** Renames the active stage (an undoable step of that stage). */
+    public void renameStage(String name) {
+        edit(() -> editor.rename(name));
+    }
+
+    /** Changes the active stage's description (an undoable step of that stage). */
+    public void describeStage(String description) {
+        edit(() -> editor.describe(description));
+    }
+
+    /** Changes the active stage's own check settings (an undoable step of that stage). */
+    public void setStageSettings(StageSettings settings, String label) {
+        edit(() -> editor.setSettings(settings, label));
+    }
+
+    /** Sets the active stage's corner ambient range. */
+    public void setAmbientRange(double minCelsius, double maxCelsius) {
+        edit(() -> editor.setAmbientRange(minCelsius, maxCelsius));
+    }
+
+    private void insertStage(Stage st) {
+        int at = editors.indexOf(editor) + 1;
+        Editor e = new Editor(st);
+        editors.add(at, e);
+        editor = e;
+        stagesChanged = true;
+        message.set("");
+        publishDocument();
+    }
+
+    private String freeName(String base) {
+        List<String> names = editors.stream().map(e -> e.stage().name()).toList();
+        if (!names.contains(base)) {
+            return base;
+        }
+        for (int k = 2; ; k++) {
+            String candidate = base + " " + k;
+            if (!names.contains(candidate)) {
+                return candidate;
+            }
+        }
     }
 
     // ------------------------------------------------------------------ editing actions
 
-    /** Undoes the last step. */
+    /** Undoes the last step of the active stage. */
     public void undo() {
-        editor.undo();
-        refresh();
+        edit(editor::undo);
     }
 
-    /** Redoes the last undone step. */
+    /** Redoes the last undone step of the active stage. */
     public void redo() {
-        editor.redo();
-        refresh();
+        edit(editor::redo);
     }
 
     /** Arms a palette kind: the next canvas click places it. Empty disarms. */
@@ -340,12 +411,12 @@ public final class EditorViewModel {
         armedKind.set(kind);
     }
 
-    /** Places the armed kind (or a given kind) at a grid point. */
+    /** Places a kind at a grid point (a click with the kind armed, or a drag from the palette). */
     public String place(PartKind kind, GridPoint at) {
-        String ref = editor.place(kind, at);
+        String[] ref = new String[1];
+        edit(() -> ref[0] = editor.place(kind, at));
         armedKind.set(Optional.empty());
-        refresh();
-        return ref;
+        return ref[0];
     }
 
     /** Selects parts and wires. */
@@ -363,7 +434,7 @@ public final class EditorViewModel {
                 : Optional.of(editor.moveCommand(editor.selection().refs(), dx, dy).apply(editor.stage())));
     }
 
-    /** Shows another stage in place of the document (editing previews); empty ends it. */
+    /** Ends a drag preview. */
     public void clearPreview() {
         preview.set(Optional.empty());
     }
@@ -371,26 +442,22 @@ public final class EditorViewModel {
     /** Moves the selection (drag release, arrow keys); consecutive moves of one selection merge. */
     public void moveSelection(int dx, int dy) {
         preview.set(Optional.empty());
-        editor.moveSelection(dx, dy);
-        refresh();
+        edit(() -> editor.moveSelection(dx, dy));
     }
 
     /** Rotates the selected parts a quarter turn. */
     public void rotate() {
-        editor.rotateSelection();
-        refresh();
+        edit(editor::rotateSelection);
     }
 
     /** Mirrors the selected parts. */
     public void mirror() {
-        editor.mirrorSelection();
-        refresh();
+        edit(editor::mirrorSelection);
     }
 
     /** Deletes the selection with attached wires. */
     public void delete() {
-        editor.deleteSelection();
-        refresh();
+        edit(editor::deleteSelection);
     }
 
     /** Copies the selection. */
@@ -404,46 +471,82 @@ public final class EditorViewModel {
         delete();
     }
 
-    /** Pastes the last copy. */
+    /** Pastes the last copy where it touches nothing of the stage. */
     public void paste() {
-        editor.paste(clipboard);
-        refresh();
+        edit(() -> editor.paste(clipboard));
     }
 
     /** Draws an orthogonally routed wire. */
     public void drawWire(GridPoint from, GridPoint to) {
-        editor.drawWire(from, to);
-        refresh();
+        edit(() -> editor.drawWire(from, to));
     }
 
     /** Sets a part parameter (part sheet). */
     public void setValue(String ref, String key, double value) {
-        editor.setValue(ref, key, value);
-        refresh();
+        edit(() -> editor.setValue(ref, key, value));
     }
 
-    /** Steps a parameter through the E24 series. */
+    /** Steps a parameter through the E24 series; consecutive steps of one field are one undo step. */
     public void stepPreferred(String ref, String key, int steps) {
-        editor.stepPreferred(ref, key, steps);
-        refresh();
+        edit(() -> editor.stepPreferred(ref, key, steps));
     }
 
     /** Sets a part option (part sheet). */
     public void setOption(String ref, String key, String value) {
-        editor.setOption(ref, key, value);
-        refresh();
+        edit(() -> editor.setOption(ref, key, value));
     }
 
     /** Sets the drive pin state. */
     public void setPinHigh(boolean high) {
-        editor.setPinHigh(high);
-        refresh();
+        edit(() -> editor.setPinHigh(high));
     }
 
     /** Sets the nominal ambient; slider drags merge into one step. */
     public void setAmbient(double celsius) {
-        editor.setAmbient(celsius);
-        refresh();
+        edit(() -> editor.setAmbient(celsius));
+    }
+
+    /**
+     * Names the net at a part's pin as a test point (adds one, or renames the one there), undoably.
+     * A name that is not a net name changes nothing and the message says what is expected.
+     *
+     * @return true when the name was taken
+     */
+    public boolean nameTestPoint(String ref, String pin, String net) {
+        String n = net.strip();
+        if (n.isEmpty()) {
+            edit(() -> editor.stage().testPoints().stream().filter(t -> t.ref().equals(ref) && t.pin().equals(pin))
+                    .findFirst().ifPresent(t -> editor.removeTestPoint(t.net())));
+            return true;
+        }
+        if (!n.matches("[A-Za-z][A-Za-z0-9_\\-]*")) {
+            message.set("A test point name starts with a letter and uses letters, digits, _ or -; \"" + n
+                    + "\" does not.");
+            return false;
+        }
+        edit(() -> editor.nameTestPoint(ref, pin, n));
+        return true;
+    }
+
+    /**
+     * Gives a part another designator, undoably. A designator that is not one, or is taken, changes
+     * nothing and the message says why.
+     *
+     * @return true when the part was renamed
+     */
+    public boolean renamePart(String ref, String newRef) {
+        try {
+            edit(() -> editor.renamePart(ref, newRef));
+            return true;
+        } catch (IllegalArgumentException e) {
+            message.set(e.getMessage());
+            return false;
+        }
+    }
+
+    /** Removes the test point of a net name, undoably. */
+    public void removeTestPoint(String net) {
+        edit(() -> editor.removeTestPoint(net));
     }
 
     /**
@@ -452,6 +555,7 @@ public final class EditorViewModel {
     public Optional<Part> coilSupply() {
         Stage st = editor.stage();
         if (coilSupplyOf != st) {
+            // the toolbar asks on every stage change; recognise once per stage version
             Optional<String> ref = TopologyCheck.recognise(st).flatMap(StageRoles::coilSupplyRef);
             coilSupplyRef = ref.or(() -> st.firstOfKind(PartKind.SUPPLY).map(Part::ref));
             coilSupplyOf = st;
@@ -461,10 +565,7 @@ public final class EditorViewModel {
 
     /** Sets the coil supply's voltage; slider drags merge into one step. No supply: nothing. */
     public void setSupplyVolts(double volts) {
-        coilSupply().ifPresent(p -> {
-            editor.setValueMerging(p.ref(), "volts", volts, "supply:" + p.ref());
-            refresh();
-        });
+        coilSupply().ifPresent(p -> edit(() -> editor.setValueMerging(p.ref(), "volts", volts, "supply:" + p.ref())));
     }
 
     /** Writes the sizing assistant's proposals back as one undoable step. */
@@ -475,8 +576,7 @@ public final class EditorViewModel {
                 changes.add(new Editor.ValueChange(s.ref(), s.paramKey(), s.value()));
             }
         }
-        editor.setValues("Size base network", changes);
-        refresh();
+        edit(() -> editor.setValues("Size base network", changes));
     }
 
     /**
@@ -490,16 +590,14 @@ public final class EditorViewModel {
             message.set(fit.problem().orElse("There is no part " + ref + "."));
             return false;
         }
-        editor.setValues("Fit " + ref + " to datasheet", fit.changes());
+        edit(() -> editor.setValues("Fit " + ref + " to datasheet", fit.changes()));
         message.set("Fitted " + ref + " to the datasheet figures");
-        refresh();
         return true;
     }
 
     /** Executes a prepared command. */
     public void execute(EditCommand c) {
-        editor.execute(c);
-        refresh();
+        edit(() -> editor.execute(c));
     }
 
     /** Shows or hides one kind of readout. */
@@ -512,7 +610,6 @@ public final class EditorViewModel {
             s.remove(kind);
         }
         shownReadouts.set(Set.copyOf(s));
-        annotations.set(filter(rawAnnotations, shownReadouts.get()));
     }
 
     /** Sets the user message (views report export results through it). */
@@ -522,86 +619,54 @@ public final class EditorViewModel {
 
     // ------------------------------------------------------------------ internals
 
-    private void refresh() {
-        Stage before = stage.get();
-        stage.set(editor.stage());
+    private void load(StageDocument doc) {
+        editors.clear();
+        doc.stages().forEach(s -> editors.add(new Editor(s)));
+        editor = editors.get(0);
+        title = doc.title();
+        stagesChanged = false;
+        preview.set(Optional.empty());
+        publishDocument();
+    }
+
+    /**
+     * Runs an edit of the active stage and publishes the document state; a changed stage is
+     * submitted for evaluation. Any message about an earlier state is cleared first.
+     */
+    private void edit(Runnable action) {
+        Stage before = editor.stage();
+        action.run();
+        if (!before.equals(editor.stage())) {
+            message.set("");
+        }
+        publishDocument();
+    }
+
+    private void publishDocument() {
+        Stage now = editor.stage();
+        List<String> names = editors.stream().map(e -> e.stage().name()).toList();
+        if (!names.equals(stageNames.get())) {
+            stageNames.set(names);
+        }
+        activeStage.set(editors.indexOf(editor));
+        Stage was = stage.get();
+        stage.set(now);
         selection.set(editor.selection());
-        dirty.set(editor.history().isDirty());
+        dirty.set(stagesChanged || editors.stream().anyMatch(e -> e.history().isDirty()));
         canUndo.set(editor.history().canUndo());
         canRedo.set(editor.history().canRedo());
         undoLabel.set(editor.history().undoLabel().map(l -> "Undo " + l).orElse("Undo"));
         redoLabel.set(editor.history().redoLabel().map(l -> "Redo " + l).orElse("Redo"));
-        validation = Validator.validate(editor.stage());
-        publishFindings();
-        if (before == null || !before.equals(editor.stage())) {
-            requestReadouts();
-            requestAnalyses();
+        Evaluation shown = evaluation.get();
+        if (was != now || shown == null || shown.stage() != now) {
+            evaluations.submit(now);
         }
-    }
-
-    private void publishFindings() {
-        List<Finding> all = new ArrayList<>(validation);
-        for (Finding f : solveFindings) {
-            if (!all.contains(f)) {
-                all.add(f);
-            }
-        }
-        findings.set(List.copyOf(all));
-    }
-
-    private void requestReadouts() {
-        long gen = ++generation;
-        Stage s = editor.stage();
-        if (rawAnnotations.isEmpty()) {
-            solverStatus.set("Solving…");
-        }
-        solves.submit(() -> {
-            ReadoutSource.Readouts r = readouts.compute(s);
-            fxExecutor.execute(() -> {
-                if (gen == generation) {
-                    rawAnnotations = r.annotations();
-                    solveFindings = r.findings();
-                    annotations.set(filter(rawAnnotations, shownReadouts.get()));
-                    solverStatus.set(r.status());
-                    publishFindings();
-                    shownGeneration.set(gen);
-                }
-            });
-        });
-    }
-
-    private void requestAnalyses() {
-        if (!analyses.active()) {
-            return;
-        }
-        long gen = generation;
-        Stage s = editor.stage();
-        boolean solvable = validation.stream().noneMatch(f -> f.severity() == Severity.ERROR);
-        verdictsRunning.set(true);
-        edgesRunning.set(true);
-        verdictRuns.submit(() -> {
-            Analyses.Verdicts v = solvable ? analyses.verdicts().compute(s)
-                    : new Analyses.Verdicts(Optional.empty(), "Not judged: the stage has errors");
-            fxExecutor.execute(() -> {
-                if (gen == generation) {
-                    verdicts.set(v);
-                    verdictsRunning.set(false);
-                }
-            });
-        });
-        edgeRuns.submit(() -> {
-            Analyses.Edges e = solvable ? analyses.edges().compute(s)
-                    : new Analyses.Edges(Optional.empty(), Optional.empty(), "Not run: the stage has errors");
-            fxExecutor.execute(() -> {
-                if (gen == generation) {
-                    edges.set(e);
-                    edgesRunning.set(false);
-                }
-            });
-        });
     }
 
     private static Annotations filter(Annotations a, Set<ReadoutKind> shown) {
+        if (shown.size() == ReadoutKind.values().length) {
+            return a;
+        }
         return new Annotations(
                 shown.contains(ReadoutKind.VOLTAGES) ? a.voltages() : List.of(),
                 shown.contains(ReadoutKind.CURRENTS) ? a.currents() : List.of(),

@@ -2,6 +2,7 @@ package org.armature.ui;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.armature.analysis.TopologyCheck;
 import org.armature.model.Finding;
 import org.armature.model.Severity;
@@ -17,7 +18,8 @@ import org.armature.solver.SolverException;
 
 /**
  * The readouts over the DC engine: validates the stage, runs the topology check, solves the
- * operating point and hands it to {@link ReadoutBuilder}. Solver failures become one plain sentence
+ * operating point of each pin state and hands the one of the stage's own state to
+ * {@link ReadoutBuilder}. Solver failures become one plain sentence
  * in the status line and a finding (keys of {@link SolverException#messageKey()}); the readouts are
  * then empty rather than stale.
  *
@@ -48,11 +50,27 @@ public final class EngineReadouts implements ReadoutSource {
         List<Finding> findings = new ArrayList<>(TopologyCheck.check(stage));
         try {
             OperatingPoint op = dc.solve(stage);
-            return new Readouts(ReadoutBuilder.build(stage, op, findings), status(op), findings);
+            boolean high = stage.conditions().pinHigh();
+            Optional<OperatingPoint> other = otherPinState(stage);
+            return new Readouts(ReadoutBuilder.build(stage, op, findings), status(op), findings,
+                    high ? Optional.of(op) : other, high ? other : Optional.of(op));
         } catch (SolverException e) {
             Finding f = failure(e);
             findings.add(0, f);
             return new Readouts(ReadoutBuilder.markersOnly(stage, findings), f.message(), findings);
+        }
+    }
+
+    /**
+     * The operating point with the pin in the other state (the engine keeps one compiled netlist per
+     * pin state, so this is a warm re-solve); empty when it has none. Its failure is not a finding of
+     * the stage as drawn: the readouts show the state the user chose.
+     */
+    private Optional<OperatingPoint> otherPinState(Stage stage) {
+        try {
+            return Optional.of(dc.solve(stage.withConditions(stage.conditions().withPinHigh(!stage.conditions().pinHigh()))));
+        } catch (SolverException e) {
+            return Optional.empty();
         }
     }
 

@@ -1,5 +1,7 @@
 package org.armature.ui;
 
+import java.util.List;
+
 import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
@@ -44,8 +46,17 @@ public final class FindingsPane extends VBox {
                 setGraphic(icon);
             }
         });
-        list.itemsProperty().get().setAll(vm.findingsProperty().get());
-        vm.findingsProperty().addListener((o, a, b) -> list.getItems().setAll(b));
+        list.getItems().setAll(vm.evaluation().findings());
+        vm.evaluationProperty().addListener((o, a, b) -> {
+            // a pending evaluation lacks the solver's findings: wait for them rather than flicker
+            if (!b.readoutsReady()) {
+                return;
+            }
+            List<Finding> f = b.findings();
+            if (!f.equals(list.getItems())) {
+                list.getItems().setAll(f);
+            }
+        });
         getChildren().add(list);
     }
 

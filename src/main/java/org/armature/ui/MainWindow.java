@@ -66,6 +66,7 @@ public final class MainWindow {
     private final PartPalette palette;
     private final EdgesPane edges;
     private final TitledPane edgesDrawer;
+    private final StageTabs stageTabs;
     private final MenuBar menuBar = new MenuBar();
     private final RecentFiles recent;
     private final Menu recentMenu = new Menu("Recent");
@@ -89,17 +90,77 @@ public final class MainWindow {
         this.edges = new EdgesPane(vm);
         this.edgesDrawer = new TitledPane("Edges: turn-on and turn-off", edges);
         root.getStyleClass().add("armature-root");
+        this.stageTabs = new StageTabs(vm);
         VBox top = new VBox(buildMenus(), toolBar());
         root.setTop(top);
         palette = new PartPalette(vm, Palette.LIGHT);
         palette.setPrefWidth(64);
+        palette.setOnDrop(this::dropOnCanvas);
+        canvas.addEventHandler(javafx.scene.input.MouseEvent.MOUSE_CLICKED, e -> {
+            if (e.getButton() == javafx.scene.input.MouseButton.PRIMARY && e.getClickCount() == 2) {
+                nameTestPointAt(canvas.gridX(e.getX()), canvas.gridY(e.getY()));
+            }
+        });
         root.setLeft(palette);
-        root.setCenter(canvas);
+        BorderPane centre = new BorderPane(canvas);
+        centre.setTop(stageTabs);
+        root.setCenter(centre);
         root.setRight(rightSide());
         edgesDrawer.setId("edges-drawer");
         edgesDrawer.setExpanded(false);
         edges.setPrefHeight(270);
         root.setBottom(new VBox(edgesDrawer, statusBar()));
+    }
+
+    /**
+     * A double click on a pin names the net there as a test point: the question shows the present
+     * name (empty for none); a new name adds or renames it, an empty one removes it. Undoable.
+     */
+    private void nameTestPointAt(double gridX, double gridY) {
+        var hit = org.armature.render.HitTester.at(vm.stage(), gridX, gridY,
+                SchematicCanvas.HIT_PIXELS / canvas.scale());
+        if (hit instanceof org.armature.render.HitTester.PinHit pin) {
+            String ref = pin.pin().ref();
+            String name = pin.pin().pin();
+            String now = vm.stage().testPoints().stream().filter(t -> t.ref().equals(ref) && t.pin().equals(name))
+                    .map(org.armature.model.TestPoint::net).findFirst().orElse("");
+            testPointQuestion.apply(ref + " pin " + name, now).ifPresent(net -> vm.nameTestPoint(ref, name, net));
+        }
+    }
+
+    private java.util.function.BiFunction<String, String, Optional<String>> testPointQuestion = this::askTestPoint;
+
+    private Optional<String> askTestPoint(String where, String now) {
+        javafx.scene.control.TextInputDialog d = new javafx.scene.control.TextInputDialog(now);
+        d.setTitle("Test point");
+        d.setHeaderText(null);
+        d.setContentText("Name of the net at " + where + " (empty removes it):");
+        if (window() != null) {
+            d.initOwner(window());
+        }
+        return d.showAndWait();
+    }
+
+    /**
+     * Replaces the question a double click on a pin asks (tests answer without a dialog): it gets
+     * the pin ("Q1 pin b") and the present name, and returns the new name, or empty to cancel.
+     */
+    public void setTestPointQuestion(java.util.function.BiFunction<String, String, Optional<String>> question) {
+        this.testPointQuestion = java.util.Objects.requireNonNull(question, "question");
+    }
+
+    /** Places a kind dragged from the palette where it was dropped, when that is on the drawing. */
+    private void dropOnCanvas(org.armature.model.PartKind kind, javafx.geometry.Point2D scenePoint) {
+        javafx.geometry.Point2D local = canvas.sceneToLocal(scenePoint);
+        if (local != null && canvas.getLayoutBounds().contains(local)) {
+            vm.place(kind, org.armature.render.Snap.toGrid(canvas.gridX(local.getX()), canvas.gridY(local.getY())));
+            canvas.requestFocus();
+        }
+    }
+
+    /** The tabs of the document's stages. */
+    public StageTabs stageTabs() {
+        return stageTabs;
     }
 
     /** The verdicts panel. */
@@ -234,9 +295,12 @@ public final class MainWindow {
         MenuItem showEdges = item("Show edges", "Shortcut+E", e -> edgesDrawer.setExpanded(true));
         tools.getItems().addAll(size, showEdges);
 
+        Menu stages = new Menu("Stage");
+        stages.getItems().setAll(stageTabs.menuItems());
+
         Menu help = new Menu("Help");
         help.getItems().add(item("About Armature", null, e -> about()));
-        menuBar.getMenus().addAll(file, edit, view, tools, help);
+        menuBar.getMenus().addAll(file, edit, view, stages, tools, help);
         return menuBar;
     }
 
@@ -301,7 +365,8 @@ public final class MainWindow {
         pin.setTooltip(new Tooltip("Drive pin state for the operating point"));
         Runnable syncPin = () -> {
             boolean high = vm.stage().conditions().pinHigh();
-            if (pin.getGraphic() != null && pin.isSelected() == high) {
+            // the click has already flipped the toggle's own state: compare the words shown, not the state
+            if (pin.getGraphic() != null && pin.isSelected() == high && pin.getText().equals(high ? "Pin HIGH" : "Pin LOW")) {
                 return;
             }
             pin.setSelected(high);
@@ -417,7 +482,10 @@ public final class MainWindow {
     private Region statusBar() {
         Label solver = new Label();
         solver.setId("status-solver");
-        solver.textProperty().bind(vm.solverStatusProperty());
+        // the status of the evaluation on the canvas: a value edit whose solve is pending keeps the
+        // last status instead of flickering to "Solving…" on every slider step
+        solver.setText(canvas.drawnEvaluation().status());
+        vm.evaluationProperty().addListener((o, a, b) -> solver.setText(canvas.drawnEvaluation().status()));
         Label message = new Label();
         message.getStyleClass().add("status-message");
         message.textProperty().bind(vm.messageProperty());
@@ -499,10 +567,12 @@ public final class MainWindow {
             return;
         }
         try {
+            // the evaluation on the screen, whole: its stage with its own readouts
+            Evaluation shown = canvas.drawnEvaluation();
             if (kind.equals("svg")) {
-                ImageExport.writeSvg(vm.stage(), vm.annotationsProperty().get(), canvas.palette(), f.toPath());
+                ImageExport.writeSvg(shown.stage(), vm.annotations(shown), canvas.palette(), f.toPath());
             } else {
-                ImageExport.writePng(vm.stage(), vm.annotationsProperty().get(), canvas.palette(), 2, f.toPath());
+                ImageExport.writePng(shown.stage(), vm.annotations(shown), canvas.palette(), 2, f.toPath());
             }
             vm.say("Exported " + f.getName());
         } catch (java.io.UncheckedIOException ex) {

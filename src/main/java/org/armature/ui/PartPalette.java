@@ -3,11 +3,15 @@ package org.armature.ui;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.BiConsumer;
+import javafx.geometry.Point2D;
 import javafx.scene.canvas.Canvas;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.control.Tooltip;
+import javafx.scene.input.MouseButton;
+import javafx.scene.input.MouseEvent;
 import javafx.scene.layout.VBox;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
@@ -24,7 +28,8 @@ import org.armature.render.SchematicRenderer;
 
 /**
  * The narrow column of allowed parts. Each button's icon is the part's own symbol drawn by the
- * schematic renderer; clicking arms the kind, and the next click on the drawing places it.
+ * schematic renderer; clicking arms the kind, and the next click on the drawing places it. Dragging a
+ * button onto the drawing places the part where it is dropped.
  */
 public final class PartPalette extends ScrollPane {
 
@@ -41,6 +46,7 @@ public final class PartPalette extends ScrollPane {
 
     private final ToggleGroup group = new ToggleGroup();
     private final VBox column = new VBox(2);
+    private BiConsumer<PartKind, Point2D> onDrop = (k, p) -> { };
 
     /** A palette arming kinds on the view model. */
     public PartPalette(EditorViewModel vm, Palette colours) {
@@ -55,6 +61,13 @@ public final class PartPalette extends ScrollPane {
             b.getStyleClass().add("palette-button");
             b.setTooltip(new Tooltip(k.title() + "\n" + k.description()));
             b.setOnAction(e -> vm.arm(b.isSelected() ? Optional.of(k) : Optional.empty()));
+            // a press on the button and a release elsewhere is a drag from the palette: the release
+            // point decides where the part goes (the button keeps the mouse until the release)
+            b.addEventHandler(MouseEvent.MOUSE_RELEASED, e -> {
+                if (e.getButton() == MouseButton.PRIMARY && !b.contains(e.getX(), e.getY())) {
+                    onDrop.accept(k, new Point2D(e.getSceneX(), e.getSceneY()));
+                }
+            });
             column.getChildren().add(b);
         }
         vm.armedKindProperty().addListener((o, a, now) -> {
@@ -65,6 +78,14 @@ public final class PartPalette extends ScrollPane {
         setContent(column);
         setFitToWidth(true);
         setHbarPolicy(ScrollBarPolicy.NEVER);
+    }
+
+    /**
+     * What a drag from a button to somewhere else does: receives the kind and the release point in
+     * scene coordinates (the window places the part when the point is on the drawing).
+     */
+    public void setOnDrop(BiConsumer<PartKind, Point2D> handler) {
+        onDrop = handler == null ? (k, p) -> { } : handler;
     }
 
     /** Redraws the icons in other colours (theme switch). */

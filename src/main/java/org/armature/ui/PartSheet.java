@@ -1,7 +1,10 @@
 package org.armature.ui;
 
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import javafx.scene.control.Button;
 import javafx.scene.control.ComboBox;
@@ -19,6 +22,8 @@ import javafx.scene.layout.VBox;
 import org.armature.model.OptionSpec;
 import org.armature.model.ParamSpec;
 import org.armature.model.Part;
+import org.armature.model.PinSpec;
+import org.armature.model.TestPoint;
 import org.armature.render.Notation;
 import org.armature.units.EngineeringNotation;
 import org.armature.units.ParseResult;
@@ -36,6 +41,9 @@ public final class PartSheet extends VBox {
     /** Style class of a field whose text cannot be taken. */
     public static final String INVALID = "invalid";
 
+    /** Key of a value field's last parsed value in its properties. */
+    private static final String PARSED = "armature.parsed";
+
     private final EditorViewModel vm;
     private final Label title = new Label();
     private final Label description = new Label();
@@ -47,6 +55,7 @@ public final class PartSheet extends VBox {
     /** A part sheet following the view model's selection. */
     public PartSheet(EditorViewModel vm) {
         this.vm = vm;
+        this.stageSheet = new StageSheet(vm);
         getStyleClass().add("part-sheet");
         title.getStyleClass().add("sheet-title");
         description.getStyleClass().add("sheet-description");
@@ -68,17 +77,43 @@ public final class PartSheet extends VBox {
 
     private Optional<Part> lastPart = Optional.empty();
     private int lastSelectionSize = -1;
+    private boolean stageSheetShown;
+    private final Map<String, TextField> valueFields = new HashMap<>();
+    private final Map<String, ComboBox<String>> optionBoxes = new HashMap<>();
+    private final Map<String, TextField> testPointFields = new HashMap<>();
+    private final StageSheet stageSheet;
 
+    /**
+     * Follows the selection and the stage. The same part with other values (its own edit, an undo,
+     * a slider) keeps its fields and only changes the texts that changed, so focus, typed datasheet
+     * figures and Tab order survive; another part, kind or selection builds the sheet anew.
+     */
     private void rebuild() {
         var refs = vm.selectionProperty().get().refs();
         Optional<Part> part = refs.size() == 1 ? vm.stage().part(refs.iterator().next()) : Optional.empty();
-        // an edit elsewhere (a slider drag) leaves the sheet as it is: rebuilding costs a frame
-        if (part.equals(lastPart) && refs.size() == lastSelectionSize) {
+        if (part.equals(lastPart) && refs.size() == lastSelectionSize && !(refs.isEmpty() && stageSheetShown)) {
+            return;
+        }
+        if (part.isPresent() && lastPart.isPresent() && refs.size() == lastSelectionSize
+                && part.get().ref().equals(lastPart.get().ref()) && part.get().kind() == lastPart.get().kind()) {
+            Part before = lastPart.get();
+            lastPart = part;
+            update(before, part.get());
+            return;
+        }
+        if (refs.isEmpty() && stageSheetShown) {
+            lastPart = part;
+            stageSheet.update();
             return;
         }
         lastPart = part;
         lastSelectionSize = refs.size();
+        valueFields.clear();
+        optionBoxes.clear();
+        testPointFields.clear();
         grid.getChildren().clear();
+        getChildren().remove(stageSheet);
+        stageSheetShown = false;
         datasheet.ifPresent(d -> {
             datasheetOpen = d.isExpanded();
             getChildren().remove(d);
@@ -86,21 +121,47 @@ public final class PartSheet extends VBox {
         datasheet = Optional.empty();
         shownRef = part.map(Part::ref);
         if (part.isEmpty()) {
-            title.setText(refs.size() > 1 ? refs.size() + " parts selected" : "No part selected");
+            title.setText(refs.size() > 1 ? refs.size() + " parts selected" : "Stage");
             description.setText(refs.size() > 1 ? "Select one part to edit its values."
-                    : "Click a part on the drawing to see and edit its values.");
+                    : "Click a part on the drawing to see and edit its values. The stage's own name and check settings:");
+            if (refs.isEmpty()) {
+                stageSheet.update();
+                getChildren().add(stageSheet);
+                stageSheetShown = true;
+            }
             return;
         }
         Part p = part.get();
         title.setText(p.ref() + " · " + p.kind().title());
         description.setText(p.kind().description());
         int row = 0;
+        TextField designator = new TextField(p.ref());
+        designator.setId("part-ref");
+        designator.getStyleClass().add("param-field");
+        Runnable rename = () -> {
+            if (!designator.getText().strip().equals(p.ref()) && vm.stage().part(p.ref()).isPresent()
+                    && !vm.renamePart(p.ref(), designator.getText())) {
+                designator.setText(p.ref());
+            }
+        };
+        designator.setOnAction(e -> rename.run());
+        designator.focusedProperty().addListener((o, was, now) -> {
+            if (was && !now) {
+                rename.run();
+            }
+        });
+        grid.addRow(row++, new Label("Designator"), designator);
         for (OptionSpec o : p.kind().options()) {
             ComboBox<String> box = new ComboBox<>();
             box.getItems().setAll(o.allowed());
             box.setValue(p.option(o.key()));
             box.setId("option-" + o.key());
-            box.setOnAction(e -> vm.setOption(p.ref(), o.key(), box.getValue()));
+            box.setOnAction(e -> {
+                if (box.getValue() != null && !box.getValue().equals(vm.stage().part(p.ref()).map(q -> q.option(o.key())).orElse(null))) {
+                    vm.setOption(p.ref(), o.key(), box.getValue());
+                }
+            });
+            optionBoxes.put(o.key(), box);
             Label l = new Label(o.label());
             l.setTooltip(new Tooltip(o.description()));
             grid.addRow(row++, l, box);
@@ -113,8 +174,11 @@ public final class PartSheet extends VBox {
             f.setId("param-" + s.key());
             f.getStyleClass().add("param-field");
             f.setTooltip(new Tooltip(s.description()));
-            f.textProperty().addListener((o, a, b) -> check(f, s));
+            // the text is parsed and range-checked once, as it is typed; a commit takes that value
+            f.textProperty().addListener((o, a, b) -> f.getProperties().put(PARSED, check(f, s)));
+            f.getProperties().put(PARSED, Optional.of(p.value(s.key())));
             f.setOnAction(e -> commit(p.ref(), f, s));
+            valueFields.put(s.key(), f);
             f.focusedProperty().addListener((o, was, now) -> {
                 if (was && !now) {
                     commit(p.ref(), f, s);
@@ -138,11 +202,74 @@ public final class PartSheet extends VBox {
             unit.getStyleClass().add("param-unit");
             grid.addRow(row++, l, f, unit);
         }
+        row = testPointRows(p, row);
         if (DatasheetFit.supports(p.kind())) {
             TitledPane d = datasheetPane(p);
             datasheet = Optional.of(d);
             getChildren().add(d);
         }
+    }
+
+    /** Brings the fields of the part shown up to its values; fields whose value did not change keep their text. */
+    private void update(Part before, Part p) {
+        for (ParamSpec s : p.kind().params()) {
+            TextField f = valueFields.get(s.key());
+            // only a value that changed: a field being typed in while something else changes keeps its text
+            if (f != null && before.value(s.key()) != p.value(s.key())) {
+                f.setText(Notation.format(p.value(s.key()), s.unitSymbol()));
+            }
+        }
+        for (OptionSpec o : p.kind().options()) {
+            ComboBox<String> box = optionBoxes.get(o.key());
+            if (box != null && !p.option(o.key()).equals(box.getValue())) {
+                box.setValue(p.option(o.key()));
+            }
+        }
+        for (PinSpec pin : p.kind().pins()) {
+            TextField f = testPointFields.get(pin.name());
+            if (f != null) {
+                String net = testPointAt(p.ref(), pin.name());
+                if (!net.equals(f.getText())) {
+                    f.setText(net);
+                }
+            }
+        }
+    }
+
+    // ------------------------------------------------------------------ test points
+
+    private String testPointAt(String ref, String pin) {
+        return vm.stage().testPoints().stream().filter(t -> t.ref().equals(ref) && t.pin().equals(pin))
+                .map(TestPoint::net).findFirst().orElse("");
+    }
+
+    /** One row per pin: the name of the test point there (empty: none), committed with Enter or on leaving. */
+    private int testPointRows(Part p, int row) {
+        Label head = new Label("Test points");
+        head.getStyleClass().add("sheet-title");
+        head.setTooltip(new Tooltip("Name the net at a pin to measure it; clear the name to remove the test point."));
+        grid.add(head, 0, row++, 3, 1);
+        for (PinSpec pin : p.kind().pins()) {
+            TextField f = new TextField(testPointAt(p.ref(), pin.name()));
+            f.setId("testpoint-" + pin.name());
+            f.setPromptText("none");
+            f.getStyleClass().add("param-field");
+            Runnable commit = () -> {
+                if (!f.getText().strip().equals(testPointAt(p.ref(), pin.name()))
+                        && !vm.nameTestPoint(p.ref(), pin.name(), f.getText())) {
+                    f.setText(testPointAt(p.ref(), pin.name()));
+                }
+            };
+            f.setOnAction(e -> commit.run());
+            f.focusedProperty().addListener((o, was, now) -> {
+                if (was && !now && vm.stage().part(p.ref()).isPresent()) {
+                    commit.run();
+                }
+            });
+            testPointFields.put(pin.name(), f);
+            grid.addRow(row++, new Label("pin " + pin.name()), f);
+        }
+        return row;
     }
 
     // ------------------------------------------------------------------ datasheet helpers
@@ -286,7 +413,9 @@ public final class PartSheet extends VBox {
         if (shownRef.isEmpty() || !shownRef.get().equals(ref) || vm.stage().part(ref).isEmpty()) {
             return;
         }
-        Optional<Double> v = check(f, s);
+        Object parsed = f.getProperties().get(PARSED);
+        Optional<Double> v = parsed instanceof Optional<?> o && o.isPresent() && o.get() instanceof Double d
+                ? Optional.of(d) : Optional.empty();
         if (v.isPresent() && v.get() != vm.stage().require(ref).value(s.key())) {
             vm.setValue(ref, s.key(), v.get());
         }

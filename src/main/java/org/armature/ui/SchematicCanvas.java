@@ -64,6 +64,7 @@ public final class SchematicCanvas extends Region {
     private double offsetY = 40;
     private boolean gridDirty = true;
     private Layout lastLayout;
+    private Evaluation drawn;
 
     /** Screen pixels of vertical drag per preferred-value step when dragging a value label. */
     public static final double VALUE_DRAG_PIXELS = 8;
@@ -93,22 +94,10 @@ public final class SchematicCanvas extends Region {
         getChildren().addAll(gridLayer, drawingLayer, overlayLayer);
         setFocusTraversable(true);
         setMinSize(200, 200);
-        vm.stageProperty().addListener((o, a, b) -> {
-            // a change of values only (a slider step) is drawn with its readouts, which follow at once:
-            // one repaint per edit instead of two
-            if (a == null || b == null || !sameDrawing(a, b)) {
-                redrawDrawing();
-            }
-        });
+        drawn = vm.evaluation();
+        vm.evaluationProperty().addListener((o, a, b) -> evaluated(b));
         vm.previewProperty().addListener((o, a, b) -> redrawDrawing());
-        // a published solve sets the annotations, then the generation: draw once, on the generation;
-        // a View toggle changes only the annotations
-        vm.annotationsProperty().addListener((o, a, b) -> {
-            if (vm.shownGenerationProperty().get() == vm.requestedGeneration()) {
-                redrawDrawing();
-            }
-        });
-        vm.shownGenerationProperty().addListener((o, a, b) -> redrawDrawing());
+        vm.shownReadoutsProperty().addListener((o, a, b) -> redrawDrawing());
         vm.selectionProperty().addListener((o, a, b) -> redrawOverlay());
         addEventHandler(MouseEvent.MOUSE_PRESSED, this::pressed);
         addEventHandler(MouseEvent.MOUSE_DRAGGED, this::dragged);
@@ -116,6 +105,30 @@ public final class SchematicCanvas extends Region {
         addEventHandler(MouseEvent.MOUSE_MOVED, this::moved);
         addEventHandler(ScrollEvent.SCROLL, this::scrolled);
         addEventHandler(KeyEvent.KEY_PRESSED, this::key);
+    }
+
+    /**
+     * Takes a published evaluation. One whose readouts are in is drawn; a pending one is drawn only
+     * when its drawing differs from the one shown (a part placed or moved), and then without
+     * readouts. A change of values only (a slider step) thus keeps the last whole evaluation on the
+     * screen until its successor's readouts arrive: one repaint per edit, never the new stage with the
+     * old readouts.
+     */
+    private void evaluated(Evaluation e) {
+        if (e.readoutsReady() || drawn == null || !sameDrawing(drawn.stage(), e.stage())) {
+            drawn = e;
+            redrawDrawing();
+        }
+    }
+
+    /** The evaluation the drawing layer shows. */
+    public Evaluation drawnEvaluation() {
+        return drawn;
+    }
+
+    /** The stage the canvas shows: the drag preview if any, else the drawn evaluation's. */
+    private Stage shownStage() {
+        return vm.previewProperty().get().orElse(drawn.stage());
     }
 
     /** True when two stages draw the same but for values and conditions (same parts, places and wires). */
@@ -206,7 +219,7 @@ public final class SchematicCanvas extends Region {
         if (w <= 0 || h <= 0) {
             return;
         }
-        Box e = SchematicRenderer.layout(vm.stage(), vm.annotationsProperty().get()).extent().inflate(1.5);
+        Box e = SchematicRenderer.layout(drawn.stage(), vm.annotations(drawn)).extent().inflate(1.5);
         zoom = Math.max(MIN_ZOOM, Math.min(MAX_ZOOM, Math.min(w / e.width(), h / e.height()) / BASE_PIXELS_PER_GRID));
         offsetX = (w - e.width() * scale()) / 2 - e.minX() * scale();
         offsetY = (h - e.height() * scale()) / 2 - e.minY() * scale();
@@ -256,7 +269,7 @@ public final class SchematicCanvas extends Region {
         GraphicsContext g = gridLayer.getGraphicsContext2D();
         g.setFill(FxPen.fx(palette.paper()));
         g.fillRect(0, 0, gridLayer.getWidth(), gridLayer.getHeight());
-        SchematicRenderer.draw(vm.shownStage(), org.armature.render.Annotations.NONE, options(EnumSet.of(Layer.GRID)),
+        SchematicRenderer.draw(shownStage(), org.armature.render.Annotations.NONE, options(EnumSet.of(Layer.GRID)),
                 new FxPen(g, view()));
         gridDirty = false;
     }
@@ -270,15 +283,17 @@ public final class SchematicCanvas extends Region {
         long start = System.nanoTime();
         GraphicsContext g = drawingLayer.getGraphicsContext2D();
         g.clearRect(0, 0, drawingLayer.getWidth(), drawingLayer.getHeight());
-        lastLayout = SchematicRenderer.draw(vm.shownStage(), vm.annotationsProperty().get(),
+        // a drag preview is a stage no one has solved: it is drawn without readouts
+        var readouts = vm.previewProperty().get().isPresent() ? org.armature.render.Annotations.NONE : vm.annotations(drawn);
+        lastLayout = SchematicRenderer.draw(shownStage(), readouts,
                 options(EnumSet.of(Layer.WIRES, Layer.PARTS, Layer.LABELS, Layer.ANNOTATIONS)), new FxPen(g, view()));
         lastRepaintNanos = System.nanoTime() - start;
-        repainted.accept(vm.shownGenerationProperty().get());
+        repainted.accept(drawn.generation());
     }
 
     /**
      * Called at the end of every repaint of the drawing layer with the generation of the readouts
-     * painted ({@link EditorViewModel#shownGenerationProperty()}): the hook of latency probes.
+     * painted ({@link Evaluation#generation()}): the hook of latency probes.
      */
     public void setOnRepainted(java.util.function.LongConsumer listener) {
         repainted = listener == null ? g -> { } : listener;
@@ -318,7 +333,7 @@ public final class SchematicCanvas extends Region {
         Selection sel = gesture == Gesture.MOVE && dragDx != 0 || gesture == Gesture.MOVE && dragDy != 0
                 ? new Selection(vm.selectionProperty().get().refs(), Set.of()) : vm.selectionProperty().get();
         RenderOptions o = options(EnumSet.of(Layer.SELECTION)).withSelection(sel).withPreview(previewWires, band, hover);
-        SchematicRenderer.draw(vm.shownStage(), org.armature.render.Annotations.NONE, o, new FxPen(g, view()));
+        SchematicRenderer.draw(shownStage(), org.armature.render.Annotations.NONE, o, new FxPen(g, view()));
     }
 
     // ------------------------------------------------------------------ input

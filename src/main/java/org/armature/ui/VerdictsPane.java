@@ -35,6 +35,8 @@ public final class VerdictsPane extends VBox {
     private final FindingsPane findings;
     private final VBox cautions = new VBox(4);
     private final Label status = new Label();
+    private Analyses.Verdicts shownVerdicts = Analyses.Verdicts.NONE;
+    private boolean shownRunning;
 
     /** A panel following the view model's verdicts and findings. */
     public VerdictsPane(EditorViewModel vm) {
@@ -58,10 +60,8 @@ public final class VerdictsPane extends VBox {
                 vm.select(new Selection(new LinkedHashSet<>(b.refs()), Set.of()));
             }
         });
-        Runnable sync = () -> show(vm.verdictsProperty().get(), vm.verdictsRunningProperty().get());
-        vm.verdictsProperty().addListener((o, a, b) -> sync.run());
-        vm.verdictsRunningProperty().addListener((o, a, b) -> sync.run());
-        sync.run();
+        evaluated(vm.evaluation());
+        vm.evaluationProperty().addListener((o, a, b) -> evaluated(b));
         VBox.setVgrow(checks, Priority.ALWAYS);
         getChildren().addAll(cautions, status, checks, findings);
     }
@@ -79,6 +79,21 @@ public final class VerdictsPane extends VBox {
     /** The caution box; visible only when the report carries safety cautions. */
     public VBox cautions() {
         return cautions;
+    }
+
+    /**
+     * Shows the verdicts of an evaluation when they are in; while they are pending, the verdicts of
+     * the last evaluation that had them stay, marked as being judged again.
+     */
+    private void evaluated(Evaluation e) {
+        Analyses.Verdicts v = e.verdicts().orElse(shownVerdicts);
+        boolean running = e.verdicts().isEmpty();
+        if (v == shownVerdicts && running == shownRunning && v != Analyses.Verdicts.NONE) {
+            return;
+        }
+        shownVerdicts = v;
+        shownRunning = running;
+        show(v, running);
     }
 
     private void show(Analyses.Verdicts v, boolean running) {

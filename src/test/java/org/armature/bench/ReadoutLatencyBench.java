@@ -17,6 +17,10 @@ import org.armature.render.RenderOptions;
 import org.armature.render.SchematicRenderer;
 import org.armature.solver.DcAnalysis;
 import org.armature.solver.OperatingPoint;
+import org.armature.ui.Analyses;
+import org.armature.ui.EngineReadouts;
+import org.armature.ui.Evaluation;
+import org.armature.ui.Evaluations;
 import org.armature.ui.edit.Editor;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -56,6 +60,10 @@ public class ReadoutLatencyBench {
     private Editor editor;
     private DcAnalysis dc;
     private int step;
+    private Editor windowEditor;
+    private Evaluations evaluations;
+    private Evaluation published;
+    private int windowStep;
 
     /** Builds the stage and warms the engine's compiled netlist. */
     @Setup
@@ -64,6 +72,9 @@ public class ReadoutLatencyBench {
         editor = new Editor(s);
         dc = new DcAnalysis();
         dc.solve(s);
+        windowEditor = new Editor(s);
+        evaluations = new Evaluations(new EngineReadouts(), Analyses.NONE, Runnable::run, Runnable::run, e -> published = e);
+        evaluations.submit(s);
     }
 
     /** One edit to painted readouts (recorded draw calls). */
@@ -76,5 +87,19 @@ public class ReadoutLatencyBench {
         Annotations a = ReadoutBuilder.build(s, op, findings);
         RecordingPen pen = new RecordingPen();
         return SchematicRenderer.draw(s, a, RenderOptions.all(), pen);
+    }
+
+    /**
+     * The same edit through the window's own path: the editor, {@link Evaluations} with same-thread
+     * executors (validation, {@link EngineReadouts}: topology check and both pin states' operating
+     * points), then the published evaluation drawn onto a recording pen.
+     */
+    @Benchmark
+    public Layout editEvaluateRender() {
+        windowEditor.setAmbient(25 + (windowStep++ & 1));
+        evaluations.submit(windowEditor.stage());
+        Evaluation e = published;
+        RecordingPen pen = new RecordingPen();
+        return SchematicRenderer.draw(e.stage(), e.annotations(), RenderOptions.all(), pen);
     }
 }

@@ -15,7 +15,7 @@ import org.junit.jupiter.api.Test;
 class EditorViewModelTest {
 
     /** Readouts that tag the coil supply with the R1 value, so a result shows which stage it came from. */
-    private static final ReadoutSource MARKING = st -> new ReadoutSource.Readouts(
+    static final ReadoutSource MARKING = st -> new ReadoutSource.Readouts(
             new Annotations(List.of(new Annotations.NodeVoltage("supply", st.require("R1").value("resistanceOhms"))),
                     List.of(), List.of(), List.of(), List.of()), "solved");
 
@@ -25,13 +25,14 @@ class EditorViewModelTest {
         Deque<Runnable> solves = new ArrayDeque<>();
         Deque<Runnable> fx = new ArrayDeque<>();
         EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, MARKING, solves::add, fx::add);
-        assertEquals(Annotations.NONE, vm.annotationsProperty().get(), "nothing before the solve ran");
+        assertEquals(Annotations.NONE, vm.annotations(), "nothing before the solve ran");
+        assertEquals(Evaluation.SOLVING, vm.evaluation().status());
         assertEquals(1, solves.size());
         solves.poll().run();
-        assertTrue(vm.annotationsProperty().get().isEmpty(), "nothing before the FX thread publishes");
+        assertTrue(vm.annotations().isEmpty(), "nothing before the FX thread publishes");
         fx.poll().run();
-        assertEquals(1000, vm.annotationsProperty().get().voltages().get(0).volts(), 1e-12);
-        assertEquals("solved", vm.solverStatusProperty().get());
+        assertEquals(1000, vm.annotations().voltages().get(0).volts(), 1e-12);
+        assertEquals("solved", vm.evaluation().status());
     }
 
     @Test
@@ -44,10 +45,11 @@ class EditorViewModelTest {
         Runnable old = fx.poll();
         vm.setValue("R1", "resistanceOhms", 2200);
         old.run();
-        assertTrue(vm.annotationsProperty().get().isEmpty(), "the 1 kΩ result came after the 2.2 kΩ edit: dropped");
+        assertTrue(vm.annotations().isEmpty(), "the 1 kΩ result came after the 2.2 kΩ edit: dropped");
+        assertEquals(vm.stage(), vm.evaluation().stage(), "the evaluation shown is of the newest stage, pending");
         solves.poll().run();
         fx.poll().run();
-        assertEquals(2200, vm.annotationsProperty().get().voltages().get(0).volts(), 1e-12);
+        assertEquals(2200, vm.annotations().voltages().get(0).volts(), 1e-12);
     }
 
     @Test
@@ -70,8 +72,8 @@ class EditorViewModelTest {
         while (!fx.isEmpty()) {
             fx.poll().run();
         }
-        assertEquals(1050, vm.annotationsProperty().get().voltages().get(0).volts(), 1e-12);
-        assertEquals(vm.requestedGeneration(), vm.shownGenerationProperty().get());
+        assertEquals(1050, vm.annotations().voltages().get(0).volts(), 1e-12);
+        assertEquals(vm.requestedGeneration(), vm.evaluation().generation());
     }
 
     @Test
@@ -79,9 +81,9 @@ class EditorViewModelTest {
     void togglesFilter() {
         EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, MARKING, Runnable::run, Runnable::run);
         vm.showReadout(EditorViewModel.ReadoutKind.VOLTAGES, false);
-        assertTrue(vm.annotationsProperty().get().voltages().isEmpty());
+        assertTrue(vm.annotations().voltages().isEmpty());
         vm.showReadout(EditorViewModel.ReadoutKind.VOLTAGES, true);
-        assertEquals(1, vm.annotationsProperty().get().voltages().size());
+        assertEquals(1, vm.annotations().voltages().size());
         assertEquals(Templates.defaultStage(), vm.stage());
     }
 }

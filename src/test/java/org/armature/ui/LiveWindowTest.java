@@ -71,7 +71,7 @@ class LiveWindowTest {
     }
 
     private Annotations shown() {
-        return vm.annotationsProperty().get();
+        return vm.annotations();
     }
 
     private double voltage(String net) {
@@ -120,8 +120,8 @@ class LiveWindowTest {
             assertEquals(1, shown().gauges().size(), t.id());
             // derived: the readout is the engine's own node voltage at the switch test point
             assertEquals(op.voltage("switch"), voltage("switch"), NM6_VOLTS, t.id());
-            assertTrue(vm.solverStatusProperty().get().startsWith("Converged in "), vm.solverStatusProperty().get());
-            assertTrue(vm.solverStatusProperty().get().contains("largest KCL residual"));
+            assertTrue(vm.evaluation().status().startsWith("Converged in "), vm.evaluation().status());
+            assertTrue(vm.evaluation().status().contains("largest KCL residual"));
         }
     }
 
@@ -186,11 +186,11 @@ class LiveWindowTest {
     void placeAndWire(FxRobot robot) {
         AtomicReference<String> ref = new AtomicReference<>();
         robot.interact(() -> ref.set(vm.place(PartKind.RESISTOR, new GridPoint(44, 8))));
-        String status = vm.solverStatusProperty().get();
+        String status = vm.evaluation().status();
         assertFalse(status.contains("Exception") || status.contains("\tat "), status);
         assertFalse(status.startsWith("Converged"), status);
-        assertTrue(vm.findingsProperty().get().stream().anyMatch(f -> f.key().startsWith("solver.")
-                || f.severity() == org.armature.model.Severity.ERROR), vm.findingsProperty().get().toString());
+        assertTrue(vm.evaluation().findings().stream().anyMatch(f -> f.key().startsWith("solver.")
+                || f.severity() == org.armature.model.Severity.ERROR), vm.evaluation().findings().toString());
         robot.interact(() -> {
             String g = vm.place(PartKind.GROUND, new GridPoint(44, 14));
             GridPoint b = vm.stage().require(ref.get()).pinPoint("b");
@@ -199,7 +199,7 @@ class LiveWindowTest {
             String v = vm.place(PartKind.SUPPLY, new GridPoint(44, 3));
             vm.drawWire(a, vm.stage().require(v).pinPoint("p"));
         });
-        assertTrue(vm.solverStatusProperty().get().startsWith("Converged"), vm.solverStatusProperty().get());
+        assertTrue(vm.evaluation().status().startsWith("Converged"), vm.evaluation().status());
         OperatingPoint op = new DcAnalysis().solve(vm.stage());
         double amps = op.requirePart(ref.get()).quantity("current");
         double expected = 12 / vm.stage().require(ref.get()).value("resistanceOhms");
@@ -239,7 +239,7 @@ class LiveWindowTest {
     void edgesPlotNotBlank(FxRobot robot) {
         runSlow(robot);
         robot.interact(() -> window.edgesDrawer().setExpanded(true));
-        assertTrue(vm.edgesProperty().get().turnOff().isPresent(), vm.edgesProperty().get().status());
+        assertTrue(vm.evaluation().edgesOrNone().turnOff().isPresent(), vm.evaluation().edgesOrNone().status());
         assertTrue(window.edges().plot().isPresent());
         assertEquals(4, window.edges().plot().get().channels().size(), "coil current, switch voltage, travel, contacts");
         robot.interact(() -> window.edges().setCursorSeconds(0.005));

@@ -85,7 +85,7 @@ class MainWindowTest {
         assertTrue(drawnPartLabels().containsAll(Set.of("K1", "Q1", "R1", "R2", "D1", "U1", "E1")), drawnPartLabels().toString());
         assertEquals("untitled", vm.fileName());
         assertFalse(vm.dirtyProperty().get());
-        assertTrue(vm.solverStatusProperty().get().startsWith("Solver not connected"));
+        assertTrue(vm.evaluation().status().startsWith("Solver not connected"));
     }
 
     @Test

@@ -9,8 +9,10 @@ import org.armature.model.Conditions;
 import org.armature.model.Part;
 import org.armature.model.Placement;
 import org.armature.model.Stage;
+import org.armature.model.StageSettings;
 import org.armature.model.TestPoint;
 import org.armature.model.Wire;
+import org.armature.render.Notation;
 
 /**
  * One user edit of a stage, with its exact inverse: {@code c.inverse().apply(c.apply(s))} equals
@@ -22,7 +24,7 @@ import org.armature.model.Wire;
  */
 public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.RemovePart, EditCommand.MovePart,
         EditCommand.SetValue, EditCommand.SetOption, EditCommand.AddWire, EditCommand.RemoveWire,
-        EditCommand.SetConditions, EditCommand.Compound {
+        EditCommand.SetConditions, EditCommand.SetHeader, EditCommand.SetTestPoints, EditCommand.RenamePart, EditCommand.Compound {
 
     /** The stage after this edit. */
     Stage apply(Stage stage);
@@ -30,7 +32,7 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
     /** The edit that takes the result back to the stage before. */
     EditCommand inverse();
 
-    /** Short words for the Undo and Redo menu items ("Move Q1"). */
+    /** The user's words for the Undo and Redo menu items ("Move Q1", "R1 resistance 1 kΩ → 1.5 kΩ"). */
     String label();
 
     /** Commands with equal keys that follow each other merge into one undo step; empty: never merge. */
@@ -58,7 +60,7 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
             for (IndexedTestPoint t : testPoints) {
                 tps.add(Math.min(t.index(), tps.size()), t.testPoint());
             }
-            return new Stage(s.name(), s.description(), parts, s.wires(), tps, s.conditions());
+            return new Stage(s.name(), s.description(), parts, s.wires(), tps, s.conditions(), s.settings());
         }
 
         @Override
@@ -86,7 +88,12 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
 
         /** The removal of a part as it stands in a stage. */
         public static RemovePart of(Stage s, String ref) {
-            Part p = s.require(ref);
+            return of(s, s.require(ref));
+        }
+
+        /** The removal of this very part of a stage (with the test points anchored to its designator). */
+        public static RemovePart of(Stage s, Part p) {
+            String ref = p.ref();
             List<IndexedTestPoint> tps = new ArrayList<>();
             for (int i = 0; i < s.testPoints().size(); i++) {
                 if (s.testPoints().get(i).ref().equals(ref)) {
@@ -118,7 +125,7 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
                     tps.remove(t.testPoint());
                 }
             }
-            return new Stage(s.name(), s.description(), parts, s.wires(), tps, s.conditions());
+            return new Stage(s.name(), s.description(), parts, s.wires(), tps, s.conditions(), s.settings());
         }
 
         @Override
@@ -169,9 +176,10 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
      * @param before the value stored before; empty when the kind's default applied
      * @param after the value stored after; empty restores the default
      * @param mergeKey merge key, for stepping through preferred values; empty for typed edits
+     * @param words how the change reads in the Undo menu
      */
-    record SetValue(String ref, String key, OptionalDouble before, OptionalDouble after, Optional<String> mergeKey)
-            implements EditCommand {
+    record SetValue(String ref, String key, OptionalDouble before, OptionalDouble after, Optional<String> mergeKey,
+                    ValueWords words) implements EditCommand {
         @Override
         public Stage apply(Stage s) {
             return s.updatePart(ref, p -> {
@@ -187,12 +195,37 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
 
         @Override
         public EditCommand inverse() {
-            return new SetValue(ref, key, after, before, mergeKey);
+            return new SetValue(ref, key, after, before, mergeKey, words.reversed());
         }
 
         @Override
         public String label() {
-            return "Change " + ref + " " + key;
+            return words.text();
+        }
+    }
+
+    /**
+     * A value change in the user's words: "R1 resistance 1 kΩ → 1.5 kΩ".
+     *
+     * @param subject designator and the parameter's label in lower case ("R1 resistance")
+     * @param unit the unit symbol the values are shown in
+     * @param from the value in effect before (the kind's default when none was stored)
+     * @param to the value in effect after
+     */
+    record ValueWords(String subject, String unit, double from, double to) {
+        /** "R1 resistance 1 kΩ → 1.5 kΩ". */
+        public String text() {
+            return subject + " " + Notation.format(from, unit) + " → " + Notation.format(to, unit);
+        }
+
+        /** The words of the opposite change. */
+        public ValueWords reversed() {
+            return new ValueWords(subject, unit, to, from);
+        }
+
+        /** The words of this change followed by a later one of the same value. */
+        public ValueWords through(ValueWords later) {
+            return new ValueWords(subject, unit, from, later.to);
         }
     }
 
@@ -203,8 +236,10 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
      * @param key option key
      * @param before the setting stored before; empty when the default applied
      * @param after the setting stored after; empty restores the default
+     * @param subject designator and the option's label in lower case, for the Undo menu ("K1 coil supply")
      */
-    record SetOption(String ref, String key, Optional<String> before, Optional<String> after) implements EditCommand {
+    record SetOption(String ref, String key, Optional<String> before, Optional<String> after, String subject)
+            implements EditCommand {
         @Override
         public Stage apply(Stage s) {
             return s.updatePart(ref, p -> {
@@ -220,12 +255,12 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
 
         @Override
         public EditCommand inverse() {
-            return new SetOption(ref, key, after, before);
+            return new SetOption(ref, key, after, before, subject);
         }
 
         @Override
         public String label() {
-            return "Change " + ref + " " + key;
+            return subject + " " + before.orElse("default") + " → " + after.orElse("default");
         }
     }
 
@@ -303,12 +338,122 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
 
         @Override
         public String label() {
-            return "Change " + what;
+            return switch (what) {
+                case PIN_STATE -> "Drive pin " + level(before.pinHigh()) + " → " + level(after.pinHigh());
+                case AMBIENT -> "Ambient " + Notation.format(before.ambientCelsius(), "°C") + " → "
+                        + Notation.format(after.ambientCelsius(), "°C");
+                case AMBIENT_RANGE -> "Ambient range " + range(before) + " → " + range(after);
+                default -> "Change " + what;
+            };
         }
 
         @Override
         public Optional<String> mergeKey() {
-            return what.equals("ambient") ? Optional.of("conditions:ambient") : Optional.empty();
+            return what.equals(AMBIENT) ? Optional.of("conditions:ambient") : Optional.empty();
+        }
+
+        /** {@link #what} of a pin state change. */
+        public static final String PIN_STATE = "pin state";
+        /** {@link #what} of a nominal ambient change (slider steps merge). */
+        public static final String AMBIENT = "ambient";
+        /** {@link #what} of a change of the corners' ambient range. */
+        public static final String AMBIENT_RANGE = "ambient range";
+
+        private static String level(boolean high) {
+            return high ? "high" : "low";
+        }
+
+        private static String range(Conditions c) {
+            return Notation.format(c.ambientMinCelsius(), "°C") + " to " + Notation.format(c.ambientMaxCelsius(), "°C");
+        }
+    }
+
+    /**
+     * Changes the stage's own header: name, description and check settings.
+     *
+     * @param before header before
+     * @param after header after
+     * @param label words for the menu ("Rename stage to Zone 2")
+     */
+    record SetHeader(Header before, Header after, String label) implements EditCommand {
+        @Override
+        public Stage apply(Stage s) {
+            return s.withName(after.name()).withDescription(after.description()).withSettings(after.settings());
+        }
+
+        @Override
+        public EditCommand inverse() {
+            return new SetHeader(after, before, label);
+        }
+    }
+
+    /**
+     * A stage's name, description and settings.
+     *
+     * @param name the stage's name
+     * @param description its description
+     * @param settings its check settings
+     */
+    record Header(String name, String description, StageSettings settings) {
+        /** The header of a stage. */
+        public static Header of(Stage s) {
+            return new Header(s.name(), s.description(), s.settings());
+        }
+    }
+
+    /**
+     * Gives a part another designator; the test points anchored to it follow.
+     *
+     * @param index the part's position in {@link Stage#parts()}
+     * @param from the designator before
+     * @param to the designator after
+     */
+    record RenamePart(int index, String from, String to) implements EditCommand {
+        @Override
+        public Stage apply(Stage s) {
+            List<Part> parts = new ArrayList<>(s.parts());
+            if (index >= parts.size() || !parts.get(index).ref().equals(from)) {
+                return s;
+            }
+            parts.set(index, parts.get(index).withRef(to));
+            boolean shared = parts.stream().anyMatch(p -> p.ref().equals(from));
+            List<TestPoint> tps = s.testPoints().stream()
+                    .map(t -> !shared && t.ref().equals(from) ? new TestPoint(t.net(), to, t.pin()) : t).toList();
+            return new Stage(s.name(), s.description(), parts, s.wires(), tps, s.conditions(), s.settings());
+        }
+
+        @Override
+        public EditCommand inverse() {
+            return new RenamePart(index, to, from);
+        }
+
+        @Override
+        public String label() {
+            return "Rename " + from + " to " + to;
+        }
+    }
+
+    /**
+     * Replaces the test points (add, rename or remove one).
+     *
+     * @param before the list before
+     * @param after the list after
+     * @param label words for the menu ("Name test point base")
+     */
+    record SetTestPoints(List<TestPoint> before, List<TestPoint> after, String label) implements EditCommand {
+        public SetTestPoints {
+            before = List.copyOf(before);
+            after = List.copyOf(after);
+        }
+
+        @Override
+        public Stage apply(Stage s) {
+            return s.withTestPoints(after);
+        }
+
+        @Override
+        public EditCommand inverse() {
+            return new SetTestPoints(after, before, label);
         }
     }
 
@@ -347,5 +492,30 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
             }
             return new Compound(label, inv, mergeKey);
         }
+    }
+
+    /**
+     * The words of a step made by merging {@code next} into {@code first} (a slider drag, repeated
+     * arrow keys): a value or ambient change reads from the first value to the last one; others keep
+     * the first step's words.
+     */
+    static String mergedLabel(EditCommand first, EditCommand next) {
+        EditCommand a = firstLeaf(first);
+        EditCommand b = lastLeaf(next);
+        if (a instanceof SetValue x && b instanceof SetValue y && x.ref().equals(y.ref()) && x.key().equals(y.key())) {
+            return x.words().through(y.words()).text();
+        }
+        if (a instanceof SetConditions x && b instanceof SetConditions y && x.what().equals(y.what())) {
+            return new SetConditions(x.before(), y.after(), x.what()).label();
+        }
+        return first.label();
+    }
+
+    private static EditCommand firstLeaf(EditCommand c) {
+        return c instanceof Compound k && !k.steps().isEmpty() ? firstLeaf(k.steps().get(0)) : c;
+    }
+
+    private static EditCommand lastLeaf(EditCommand c) {
+        return c instanceof Compound k && !k.steps().isEmpty() ? lastLeaf(k.steps().get(k.steps().size() - 1)) : c;
     }
 }

@@ -17,7 +17,11 @@ import org.armature.model.PartKind;
 import org.armature.model.PinSpec;
 import org.armature.model.Placement;
 import org.armature.model.Stage;
+import org.armature.model.StageSettings;
+import org.armature.model.TestPoint;
 import org.armature.model.Wire;
+import org.armature.render.Box;
+import org.armature.render.PartGeometry;
 import org.armature.render.Router;
 import org.armature.render.Selection;
 
@@ -230,14 +234,18 @@ public final class Editor {
                 steps.add(new EditCommand.RemoveWire(w, i));
             }
         }
-        List<Part> doomed = stage.parts().stream().filter(p -> refs.contains(p.ref()))
-                .sorted(Comparator.comparingInt((Part p) -> stage.parts().indexOf(p)).reversed()).toList();
+        // one part per designator: the first in drawing order (a file may hold two parts of one designator)
+        List<Part> doomed = new ArrayList<>();
+        for (String ref : refs) {
+            doomed.add(stage.require(ref));
+        }
+        doomed.sort(Comparator.comparingInt((Part p) -> stage.parts().indexOf(p)).reversed());
         Stage s = stage;
         for (EditCommand c : steps) {
             s = c.apply(s);
         }
         for (Part p : doomed) {
-            EditCommand c = EditCommand.RemovePart.of(s, p.ref());
+            EditCommand c = EditCommand.RemovePart.of(s, p);
             steps.add(c);
             s = c.apply(s);
         }
@@ -276,8 +284,16 @@ public final class Editor {
         if (old != null && old == value) {
             return;
         }
-        execute(new EditCommand.SetValue(ref, key, old == null ? OptionalDouble.empty() : OptionalDouble.of(old),
-                OptionalDouble.of(value), Optional.empty()));
+        execute(setValueCommand(p, key, value, Optional.empty()));
+    }
+
+    /** The command that sets one value of a part, with its words for the Undo menu. */
+    static EditCommand.SetValue setValueCommand(Part p, String key, double value, Optional<String> mergeKey) {
+        Double old = p.values().get(key);
+        String subject = p.ref() + " " + p.kind().param(key).map(s -> s.label().toLowerCase(java.util.Locale.ROOT)).orElse(key);
+        String unit = p.kind().param(key).map(s -> s.unitSymbol()).orElse("");
+        return new EditCommand.SetValue(p.ref(), key, old == null ? OptionalDouble.empty() : OptionalDouble.of(old),
+                OptionalDouble.of(value), mergeKey, new EditCommand.ValueWords(subject, unit, p.value(key), value));
     }
 
     /**
@@ -290,8 +306,7 @@ public final class Editor {
         if (old != null && old == value) {
             return;
         }
-        execute(new EditCommand.SetValue(ref, key, old == null ? OptionalDouble.empty() : OptionalDouble.of(old),
-                OptionalDouble.of(value), Optional.of(mergeKey)));
+        execute(setValueCommand(p, key, value, Optional.of(mergeKey)));
     }
 
     /**
@@ -310,9 +325,7 @@ public final class Editor {
             if (old != null && old == c.value()) {
                 continue;
             }
-            EditCommand step = new EditCommand.SetValue(c.ref(), c.key(),
-                    old == null ? OptionalDouble.empty() : OptionalDouble.of(old), OptionalDouble.of(c.value()),
-                    Optional.empty());
+            EditCommand step = setValueCommand(p, c.key(), c.value(), Optional.empty());
             steps.add(step);
             s = step.apply(s);
         }
@@ -343,9 +356,7 @@ public final class Editor {
         if (!spec.accepts(next)) {
             return;
         }
-        Double old = p.values().get(key);
-        execute(new EditCommand.SetValue(ref, key, old == null ? OptionalDouble.empty() : OptionalDouble.of(old),
-                OptionalDouble.of(next), Optional.of("step:" + ref + ":" + key)));
+        execute(setValueCommand(p, key, next, Optional.of("step:" + ref + ":" + key)));
     }
 
     /** Sets a choice option of a part. */
@@ -355,14 +366,16 @@ public final class Editor {
         if (value.equals(old)) {
             return;
         }
-        execute(new EditCommand.SetOption(ref, key, Optional.ofNullable(old), Optional.of(value)));
+        String subject = ref + " " + p.kind().options().stream().filter(o -> o.key().equals(key)).findFirst()
+                .map(o -> o.label().toLowerCase(java.util.Locale.ROOT)).orElse(key);
+        execute(new EditCommand.SetOption(ref, key, Optional.ofNullable(old), Optional.of(value), subject));
     }
 
     /** Sets the drive pin state. */
     public void setPinHigh(boolean high) {
         Conditions c = stage.conditions();
         if (c.pinHigh() != high) {
-            execute(new EditCommand.SetConditions(c, c.withPinHigh(high), "pin state"));
+            execute(new EditCommand.SetConditions(c, c.withPinHigh(high), EditCommand.SetConditions.PIN_STATE));
         }
     }
 
@@ -370,7 +383,111 @@ public final class Editor {
     public void setAmbient(double celsius) {
         Conditions c = stage.conditions();
         if (c.ambientCelsius() != celsius) {
-            execute(new EditCommand.SetConditions(c, c.withAmbient(celsius), "ambient"));
+            execute(new EditCommand.SetConditions(c, c.withAmbient(celsius), EditCommand.SetConditions.AMBIENT));
+        }
+    }
+
+    /** Sets the corners' ambient range (the nominal ambient is kept inside it). */
+    public void setAmbientRange(double minCelsius, double maxCelsius) {
+        Conditions c = stage.conditions();
+        if (!(minCelsius <= maxCelsius) || (c.ambientMinCelsius() == minCelsius && c.ambientMaxCelsius() == maxCelsius)) {
+            return;
+        }
+        double nominal = Math.min(maxCelsius, Math.max(minCelsius, c.ambientCelsius()));
+        execute(new EditCommand.SetConditions(c, new Conditions(c.pinHigh(), nominal, minCelsius, maxCelsius),
+                EditCommand.SetConditions.AMBIENT_RANGE));
+    }
+
+    /**
+     * Gives a part another designator (its test points follow) and keeps it selected.
+     *
+     * @throws IllegalArgumentException when the designator is blank or taken by another part
+     */
+    public void renamePart(String ref, String newRef) {
+        String to = newRef.strip();
+        Part p = stage.require(ref);
+        if (to.equals(ref)) {
+            return;
+        }
+        if (to.isEmpty() || !to.matches("[A-Za-z][A-Za-z0-9_]*")) {
+            throw new IllegalArgumentException("A designator is a letter followed by letters, digits or _ (K1, Q7, R12).");
+        }
+        if (stage.part(to).isPresent()) {
+            throw new IllegalArgumentException("The designator " + to + " is already used.");
+        }
+        boolean selected = selection.refs().contains(ref);
+        execute(new EditCommand.RenamePart(stage.parts().indexOf(p), ref, to));
+        if (selected) {
+            Set<String> refs = new LinkedHashSet<>(selection.refs());
+            refs.add(to);
+            select(new Selection(refs, selection.wires()));
+        }
+    }
+
+    /** Renames the stage; nothing for an unchanged or blank name. */
+    public void rename(String name) {
+        String n = name.strip();
+        if (n.isEmpty() || n.equals(stage.name())) {
+            return;
+        }
+        EditCommand.Header h = EditCommand.Header.of(stage);
+        execute(new EditCommand.SetHeader(h, new EditCommand.Header(n, h.description(), h.settings()),
+                "Rename stage to " + n));
+    }
+
+    /** Changes the stage's description. */
+    public void describe(String description) {
+        String d = description.strip();
+        if (d.equals(stage.description())) {
+            return;
+        }
+        EditCommand.Header h = EditCommand.Header.of(stage);
+        execute(new EditCommand.SetHeader(h, new EditCommand.Header(h.name(), d, h.settings()), "Change stage description"));
+    }
+
+    /** Changes the stage's check settings. */
+    public void setSettings(StageSettings settings, String label) {
+        if (settings.equals(stage.settings())) {
+            return;
+        }
+        EditCommand.Header h = EditCommand.Header.of(stage);
+        execute(new EditCommand.SetHeader(h, new EditCommand.Header(h.name(), h.description(), settings), label));
+    }
+
+    /**
+     * Names the net at a part's pin: adds a test point there, or renames the one already anchored
+     * to that pin. A net name used by another test point moves here.
+     *
+     * @throws IllegalArgumentException when the name is not a net name (the message says what is expected)
+     */
+    public void nameTestPoint(String ref, String pin, String net) {
+        stage.require(ref);
+        TestPoint tp = new TestPoint(net, ref, pin);
+        List<TestPoint> after = new ArrayList<>();
+        Optional<TestPoint> old = Optional.empty();
+        for (TestPoint t : stage.testPoints()) {
+            if (t.ref().equals(ref) && t.pin().equals(pin)) {
+                old = Optional.of(t);
+                after.add(tp);
+            } else if (!t.net().equals(net)) {
+                after.add(t);
+            }
+        }
+        if (old.isEmpty()) {
+            after.add(tp);
+        }
+        if (after.equals(stage.testPoints())) {
+            return;
+        }
+        String label = old.map(t -> "Rename test point " + t.net() + " to " + net).orElse("Add test point " + net);
+        execute(new EditCommand.SetTestPoints(stage.testPoints(), after, label));
+    }
+
+    /** Removes the test point of a net name; nothing when there is none. */
+    public void removeTestPoint(String net) {
+        List<TestPoint> after = stage.testPoints().stream().filter(t -> !t.net().equals(net)).toList();
+        if (after.size() != stage.testPoints().size()) {
+            execute(new EditCommand.SetTestPoints(stage.testPoints(), after, "Remove test point " + net));
         }
     }
 
@@ -393,17 +510,23 @@ public final class Editor {
         return new Clip(parts, wires);
     }
 
-    /** Pastes a clip offset by {@value #PASTE_OFFSET} units with fresh designators, as one step, and selects it. */
+    /**
+     * Pastes a clip with fresh designators, as one step, and selects it. The copy goes
+     * {@value #PASTE_OFFSET} units right and down of the original, or further along that diagonal
+     * until none of its pins or wire points touches a pin or wire of the stage and no body overlaps
+     * another: a paste never joins a net by landing on it.
+     */
     public void paste(Clip clip) {
         if (clip.parts().isEmpty() && clip.wires().isEmpty()) {
             return;
         }
+        int offset = freePasteOffset(clip);
         List<EditCommand> steps = new ArrayList<>();
         Stage s = stage;
         Set<String> refs = new LinkedHashSet<>();
         for (Part p : clip.parts()) {
             String ref = s.nextRef(p.kind().designatorPrefix());
-            Part copy = p.withRef(ref).withPlacement(p.placement().movedTo(p.placement().origin().plus(PASTE_OFFSET, PASTE_OFFSET)));
+            Part copy = p.withRef(ref).withPlacement(p.placement().movedTo(p.placement().origin().plus(offset, offset)));
             EditCommand c = new EditCommand.AddPart(copy, s.parts().size(), List.of());
             steps.add(c);
             s = c.apply(s);
@@ -411,14 +534,77 @@ public final class Editor {
         }
         Set<Integer> wires = new LinkedHashSet<>();
         for (Wire w : clip.wires()) {
-            EditCommand c = new EditCommand.AddWire(new Wire(w.from().plus(PASTE_OFFSET, PASTE_OFFSET),
-                    w.to().plus(PASTE_OFFSET, PASTE_OFFSET)), s.wires().size());
+            EditCommand c = new EditCommand.AddWire(new Wire(w.from().plus(offset, offset),
+                    w.to().plus(offset, offset)), s.wires().size());
             wires.add(s.wires().size());
             steps.add(c);
             s = c.apply(s);
         }
         execute(EditCommand.Compound.of("Paste", steps));
         selection = new Selection(refs, wires);
+    }
+
+    /** Most diagonal steps tried before a paste settles below and right of everything. */
+    private static final int PASTE_TRIES = 64;
+
+    /** The smallest diagonal offset (a multiple of {@value #PASTE_OFFSET}) at which a clip touches nothing. */
+    private int freePasteOffset(Clip clip) {
+        Set<GridPoint> taken = new HashSet<>();
+        List<Box> bodies = new ArrayList<>();
+        for (Part p : stage.parts()) {
+            for (PinSpec pin : p.kind().pins()) {
+                taken.add(p.pinPoint(pin.name()));
+            }
+            bodies.addAll(PartGeometry.bodies(p));
+        }
+        for (Wire w : stage.wires()) {
+            taken.addAll(points(w));
+        }
+        for (int k = 1; k <= PASTE_TRIES; k++) {
+            int d = k * PASTE_OFFSET;
+            if (fits(clip, d, taken, bodies)) {
+                return d;
+            }
+        }
+        return (PASTE_TRIES + 1) * PASTE_OFFSET;
+    }
+
+    private static boolean fits(Clip clip, int d, Set<GridPoint> taken, List<Box> bodies) {
+        for (Part p : clip.parts()) {
+            Part moved = p.withPlacement(p.placement().movedTo(p.placement().origin().plus(d, d)));
+            for (PinSpec pin : moved.kind().pins()) {
+                if (taken.contains(moved.pinPoint(pin.name()))) {
+                    return false;
+                }
+            }
+            for (Box b : PartGeometry.bodies(moved)) {
+                if (bodies.stream().anyMatch(b::intersects)) {
+                    return false;
+                }
+            }
+        }
+        for (Wire w : clip.wires()) {
+            for (GridPoint g : points(new Wire(w.from().plus(d, d), w.to().plus(d, d)))) {
+                if (taken.contains(g)) {
+                    return false;
+                }
+            }
+        }
+        return true;
+    }
+
+    /** The grid points a straight wire passes through, ends included. */
+    private static List<GridPoint> points(Wire w) {
+        List<GridPoint> out = new ArrayList<>();
+        int dx = Integer.signum(w.to().gridX() - w.from().gridX());
+        int dy = Integer.signum(w.to().gridY() - w.from().gridY());
+        GridPoint g = w.from();
+        out.add(g);
+        while (!g.equals(w.to()) && (dx != 0 || dy != 0)) {
+            g = g.plus(dx, dy);
+            out.add(g);
+        }
+        return out;
     }
 
     /** Copied parts and wires. */

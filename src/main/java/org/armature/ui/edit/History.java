@@ -33,8 +33,8 @@ public final class History {
         if (top != null && top.serial != savedSerial && command.mergeKey().isPresent()
                 && command.mergeKey().equals(top.command.mergeKey())) {
             undo.pop();
-            EditCommand merged = new EditCommand.Compound(top.command.label(), List.of(top.command, command),
-                    command.mergeKey());
+            EditCommand merged = new EditCommand.Compound(EditCommand.mergedLabel(top.command, command),
+                    List.of(top.command, command), command.mergeKey());
             undo.push(new Step(nextSerial++, merged));
         } else {
             undo.push(new Step(nextSerial++, command));
