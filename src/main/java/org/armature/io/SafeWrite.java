@@ -150,6 +150,7 @@ public final class SafeWrite {
                 && name.length() == TEMP_PREFIX.length() + TEMP_RANDOM_CHARS + TEMP_SUFFIX.length();
     }
 
+    @SuppressWarnings("try") // the lock is held for the duration of the write, never read
     void run(Path requested, Body body, boolean backup) {
         Path target = resolve(requested);
         Path dir = target.getParent();

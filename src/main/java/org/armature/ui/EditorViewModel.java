@@ -260,12 +260,11 @@ public final class EditorViewModel {
      * @param note what {@link #messageProperty()} says
      */
     public void restore(StageDocument doc, Optional<Path> path, String note) {
-        document = doc;
-        editor.load(doc.first());
-        editor.history().markUnsaved();
+        load(doc);
+        editors.forEach(e -> e.history().markUnsaved());
         file.set(path);
         message.set(note);
-        refresh();
+        publishDocument();
     }
 
     /** Saves to the present file; false when there is none yet (use {@link #saveAs}) or saving failed. */
