@@ -420,7 +420,7 @@ public record StageRecognition(Connectivity connectivity, Optional<StageRoles> r
             Suppressors s = new Suppressors();
             List<SuppressorKind> mechanisms = new ArrayList<>();
             // chains across the coil, oriented from the on-state high end to the low end
-            for (List<StageRoles.Oriented> chain : chainsBetween(r.coilHigh, r.coilLow, Set.of(k.ref(), r.sw.ref()))) {
+            for (List<StageRoles.Oriented> chain : chainsBetween(r.coilHigh, r.coilLow, Set.copyOf(List.of(k.ref(), r.sw.ref())))) {
                 s.chains.add(chain);
                 chain.forEach(o -> s.refs.add(o.ref()));
                 mechanisms.add(chainKind(chain));
@@ -497,7 +497,7 @@ public record StageRecognition(Connectivity connectivity, Optional<StageRoles> r
                 return;
             }
             // one part between the common pin and the coil supply end (a zener for faster release)
-            for (List<StageRoles.Oriented> chain : chainsBetween(r.coilHigh, com, Set.of(k.ref(), r.sw.ref()))) {
+            for (List<StageRoles.Oriented> chain : chainsBetween(r.coilHigh, com, Set.copyOf(List.of(k.ref(), r.sw.ref())))) {
                 if (chain.size() != 1) {
                     continue;
                 }
