@@ -5,8 +5,9 @@
  * <p>Entry points, each returning immutable results and never throwing for bad user data:
  * <ul>
  * <li>{@link org.armature.analysis.TopologyCheck#check} / {@link org.armature.analysis.TopologyCheck#analyse}:
- *     which of the four driver stages was drawn ({@link org.armature.model.StageRoles}) and the
- *     problems with stable {@code topology.*} keys, from connectivity alone;</li>
+ *     which of the four driver stages was drawn ({@link org.armature.model.StageRoles}, found by
+ *     {@link org.armature.model.StageRecognition} from connectivity alone) and the problems with
+ *     stable {@code topology.*} keys, including those that need the parts' values;</li>
  * <li>{@link org.armature.analysis.BaseNetworkSizing#size}: the drive network values and the
  *     calculation as {@link org.armature.analysis.SizingStep}s, with the rules of
  *     {@link org.armature.analysis.SizingOptions};</li>

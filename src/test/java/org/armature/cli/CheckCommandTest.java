@@ -53,6 +53,39 @@ class CheckCommandTest {
     }
 
     @Test
+    @DisplayName("check on the same stage with other designators, moved, turned and without test points: the same"
+            + " verdicts and values, with the parts under their own designators")
+    void checkAnyDesignators() throws Exception {
+        org.armature.model.Stage template = Templates.build(StageTemplate.LOW_SIDE_NPN);
+        org.armature.model.StageDisguise x = org.armature.model.StageDisguise.of(template, 17, 5, -7, false, 2, false);
+        Path other = dir.resolve("drawn.stage.json");
+        StageFiles.save(StageDocument.of(template), file);
+        StageFiles.save(StageDocument.of(x.stage()), other);
+        JsonNode a = JSON.readTree(CliRun.of("check", file.toString(), "--json", "--no-transient").out());
+        JsonNode b = JSON.readTree(CliRun.of("check", other.toString(), "--json", "--no-transient").out());
+        assertEquals(a.get("checks").size(), b.get("checks").size());
+        assertTrue(a.get("checks").size() >= 5, a.toString());
+        for (int i = 0; i < a.get("checks").size(); i++) {
+            JsonNode ca = a.get("checks").get(i);
+            JsonNode cb = b.get("checks").get(i);
+            assertEquals(ca.get("id").asText(), cb.get("id").asText());
+            assertEquals(ca.get("status").asText(), cb.get("status").asText(), ca.get("id").asText());
+            if (ca.get("value").isNumber()) {
+                // the same circuit numbered differently: equal to 1e-6 relative (derived)
+                assertEquals(ca.get("value").asDouble(), cb.get("value").asDouble(),
+                        1e-6 * Math.max(1e-9, Math.abs(ca.get("value").asDouble())), ca.get("id").asText());
+            }
+            for (JsonNode ref : ca.get("refs")) {
+                boolean found = false;
+                for (JsonNode r2 : cb.get("refs")) {
+                    found |= r2.asText().equals(x.ref(ref.asText()));
+                }
+                assertTrue(found, ca.get("id").asText() + " names " + x.ref(ref.asText()));
+            }
+        }
+    }
+
+    @Test
     @DisplayName("check: --supply-tolerance and the ambient range reach the corners")
     void overrides() throws Exception {
         CliRun r = CliRun.of("check", file.toString(), "--json", "--no-transient", "--supply-tolerance", "5",
