@@ -91,9 +91,10 @@ public final class PartSheet extends VBox {
     private void rebuild() {
         var refs = vm.selectionProperty().get().refs();
         Optional<Part> part = refs.size() == 1 ? vm.stage().part(refs.iterator().next()) : Optional.empty();
-        if (part.equals(lastPart) && refs.size() == lastSelectionSize && !(refs.isEmpty() && stageSheetShown)) {
+        if (part.isEmpty() && lastPart.isEmpty() && refs.size() == lastSelectionSize && !refs.isEmpty()) {
             return;
         }
+        // the same part: values, options and its test points brought up to date in place
         if (part.isPresent() && lastPart.isPresent() && refs.size() == lastSelectionSize
                 && part.get().ref().equals(lastPart.get().ref()) && part.get().kind() == lastPart.get().kind()) {
             Part before = lastPart.get();

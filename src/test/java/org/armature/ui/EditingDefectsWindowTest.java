@@ -157,4 +157,18 @@ class EditingDefectsWindowTest {
         robot.interact(vm::undo);
         assertEquals(Templates.defaultStage(), vm.stage());
     }
+
+    @Test
+    @DisplayName("the part sheet's test point field follows an undo of a test point change")
+    void testPointFieldFollowsUndo(FxRobot robot) {
+        robot.interact(() -> vm.select(Selection.ofPart("Q1")));
+        TextField e = robot.lookup("#testpoint-e").queryAs(TextField.class);
+        robot.interact(() -> {
+            e.setText("emitter");
+            e.fireEvent(new ActionEvent());
+        });
+        assertTrue(vm.stage().testPoints().contains(new org.armature.model.TestPoint("emitter", "Q1", "e")));
+        robot.interact(vm::undo);
+        assertEquals("", robot.lookup("#testpoint-e").queryAs(TextField.class).getText());
+    }
 }
