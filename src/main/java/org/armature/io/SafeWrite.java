@@ -241,7 +241,7 @@ public final class SafeWrite {
                     removeIfUnlocked(p);
                 }
             }
-        } catch (IOException | RuntimeException e) {
+        } catch (IOException | java.nio.file.DirectoryIteratorException | SecurityException e) {
             // cleaning up is a courtesy: the write itself does not depend on it
         }
     }

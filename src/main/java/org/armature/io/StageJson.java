@@ -154,18 +154,81 @@ public final class StageJson {
     }
 
     private static StageFileException malformed(JsonProcessingException e) {
-        JsonLocation at = e.getLocation();
-        String what = e.getOriginalMessage();
-        int newline = what.indexOf('\n');
-        if (newline >= 0) {
-            what = what.substring(0, newline);
-        }
-        what = excerpt(what.strip());
-        if (what.endsWith(".")) {
-            what = what.substring(0, what.length() - 1);
-        }
-        String where = where(at);
+        String what = e.getOriginalMessage() == null ? "" : e.getOriginalMessage();
         return new StageFileException(StageFileException.MALFORMED_JSON,
-                "The file is not valid JSON" + where + ": " + what + ".", e);
+                "The file is not valid JSON" + where(e.getLocation()) + ": " + plainWords(what) + ".", e);
+    }
+
+    private static final java.util.regex.Pattern UNEXPECTED_CHAR =
+            java.util.regex.Pattern.compile("Unexpected character \\('(.*?)' \\(code \\d+[^)]*\\)\\)(?::\\s*(.*))?",
+                    java.util.regex.Pattern.DOTALL);
+    private static final java.util.regex.Pattern QUOTED = java.util.regex.Pattern.compile("'(.*?)'");
+
+    /**
+     * The JSON reader's complaint in our own words: what was found and what was expected, with no
+     * names of the library's classes or settings.
+     */
+    static String plainWords(String message) {
+        String m = message.strip();
+        if (m.startsWith("Unexpected end-of-input")) {
+            return m.contains("closing quote") ? "the file ends inside a text (a closing \" is missing)"
+                    : "the file ends too early (a bracket, brace or quote is not closed)";
+        }
+        java.util.regex.Matcher c = UNEXPECTED_CHAR.matcher(m);
+        if (c.lookingAt()) {
+            String found = c.group(1);
+            String expecting = c.group(2) == null ? "" : c.group(2);
+            String expected;
+            if (expecting.contains("colon")) {
+                expected = "a colon after the field name";
+            } else if (expecting.contains("Object entries")) {
+                expected = "a comma or a closing }";
+            } else if (expecting.contains("Array entries")) {
+                expected = "a comma or a closing ]";
+            } else if (expecting.contains("double-quote to start field name")) {
+                expected = "a field name in double quotes";
+            } else {
+                expected = "a value: a number, text in double quotes, true, false, null, a list or an object";
+            }
+            return "found " + printable(found) + " where " + expected + " belongs";
+        }
+        if (m.startsWith("Unrecognized token") || m.startsWith("Non-standard token")) {
+            java.util.regex.Matcher q = QUOTED.matcher(m);
+            String word = q.find() ? q.group(1) : "";
+            String hint = word.matches("[+-]?(NaN|Infinity|INF)") ? " (write it as the text \"" + word.replace("+", "")
+                    + "\")" : "";
+            return "found the word \"" + excerpt(word) + "\" where a number, text in double quotes, true, false, null, a list "
+                    + "or an object belongs" + hint;
+        }
+        if (m.startsWith("Duplicate field")) {
+            java.util.regex.Matcher q = QUOTED.matcher(m);
+            return "the field \"" + (q.find() ? excerpt(q.group(1)) : "") + "\" appears twice in one object";
+        }
+        if (m.startsWith("Trailing token")) {
+            return "there is more after the top-level object";
+        }
+        if (m.contains("Leading zeroes")) {
+            return "a number starts with a zero (write 1, not 01)";
+        }
+        if (m.startsWith("Invalid numeric value") || m.startsWith("Unexpected character ('.'")) {
+            return "a number is not written as JSON writes numbers (digits, a point, an exponent)";
+        }
+        if (m.startsWith("Illegal unquoted character") || m.contains("CTRL-CHAR")) {
+            return "a control character (a tab or line break) stands inside a text; write it as an escape such as \\n";
+        }
+        if (m.startsWith("Unrecognized character escape") || m.contains("escape")) {
+            return "a backslash in a text starts no JSON escape (use \\\\ for a backslash)";
+        }
+        if (m.startsWith("Unexpected close marker")) {
+            return "a closing bracket or brace does not match the one opened";
+        }
+        return "the text is not well-formed JSON here";
+    }
+
+    private static String printable(String c) {
+        if (c.length() == 1 && Character.isISOControl(c.charAt(0))) {
+            return String.format(java.util.Locale.ROOT, "the control character U+%04X", (int) c.charAt(0));
+        }
+        return "'" + excerpt(c) + "'";
     }
 }

@@ -153,4 +153,24 @@ class DocumentInputTest {
             assertTrue(e.getMessage().length() < 700, e.key() + ": " + e.getMessage().length() + " characters");
         }
     }
+
+    @org.junit.jupiter.params.ParameterizedTest(name = "{0}")
+    @org.junit.jupiter.params.provider.CsvSource(delimiter = '|', textBlock = """
+            {"a": 1,             | line 1, column 9: the file ends too early
+            {"a" 1}              | found '1' where a colon after the field name belongs
+            {"a": tru}           | found the word "tru"
+            {"a": 1}{            | there is more after the top-level object
+            {"a": 1, "a": 2}     | the field "a" appears twice in one object
+            {"a": 01}            | a number starts with a zero
+            {"a": NaN}           | write it as the text "NaN"
+            {'a': 1}             | a field name in double quotes
+            {"a": [1}            | does not match the one opened
+            """)
+    @DisplayName("reproduction: malformed JSON is described in our words with its place, no library names or settings")
+    void malformedInOurWords(String text, String expected) {
+        StageFileException e = refused(text);
+        assertTrue(e.getMessage().contains(expected), e.getMessage());
+        assertFalse(e.getMessage().contains("`") || e.getMessage().contains("(code ") || e.getMessage().contains("Feature")
+                || e.getMessage().contains("com.fasterxml"), e.getMessage());
+    }
 }
