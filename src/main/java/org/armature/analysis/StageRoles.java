@@ -28,6 +28,7 @@ import org.armature.model.HighSideDrive;
  * @param coilHighNet the coil terminal's net at the higher potential when the stage is on
  * @param coilLowNet the other coil terminal's net
  * @param controlNet the input transistor's base or gate net
+ * @param contactLoadRefs the loads found on the contact side, in the order traced from the contacts
  */
 public record StageRoles(DriverTopology topology, Optional<HighSideDrive> highSideDrive, String relayRef,
                          String switchRef, Optional<String> levelShiftRef, Optional<String> drivePinRef,
@@ -35,7 +36,7 @@ public record StageRoles(DriverTopology topology, Optional<HighSideDrive> highSi
                          Optional<String> switchPullUpRef, Optional<String> switchBaseResistorRef,
                          Optional<String> coilSupplyRef, List<String> suppressorRefs,
                          List<String> contactSupplyRefs, String coilHighNet, String coilLowNet,
-                         String controlNet) {
+                         String controlNet, List<String> contactLoadRefs) {
 
     public StageRoles {
         if (topology == null) {
@@ -43,6 +44,7 @@ public record StageRoles(DriverTopology topology, Optional<HighSideDrive> highSi
         }
         suppressorRefs = List.copyOf(suppressorRefs);
         contactSupplyRefs = List.copyOf(contactSupplyRefs);
+        contactLoadRefs = List.copyOf(contactLoadRefs);
     }
 
     /** The transistor the logic pin drives (switch, or level-shift NPN). */

@@ -138,11 +138,12 @@ public final class TopologyCheck {
             double supplyMax = coilSupply.map(v -> supplyMaxVolts(v)).orElse(Double.NaN);
             Drive drive = drive(r, coilSupply, supplyMax);
             List<String> suppressors = suppressors(k, r, supplyMax);
-            List<String> contactSupplies = contactSide(k);
+            List<String> contactLoads = new ArrayList<>();
+            List<String> contactSupplies = contactSide(k, contactLoads);
             StageRoles roles = new StageRoles(r.topology, r.highSide, k.ref(), r.sw.ref(), drive.levelShift,
                     drive.pin, drive.inputResistor, drive.inputPull, drive.switchPullUp, drive.switchBaseResistor,
                     coilSupply.map(Part::ref), suppressors, contactSupplies, r.coilHigh, r.coilLow,
-                    drive.controlNet);
+                    drive.controlNet, contactLoads);
             issues.add(0, new TopologyIssue(new Finding(Severity.INFO, "topology.recognised", r.sw.ref(), "",
                     describe(roles)), List.of(r.sw.ref(), k.ref())));
             return report(Optional.of(roles));
@@ -581,7 +582,8 @@ public final class TopologyCheck {
 
         // ------------------------------------------------------------------ contact side
 
-        private List<String> contactSide(Part k) {
+        /** The supplies of the contact side; the loads found on the way are added to {@code loadsOut}. */
+        private List<String> contactSide(Part k, List<String> loadsOut) {
             List<String> starts = List.of(c.net(k.ref(), "com"), c.net(k.ref(), "no"), c.net(k.ref(), "nc"));
             boolean wired = starts.stream().anyMatch(n -> partsOn(n).size() > 1 || n.equals(Connectivity.GROUND));
             if (!wired) {
@@ -619,6 +621,7 @@ public final class TopologyCheck {
                     }
                 }
             }
+            loadsOut.addAll(loads);
             if (supplies.isEmpty()) {
                 List<String> refs = new ArrayList<>(List.of(k.ref()));
                 refs.addAll(loads);
