@@ -86,7 +86,8 @@ public final class StageChecks {
     /** The ids, in report order. */
     public static final List<String> IDS = List.of("relay.operates", "relay.releases", "switch.saturated",
             "rating.switch-current", "rating.pin-current", "rating.package-current", "rating.switch-voltage",
-            "rating.suppressor-current", "thermal.switch-junction", "relay.release-time");
+            "rating.suppressor-current", "thermal.switch-junction", "relay.release-time", "coil.voltage",
+            "coil.temperature", "contact.current", "contact.voltage", "contact.inrush", "contact.break");
 
     private static final String TRANSIENT = "transient engine: turn-off at the largest-current corner";
 
@@ -250,6 +251,14 @@ public final class StageChecks {
                     List.of(roles.switchRef())));
             o.releaseTimeRequirementSeconds().ifPresent(req -> checks.add(edge.isPresent()
                     ? transientReleaseTime(edge.get(), req) : releaseTime(sup, i0, req)));
+            checks.add(worst("coil.voltage", corners, this::coilVoltage, Unit.VOLT,
+                    "coil voltage (pin high) at every corner vs the relay's maximum allowable coil voltage, a percentage"
+                            + " of rated (CT-3); DC engine", List.of(roles.relayRef())));
+            checks.add(worst("coil.temperature", corners, this::coilTemperature, Unit.CELSIUS,
+                    "coil temperature with self-heating, Ta + Rth·V·I solved with the copper law (CT-2), vs the"
+                            + " insulation's thermal class (IEC 60085, CT-1); DC engine over every corner",
+                    List.of(roles.relayRef())));
+            checks.addAll(ContactChecks.run(stage, roles, o, findings));
             Optional<YieldResult> yield = Optional.empty();
             if (o.monteCarloSamples() > 0) {
                 yield = Optional.of(monteCarlo(corners));
@@ -345,6 +354,41 @@ public final class StageChecks {
                             + (st == CheckStatus.FAIL ? ", so the relay may not release."
                             : st == CheckStatus.WARN ? ", above the " + Quantities.pct1(wanted) + " RC-18 allows."
                             : "; RC-18 allows up to " + Quantities.pct1(wanted) + ".")));
+        }
+
+        private Optional<Measure> coilVoltage(Solved s) {
+            if (s.on().isEmpty()) {
+                return Optional.empty();
+            }
+            Part k = s.relay();
+            double v = Math.abs(s.on().get().coilVoltage());
+            double pctMax = k.value("maxCoilVoltagePercent");
+            double limit = k.value("ratedVolts") * pctMax / 100;
+            CheckStatus st = v <= limit ? CheckStatus.PASS : CheckStatus.FAIL;
+            return Optional.of(new Measure(v, limit, st, 1 - v / limit,
+                    () -> "Coil voltage " + volts(v) + " against the maximum allowable " + volts(limit) + " ("
+                            + Quantities.pct1(pctMax / 100) + " of the " + volts(k.value("ratedVolts")) + " rated voltage, at "
+                            + celsius(k.value("referenceTemperatureCelsius")) + "; the datasheet's maximum falls with"
+                            + " ambient)."));
+        }
+
+        private Optional<Measure> coilTemperature(Solved s) {
+            if (s.on().isEmpty()) {
+                return Optional.empty();
+            }
+            Part k = s.relay();
+            Readout op = s.on().get();
+            double t = op.coilTemperature();
+            double ta = s.variant().stage().conditions().ambientCelsius();
+            double p = Math.abs(op.coilVoltage() * op.coilCurrent());
+            double limit = k.value("insulationClassCelsius");
+            CheckStatus st = t <= limit ? CheckStatus.PASS : CheckStatus.FAIL;
+            return Optional.of(new Measure(t, limit, st, limit - t,
+                    () -> "Coil at " + celsius(t) + " (ambient " + celsius(ta) + " + "
+                            + EngineeringNotation.format(p, Unit.WATT) + " × "
+                            + EngineeringNotation.format(k.value("coilThermalResistanceKelvinPerWatt"), Unit.KELVIN_PER_WATT)
+                            + ", mean winding temperature) against the " + celsius(limit) + " limit of its insulation"
+                            + InsulationClass.words(limit) + "."));
         }
 
         private Optional<Measure> saturated(Solved s) {

@@ -206,9 +206,9 @@ public enum PartKind {
                     p("minArcAmps", "Minimum arc current", "A", 0.4, 0, 100,
                             "Current below which no arc forms at the parting contacts (typical 0.4 A for silver-alloy"
                                     + " contacts, from memory, CT-9)."),
-                    p("contactOpenSeconds", "Contact opening time", "s", 1e-3, 1e-6, 0.1,
-                            "Time for the contacts to travel apart at break; the gap's voltage withstand builds up"
-                                    + " over it (typical 1 ms, from memory).")),
+                    p("contactWithstandVolts", "Open-contact withstand", "V", 1000, 10, 10_000,
+                            "Voltage the open contact gap holds off (datasheets: dielectric strength between open contacts;"
+                                    + " typical 1,000 V, from memory); a break that rings above it arcs over.")),
             List.of()),
 
     /**

@@ -13,27 +13,8 @@ class ContactBreakTest {
     /** A 24 V DC solenoid: 48 Ω, 1.15 H (L/R 24 ms), 0.5 A. */
     private static final Setup SOLENOID = new Setup(24, 48, 1.152, ContactBreak.STRAY_FARADS, Protection.NONE, 0, 0, 0);
 
-    /**
-     * Peak contact voltage of the series R–L–C loop after parting (derived, CHECKS CT-10): v_C(t) = V +
-     * e^(−αt)·(A·cos ωd·t + B·sin ωd·t), A = −V, B = (I0/C − α·V)/ωd, α = (R + Rs)/(2L), contact voltage
-     * v_C + Rs·C·dv_C/dt; maximum found on a fine grid of the closed form.
-     */
     static double closedFormPeak(double v, double r, double l, double rs, double c) {
-        double i0 = v / r;
-        double alpha = (r + rs) / (2 * l);
-        double wd = Math.sqrt(1 / (l * c) - alpha * alpha);
-        double a = -v;
-        double b = (i0 / c - alpha * v) / wd;
-        double best = 0;
-        double period = 2 * Math.PI / wd;
-        for (int k = 0; k <= 200_000; k++) {
-            double t = period * k / 200_000.0;
-            double e = Math.exp(-alpha * t);
-            double vc = v + e * (a * Math.cos(wd * t) + b * Math.sin(wd * t));
-            double dvc = e * ((-alpha * a + wd * b) * Math.cos(wd * t) + (-alpha * b - wd * a) * Math.sin(wd * t));
-            best = Math.max(best, vc + rs * c * dvc);
-        }
-        return best;
+        return ContactBreakClosedForm.peak(v, r, l, rs, c);
     }
 
     @Test
