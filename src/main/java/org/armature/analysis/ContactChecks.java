@@ -278,7 +278,7 @@ final class ContactChecks {
         try {
             ContactBreak.Result r = ContactBreak.run(setup);
             boolean arc = r.initialAmps() >= minArcA && r.peakContactVolts() >= minArcV;
-            String why = "When the contacts part on " + s.loadWords() + " (" + ohms(setup.loadOhms()) + ", "
+            String why0 = "When the contacts part on " + s.loadWords() + " (" + ohms(setup.loadOhms()) + ", "
                     + EngineeringNotation.format(setup.loadHenries(), Unit.HENRY) + ", " + amps(r.initialAmps())
                     + ", stored ½·L·I² = " + EngineeringNotation.format(r.storedJoules(), Unit.JOULE) + ") with "
                     + s.protection().words() + (s.protectionRefs().isEmpty() ? "" : " (" + String.join(", ", s.protectionRefs()) + ")")
@@ -290,7 +290,20 @@ final class ContactChecks {
                             ? " and the stored energy goes into it." : "; the protection takes "
                             + EngineeringNotation.format(r.protectionJoules(), Unit.JOULE) + ".")
                     : "The arc conditions (" + volts(minArcV) + ", " + amps(minArcA) + ") are not met: no arc forms.");
-            return Optional.of(new CheckResult("contact.break", r.peakContactVolts() <= withstand ? CheckStatus.PASS
+            String why = why0;
+            boolean pass = r.peakContactVolts() <= withstand;
+            if (!pass) {
+                List<SuppressorAdvisor.ContactCandidate> advice = SuppressorAdvisor.contactProtection(s);
+                if (!advice.isEmpty() && advice.get(0).withinWithstand()) {
+                    SuppressorAdvisor.ContactCandidate best = advice.get(0);
+                    why += " Proposed: " + best.description() + " (" + best.rule() + "); re-run, the contacts then peak at "
+                            + volts(best.peakContactVolts()) + ".";
+                    for (SuppressorAdvisor.ContactCandidate other : advice.subList(1, advice.size())) {
+                        why += " " + capital(other.description()) + ": " + volts(other.peakContactVolts()) + ".";
+                    }
+                }
+            }
+            return Optional.of(new CheckResult("contact.break", pass ? CheckStatus.PASS
                     : CheckStatus.FAIL, r.peakContactVolts(), withstand, Unit.VOLT, corner, cornerText,
                     "transient engine: the contacts part on the inductive load at the highest rail", why, refs));
         } catch (TransientFailureException | SolverException e) {
@@ -298,6 +311,10 @@ final class ContactChecks {
                     "The transient engine could not run the contact break (" + e.getMessage() + "); contact.break was not judged."));
             return Optional.empty();
         }
+    }
+
+    private static String capital(String words) {
+        return words.isEmpty() ? words : Character.toUpperCase(words.charAt(0)) + words.substring(1);
     }
 
     /** The break of this side's load at a rail of {@code volts}, with the protection drawn. */

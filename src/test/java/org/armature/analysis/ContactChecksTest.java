@@ -193,6 +193,27 @@ class ContactChecksTest {
         assertTrue(v.value() > 95 && v.value() < 110, v::explanation);
     }
 
+    @Test
+    @DisplayName("contact protection advice: the RC rule of thumb (0.5 Ω/V → 12 Ω E12, 1 µF/A → 680 nF E6; CT-7, common practice) re-run to its closed form")
+    void contactProtectionAdvice() {
+        Stage s = solenoid(ContactProtection.NONE, 0, 0, 0);
+        List<SuppressorAdvisor.ContactCandidate> advice = SuppressorAdvisor.contactProtection(s);
+        assertEquals(3, advice.size());
+        SuppressorAdvisor.ContactCandidate rc = advice.stream()
+                .filter(c -> c.protection() == ContactBreak.Protection.RC).findFirst().orElseThrow();
+        assertEquals(12, rc.ohms(), 1e-9);        // 0.5 Ω × 26.4 V = 13.2 Ω → nearest E12
+        assertEquals(680e-9, rc.farads(), 1e-15); // 1 µF × 0.55 A → next E6 up
+        double expected = org.armature.solver.timedomain.ContactBreakClosedForm.peak(26.4, 48, 1.152, 12,
+                680e-9 + ContactBreak.STRAY_FARADS);
+        assertEquals(expected, rc.peakContactVolts(), 0.05 * expected);
+        assertTrue(rc.withinWithstand());
+        // on DC the diode across the load holds the contacts lowest and comes first
+        assertEquals(ContactBreak.Protection.DIODE, advice.get(0).protection());
+        assertTrue(check(s, "contact.break").explanation().contains("Proposed: diode across the load"));
+        // a lamp is not inductive: nothing to advise
+        assertTrue(SuppressorAdvisor.contactProtection(Templates.defaultStage()).isEmpty());
+    }
+
     @ParameterizedTest
     @EnumSource(StageTemplate.class)
     @DisplayName("no false alarm: every template with its default load passes the new checks")
