@@ -105,14 +105,42 @@ public final class SuppressorAdvisor {
         return contactProtection(found.get());
     }
 
-    static List<ContactCandidate> contactProtection(ContactChecks.Side side) {
+    /**
+     * The sizes the rules give for a contact side: the RC by the rule of thumb and the varistor's
+     * clamping voltage (see the class comment).
+     *
+     * @param rcOhms the RC's resistance, ohms (E12)
+     * @param rcFarads the RC's capacitance, farads (E6)
+     * @param varistorVolts the varistor's clamping voltage, volts (E24)
+     */
+    public record ContactSizing(double rcOhms, double rcFarads, double varistorVolts) {
+    }
+
+    /**
+     * The contact protection sizes for a stage's contact side, whatever its load kind.
+     *
+     * @return the sizes; empty when the stage has no recognised contact rail and load
+     */
+    public static Optional<ContactSizing> contactSizing(Stage stage) {
+        return TopologyCheck.recognise(stage).flatMap(r -> ContactChecks.side(stage, r)).map(SuppressorAdvisor::sizing);
+    }
+
+    private static ContactSizing sizing(ContactChecks.Side side) {
         double v = side.railMaxVolts();
         double i = side.physics().steadyAmps(v);
-        double withstand = side.relay().value("contactWithstandVolts");
-        double rs = ESeries.E12.nearest(Math.max(1, RC_OHMS_PER_CONTACT_VOLT * v));
-        double c = ESeries.E6.roundUp(Math.max(1e-9, RC_FARADS_PER_CONTACT_AMP * i));
         double crest = v * (side.ac() ? Math.sqrt(2) : 1);
-        double vc = ESeries.E24.roundUp(TVS_HEADROOM * crest);
+        return new ContactSizing(ESeries.E12.nearest(Math.max(1, RC_OHMS_PER_CONTACT_VOLT * v)),
+                ESeries.E6.roundUp(Math.max(1e-9, RC_FARADS_PER_CONTACT_AMP * i)),
+                ESeries.E24.roundUp(TVS_HEADROOM * crest));
+    }
+
+    static List<ContactCandidate> contactProtection(ContactChecks.Side side) {
+        double v = side.railMaxVolts();
+        double withstand = side.relay().value("contactWithstandVolts");
+        ContactSizing size = sizing(side);
+        double rs = size.rcOhms();
+        double c = size.rcFarads();
+        double vc = size.varistorVolts();
         List<ContactCandidate> out = new ArrayList<>();
         String rcRule = "rule of thumb: " + RC_OHMS_PER_CONTACT_VOLT + " Ω per contact volt, 1 µF per contact amp"
                 + " (CT-7, common practice); capacitor rated for the rail's crest";

@@ -39,7 +39,11 @@ enum StageRole {
     /** The resistor of an RC snubber or resistor suppressor. */
     SUPPRESSOR_RESISTOR("resistor in its suppressor"),
     /** The capacitor of an RC snubber. */
-    SNUBBER_CAPACITOR("snubber capacitor");
+    SNUBBER_CAPACITOR("snubber capacitor"),
+    /** The rail the relay's contacts switch. */
+    CONTACT_SUPPLY("contact-side supply"),
+    /** What the relay's contacts switch. */
+    LOAD("contact-side load");
 
     private final String words;
 
@@ -74,6 +78,8 @@ enum StageRole {
             case CLAMP -> suppressorPart(template, suppressor, drive, stage, PartKind.ZENER, PartKind.TVS);
             case SUPPRESSOR_RESISTOR -> suppressorPart(template, suppressor, drive, stage, PartKind.RESISTOR);
             case SNUBBER_CAPACITOR -> suppressorPart(template, suppressor, drive, stage, PartKind.CAPACITOR);
+            case CONTACT_SUPPLY -> Optional.of("V2");
+            case LOAD -> Optional.of("E1");
         };
     }
 

@@ -114,6 +114,24 @@ public record ContactLoad(LoadKind kind, double resistanceOhms, double inrushMul
         return v / resistanceOhms;
     }
 
+    /**
+     * The resistance (|Z| for an AC motor or solenoid, the series resistor of an LED) at which this
+     * load draws {@code watts} of real power from a rail of {@code railVolts}: V²/P; V²·cos φ/P on AC
+     * for the inductive kinds; V·(V − VF)/P for an LED.
+     *
+     * @throws IllegalArgumentException if the power or the voltage left for the resistance is not positive
+     */
+    public double resistanceForPower(double railVolts, boolean ac, double watts) {
+        double v = Math.abs(railVolts);
+        if (!(watts > 0) || !(v > (kind == LoadKind.LED ? forwardVolts : 0))) {
+            throw new IllegalArgumentException("a load of " + watts + " W on a " + v + " V rail has no resistance");
+        }
+        if (kind == LoadKind.LED) {
+            return v * (v - forwardVolts) / watts;
+        }
+        return v * v * (ac ? powerFactor(true) : 1) / watts;
+    }
+
     /** Real power drawn from a rail of {@code railVolts}, watts (cos φ on AC). */
     public double powerWatts(double railVolts, boolean ac) {
         double i = steadyAmps(railVolts);
