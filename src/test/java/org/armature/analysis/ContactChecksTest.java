@@ -214,6 +214,15 @@ class ContactChecksTest {
         assertTrue(SuppressorAdvisor.contactProtection(Templates.defaultStage()).isEmpty());
     }
 
+    @Test
+    @DisplayName("an LED load is its resistor plus an LED in the netlist: (24 V − 2.0 V) / 2.2 kΩ = 10.0 mA (derived, the fit point)")
+    void ledLoadInTheNetlist() {
+        Stage s = Templates.defaultStage().updatePart("E1", e -> e.withOption("loadKind", "led").with("resistanceOhms", 2200));
+        double i = DC.solve(s, org.armature.solver.SolveOptions.DEFAULT).quantity("E1", "current");
+        assertEquals(22.0 / 2200, i, 1e-4);   // at 10 mA the fitted LED drops exactly its 2.0 V
+        assertEquals(22.0 / 2200, ContactChecks.physics(s.require("E1")).steadyAmps(24), 1e-12);
+    }
+
     @ParameterizedTest
     @EnumSource(StageTemplate.class)
     @DisplayName("no false alarm: every template with its default load passes the new checks")
