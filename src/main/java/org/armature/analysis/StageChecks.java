@@ -411,8 +411,8 @@ public final class StageChecks {
             } else {
                 Optional<SwitchVerdict> v = op.verdict();
                 margin = v.map(SwitchVerdict::margin).orElse(0.0);
-                why = () -> v.map(SwitchVerdict::reason).orElse("No switch verdict.") + " Margin ×" + ratio(margin)
-                        + "; below ×1 the switch is not on, and ×" + ratio(o.saturationPassMargin())
+                why = () -> capital(v.map(SwitchVerdict::reason).orElse("no switch verdict."))
+                        + " Below ×1 the switch is not on; ×" + ratio(o.saturationPassMargin())
                         + " is wanted (common practice).";
             }
             CheckStatus st = margin >= o.saturationPassMargin() ? CheckStatus.PASS : margin >= 1 ? CheckStatus.WARN
@@ -450,8 +450,7 @@ public final class StageChecks {
             double i = n * Math.abs(s.on().get().pinCurrent());
             double limit = u.value("packageCurrentLimitAmps");
             return Optional.of(rated(i, limit, Unit.AMPERE, "package limit",
-                    (n == 1 ? "One channel draws" : String.format(java.util.Locale.ROOT, "%.0f", n) + " channels draw")
-                            + " from the package"));
+                    n == 1 ? "One channel draws" : String.format(java.util.Locale.ROOT, "%.0f", n) + " channels draw"));
         }
 
         /**
@@ -602,10 +601,9 @@ public final class StageChecks {
                     + sup.description() + ")");
             CheckStatus st = t.metrics().switchBreakdown() ? CheckStatus.FAIL : m.status();
             String why = t.metrics().switchBreakdown()
-                    ? "At turn-off the switch reaches its " + volts(rating) + " " + switchVoltageName(q)
-                            + " and goes into avalanche, beyond " + derated(rating, Unit.VOLT, switchVoltageName(q)) + ", absorbing "
-                            + EngineeringNotation.format(t.metrics().switchEnergyJoules(), Unit.JOULE)
-                            + " (" + sup.description() + ")."
+                    ? "At turn-off (suppressor: " + sup.description() + ") the switch goes into avalanche at "
+                            + volts(peak) + " and absorbs " + EngineeringNotation.format(t.metrics().switchEnergyJoules(),
+                            Unit.JOULE) + ", beyond " + derated(rating, Unit.VOLT, switchVoltageName(q)) + "."
                     : m.explanation();
             List<String> refs = new ArrayList<>(List.of(q.ref()));
             refs.addAll(sup.refs());
@@ -773,6 +771,11 @@ public final class StageChecks {
 
         private void caution(String key, String ref, String message) {
             findings.add(new Finding(Severity.WARNING, key, ref, "", message));
+        }
+
+        private static String capital(String words) {
+            String w = words.strip();
+            return w.isEmpty() ? w : Character.toUpperCase(w.charAt(0)) + w.substring(1) + (w.endsWith(".") ? "" : ".");
         }
 
         private static String switchVoltageName(Part q) {
