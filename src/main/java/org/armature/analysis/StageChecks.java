@@ -757,7 +757,8 @@ public final class StageChecks {
                 String what = volts(volts) + (ac ? " AC rms" : " DC");
                 caution("caution.above-selv", ref, "The contact side (" + ref + ", up to " + what + ") is above safety"
                         + " extra-low voltage (" + volts(limit) + (ac ? " AC rms" : " ripple-free DC") + "): these checks"
-                        + " judge the coil drive only and say nothing about the safety of the contact circuit.");
+                        + " judge the coil drive and the contacts against their ratings, and say nothing about the safety"
+                        + " of the contact circuit.");
                 caution("caution.creepage-clearance", ref, "Keep the creepage and clearance distances between the"
                         + " contact circuit and the logic side that the working voltage and pollution degree require.");
                 caution("caution.fusing", ref, "Fuse the contact circuit for its load and wiring.");
