@@ -225,13 +225,19 @@ final class ContactChecks {
         out.add(new CheckResult("contact.inrush", peak <= make ? CheckStatus.PASS : CheckStatus.FAIL, peak, make,
                 Unit.AMPERE, inrushCorner, cornerText + ", ambient " + celsius(coldC),
                 "peak current at closing by load kind (CT-5, CT-6) vs the make rating (not derated)",
-                s.load().ref() + " makes " + amps(peak) + " peak (" + inrushWords(s, vMax, coldK) + ") against the "
-                        + amps(make) + " make rating.", refs));
+                s.load().ref() + " makes " + amps(peak) + " peak (" + inrushWords(s, vMax, coldK) + decayWords(s, vMax)
+                        + ") against the " + amps(make) + " make rating.", refs));
 
         if (load.kind().inductive()) {
             breakCheck(s, vMax, i, corner, cornerText, findings).ifPresent(out::add);
         }
         return out;
+    }
+
+    private static String decayWords(Side s, double vMax) {
+        double tau = s.physics().inrushSeconds(s.ac(), vMax);
+        return tau > 0 ? ", decaying with τ = " + EngineeringNotation.format(tau, Unit.SECOND)
+                + (s.physics().inrushSeconds() > 0 ? "" : " (typical)") : "";
     }
 
     private static String inrushWords(Side s, double vMax, double coldK) {
