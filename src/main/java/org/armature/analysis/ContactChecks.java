@@ -297,6 +297,10 @@ final class ContactChecks {
                             + EngineeringNotation.format(r.protectionJoules(), Unit.JOULE) + ".")
                     : "The arc conditions (" + volts(minArcV) + ", " + amps(minArcA) + ") are not met: no arc forms.");
             String why = why0;
+            if (s.protection() != ContactBreak.Protection.NONE) {
+                double bare = ContactBreak.run(setup.with(ContactBreak.Protection.NONE, 0, 0, 0)).peakContactVolts();
+                why += " Without it they would see " + volts(bare) + ".";
+            }
             boolean pass = r.peakContactVolts() <= withstand;
             if (!pass) {
                 List<SuppressorAdvisor.ContactCandidate> advice = SuppressorAdvisor.contactProtection(s);

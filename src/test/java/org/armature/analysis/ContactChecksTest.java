@@ -182,6 +182,7 @@ class ContactChecksTest {
                 4.7e-6 + ContactBreak.STRAY_FARADS);
         assertEquals(expected, c.value(), 0.05 * expected, c::explanation);
         assertEquals(CheckStatus.PASS, c.status(), c.explanation());   // about 290 V against 1,000 V
+        assertTrue(c.explanation().contains("Without it they would see"), c.explanation()); // with and without
     }
 
     @Test
