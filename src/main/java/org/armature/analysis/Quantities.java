@@ -29,6 +29,14 @@ final class Quantities {
         return EngineeringNotation.format(v, Unit.CELSIUS);
     }
 
+    /**
+     * A fraction printed as a percentage with one decimal (1.097 → "109.7 %"), so that a value
+     * just short of a wanted percentage never prints as that percentage.
+     */
+    static String pct1(double fraction) {
+        return String.format(java.util.Locale.ROOT, "%.1f %%", fraction * 100);
+    }
+
     /** A fraction (0.95) printed as a percentage (95.0 %). */
     static String pct(double fraction) {
         return EngineeringNotation.format(fraction * 100, Unit.PERCENT);

@@ -41,19 +41,24 @@ import org.armature.units.Unit;
  * with the pin high and with the pin low by the DC engine, each check is judged at its worst
  * variant, and an optional seeded Monte Carlo run estimates the yield.
  *
+ * <p>Every verdict has one limit, and a value beyond it fails. A rating's limit is the rating
+ * derated by {@link CheckOptions#ratingUseFraction()} and says so ("the 60.0 V VCEO, 80.0 %
+ * derating → 48.0 V limit"); a functional check's limit is the physical boundary (must-operate,
+ * must-release, ×1 overdrive) and it warns inside the limit when the wanted margin is missing.
+ *
  * <table>
  * <caption>check ids</caption>
- * <tr><th>id</th><th>judged</th><th>pass / warn / fail</th></tr>
+ * <tr><th>id</th><th>judged</th><th>limit; pass / warn</th></tr>
  * <tr><td>{@code relay.operates}</td><td>coil voltage, pin high, vs must-operate moved to the
  *     solved coil temperature, V_mo·R(T)/R(Tref) (RC-7, RC-9); worst over the corners (minimum
  *     supply, hottest coil with self-heating, coil +tol, minimum gain frozen at the coldest ambient,
- *     lowest pin level)</td><td>≥ 110 % (RC-18) / ≥ 100 % / below</td></tr>
+ *     lowest pin level)</td><td>must-operate at T (fail below); pass ≥ 110 % of it (RC-18), warn between</td></tr>
  * <tr><td>{@code relay.releases}</td><td>coil voltage, pin low (leakage at the hottest corner), vs
- *     must-release at the coil temperature</td><td>≤ 90 % (RC-18) / ≤ 100 % / above</td></tr>
+ *     must-release at the coil temperature</td><td>must-release at T (fail above); pass ≤ 90 % (RC-18)</td></tr>
  * <tr><td>{@code switch.saturated}</td><td>bipolar: βF(corner)·IB/IC, the gain of the corner
  *     (hFE(min) at the coldest ambient at the low-gain corners); MOSFET and Darlington: the DC
- *     engine's switch verdict margin (MO-6)</td><td>≥ 2 / ≥ 1 / below</td></tr>
- * <tr><td>{@code rating.switch-current}</td><td>largest IC or ID vs IC max / ID max</td><td>≤ 80 % / ≤ 100 % / above</td></tr>
+ *     engine's switch verdict margin (MO-6)</td><td>×1 (fail below); pass ≥ ×2</td></tr>
+ * <tr><td>{@code rating.switch-current}</td><td>largest IC or ID vs IC max / ID max</td><td>80 % of the rating</td></tr>
  * <tr><td>{@code rating.pin-current}</td><td>largest pin current vs the per-pin limit (GP-1)</td><td>same</td></tr>
  * <tr><td>{@code rating.package-current}</td><td>channels × largest pin current vs the package limit
  *     (GP-x)</td><td>same</td></tr>
@@ -64,11 +69,12 @@ import org.armature.units.Unit;
  * <tr><td>{@code rating.suppressor-current}</td><td>peak suppressor current (the coil current at
  *     turn-off) vs the diode's or zener's peak rating</td><td>same</td></tr>
  * <tr><td>{@code thermal.switch-junction}</td><td>Tj = Ta + P·RθJA at the hottest variant (TH-1,
- *     TH-5); a Darlington channel's package with its channels on: Ta + n·P·RθJA</td><td>≤ Tj(max) − 20 K /
- *     ≤ Tj(max) / above</td></tr>
+ *     TH-5); a Darlington channel's package with its channels on: Ta + n·P·RθJA</td><td>Tj(max) − 20 K</td></tr>
  * <tr><td>{@code relay.release-time}</td><td>only with a requirement: turn-off edge to the contacts
  *     opening (transient engine); without it the coil-current decay to drop-out through the
- *     suppressor, closed form (check-values.md, suppression), before the armature moves</td><td>≤ requirement / – / above</td></tr>
+ *     suppressor, closed form (check-values.md, suppression), before the armature moves</td><td>the requirement</td></tr>
+ * <tr><td>{@code coil.voltage}, {@code coil.temperature}, {@code contact.*}</td><td>the relay's
+ *     other half, see {@link ContactChecks}</td><td></td></tr>
  * </table>
  *
  * <p>Other findings: {@code check.not-recognised}, {@code check.not-solved} (a variant the engine
@@ -84,7 +90,8 @@ public final class StageChecks {
     /** The ids, in report order. */
     public static final List<String> IDS = List.of("relay.operates", "relay.releases", "switch.saturated",
             "rating.switch-current", "rating.pin-current", "rating.package-current", "rating.switch-voltage",
-            "rating.suppressor-current", "thermal.switch-junction", "relay.release-time");
+            "rating.suppressor-current", "thermal.switch-junction", "relay.release-time", "coil.voltage",
+            "coil.temperature", "contact.current", "contact.voltage", "contact.inrush", "contact.break");
 
     private static final String TRANSIENT = "transient engine: turn-off at the largest-current corner";
 
@@ -207,24 +214,29 @@ public final class StageChecks {
             }
             List<CheckResult> checks = new ArrayList<>();
             checks.add(worst("relay.operates", corners, this::operates, Unit.VOLT,
-                    "coil voltage (pin high) vs (1 + " + pct(o.operateMarginFraction()) + ") × must-operate at the coil"
-                            + " temperature, V_mo·R(T)/R(Tref) (RC-7, RC-9, RC-18); DC engine over every corner",
+                    "coil voltage (pin high) vs must-operate at the coil temperature, V_mo·R(T)/R(Tref) (RC-7, RC-9): fails"
+                            + " below it, warns below " + Quantities.pct1(1 + o.operateMarginFraction()) + " of it (RC-18);"
+                            + " DC engine over every corner",
                     List.of(roles.relayRef())));
             checks.add(worst("relay.releases", corners, this::releases, Unit.VOLT,
-                    "coil voltage (pin low) vs (1 − " + pct(o.releaseMarginFraction()) + ") × must-release at the coil"
-                            + " temperature (RC-18); DC engine over every corner", List.of(roles.relayRef())));
+                    "coil voltage (pin low) vs must-release at the coil temperature: fails above it, warns above "
+                            + Quantities.pct1(1 - o.releaseMarginFraction()) + " of it (RC-18); DC engine over every corner",
+                    List.of(roles.relayRef())));
             checks.add(worst("switch.saturated", corners, this::saturated, Unit.RATIO,
                     "bipolar βF·IB/IC with the corner's gain; MOSFET and Darlington: the DC engine's switch verdict"
-                            + " margin; pass ≥ " + ratio(o.saturationPassMargin()), List.of(roles.switchRef())));
+                            + " margin: fails below ×1, warns below ×" + ratio(o.saturationPassMargin()),
+                    List.of(roles.switchRef())));
             checks.add(worst("rating.switch-current", corners, this::switchCurrent, Unit.AMPERE,
-                    "largest switch current vs its rating; pass ≤ " + pct(o.ratingUseFraction()) + " of it",
+                    "largest switch current vs its rating, " + Quantities.pct1(o.ratingUseFraction()) + " derating",
                     List.of(roles.switchRef())));
             roles.drivePinRef().ifPresent(pin -> {
                 checks.add(worst("rating.pin-current", corners, this::pinCurrent, Unit.AMPERE,
-                        "largest pin current vs the per-pin limit (GP-1); pass ≤ " + pct(o.ratingUseFraction()),
+                        "largest pin current vs the per-pin limit (GP-1), " + Quantities.pct1(o.ratingUseFraction())
+                                + " derating",
                         List.of(pin)));
                 checks.add(worst("rating.package-current", corners, this::packageCurrent, Unit.AMPERE,
-                        "channels × largest pin current vs the package limit (GP-x)", List.of(pin)));
+                        "channels × largest pin current vs the package limit (GP-x), "
+                                + Quantities.pct1(o.ratingUseFraction()) + " derating", List.of(pin)));
             });
             double i0 = corners.stream().flatMap(s -> s.on().stream())
                     .mapToDouble(r -> Math.abs(r.coilCurrent())).max().orElse(Double.NaN);
@@ -239,10 +251,18 @@ public final class StageChecks {
             }
             checks.add(worst("thermal.switch-junction", corners, this::junction, Unit.CELSIUS,
                     "Tj = Ta + P·RθJA (TH-1, TH-5)" + (isDarlington() ? ", package total with the channels on" : "")
-                            + "; pass ≤ Tj(max) − " + EngineeringNotation.format(o.thermalMarginKelvin(), Unit.KELVIN),
+                            + "; limit Tj(max) − " + EngineeringNotation.format(o.thermalMarginKelvin(), Unit.KELVIN),
                     List.of(roles.switchRef())));
             o.releaseTimeRequirementSeconds().ifPresent(req -> checks.add(edge.isPresent()
                     ? transientReleaseTime(edge.get(), req) : releaseTime(sup, i0, req)));
+            checks.add(worst("coil.voltage", corners, this::coilVoltage, Unit.VOLT,
+                    "coil voltage (pin high) at every corner vs the relay's maximum allowable coil voltage, a percentage"
+                            + " of rated (CT-3); DC engine", List.of(roles.relayRef())));
+            checks.add(worst("coil.temperature", corners, this::coilTemperature, Unit.CELSIUS,
+                    "coil temperature with self-heating, Ta + Rth·V·I solved with the copper law (CT-2), vs the"
+                            + " insulation's thermal class (IEC 60085, CT-1); DC engine over every corner",
+                    List.of(roles.relayRef())));
+            checks.addAll(ContactChecks.run(stage, roles, o, findings));
             Optional<YieldResult> yield = Optional.empty();
             if (o.monteCarloSamples() > 0) {
                 yield = Optional.of(monteCarlo(corners));
@@ -310,12 +330,15 @@ public final class StageChecks {
             double v = Math.abs(op.coilVoltage());
             double t = op.coilTemperature();
             double mo = PartPhysics.coilVoltsAt(k, k.value(ParamKeys.MUST_OPERATE_VOLTS), t);
-            double limit = mo * (1 + o.operateMarginFraction());
-            CheckStatus st = v >= limit ? CheckStatus.PASS : v >= mo ? CheckStatus.WARN : CheckStatus.FAIL;
-            return Optional.of(new Measure(v, limit, st, v / mo - 1,
-                    () -> "Coil voltage " + volts(v) + " at a coil temperature of " + celsius(t) + ", where must-operate is "
-                            + volts(mo) + " (" + pct(v / mo) + " of it; " + pct(1 + o.operateMarginFraction())
-                            + " wanted)."));
+            double wanted = 1 + o.operateMarginFraction();
+            CheckStatus st = v >= mo * wanted ? CheckStatus.PASS : v >= mo ? CheckStatus.WARN : CheckStatus.FAIL;
+            return Optional.of(new Measure(v, mo, st, v / mo - 1,
+                    () -> "Coil voltage " + volts(v) + " at a coil temperature of " + celsius(t) + " against must-operate "
+                            + volts(mo) + " at that temperature (" + volts(k.value(ParamKeys.MUST_OPERATE_VOLTS)) + " at "
+                            + celsius(k.value(ParamKeys.REFERENCE_TEMPERATURE_CELSIUS)) + ", copper law): " + Quantities.pct1(v / mo)
+                            + " of it" + (st == CheckStatus.FAIL ? ", so the relay may not operate."
+                            : st == CheckStatus.WARN ? ", short of the " + Quantities.pct1(wanted) + " margin RC-18 wants."
+                            : "; RC-18 wants at least " + Quantities.pct1(wanted) + ".")));
         }
 
         private Optional<Measure> releases(Solved s) {
@@ -327,11 +350,49 @@ public final class StageChecks {
             double v = Math.abs(op.coilVoltage());
             double t = op.coilTemperature();
             double mr = PartPhysics.coilVoltsAt(k, k.value(ParamKeys.MUST_RELEASE_VOLTS), t);
-            double limit = mr * (1 - o.releaseMarginFraction());
-            CheckStatus st = v <= limit ? CheckStatus.PASS : v <= mr ? CheckStatus.WARN : CheckStatus.FAIL;
-            return Optional.of(new Measure(v, limit, st, 1 - v / mr,
-                    () -> "With the pin low the coil sees " + volts(v) + "; must-release at " + celsius(t) + " is " + volts(mr)
-                            + " (" + pct(1 - o.releaseMarginFraction()) + " of it allowed)."));
+            double wanted = 1 - o.releaseMarginFraction();
+            CheckStatus st = v <= mr * wanted ? CheckStatus.PASS : v <= mr ? CheckStatus.WARN : CheckStatus.FAIL;
+            return Optional.of(new Measure(v, mr, st, 1 - v / mr,
+                    () -> "With the pin low the coil sees " + volts(v) + " against must-release " + volts(mr) + " at a coil"
+                            + " temperature of " + celsius(t) + ": " + Quantities.pct1(v / mr) + " of it"
+                            + (st == CheckStatus.FAIL ? ", so the relay may not release."
+                            : st == CheckStatus.WARN ? ", above the " + Quantities.pct1(wanted) + " RC-18 allows."
+                            : "; RC-18 allows up to " + Quantities.pct1(wanted) + ".")));
+        }
+
+        private Optional<Measure> coilVoltage(Solved s) {
+            if (s.on().isEmpty()) {
+                return Optional.empty();
+            }
+            Part k = s.relay();
+            double v = Math.abs(s.on().get().coilVoltage());
+            double pctMax = k.value(ParamKeys.MAX_COIL_VOLTAGE_PERCENT);
+            double limit = k.value(ParamKeys.RATED_VOLTS) * pctMax / 100;
+            CheckStatus st = v <= limit ? CheckStatus.PASS : CheckStatus.FAIL;
+            return Optional.of(new Measure(v, limit, st, 1 - v / limit,
+                    () -> "Coil voltage " + volts(v) + " against the maximum allowable " + volts(limit) + " ("
+                            + Quantities.pct1(pctMax / 100) + " of the " + volts(k.value(ParamKeys.RATED_VOLTS)) + " rated voltage, at "
+                            + celsius(k.value(ParamKeys.REFERENCE_TEMPERATURE_CELSIUS)) + "; the datasheet's maximum falls with"
+                            + " ambient)."));
+        }
+
+        private Optional<Measure> coilTemperature(Solved s) {
+            if (s.on().isEmpty()) {
+                return Optional.empty();
+            }
+            Part k = s.relay();
+            Readout op = s.on().get();
+            double t = op.coilTemperature();
+            double ta = s.variant().stage().conditions().ambientCelsius();
+            double p = Math.abs(op.coilVoltage() * op.coilCurrent());
+            double limit = k.value(ParamKeys.INSULATION_CLASS_CELSIUS);
+            CheckStatus st = t <= limit ? CheckStatus.PASS : CheckStatus.FAIL;
+            return Optional.of(new Measure(t, limit, st, limit - t,
+                    () -> "Coil at " + celsius(t) + " (ambient " + celsius(ta) + " + "
+                            + EngineeringNotation.format(p, Unit.WATT) + " × "
+                            + EngineeringNotation.format(k.value(ParamKeys.COIL_THERMAL_RESISTANCE_KELVIN_PER_WATT), Unit.KELVIN_PER_WATT)
+                            + ", mean winding temperature) against the " + celsius(limit) + " limit of its insulation"
+                            + InsulationClass.words(limit) + "."));
         }
 
         private Optional<Measure> saturated(Solved s) {
@@ -348,15 +409,19 @@ public final class StageChecks {
                 double beta = q.value(ParamKeys.BETA_FORWARD);
                 double m = ic > 0 && ib > 0 ? beta * ib / ic : 0;
                 margin = m;
-                why = () -> "gain " + ratio(beta) + " × IB " + amps(ib) + " ÷ IC " + amps(ic) + " = ×" + ratio(m) + ".";
+                why = () -> "Gain " + ratio(beta) + " × IB " + amps(ib) + " ÷ IC " + amps(ic) + " = ×" + ratio(m)
+                        + " overdrive; below ×1 the switch leaves saturation, and ×" + ratio(o.saturationPassMargin())
+                        + " is wanted (common practice).";
             } else {
                 Optional<SwitchVerdict> v = op.verdict();
                 margin = v.map(SwitchVerdict::margin).orElse(0.0);
-                why = () -> v.map(SwitchVerdict::reason).orElse("no switch verdict");
+                why = () -> capital(v.map(SwitchVerdict::reason).orElse("no switch verdict."))
+                        + " Below ×1 the switch is not on; ×" + ratio(o.saturationPassMargin())
+                        + " is wanted (common practice).";
             }
             CheckStatus st = margin >= o.saturationPassMargin() ? CheckStatus.PASS : margin >= 1 ? CheckStatus.WARN
                     : CheckStatus.FAIL;
-            return Optional.of(new Measure(margin, o.saturationPassMargin(), st, margin - 1, why));
+            return Optional.of(new Measure(margin, 1, st, margin - 1, why));
         }
 
         private Optional<Measure> switchCurrent(Solved s) {
@@ -366,7 +431,9 @@ public final class StageChecks {
             Part q = s.switchPart();
             double i = Math.abs(q.kind() == PartKind.NMOS ? s.on().get().id() : s.on().get().ic());
             double rating = q.value(q.kind() == PartKind.NMOS ? ParamKeys.ID_MAX_AMPS : ParamKeys.IC_MAX_AMPS);
-            return Optional.of(rated(i, rating, () -> amps(i) + " against a rating of " + amps(rating) + "."));
+            String name = q.kind() == PartKind.NMOS ? "ID max" : q.kind() == PartKind.DARLINGTON ? "output current max"
+                    : "IC max";
+            return Optional.of(rated(i, rating, Unit.AMPERE, name, q.ref() + " carries"));
         }
 
         private Optional<Measure> pinCurrent(Solved s) {
@@ -375,7 +442,7 @@ public final class StageChecks {
             }
             double i = Math.abs(s.on().get().pinCurrent());
             double limit = s.pin().value(ParamKeys.PIN_CURRENT_LIMIT_AMPS);
-            return Optional.of(rated(i, limit, () -> "The pin sources " + amps(i) + "; its limit is " + amps(limit) + "."));
+            return Optional.of(rated(i, limit, Unit.AMPERE, "per-pin limit", "The pin sources"));
         }
 
         private Optional<Measure> packageCurrent(Solved s) {
@@ -386,14 +453,27 @@ public final class StageChecks {
             double n = u.value(ParamKeys.CHANNEL_COUNT);
             double i = n * Math.abs(s.on().get().pinCurrent());
             double limit = u.value(ParamKeys.PACKAGE_CURRENT_LIMIT_AMPS);
-            return Optional.of(rated(i, limit, () -> channelWords(n) + (n == 1 ? " draws " : " draw ") + amps(i) + " from the package; its limit is "
-                    + amps(limit) + "."));
+            return Optional.of(rated(i, limit, Unit.AMPERE, "package limit",
+                    n == 1 ? "One channel draws" : String.format(java.util.Locale.ROOT, "%.0f", n) + " channels draw"));
         }
 
-        private Measure rated(double value, double rating, Supplier<String> why) {
-            double pass = rating * o.ratingUseFraction();
-            CheckStatus st = value <= pass ? CheckStatus.PASS : value <= rating ? CheckStatus.WARN : CheckStatus.FAIL;
-            return new Measure(value, pass, st, 1 - value / rating, why);
+        /**
+         * A value against a derated rating: the limit is rating × the derating fraction, and a value
+         * beyond it fails. The explanation names what is derated and by how much.
+         */
+        private Measure rated(double value, double rating, Unit unit, String ratingName, String what) {
+            double limit = rating * o.ratingUseFraction();
+            CheckStatus st = value <= limit ? CheckStatus.PASS : CheckStatus.FAIL;
+            return new Measure(value, limit, st, 1 - value / rating,
+                    () -> what + " " + EngineeringNotation.format(value, unit) + " against " + derated(rating, unit, ratingName)
+                            + ".");
+        }
+
+        /** "the 60.0 V VCEO, 80 % derating → 48.0 V limit". */
+        private String derated(double rating, Unit unit, String ratingName) {
+            return "the " + EngineeringNotation.format(rating, unit) + " " + ratingName + ", "
+                    + Quantities.pct1(o.ratingUseFraction()) + " derating → "
+                    + EngineeringNotation.format(rating * o.ratingUseFraction(), unit) + " limit";
         }
 
         private Optional<Measure> junction(Solved s) {
@@ -408,11 +488,12 @@ public final class StageChecks {
             double tj = ThermalBudget.junctionCelsius(ta, p, rth);
             double max = q.value(ParamKeys.TJ_MAX_CELSIUS);
             double pass = max - o.thermalMarginKelvin();
-            CheckStatus st = tj <= pass ? CheckStatus.PASS : tj <= max ? CheckStatus.WARN : CheckStatus.FAIL;
+            CheckStatus st = tj <= pass ? CheckStatus.PASS : CheckStatus.FAIL;
             return Optional.of(new Measure(tj, pass, st, max - tj,
                     () -> "Tj = " + celsius(ta) + " + " + EngineeringNotation.format(p, Unit.WATT) + " × "
-                            + EngineeringNotation.format(rth, Unit.KELVIN_PER_WATT) + " = " + celsius(tj) + "; Tj(max) "
-                            + celsius(max) + "."));
+                            + EngineeringNotation.format(rth, Unit.KELVIN_PER_WATT) + " = " + celsius(tj) + " against Tj(max) "
+                            + celsius(max) + " less a " + EngineeringNotation.format(o.thermalMarginKelvin(), Unit.KELVIN)
+                            + " margin → " + celsius(pass) + " limit."));
         }
 
         // ------------------------------------------------------------------ static estimates
@@ -428,13 +509,15 @@ public final class StageChecks {
                 return new CheckResult("rating.switch-voltage", CheckStatus.FAIL, Double.POSITIVE_INFINITY,
                         rating * o.ratingUseFraction(), Unit.VOLT, Map.of(), "", STATIC,
                         "Nothing clamps the coil: at turn-off the switch sees several hundred volts (SU-0; 1000–1500 V"
-                                + " for an unsuppressed 12 V relay, SU-1), far above its " + volts(rating) + " rating.",
+                                + " for an unsuppressed 12 V relay, SU-1), far beyond " + derated(rating, Unit.VOLT,
+                                switchVoltageName(q)) + ".",
                         refs);
             }
             double peak = sup.peakSwitchVolts(vs, Double.isNaN(i0) ? 0 : i0);
-            Measure m = rated(peak, rating, () -> "Peak switch voltage VS,max + Vc + I0·Rs = " + volts(vs) + " + "
-                    + volts(sup.clampVolts()) + (sup.seriesOhms() > 0 ? " + " + amps(i0) + " × " + Quantities.ohms(sup.seriesOhms()) : "")
-                    + " = " + volts(peak) + " (" + sup.description() + ") against " + volts(rating) + ".");
+            Measure m = rated(peak, rating, Unit.VOLT, switchVoltageName(q), "Peak switch voltage VS,max + Vc + I0·Rs = "
+                    + volts(vs) + " + " + volts(sup.clampVolts())
+                    + (sup.seriesOhms() > 0 ? " + " + amps(i0) + " × " + Quantities.ohms(sup.seriesOhms()) : "")
+                    + " (" + sup.description() + ") =");
             return new CheckResult("rating.switch-voltage", m.status(), m.value(), m.limit(), Unit.VOLT, Map.of(),
                     "supply at its maximum, largest coil current", STATIC, m.explanation(), refs);
         }
@@ -449,9 +532,9 @@ public final class StageChecks {
             }
             boolean channel = diode.get().kind() == PartKind.DARLINGTON;
             double rating = diode.get().value(channel ? ParamKeys.IC_MAX_AMPS : ParamKeys.MAX_CURRENT_AMPS);
-            Measure m = rated(i0, rating, () -> (channel ? diode.get().ref() + "'s clamp diode" : diode.get().ref())
-                    + " carries the coil current at turn-off, " + amps(i0) + ", against a peak rating of " + amps(rating)
-                    + (channel ? " (taken as the channel's output rating)." : "."));
+            Measure m = rated(i0, rating, Unit.AMPERE, channel ? "output rating (taken for the clamp diode)" : "peak rating",
+                    (channel ? diode.get().ref() + "'s clamp diode" : diode.get().ref()) + " carries the coil current at"
+                            + " turn-off,");
             return Optional.of(new CheckResult("rating.suppressor-current", m.status(), m.value(), m.limit(), Unit.AMPERE,
                     Map.of(), "largest coil current", "peak suppressor current = coil current at turn-off", m.explanation(),
                     List.of(diode.get().ref())));
@@ -518,13 +601,13 @@ public final class StageChecks {
             Part q = t.stage().require(roles.switchRef());
             double rating = q.value(q.kind() == PartKind.NMOS ? ParamKeys.VDSS_VOLTS : ParamKeys.VCEO_VOLTS);
             double peak = t.metrics().peakSwitchVolts();
-            Measure m = rated(peak, rating, () -> "Peak switch voltage at turn-off " + volts(peak) + " (" + sup.description()
-                    + ") against " + volts(rating) + ".");
+            Measure m = rated(peak, rating, Unit.VOLT, switchVoltageName(q), "Peak switch voltage at turn-off ("
+                    + sup.description() + ")");
             CheckStatus st = t.metrics().switchBreakdown() ? CheckStatus.FAIL : m.status();
             String why = t.metrics().switchBreakdown()
-                    ? "At turn-off the switch reaches its " + volts(rating) + " rating and goes into avalanche, absorbing "
-                            + EngineeringNotation.format(t.metrics().switchEnergyJoules(), Unit.JOULE)
-                            + " (" + sup.description() + ")."
+                    ? "At turn-off (suppressor: " + sup.description() + ") the switch goes into avalanche at "
+                            + volts(peak) + " and absorbs " + EngineeringNotation.format(t.metrics().switchEnergyJoules(),
+                            Unit.JOULE) + ", beyond " + derated(rating, Unit.VOLT, switchVoltageName(q)) + "."
                     : m.explanation();
             List<String> refs = new ArrayList<>(List.of(q.ref()));
             refs.addAll(sup.refs());
@@ -542,8 +625,8 @@ public final class StageChecks {
             boolean channel = diode.get().kind() == PartKind.DARLINGTON;
             double rating = diode.get().value(channel ? ParamKeys.IC_MAX_AMPS : ParamKeys.MAX_CURRENT_AMPS);
             double peak = t.metrics().peakSuppressorAmps();
-            Measure m = rated(peak, rating, () -> "Peak suppressor current " + amps(peak) + " against " + amps(rating)
-                    + (channel ? " (the channel's output rating)." : "."));
+            Measure m = rated(peak, rating, Unit.AMPERE, channel ? "output rating (taken for the clamp diode)"
+                    : "peak rating", "Peak suppressor current");
             return Optional.of(new CheckResult("rating.suppressor-current", m.status(), peak, m.limit(), Unit.AMPERE,
                     t.corner(), t.cornerText(), TRANSIENT, m.explanation(), List.of(diode.get().ref())));
         }
@@ -678,7 +761,8 @@ public final class StageChecks {
                 String what = volts(volts) + (ac ? " AC rms" : " DC");
                 caution("caution.above-selv", ref, "The contact side (" + ref + ", up to " + what + ") is above safety"
                         + " extra-low voltage (" + volts(limit) + (ac ? " AC rms" : " ripple-free DC") + "): these checks"
-                        + " judge the coil drive only and say nothing about the safety of the contact circuit.");
+                        + " judge the coil drive and the contacts against their ratings, and say nothing about the safety"
+                        + " of the contact circuit.");
                 caution("caution.creepage-clearance", ref, "Keep the creepage and clearance distances between the"
                         + " contact circuit and the logic side that the working voltage and pollution degree require.");
                 caution("caution.fusing", ref, "Fuse the contact circuit for its load and wiring.");
@@ -692,6 +776,15 @@ public final class StageChecks {
 
         private void caution(String key, String ref, String message) {
             findings.add(new Finding(Severity.WARNING, key, ref, "", message));
+        }
+
+        private static String capital(String words) {
+            String w = words.strip();
+            return w.isEmpty() ? w : Character.toUpperCase(w.charAt(0)) + w.substring(1) + (w.endsWith(".") ? "" : ".");
+        }
+
+        private static String switchVoltageName(Part q) {
+            return q.kind() == PartKind.NMOS ? "VDSS" : q.kind() == PartKind.DARLINGTON ? "VCE max" : "VCEO";
         }
 
         private boolean isDarlington() {

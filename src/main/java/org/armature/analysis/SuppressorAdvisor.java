@@ -19,6 +19,7 @@ import org.armature.model.StageTemplate;
 import org.armature.model.Suppressor;
 import org.armature.model.Templates;
 import org.armature.solver.SolverException;
+import org.armature.solver.timedomain.ContactBreak;
 import org.armature.solver.timedomain.TransientAnalysis;
 import org.armature.solver.timedomain.TransientFailureException;
 import org.armature.solver.timedomain.TransientMetrics;
@@ -42,6 +43,13 @@ import org.armature.units.ESeries;
  * the contacts opening); without it, or when a run fails, the closed forms of
  * {@link SuppressorEstimate} (coil-current decay to drop-out through a constant clamp, before the
  * armature moves). Each candidate says which was used.
+ *
+ * <p>{@link #contactProtection} does the same for the contacts of an inductive load: it proposes
+ * an RC across the contacts by the rule of thumb ({@value #RC_OHMS_PER_CONTACT_VOLT} Ω per contact
+ * volt, rounded to E12, and {@value #RC_FARADS_PER_CONTACT_AMP} F per contact amp, rounded up to
+ * E6; check-values.md CT-7, common practice), a varistor clamping at the E24 value at or above
+ * {@value #TVS_HEADROOM} × the rail's crest, and on DC a diode across the load, and checks each by
+ * re-running the break ({@link ContactBreak}) at the highest rail.
  */
 public final class SuppressorAdvisor {
 
@@ -54,7 +62,124 @@ public final class SuppressorAdvisor {
     /** Longest turn-off window run per candidate, 0.2 s: ten times a small relay's release. */
     public static final double MAX_WINDOW_SECONDS = 0.2;
 
+    /** RC rule of thumb: resistance per contact volt, ohms per volt (CT-7: 0.5–1; common practice). */
+    public static final double RC_OHMS_PER_CONTACT_VOLT = 0.5;
+
+    /** RC rule of thumb: capacitance per contact amp, farads per amp (CT-7: 0.5–1 µF; common practice). */
+    public static final double RC_FARADS_PER_CONTACT_AMP = 1e-6;
+
     private SuppressorAdvisor() {
+    }
+
+    /**
+     * One contact protection, sized and checked by re-running the break.
+     *
+     * @param protection what it is
+     * @param description plain words with its sizing ("RC across the contacts, 12 Ω + 680 nF")
+     * @param ohms the RC's resistance, ohms (NaN otherwise)
+     * @param farads the RC's capacitance, farads (NaN otherwise)
+     * @param clampVolts the varistor's clamping voltage, volts (NaN otherwise)
+     * @param peakContactVolts peak voltage across the opening contacts with it, volts (NaN when not
+     *     re-run: on AC the arc clears at a current zero)
+     * @param withinWithstand the peak is at or below the open-contact withstand
+     * @param rule the sizing rule and its source
+     */
+    public record ContactCandidate(ContactBreak.Protection protection, String description, double ohms, double farads,
+                                   double clampVolts, double peakContactVolts, boolean withinWithstand, String rule) {
+    }
+
+    /**
+     * Contact protection for the inductive load of a stage's contact side, best first (within the
+     * withstand before beyond it, then by peak contact voltage).
+     *
+     * @param stage the stage; not modified
+     * @return the candidates; empty when the stage has no inductive load on its contacts
+     */
+    public static List<ContactCandidate> contactProtection(Stage stage) {
+        Optional<StageRoles> roles = TopologyCheck.recognise(stage);
+        if (roles.isEmpty()) {
+            return List.of();
+        }
+        Optional<ContactChecks.Side> found = ContactChecks.side(stage, roles.get());
+        if (found.isEmpty() || !found.get().physics().kind().inductive()) {
+            return List.of();
+        }
+        return contactProtection(found.get());
+    }
+
+    /**
+     * The sizes the rules give for a contact side: the RC by the rule of thumb and the varistor's
+     * clamping voltage (see the class comment).
+     *
+     * @param rcOhms the RC's resistance, ohms (E12)
+     * @param rcFarads the RC's capacitance, farads (E6)
+     * @param varistorVolts the varistor's clamping voltage, volts (E24)
+     */
+    public record ContactSizing(double rcOhms, double rcFarads, double varistorVolts) {
+    }
+
+    /**
+     * The contact protection sizes for a stage's contact side, whatever its load kind.
+     *
+     * @return the sizes; empty when the stage has no recognised contact rail and load
+     */
+    public static Optional<ContactSizing> contactSizing(Stage stage) {
+        return TopologyCheck.recognise(stage).flatMap(r -> ContactChecks.side(stage, r)).map(SuppressorAdvisor::sizing);
+    }
+
+    private static ContactSizing sizing(ContactChecks.Side side) {
+        double v = side.railMaxVolts();
+        double i = side.physics().steadyAmps(v);
+        double crest = v * (side.ac() ? Math.sqrt(2) : 1);
+        return new ContactSizing(ESeries.E12.nearest(Math.max(1, RC_OHMS_PER_CONTACT_VOLT * v)),
+                ESeries.E6.roundUp(Math.max(1e-9, RC_FARADS_PER_CONTACT_AMP * i)),
+                ESeries.E24.roundUp(TVS_HEADROOM * crest));
+    }
+
+    static List<ContactCandidate> contactProtection(ContactChecks.Side side) {
+        double v = side.railMaxVolts();
+        double withstand = side.relay().value("contactWithstandVolts");
+        ContactSizing size = sizing(side);
+        double rs = size.rcOhms();
+        double c = size.rcFarads();
+        double vc = size.varistorVolts();
+        List<ContactCandidate> out = new ArrayList<>();
+        String rcRule = "rule of thumb: " + RC_OHMS_PER_CONTACT_VOLT + " Ω per contact volt, 1 µF per contact amp"
+                + " (CT-7, common practice); capacitor rated for the rail's crest";
+        String vRule = "the E24 value at or above " + TVS_HEADROOM + " × the rail's crest (stays off when the contacts"
+                + " are open; common practice)";
+        out.add(candidate(side, v, withstand, ContactBreak.Protection.RC, "RC across the contacts, "
+                + Quantities.ohms(rs) + " + " + org.armature.units.EngineeringNotation.format(c,
+                org.armature.units.Unit.FARAD), rs, c, Double.NaN, rcRule));
+        out.add(candidate(side, v, withstand, ContactBreak.Protection.VARISTOR, "varistor across the contacts, "
+                + Quantities.volts(vc) + " clamping", Double.NaN, Double.NaN, vc, vRule));
+        if (!side.ac()) {
+            out.add(candidate(side, v, withstand, ContactBreak.Protection.DIODE, "diode across the load (slows the"
+                    + " load's own release, like a coil's freewheeling diode, SU-12)", Double.NaN, Double.NaN, Double.NaN,
+                    "a rectifier rated for the rail and the load current (common practice)"));
+        }
+        out.sort(Comparator.comparing((ContactCandidate k) -> !k.withinWithstand())
+                .thenComparingDouble(k -> Double.isNaN(k.peakContactVolts()) ? 0 : k.peakContactVolts()));
+        return out;
+    }
+
+    private static ContactCandidate candidate(ContactChecks.Side side, double v, double withstand,
+                                              ContactBreak.Protection p, String words, double ohms, double farads,
+                                              double clamp, String rule) {
+        if (side.ac()) {
+            return new ContactCandidate(p, words, ohms, farads, clamp, Double.NaN, true,
+                    rule + "; on AC the arc clears at a current zero, so the break is not re-run");
+        }
+        ContactBreak.Setup base = ContactChecks.setup(side, v);
+        ContactBreak.Setup setup = base.with(p, Double.isNaN(ohms) ? 0 : ohms, Double.isNaN(farads) ? 0 : farads,
+                Double.isNaN(clamp) ? 0 : clamp);
+        try {
+            double peak = ContactBreak.run(setup).peakContactVolts();
+            return new ContactCandidate(p, words, ohms, farads, clamp, peak, peak <= withstand, rule);
+        } catch (TransientFailureException | SolverException e) {
+            return new ContactCandidate(p, words, ohms, farads, clamp, Double.NaN, false,
+                    rule + "; the re-run failed: " + e.getMessage());
+        }
     }
 
     /**

@@ -16,10 +16,13 @@
  *     what-if copy of the document ({@link org.armature.analysis.Variant}); the solver never knows
  *     about corners;</li>
  * <li>{@link org.armature.analysis.StageChecks#run}: every check at its worst corner with the DC
- *     engine (and the transient engine for the turn-off), the yield, and the safety cautions; ids in
- *     the table of {@link org.armature.analysis.StageChecks};</li>
+ *     engine (and the transient engine for the turn-off and the contact break), the coil and contact
+ *     checks of {@code ContactChecks}, the yield, and the safety cautions; ids in the table of
+ *     {@link org.armature.analysis.StageChecks};</li>
  * <li>{@link org.armature.analysis.SuppressorAdvisor#rank}: suppressors by release time and peak
- *     switch voltage, with zener and TVS voltages proposed.</li>
+ *     switch voltage, with zener and TVS voltages proposed;
+ *     {@link org.armature.analysis.SuppressorAdvisor#contactProtection}: contact protection for an
+ *     inductive load, sized by the rules of thumb and checked by re-running the break.</li>
  * </ul>
  *
  * <p>Device equations (copper coil law, gain temperature factor, the pin's Thevenin source) come

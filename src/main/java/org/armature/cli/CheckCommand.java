@@ -52,7 +52,8 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "check", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Check a stage at every corner of its tolerances: relay operates and releases, switch "
-                + "saturated, ratings, thermal; optionally a Monte Carlo yield. Reports the checks that ran; it "
+                + "saturated, ratings, thermal, coil voltage and temperature, contact current, voltage, inrush and "
+                + "break; optionally a Monte Carlo yield. Reports the checks that ran; it "
                 + "never calls a design safe."})
 final class CheckCommand implements Callable<Integer> {
 

@@ -5,7 +5,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import org.armature.analysis.SuppressorAdvisor;
+import org.armature.devices.ContactLoad;
+import org.armature.devices.LoadKind;
 import org.armature.io.StageFiles;
+import org.armature.model.ContactProtection;
 import org.armature.model.Finding;
 import org.armature.model.HighSideDrive;
 import org.armature.model.Part;
@@ -78,6 +82,37 @@ final class NewCommand implements Callable<Integer> {
             description = "Nominal ambient temperature, °C (default 25).")
     Double ambient;
 
+    @Option(names = "--contact-waveform", paramLabel = "dc|ac", converter = Choices.Waveform.class,
+            description = "Whether the contact-side rail is DC (default) or AC (then --contact-supply is RMS and the"
+                    + " AC contact rating applies).")
+    Choices.ContactWaveform contactWaveform;
+
+    @Option(names = "--load", paramLabel = "KIND", converter = Choices.Load.class,
+            description = "What the contacts switch: resistive, lamp (default), motor, solenoid, capacitive or led.")
+    LoadKind loadKind;
+
+    @Option(names = "--insulation-class", paramLabel = "CLASS", converter = Choices.InsulationClass.class,
+            description = "Coil insulation thermal class (IEC 60085): Y, A, E, B (default), F, H, N or R.")
+    Double insulationCelsius;
+
+    @Option(names = "--contact-protection", paramLabel = "KIND", converter = Choices.Protection.class,
+            description = "Across the contacts: none (default), rc, varistor; or diode across a DC load. Sized by the"
+                    + " rules of thumb unless given below.")
+    ContactProtection protection;
+
+    @Option(names = "--protection-resistance", paramLabel = "OHMS", converter = QuantityConverter.Ohms.class,
+            description = "Resistor of the rc contact protection, ohms (default 0.5 Ω per contact volt, E12).")
+    Double protectionOhms;
+
+    @Option(names = "--protection-capacitance", paramLabel = "FARADS", converter = QuantityConverter.Farads.class,
+            description = "Capacitor of the rc contact protection, farads (default 1 µF per contact amp, E6).")
+    Double protectionFarads;
+
+    @Option(names = "--varistor-voltage", paramLabel = "VOLTS", converter = QuantityConverter.Volts.class,
+            description = "Clamping voltage of the varistor contact protection, volts (default the E24 value at or"
+                    + " above 1.1 × the rail's crest).")
+    Double varistorVolts;
+
     /** The command with its numeric options added from {@link StageValue}. */
     static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new NewCommand());
@@ -108,6 +143,7 @@ final class NewCommand implements Callable<Integer> {
                 stage = apply(stage, v, value, supp, d);
             }
         }
+        stage = contactSide(stage, cl);
         if (pinState != null) {
             stage = stage.withConditions(stage.conditions().withPinHigh(pinState.isHigh()));
         }
@@ -137,6 +173,64 @@ final class NewCommand implements Callable<Integer> {
         out.println("Wrote " + template.title() + " stage \"" + stage.name() + "\" to " + output + ".");
         out.flush();
         return CommandLine.ExitCode.OK;
+    }
+
+    /** The contact side's words: waveform, load kind, insulation class, resistance from power, protection. */
+    private Stage contactSide(Stage stage, CommandLine cl) {
+        Stage s = stage;
+        if (contactWaveform != null) {
+            s = s.updatePart("V2", v -> v.withOption("waveform",
+                    contactWaveform == Choices.ContactWaveform.AC ? "ac-rms" : "dc"));
+        }
+        if (loadKind != null) {
+            s = s.updatePart("E1", e -> e.withOption("loadKind", loadKind.id()));
+        }
+        if (insulationCelsius != null) {
+            s = s.updatePart("K1", k -> k.with("insulationClassCelsius", insulationCelsius));
+        }
+        boolean resistanceGiven = spec.findOption(StageValue.LOAD_RESISTANCE.optionName()).getValue() != null;
+        boolean railOrLoadChanged = contactWaveform != null || loadKind != null
+                || spec.findOption(StageValue.CONTACT_SUPPLY.optionName()).getValue() != null
+                || spec.findOption(StageValue.LOAD_POWER.optionName()).getValue() != null;
+        Part e = s.require("E1");
+        if (!resistanceGiven && railOrLoadChanged && e.value("ratedWatts") > 0) {
+            // keep the load's rated power true on the new rail: a 12 W lamp on 230 V is 4.4 kΩ, not 48 Ω
+            Part v2 = s.require("V2");
+            boolean ac = v2.option("waveform").equals("ac-rms");
+            try {
+                double ohms = physics(e).resistanceForPower(v2.value("volts"), ac, e.value("ratedWatts"));
+                s = s.withPart(e.with("resistanceOhms", ohms));
+            } catch (IllegalArgumentException ex) {
+                throw usage("--load-power " + e.value("ratedWatts") + " W gives no load resistance on the "
+                        + v2.value("volts") + " V contact rail; give --load-resistance.");
+            }
+        }
+        ContactProtection p = protection == null ? ContactProtection.NONE : protection;
+        if (p == ContactProtection.NONE) {
+            if (protectionOhms != null || protectionFarads != null || varistorVolts != null) {
+                throw usage("--protection-resistance, --protection-capacitance and --varistor-voltage need"
+                        + " --contact-protection rc or varistor.");
+            }
+            return s;
+        }
+        if (p == ContactProtection.DIODE && s.require("V2").option("waveform").equals("ac-rms")) {
+            throw usage("--contact-protection diode applies only to a DC contact rail; use rc or varistor on AC.");
+        }
+        SuppressorAdvisor.ContactSizing size = SuppressorAdvisor.contactSizing(s).orElseThrow(() ->
+                usage("--contact-protection needs a contact side with a rail and a load."));
+        try {
+            return Templates.withContactProtection(s, p, protectionOhms != null ? protectionOhms : size.rcOhms(),
+                    protectionFarads != null ? protectionFarads : size.rcFarads(),
+                    varistorVolts != null ? varistorVolts : size.varistorVolts());
+        } catch (IllegalArgumentException ex) {
+            throw usage(ex.getMessage() + ".");
+        }
+    }
+
+    private static ContactLoad physics(Part e) {
+        return new ContactLoad(LoadKind.of(e.option("loadKind")), e.value("resistanceOhms"), e.value("inrushMultiple"),
+                e.value("inrushSeconds"), e.value("powerFactor"), e.value("inductanceHenries"), e.value("filamentKelvin"),
+                e.value("capacitanceFarads"), e.value("loopResistanceOhms"), e.value("forwardVolts"), e.value("ratedWatts"));
     }
 
     private Stage apply(Stage stage, StageValue v, double value, Suppressor supp, HighSideDrive d) {

@@ -34,4 +34,25 @@ class QuantityConverter implements CommandLine.ITypeConverter<Double> {
             super(Unit.CELSIUS);
         }
     }
+
+    /** Ohms, for annotated options. */
+    static final class Ohms extends QuantityConverter {
+        Ohms() {
+            super(Unit.OHM);
+        }
+    }
+
+    /** Farads, for annotated options. */
+    static final class Farads extends QuantityConverter {
+        Farads() {
+            super(Unit.FARAD);
+        }
+    }
+
+    /** Volts, for annotated options. */
+    static final class Volts extends QuantityConverter {
+        Volts() {
+            super(Unit.VOLT);
+        }
+    }
 }

@@ -37,7 +37,11 @@ enum StageRole {
     /** The resistor of an RC snubber or resistor suppressor. */
     SUPPRESSOR_RESISTOR("resistor in its suppressor"),
     /** The capacitor of an RC snubber. */
-    SNUBBER_CAPACITOR("snubber capacitor");
+    SNUBBER_CAPACITOR("snubber capacitor"),
+    /** The rail the relay's contacts switch. */
+    CONTACT_SUPPLY("contact-side supply"),
+    /** What the relay's contacts switch. */
+    LOAD("contact-side load");
 
     private final String words;
 
@@ -72,6 +76,8 @@ enum StageRole {
             case CLAMP -> suppressorPart(stage, roles, PartKind.ZENER, PartKind.TVS);
             case SUPPRESSOR_RESISTOR -> suppressorPart(stage, roles, PartKind.RESISTOR);
             case SNUBBER_CAPACITOR -> suppressorPart(stage, roles, PartKind.CAPACITOR);
+            case CONTACT_SUPPLY -> roles.contactSupplyRefs().stream().findFirst();
+            case LOAD -> roles.loadRefs().stream().findFirst();
         };
     }
 

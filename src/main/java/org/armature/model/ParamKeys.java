@@ -153,4 +153,46 @@ public final class ParamKeys {
     public static final String WAVEFORM = "waveform";
     /** Option {@code loadKind}. */
     public static final String LOAD_KIND = "loadKind";
+    /** Relay or load parameter {@code contactRatedDcVolts} (contact side). */
+    public static final String CONTACT_RATED_DC_VOLTS = "contactRatedDcVolts";
+
+    /** Relay or load parameter {@code contactRatedDcAmps} (contact side). */
+    public static final String CONTACT_RATED_DC_AMPS = "contactRatedDcAmps";
+
+    /** Relay or load parameter {@code contactMakeAmps} (contact side). */
+    public static final String CONTACT_MAKE_AMPS = "contactMakeAmps";
+
+    /** Relay or load parameter {@code maxCoilVoltagePercent} (contact side). */
+    public static final String MAX_COIL_VOLTAGE_PERCENT = "maxCoilVoltagePercent";
+
+    /** Relay or load parameter {@code insulationClassCelsius} (contact side). */
+    public static final String INSULATION_CLASS_CELSIUS = "insulationClassCelsius";
+
+    /** Relay or load parameter {@code minArcVolts} (contact side). */
+    public static final String MIN_ARC_VOLTS = "minArcVolts";
+
+    /** Relay or load parameter {@code minArcAmps} (contact side). */
+    public static final String MIN_ARC_AMPS = "minArcAmps";
+
+    /** Relay or load parameter {@code contactWithstandVolts} (contact side). */
+    public static final String CONTACT_WITHSTAND_VOLTS = "contactWithstandVolts";
+
+    /** Relay or load parameter {@code inrushMultiple} (contact side). */
+    public static final String INRUSH_MULTIPLE = "inrushMultiple";
+
+    /** Relay or load parameter {@code inrushSeconds} (contact side). */
+    public static final String INRUSH_SECONDS = "inrushSeconds";
+
+    /** Relay or load parameter {@code powerFactor} (contact side). */
+    public static final String POWER_FACTOR = "powerFactor";
+
+    /** Relay or load parameter {@code inductanceHenries} (contact side). */
+    public static final String INDUCTANCE_HENRIES = "inductanceHenries";
+
+    /** Relay or load parameter {@code filamentKelvin} (contact side). */
+    public static final String FILAMENT_KELVIN = "filamentKelvin";
+
+    /** Relay or load parameter {@code loopResistanceOhms} (contact side). */
+    public static final String LOOP_RESISTANCE_OHMS = "loopResistanceOhms";
+
 }

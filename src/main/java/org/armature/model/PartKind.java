@@ -184,18 +184,69 @@ public enum PartKind {
                                     + "sets the flight time with an attracted inductance."),
                     p(ParamKeys.ARMATURE_DAMPING_NEWTON_SECONDS_PER_METRE, "Armature damping", Unit.NEWTON_SECOND_PER_METRE, 0.1, 0, 100,
                             "Viscous damping of the armature's motion (default 0.1 N·s/m: light air and pivot damping)."),
-                    p(ParamKeys.CONTACT_RATED_VOLTS, "Contact rating, voltage", Unit.VOLT, 250, 1, 1000, "Contact switching voltage rating."),
-                    p(ParamKeys.CONTACT_RATED_AMPS, "Contact rating, current", Unit.AMPERE, 10, 1e-3, 100, "Contact switching current rating.")),
+                    p(ParamKeys.CONTACT_RATED_VOLTS, "Contact AC rating, voltage", Unit.VOLT, 250, 1, 1000,
+                            "Contact switching voltage rating for AC (RMS), for a resistive load (typical 250 V)."),
+                    p(ParamKeys.CONTACT_RATED_AMPS, "Contact AC rating, current", Unit.AMPERE, 10, 1e-3, 100,
+                            "Contact switching current rating for AC (RMS), for a resistive load (typical 10 A)."),
+                    p(ParamKeys.CONTACT_RATED_DC_VOLTS, "Contact DC rating, voltage", Unit.VOLT, 30, 1, 1000,
+                            "Contact switching voltage rating for DC; far below the AC rating, since a DC arc has no"
+                                    + " current zero (typical 30 V, CT-4)."),
+                    p(ParamKeys.CONTACT_RATED_DC_AMPS, "Contact DC rating, current", Unit.AMPERE, 10, 1e-3, 100,
+                            "Contact switching current rating for DC at the DC rated voltage (typical 10 A)."),
+                    p(ParamKeys.CONTACT_MAKE_AMPS, "Contact make (inrush) rating", Unit.AMPERE, 30, 1e-3, 1000,
+                            "Peak current the contacts may make at closing (typical 30 A for a 10 A relay, from memory)."),
+                    p(ParamKeys.MAX_COIL_VOLTAGE_PERCENT, "Maximum allowable coil voltage", Unit.PERCENT, 130, 100, 500,
+                            "Highest continuous coil voltage as a percentage of rated, at the reference temperature"
+                                    + " (datasheets: often 110–180 %; typical 130 %, CT-3)."),
+                    p(ParamKeys.INSULATION_CLASS_CELSIUS, "Coil insulation class", Unit.CELSIUS, 130, 90, 250,
+                            "Temperature limit of the coil's insulation thermal class (IEC 60085: Y 90, A 105, E 120, B 130,"
+                                    + " F 155, H 180, N 200, R 220 °C; typical class B, 130 °C)."),
+                    p(ParamKeys.MIN_ARC_VOLTS, "Minimum arc voltage", Unit.VOLT, 12, 0, 1000,
+                            "Voltage across parting contacts below which no arc forms (typical 12 V for silver-alloy"
+                                    + " contacts, from memory, CT-9)."),
+                    p(ParamKeys.MIN_ARC_AMPS, "Minimum arc current", Unit.AMPERE, 0.4, 0, 100,
+                            "Current below which no arc forms at the parting contacts (typical 0.4 A for silver-alloy"
+                                    + " contacts, from memory, CT-9)."),
+                    p(ParamKeys.CONTACT_WITHSTAND_VOLTS, "Open-contact withstand", Unit.VOLT, 1000, 10, 10_000,
+                            "Voltage the open contact gap holds off (datasheets: dielectric strength between open contacts;"
+                                    + " typical 1,000 V, from memory); a break that rings above it arcs over.")),
             List.of()),
 
-    /** What the contacts switch: a resistive load, a lamp or an LED with its resistor. */
+    /**
+     * What the contacts switch: a resistive load, an incandescent lamp, a motor, a solenoid or
+     * contactor coil, a capacitive load (a power supply's input) or an LED with its resistor. The
+     * physics of each kind is in {@code devices.ContactLoad}.
+     */
     LOAD("E", "Contact-side load", "Load switched by the relay contacts.",
             List.of(pin("a", 0, -2, "terminal 1"), pin("b", 0, 2, "terminal 2")),
             List.of(
-                    p(ParamKeys.RESISTANCE_OHMS, "Resistance", Unit.OHM, 48, 1e-3, 1e9, "Load resistance when on (a lamp: hot filament)."),
-                    p(ParamKeys.RATED_WATTS, "Rated power", Unit.WATT, 3, 0, 1e5, "Rated load power, for the contact check.")),
-            List.of(new OptionSpec(ParamKeys.LOAD_KIND, "Kind", List.of("resistive", "lamp", "led"),
-                    "What the load is; a lamp draws several times its hot current when cold.")));
+                    p(ParamKeys.RESISTANCE_OHMS, "Resistance", Unit.OHM, 48, 1e-3, 1e9,
+                            "Steady load resistance when on (a lamp: hot filament; an AC motor or solenoid: the"
+                                    + " impedance |Z| = V/I; an LED: its series resistor)."),
+                    p(ParamKeys.RATED_WATTS, "Rated power", Unit.WATT, 3, 0, 1e5,
+                            "Rated load power at the contact-side rail, for the plausibility check (0: not given)."),
+                    p(ParamKeys.INRUSH_MULTIPLE, "Inrush multiple", Unit.RATIO, 0, 0, 1000,
+                            "Peak current at closing ÷ steady current; 0 takes the kind's typical value (lamp: tungsten law;"
+                                    + " motor ×6; AC solenoid ×10; capacitive: from the loop resistance; common practice, CT-5)."),
+                    p(ParamKeys.INRUSH_SECONDS, "Inrush duration", Unit.SECOND, 0, 0, 10,
+                            "Time constant of the inrush decay; 0 takes the kind's typical value (common practice)."),
+                    p(ParamKeys.POWER_FACTOR, "Power factor", Unit.RATIO, 0, 0, 1,
+                            "cos φ of an AC motor or solenoid; 0 takes the kind's typical value (motor 0.8, solenoid 0.4)."),
+                    p(ParamKeys.INDUCTANCE_HENRIES, "Inductance", Unit.HENRY, 0, 0, 1000,
+                            "Inductance of a DC motor or solenoid; 0 takes L/R = 2 ms per watt (time constant of the"
+                                    + " IEC 60947-5-1 DC-13 test load, T0.95 ≈ 6·P ms, from memory)."),
+                    p(ParamKeys.FILAMENT_KELVIN, "Filament temperature", Unit.KELVIN, 2700, 1000, 3600,
+                            "Hot filament temperature of a lamp (typical 2,700 K for a general-service lamp)."),
+                    p(ParamKeys.CAPACITANCE_FARADS, "Input capacitance", Unit.FARAD, 0, 0, 1,
+                            "Input capacitance of a capacitive load; 0 takes 2 µF per watt (typical bulk capacitor, from memory)."),
+                    p(ParamKeys.LOOP_RESISTANCE_OHMS, "Loop resistance", Unit.OHM, 1, 1e-3, 1e4,
+                            "Source plus wiring resistance that limits a capacitive inrush (typical 1 Ω)."),
+                    p(ParamKeys.FORWARD_VOLTS, "LED forward voltage", Unit.VOLT, 2, 0, 60,
+                            "Forward voltage of an LED load, in series with its resistor (typical 2 V).")),
+            List.of(new OptionSpec(ParamKeys.LOAD_KIND, "Kind", List.of("resistive", "lamp", "motor", "solenoid", "capacitive", "led"),
+                    "What the load is: a lamp draws 10–15 times its hot current when cold; a motor its locked-rotor"
+                            + " current; a solenoid or contactor coil is inductive at break; a capacitive load charges"
+                            + " through the loop resistance.")));
 
     private final String designatorPrefix;
     private final String title;

@@ -222,6 +222,89 @@ public final class Templates {
         }
     }
 
+    /**
+     * Adds contact protection to a template's contact side: an RC or a varistor across the contacts
+     * (between the contact rail and the load's terminal on the contacts), or a diode across the load.
+     * Parts go to the right of the contacts and the load, wired to their pins.
+     *
+     * @param stage a stage laid out like the templates (rail straight above the contact common, load
+     *     below the contact it is switched by)
+     * @param protection what to add; {@code NONE} returns the stage as it is
+     * @param ohms the RC's resistance, ohms (RC only)
+     * @param farads the RC's capacitance, farads (RC only)
+     * @param volts the varistor's clamping voltage, volts (varistor only)
+     * @throws IllegalArgumentException with one sentence when the stage's contact side is not laid out
+     *     like a template's
+     */
+    public static Stage withContactProtection(Stage stage, ContactProtection protection, double ohms, double farads,
+                                              double volts) {
+        if (protection == ContactProtection.NONE) {
+            return stage;
+        }
+        Part k = stage.parts().stream().filter(p -> p.kind() == PartKind.RELAY).findFirst()
+                .orElseThrow(() -> new IllegalArgumentException("contact protection needs a relay in the stage"));
+        Part e = stage.parts().stream().filter(p -> p.kind() == PartKind.LOAD).findFirst()
+                .orElseThrow(() -> new IllegalArgumentException("contact protection needs a contact-side load in the stage"));
+        GridPoint com = k.pinPoint("com");
+        GridPoint top = e.pinPoint("a");
+        GridPoint bottom = e.pinPoint("b");
+        if (top.gridY() > bottom.gridY()) {
+            GridPoint t = top;
+            top = bottom;
+            bottom = t;
+        }
+        if (top.gridX() != bottom.gridX() || top.gridY() <= com.gridY()) {
+            throw new IllegalArgumentException("contact protection can be added only to a contact side laid out like the"
+                    + " templates' (a vertical load below the contacts)");
+        }
+        int x = Math.max(com.gridX(), top.gridX()) + 3;
+        int joinY = top.gridY() - 1; // on the wire from the contact down to the load
+        if (joinY < com.gridY() + 4) {
+            throw new IllegalArgumentException("contact protection needs at least five grid rows between the contact"
+                    + " common and the load");
+        }
+        Stage s = stage.withWire(Wire.of(com.gridX(), com.gridY(), x, com.gridY()));
+        switch (protection) {
+            case RC, VARISTOR -> {
+                int end;
+                if (protection == ContactProtection.RC) {
+                    // R down from the contact common's row, C across to the right one row below it
+                    s = s.withPart(Part.of(nextRef(s, "R", 5), PartKind.RESISTOR, Placement.at(x, com.gridY() + 2))
+                            .with("resistanceOhms", ohms).with("powerRatingWatts", 0.5));
+                    s = s.withPart(Part.of(nextRef(s, "C", 2), PartKind.CAPACITOR,
+                            Placement.at(x + 2, com.gridY() + 4).rotated(90))
+                            .with("capacitanceFarads", farads).with("ratedVolts", 400));
+                    end = x + 4;
+                    s = s.withWire(Wire.of(end, com.gridY() + 4, end, joinY));
+                } else {
+                    s = s.withPart(Part.of(nextRef(s, "D", 3), PartKind.TVS, Placement.at(x, com.gridY() + 2))
+                            .with("breakdownVolts", volts));
+                    end = x;
+                    s = s.withWire(Wire.of(x, com.gridY() + 4, x, joinY));
+                }
+                s = s.withWire(Wire.of(top.gridX(), joinY, end, joinY));
+            }
+            case DIODE -> {
+                s = stage;
+                int dx = top.gridX() + 3;
+                s = s.withPart(Part.of(nextRef(s, "D", 3), PartKind.DIODE, Placement.at(dx, top.gridY() + 2).rotated(180)));
+                s = s.withWire(Wire.of(top.gridX(), top.gridY(), dx, top.gridY()));
+                s = s.withWire(Wire.of(bottom.gridX(), bottom.gridY(), dx, bottom.gridY()));
+            }
+            default -> throw new IllegalStateException("unknown protection " + protection);
+        }
+        return s;
+    }
+
+    private static String nextRef(Stage s, String prefix, int from) {
+        for (int i = from; ; i++) {
+            String c = prefix + i;
+            if (s.part(c).isEmpty()) {
+                return c;
+            }
+        }
+    }
+
     /** Collects parts, wires and test points while a template is laid out. */
     private static final class Builder {
         final List<Part> parts = new ArrayList<>();

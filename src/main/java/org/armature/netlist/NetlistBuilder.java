@@ -52,6 +52,9 @@ import org.armature.units.PhysicalConstants;
  */
 public final class NetlistBuilder {
 
+    /** Current at which an LED load's forward voltage is stated, amperes (typical indicator LED, 10 mA). */
+    static final double LED_LOAD_FIT_AMPS = 0.010;
+
     private static final String GND = Connectivity.GROUND;
 
     /** The collections of a fresh build; empty and unused when re-flattening (then {@link #base} numbers everything). */
@@ -441,7 +444,8 @@ public final class NetlistBuilder {
                 case GROUND -> done(x -> new PartReading(Map.of(), Map.of(), Map.of("g", 0.0), 0.0), null);
                 case SUPPLY -> supply();
                 case DRIVE_PIN -> drivePin();
-                case RESISTOR, LOAD -> resistor();
+                case RESISTOR -> resistor();
+                case LOAD -> load();
                 case CAPACITOR -> capacitor();
                 case DIODE, ZENER -> diode(junctionParams());
                 case LED -> diode(DiodeParams.fromForwardPoint(v(ParamKeys.FORWARD_VOLTS), v(ParamKeys.FORWARD_CURRENT_AMPS),
@@ -488,6 +492,28 @@ public final class NetlistBuilder {
             Resistor r = new Resistor(ref(), a, bb, v(ParamKeys.RESISTANCE_OHMS));
             els.add(r);
             done(x -> twoTerminal(x, a, bb, r.current(x), "a", "b"), null);
+        }
+
+        /**
+         * A contact-side load: its steady resistance, or for an LED load the series resistor and an LED
+         * fitted through its forward voltage at {@value #LED_LOAD_FIT_AMPS} A (emission coefficient 2,
+         * typical indicator LED) at the datasheet temperature, so that the load stays independent of the
+         * ambient like the other loads.
+         */
+        private void load() {
+            if (!"led".equals(part.option("loadKind"))) {
+                resistor();
+                return;
+            }
+            int a = pin("a");
+            int bb = pin("b");
+            int ai = series(a, v("resistanceOhms"), "resistor");
+            DiodeParams led = DiodeParams.fromForwardPoint(v("forwardVolts"), LED_LOAD_FIT_AMPS, 2.0,
+                    DiodeParams.DATASHEET_TEMPERATURE_KELVIN);
+            JunctionElement j = new JunctionElement(ref(), ai, bb, new Diode(led), DiodeParams.DATASHEET_TEMPERATURE_KELVIN,
+                    o.junctionGminSiemens());
+            els.add(j);
+            done(x -> twoTerminal(x, a, bb, j.current(x), "a", "b"), null);
         }
 
         private void capacitor() {

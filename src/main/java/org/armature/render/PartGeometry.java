@@ -55,6 +55,9 @@ public final class PartGeometry {
             case RELAY -> List.of(new Box(-0.8, -0.55, 0.8, 0.55), new Box(3.65, -0.75, 6.35, 0.95));
             case LOAD -> switch (part.option(ParamKeys.LOAD_KIND)) {
                 case "lamp" -> List.of(new Box(-0.75, -0.75, 0.75, 0.75));
+                case "motor" -> List.of(new Box(-0.85, -0.85, 0.85, 0.85));
+                case "solenoid" -> List.of(new Box(-0.35, -1.05, 0.35, 1.05));
+                case "capacitive" -> List.of(new Box(-0.8, -0.4, 0.8, 0.4));
                 case "led" -> List.of(new Box(-0.6, -0.55, 1.45, 0.6));
                 default -> List.of(new Box(-0.4, -1.05, 0.4, 1.05));
             };

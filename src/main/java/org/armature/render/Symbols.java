@@ -50,6 +50,9 @@ final class Symbols {
             case LOAD -> {
                 switch (part.option(ParamKeys.LOAD_KIND)) {
                     case "lamp" -> lamp(pen, ink, s);
+                    case "motor" -> motor(pen, ink, s);
+                    case "solenoid" -> inductor(pen, ink, s);
+                    case "capacitive" -> capacitor(pen, ink, s);
                     case "led" -> {
                         diode(pen, ink, s, Bar.PLAIN);
                         ledArrows(pen, ink, s);
@@ -113,6 +116,24 @@ final class Symbols {
         double d = r * Math.sqrt(0.5);
         pen.line(-d, -d, d, d, ink, s);
         pen.line(-d, d, d, -d, ink, s);
+    }
+
+    /** A motor (IEC 60617 style): a circle with the letter M, leads to (0, ∓2). */
+    private static void motor(Pen pen, Colour ink, Stroke s) {
+        double r = 0.8;
+        pen.line(0, -2, 0, -r, ink, s);
+        pen.line(0, r, 0, 2, ink, s);
+        pen.circle(0, 0, r, ink, s);
+        pen.text("M", 0, 0, TextStyle.centred(0.8), ink);
+    }
+
+    /** An inductive load (solenoid or contactor coil): four half-turns from (0, −1) to (0, 1). */
+    private static void inductor(Pen pen, Colour ink, Stroke s) {
+        pen.line(0, -2, 0, -1, ink, s);
+        pen.line(0, 1, 0, 2, ink, s);
+        for (int k = 0; k < 4; k++) {
+            pen.arc(0, -0.75 + 0.5 * k, 0.25, -90, 180, ink, s);
+        }
     }
 
     /** Base at (−2, 0), collector and emitter at (1, ∓2) for NPN, emitter on top for PNP. */

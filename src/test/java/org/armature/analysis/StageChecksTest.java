@@ -46,7 +46,9 @@ class StageChecksTest {
     @DisplayName("every check id of the table is reported, in order, for a solvable stage")
     void allIds() {
         List<String> ids = darlington.checks().stream().map(CheckResult::id).toList();
-        assertEquals(StageChecks.IDS.subList(0, 9), ids);
+        // without a release-time requirement and with a lamp (not inductive): no relay.release-time, no contact.break
+        assertEquals(StageChecks.IDS.stream().filter(id -> !id.equals("relay.release-time") && !id.equals("contact.break"))
+                .toList(), ids);
         assertEquals(32, darlington.cornerCount());
     }
 

@@ -86,6 +86,22 @@ class CheckCommandTest {
     }
 
     @Test
+    @DisplayName("check --json reports the coil and contact ids, contact.break for an inductive load")
+    void contactIdsInJson() throws Exception {
+        Path sol = dir.resolve("sol.stage.json");
+        assertEquals(0, CliRun.of("new", "low-side-npn", "--load", "solenoid", "--contact-protection", "diode",
+                "-o", sol.toString()).status());
+        CliRun r = CliRun.of("check", sol.toString(), "--json", "--no-transient");
+        assertEquals(0, r.status(), r.err());
+        Set<String> ids = new HashSet<>();
+        for (JsonNode c : JSON.readTree(r.out()).get("checks")) {
+            ids.add(c.get("id").asText());
+        }
+        assertTrue(ids.containsAll(Set.of("coil.voltage", "coil.temperature", "contact.current", "contact.voltage",
+                "contact.inrush", "contact.break")), ids.toString());
+    }
+
+    @Test
     @DisplayName("check: --supply-tolerance and the ambient range reach the corners")
     void overrides() throws Exception {
         CliRun r = CliRun.of("check", file.toString(), "--json", "--no-transient", "--supply-tolerance", "5",

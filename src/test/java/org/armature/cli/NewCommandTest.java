@@ -92,6 +92,18 @@ class NewCommandTest {
             low-side-npn --suppressor rc           | --suppressor-resistance     | 390   | R5  | resistanceOhms                       | 390
             low-side-npn --suppressor rc           | --snubber-capacitance       | 220n  | C1  | capacitanceFarads                    | 220e-9
             high-side-pnp --suppressor resistor    | --suppressor-resistance     | 1k    | R5  | resistanceOhms                       | 1000
+            low-side-npn                           | --max-coil-voltage          | 150   | K1  | maxCoilVoltagePercent                | 150
+            low-side-npn                           | --contact-supply-tolerance  | 5     | V2  | tolerancePercent                     | 5
+            low-side-npn                           | --load-resistance           | 96    | E1  | resistanceOhms                       | 96
+            low-side-npn                           | --load-inrush               | 12    | E1  | inrushMultiple                       | 12
+            low-side-npn                           | --load-inrush-time          | 20m   | E1  | inrushSeconds                        | 0.02
+            low-side-npn                           | --load-power-factor         | 0.35  | E1  | powerFactor                          | 0.35
+            low-side-npn                           | --load-inductance           | 800m  | E1  | inductanceHenries                    | 0.8
+            low-side-npn                           | --contact-rating-ac-current | 16    | K1  | contactRatedAmps                     | 16
+            low-side-npn                           | --contact-rating-ac-voltage | 277   | K1  | contactRatedVolts                    | 277
+            low-side-npn                           | --contact-rating-dc-current | 8     | K1  | contactRatedDcAmps                   | 8
+            low-side-npn                           | --contact-rating-dc-voltage | 48    | K1  | contactRatedDcVolts                  | 48
+            low-side-npn                           | --contact-make-current      | 80    | K1  | contactMakeAmps                      | 80
             """)
     @DisplayName("each value option sets its part's parameter, in SI, and nothing else")
     void valueOption(String variant, String option, String text, String ref, String key, double expected) {
@@ -222,12 +234,60 @@ class NewCommandTest {
     }
 
     @Test
+    @DisplayName("reproduction: a 230 V AC contact rail keeps the lamp's 12 W true (230² / 12 = 4,408 Ω, derived), not 48 Ω drawing 4.79 A")
+    void contactRailKeepsLoadPower() {
+        Path file = dir.resolve("m.stage.json");
+        CliRun r = newStage("low-side-npn --contact-supply 230 --contact-waveform ac", file);
+        assertEquals(0, r.status(), r.err());
+        Stage s = StageFiles.open(file).first();
+        assertEquals("ac-rms", s.require("V2").option("waveform"));
+        assertEquals(230.0 * 230 / 12, s.require("E1").value("resistanceOhms"), 1e-9);
+        assertFalse(org.armature.analysis.StageChecks.run(s).findings().stream()
+                .anyMatch(f -> f.key().equals("contact.load-power-mismatch")));
+    }
+
+    @Test
+    @DisplayName("load kind, power, insulation class and contact protection: a 24 V, 12 W DC solenoid with the rule-of-thumb RC")
+    void contactSideWords() {
+        Path file = dir.resolve("v.stage.json");
+        CliRun r = newStage("low-side-npn --load solenoid --load-power 12 --insulation-class F --contact-protection rc", file);
+        assertEquals(0, r.status(), r.err());
+        Stage s = StageFiles.open(file).first();
+        assertEquals("solenoid", s.require("E1").option("loadKind"));
+        assertEquals(24.0 * 24 / 12, s.require("E1").value("resistanceOhms"), 1e-9);   // 48 Ω (derived)
+        assertEquals(155, s.require("K1").value("insulationClassCelsius"), 0);          // class F, IEC 60085
+        assertEquals(12, s.require("R5").value("resistanceOhms"), 1e-9);     // 0.5 Ω/V × 26.4 V → E12 (CT-7)
+        assertEquals(680e-9, s.require("C2").value("capacitanceFarads"), 1e-15); // 1 µF/A × 0.55 A → E6 up
+        var br = org.armature.analysis.StageChecks.run(s).check("contact.break").orElseThrow();
+        assertTrue(br.explanation().contains("with RC across the contacts (R5, C2)"), br.explanation());
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', textBlock = """
+            low-side-npn --contact-waveform ac --contact-protection diode | diode applies only to a DC contact rail
+            low-side-npn --varistor-voltage 100                           | need --contact-protection rc or varistor
+            low-side-npn --load heater                                     | "heater" is not a load kind
+            low-side-npn --insulation-class Q                              | "Q" is not a thermal class
+            """)
+    @DisplayName("contact-side usage errors are one sentence with status 2")
+    void contactUsageErrors(String args, String fragment) {
+        Path file = dir.resolve("y.stage.json");
+        CliRun r = newStage(args, file);
+        assertEquals(2, r.status(), r.err());
+        assertTrue(r.err().contains(fragment), r.err());
+        assertTrue(r.noStackTrace(), r.err());
+        assertFalse(Files.exists(file));
+    }
+
+    @Test
     @DisplayName("new --help documents every value option")
     void helpListsEveryOption() {
         CliRun r = CliRun.of("new", "--help");
         assertEquals(0, r.status());
         Stream.concat(Arrays.stream(StageValue.values()).map(StageValue::optionName),
-                        Stream.of("--suppressor", "--drive", "--pin-state", "--ambient", "--output", "--force"))
+                        Stream.of("--suppressor", "--drive", "--pin-state", "--ambient", "--output", "--force",
+                                "--contact-waveform", "--load", "--insulation-class", "--contact-protection",
+                                "--protection-resistance", "--protection-capacitance", "--varistor-voltage"))
                 .forEach(o -> assertTrue(r.out().contains(o), o));
     }
 }

@@ -70,7 +70,7 @@ class StageJsonRoundTripTest {
     void userDataIsKept() {
         Stage s = Templates.defaultStage()
                 .updatePart("R1", r -> r.with("resistanceOhms", -5).with("wattage", 3))
-                .updatePart("E1", e -> e.withOption("loadKind", "motor").withOption("colour", "red"));
+                .updatePart("E1", e -> e.withOption("loadKind", "heater-fan").withOption("colour", "red"));
         StageDocument back = StageJson.parse(StageJson.write(StageDocument.of(s)));
         assertEquals(s, back.first());
         List<String> keys = Validator.validate(back.first()).stream().map(Finding::key).toList();

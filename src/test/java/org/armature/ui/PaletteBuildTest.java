@@ -45,7 +45,7 @@ import org.testfx.util.WaitForAsyncUtils;
 @ExtendWith(ApplicationExtension.class)
 class PaletteBuildTest {
 
-    /** CHECKS NM-6 (common practice): two engines stop inside reltol 1e-3; a milliampere agrees to 1e-6 A. */
+    /** check-values.md NM-6 (common practice): two engines stop inside reltol 1e-3; a milliampere agrees to 1e-6 A. */
     private static final double NM6_AMPS = 1e-6;
 
     private EditorViewModel vm;
