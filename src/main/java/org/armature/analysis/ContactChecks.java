@@ -1,5 +1,6 @@
 package org.armature.analysis;
 
+import org.armature.model.StageRoles;
 import static org.armature.analysis.Quantities.amps;
 import static org.armature.analysis.Quantities.celsius;
 import static org.armature.analysis.Quantities.ohms;

@@ -9,7 +9,7 @@ import java.util.Locale;
  * <p>The utilization categories are the duty names relay and control-device ratings use:
  * AC-15 / DC-13 (control of electromagnetic loads) from IEC 60947-5-1; AC-1 / DC-1 (non-inductive
  * or slightly inductive loads), AC-3 (squirrel-cage motors), AC-5b / DC-6 (incandescent lamps) from
- * IEC 60947-4-1, which relay datasheets quote beside them (category letters from memory; CHECKS
+ * IEC 60947-4-1, which relay datasheets quote beside them (category letters from memory; check-values.md
  * CT-8).
  */
 public enum LoadKind {
