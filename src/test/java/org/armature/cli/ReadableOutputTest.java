@@ -64,7 +64,7 @@ class ReadableOutputTest {
         int firstCheck = out.indexOf("relay.operates");
         assertTrue(caution > 0 && caution < firstCheck, out);
         assertFalse(out.contains("1.00 channels"), out);
-        assertTrue(out.contains("1 channel draws"), out);
+        assertTrue(out.contains("One channel draws"), out);
         assertNoTrailingSpaces(out);
     }
 

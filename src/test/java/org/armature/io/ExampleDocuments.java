@@ -147,7 +147,7 @@ final class ExampleDocuments {
                 .updatePart("D2", d -> d.with("breakdownVolts", 15))
                 .updatePart("K1", k -> k.with("coilResistanceOhms", 360).with("mustOperateVolts", 8.4)
                         .with("mustReleaseVolts", 1.0).with("inductanceReleasedHenries", 0.75)
-                        .with("inductanceAttractedHenries", 1.6).with("contactRatedVolts", 250)
+                        .with("inductanceAttractedHenries", 1.6).with("contactRatedVolts", 277)
                         .with("contactRatedAmps", 16).with("coilThermalResistanceKelvinPerWatt", 90))
                 .updatePart("V2", v -> v.with("volts", 230).with("tolerancePercent", 10)
                         .withOption("waveform", "ac-rms"))

@@ -18,7 +18,7 @@ class ParamSpecUnitTest {
             Map.entry("Volts", Unit.VOLT), Map.entry("volts", Unit.VOLT), Map.entry("Amps", Unit.AMPERE),
             Map.entry("Farads", Unit.FARAD), Map.entry("Henries", Unit.HENRY), Map.entry("Watts", Unit.WATT),
             Map.entry("Percent", Unit.PERCENT), Map.entry("Celsius", Unit.CELSIUS), Map.entry("Seconds", Unit.SECOND),
-            Map.entry("Metres", Unit.METRE), Map.entry("Grams", Unit.GRAM));
+            Map.entry("Metres", Unit.METRE), Map.entry("Grams", Unit.GRAM), Map.entry("Kelvin", Unit.KELVIN));
 
     @ParameterizedTest
     @EnumSource(PartKind.class)
