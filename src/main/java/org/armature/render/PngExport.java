@@ -1,0 +1,102 @@
+package org.armature.render;
+
+import java.awt.Graphics2D;
+import java.awt.image.BufferedImage;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.util.Iterator;
+import javax.imageio.IIOImage;
+import javax.imageio.ImageIO;
+import javax.imageio.ImageTypeSpecifier;
+import javax.imageio.ImageWriter;
+import javax.imageio.metadata.IIOInvalidTreeException;
+import javax.imageio.metadata.IIOMetadata;
+import javax.imageio.metadata.IIOMetadataNode;
+import javax.imageio.stream.ImageOutputStream;
+
+/**
+ * PNG of a sheet through Java2D and the {@link Graphics2DPen} (the pen of the SVG export): no
+ * window, no display, no toolkit. The image's size is the sheet's size times the scale, rounded up;
+ * the file records its resolution (scale × 96 dots per inch, CSS pixels) so print layouts place it
+ * at its real size.
+ */
+public final class PngExport {
+
+    /** CSS pixels per inch: a sheet at scale 1 is this many dots per inch. */
+    public static final double CSS_DPI = 96;
+
+    private PngExport() {
+    }
+
+    /** The scale that gives a resolution, dots per inch (300 for print gives 3.125). */
+    public static double scaleForDpi(double dpi) {
+        if (!(dpi > 0) || !Double.isFinite(dpi)) {
+            throw new IllegalArgumentException("dpi must be positive, was " + dpi);
+        }
+        return dpi / CSS_DPI;
+    }
+
+    /**
+     * The sheet as an image.
+     *
+     * @param scale image pixels per sheet unit, positive (1, 2, 4, or {@link #scaleForDpi})
+     * @param transparent leave the background transparent instead of the palette's paper
+     */
+    public static BufferedImage image(Sheet sheet, double scale, boolean transparent) {
+        if (!(scale > 0) || !Double.isFinite(scale)) {
+            throw new IllegalArgumentException("scale must be positive, was " + scale);
+        }
+        int w = (int) Math.ceil(sheet.width() * scale);
+        int h = (int) Math.ceil(sheet.height() * scale);
+        BufferedImage img = new BufferedImage(w, h, BufferedImage.TYPE_INT_ARGB);
+        Graphics2D g = img.createGraphics();
+        try {
+            sheet.draw(new Graphics2DPen(g, Affine.scaling(scale)), !transparent);
+        } finally {
+            g.dispose();
+        }
+        return img;
+    }
+
+    /** The PNG file's bytes of an image, with its resolution in dots per inch recorded. */
+    public static byte[] encode(BufferedImage img, double dpi) {
+        Iterator<ImageWriter> writers = ImageIO.getImageWritersByFormatName("png");
+        if (!writers.hasNext()) {
+            throw new IllegalStateException("this Java runtime has no PNG writer");
+        }
+        ImageWriter writer = writers.next();
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        try (ImageOutputStream out = ImageIO.createImageOutputStream(bytes)) {
+            writer.setOutput(out);
+            IIOMetadata meta = writer.getDefaultImageMetadata(ImageTypeSpecifier.createFromRenderedImage(img), null);
+            resolution(meta, dpi);
+            writer.write(null, new IIOImage(img, null, meta), null);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot encode the PNG", e);
+        } finally {
+            writer.dispose();
+        }
+        return bytes.toByteArray();
+    }
+
+    /** The PNG bytes of a sheet. */
+    public static byte[] png(Sheet sheet, double scale, boolean transparent) {
+        return encode(image(sheet, scale, transparent), scale * CSS_DPI);
+    }
+
+    private static void resolution(IIOMetadata meta, double dpi) throws IIOInvalidTreeException {
+        // the standard tree gives pixel size in millimetres; the PNG writer turns it into a pHYs chunk
+        double mmPerPixel = 25.4 / dpi;
+        IIOMetadataNode h = new IIOMetadataNode("HorizontalPixelSize");
+        h.setAttribute("value", Double.toString(mmPerPixel));
+        IIOMetadataNode v = new IIOMetadataNode("VerticalPixelSize");
+        v.setAttribute("value", Double.toString(mmPerPixel));
+        IIOMetadataNode dim = new IIOMetadataNode("Dimension");
+        dim.appendChild(h);
+        dim.appendChild(v);
+        IIOMetadataNode root = new IIOMetadataNode("javax_imageio_1.0");
+        root.appendChild(dim);
+        meta.mergeTree("javax_imageio_1.0", root);
+    }
+}
