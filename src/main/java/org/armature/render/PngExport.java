@@ -86,17 +86,15 @@ public final class PngExport {
     }
 
     private static void resolution(IIOMetadata meta, double dpi) throws IIOInvalidTreeException {
-        // the standard tree gives pixel size in millimetres; the PNG writer turns it into a pHYs chunk
-        double mmPerPixel = 25.4 / dpi;
-        IIOMetadataNode h = new IIOMetadataNode("HorizontalPixelSize");
-        h.setAttribute("value", Double.toString(mmPerPixel));
-        IIOMetadataNode v = new IIOMetadataNode("VerticalPixelSize");
-        v.setAttribute("value", Double.toString(mmPerPixel));
-        IIOMetadataNode dim = new IIOMetadataNode("Dimension");
-        dim.appendChild(h);
-        dim.appendChild(v);
-        IIOMetadataNode root = new IIOMetadataNode("javax_imageio_1.0");
-        root.appendChild(dim);
-        meta.mergeTree("javax_imageio_1.0", root);
+        // the PNG format's own tree: the standard tree's pixel size is turned into pixels per metre
+        // the wrong way round by some JDK writers, so the pHYs chunk is given directly
+        String ppm = Long.toString(Math.round(dpi / 0.0254));
+        IIOMetadataNode phys = new IIOMetadataNode("pHYs");
+        phys.setAttribute("pixelsPerUnitXAxis", ppm);
+        phys.setAttribute("pixelsPerUnitYAxis", ppm);
+        phys.setAttribute("unitSpecifier", "meter");
+        IIOMetadataNode root = new IIOMetadataNode("javax_imageio_png_1.0");
+        root.appendChild(phys);
+        meta.mergeTree("javax_imageio_png_1.0", root);
     }
 }

@@ -203,7 +203,7 @@ public final class DesignReport {
             rows.add(new PdfFlow.Row(List.of(c.status().word(), c.id(), EngineeringNotation.format(c.value(), c.unit()),
                     EngineeringNotation.format(c.limit(), c.unit()), corner), c.explanation(), colour(c.status())));
         }
-        f.table(new double[] {0.08, 0.22, 0.13, 0.13, 0.44}, List.of("Status", "Check", "Value", "Limit",
+        f.table(new double[] {0.07, 0.29, 0.12, 0.12, 0.40}, List.of("Status", "Check", "Value", "Limit",
                 "Deciding corner"), rows);
         List<Finding> other = r.findings().stream()
                 .filter(x -> !x.key().startsWith(StageSnapshot.CAUTION_PREFIX) && x.severity() != Severity.INFO).toList();
