@@ -14,8 +14,9 @@ import org.armature.model.Stage;
  * @param annotations its readouts ({@link Annotations#NONE} for a bare drawing)
  * @param title what the title block says
  * @param palette colours (the light print theme unless another is asked for)
+ * @param titled draw the title block; false gives the bare drawing with its margin
  */
-public record Sheet(Stage stage, Annotations annotations, TitleBlock title, Palette palette) {
+public record Sheet(Stage stage, Annotations annotations, TitleBlock title, Palette palette, boolean titled) {
 
     /** Sheet units (CSS pixels) per grid unit: the canvas's size at zoom 1. */
     public static final double PIXELS_PER_GRID = 22;
@@ -39,6 +40,21 @@ public record Sheet(Stage stage, Annotations annotations, TitleBlock title, Pale
         }
     }
 
+    /** A sheet with its title block. */
+    public Sheet(Stage stage, Annotations annotations, TitleBlock title, Palette palette) {
+        this(stage, annotations, title, palette, true);
+    }
+
+    /** The same sheet with or without its title block. */
+    public Sheet withTitle(boolean show) {
+        return new Sheet(stage, annotations, title, palette, show);
+    }
+
+    /** The same sheet with other readouts ({@link Annotations#NONE} for the bare drawing). */
+    public Sheet withAnnotations(Annotations a) {
+        return new Sheet(stage, a, title, palette, titled);
+    }
+
     /** The drawing's area in grid units: the layout's extent plus {@link #MARGIN_GRID}. */
     public Box drawingExtent() {
         return SchematicRenderer.layout(stage, annotations).extent().inflate(MARGIN_GRID);
@@ -46,6 +62,9 @@ public record Sheet(Stage stage, Annotations annotations, TitleBlock title, Pale
 
     /** Sheet width, sheet units. */
     public double width() {
+        if (!titled) {
+            return Math.ceil(drawingExtent().width() * PIXELS_PER_GRID);
+        }
         double text = Math.max(NAME.width(title.stageName()) + DOC.width(title.documentTitle()) + 40,
                 COND.width(conditionsLine()) + 20);
         double block = Math.max(TITLE_MIN_WIDTH, text) + 2 * TITLE_MARGIN;
@@ -54,6 +73,9 @@ public record Sheet(Stage stage, Annotations annotations, TitleBlock title, Pale
 
     /** Sheet height, sheet units. */
     public double height() {
+        if (!titled) {
+            return Math.ceil(drawingExtent().height() * PIXELS_PER_GRID);
+        }
         return Math.ceil(drawingExtent().height() * PIXELS_PER_GRID + TITLE_HEIGHT + 2 * TITLE_MARGIN);
     }
 
@@ -93,7 +115,9 @@ public record Sheet(Stage stage, Annotations annotations, TitleBlock title, Pale
         pen.push(drawingTransform());
         SchematicRenderer.draw(stage, annotations, renderOptions(), pen);
         pen.pop();
-        drawTitle(pen, w, h);
+        if (titled) {
+            drawTitle(pen, w, h);
+        }
     }
 
     /** The conditions as the title block writes them. */
@@ -114,8 +138,8 @@ public record Sheet(Stage stage, Annotations annotations, TitleBlock title, Pale
         pen.text(title.date(), frame.maxX() - 10, divider + 20, DATE, palette.valueInk());
     }
 
-    /** A sheet of a stage with a title block of its own name and no conditions (a bare drawing). */
-    public static Sheet bare(Stage stage, Annotations annotations, Palette palette, String date) {
-        return new Sheet(stage, annotations, new TitleBlock(stage.name(), "", date, ""), palette);
+    /** The bare drawing of a stage: no title block, the margin around the drawing only. */
+    public static Sheet bare(Stage stage, Annotations annotations, Palette palette) {
+        return new Sheet(stage, annotations, new TitleBlock(stage.name(), "", "", ""), palette, false);
     }
 }
