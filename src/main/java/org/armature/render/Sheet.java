@@ -7,16 +7,14 @@ import org.armature.model.Stage;
  * call and options the canvas makes for these layers) with a title block under it. SVG, PNG and the
  * report's schematic all draw a sheet, so they show the same thing.
  *
- * <p>Sheet units are CSS pixels at scale 1 ({@value #PIXELS_PER_GRID} per grid unit, the canvas at
+ * <p>Immutable. Sheet units are CSS pixels at scale 1 ({@value #PIXELS_PER_GRID} per grid unit, the canvas at
  * zoom 1); a pen's base transform scales them to its device (image pixels, PDF points).
  *
- * @param stage the stage drawn
- * @param annotations its readouts ({@link Annotations#NONE} for a bare drawing)
- * @param title what the title block says
- * @param palette colours (the light print theme unless another is asked for)
- * @param titled draw the title block; false gives the bare drawing with its margin
+ * <p>Its parts: the stage, its readouts ({@link Annotations#NONE} for a bare drawing), what the
+ * title block says, the colours (the light print theme unless another is asked for), and whether
+ * the title block is drawn (without it: the bare drawing with its margin).
  */
-public record Sheet(Stage stage, Annotations annotations, TitleBlock title, Palette palette, boolean titled) {
+public final class Sheet {
 
     /** Sheet units (CSS pixels) per grid unit: the canvas's size at zoom 1. */
     public static final double PIXELS_PER_GRID = 22;
@@ -34,10 +32,50 @@ public record Sheet(Stage stage, Annotations annotations, TitleBlock title, Pale
     private static final TextStyle COND = new TextStyle(11, false, TextStyle.HAnchor.START, TextStyle.VAnchor.TOP);
     private static final TextStyle DATE = new TextStyle(10, false, TextStyle.HAnchor.END, TextStyle.VAnchor.TOP);
 
-    public Sheet {
+    private final Stage stage;
+    private final Annotations annotations;
+    private final TitleBlock title;
+    private final Palette palette;
+    private final boolean titled;
+    /** The drawing's extent plus margin: the label layout is the costly part, so it is found once. */
+    private final Box extent;
+
+    /** A sheet, with or without its title block. */
+    public Sheet(Stage stage, Annotations annotations, TitleBlock title, Palette palette, boolean titled) {
         if (stage == null || annotations == null || title == null || palette == null) {
             throw new IllegalArgumentException("a sheet needs a stage, annotations, a title block and a palette");
         }
+        this.stage = stage;
+        this.annotations = annotations;
+        this.title = title;
+        this.palette = palette;
+        this.titled = titled;
+        this.extent = SchematicRenderer.layout(stage, annotations).extent().inflate(MARGIN_GRID);
+    }
+
+    /** The stage drawn. */
+    public Stage stage() {
+        return stage;
+    }
+
+    /** Its readouts. */
+    public Annotations annotations() {
+        return annotations;
+    }
+
+    /** What the title block says. */
+    public TitleBlock title() {
+        return title;
+    }
+
+    /** The colours. */
+    public Palette palette() {
+        return palette;
+    }
+
+    /** True when the title block is drawn. */
+    public boolean titled() {
+        return titled;
     }
 
     /** A sheet with its title block. */
@@ -47,7 +85,7 @@ public record Sheet(Stage stage, Annotations annotations, TitleBlock title, Pale
 
     /** The same sheet with or without its title block. */
     public Sheet withTitle(boolean show) {
-        return new Sheet(stage, annotations, title, palette, show);
+        return show == titled ? this : new Sheet(stage, annotations, title, palette, show);
     }
 
     /** The same sheet with other readouts ({@link Annotations#NONE} for the bare drawing). */
@@ -57,7 +95,7 @@ public record Sheet(Stage stage, Annotations annotations, TitleBlock title, Pale
 
     /** The drawing's area in grid units: the layout's extent plus {@link #MARGIN_GRID}. */
     public Box drawingExtent() {
-        return SchematicRenderer.layout(stage, annotations).extent().inflate(MARGIN_GRID);
+        return extent;
     }
 
     /** Sheet width, sheet units. */
