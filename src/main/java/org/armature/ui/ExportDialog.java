@@ -219,6 +219,17 @@ public final class ExportDialog {
         theme.getItems().setAll(ExportTheme.values());
         theme.getSelectionModel().select(ExportTheme.LIGHT);
         theme.setId("export-theme");
+        theme.setConverter(new javafx.util.StringConverter<>() {
+            @Override
+            public String toString(ExportTheme t) {
+                return t == null ? "" : t == ExportTheme.LIGHT ? "light (print)" : "dark";
+            }
+
+            @Override
+            public ExportTheme fromString(String text) {
+                return ExportTheme.byId(text.split(" ")[0]).orElse(ExportTheme.LIGHT);
+            }
+        });
         ComboBox<String> pin = new ComboBox<>();
         pin.getItems().setAll("pin high", "pin low");
         pin.getSelectionModel().select(stage.conditions().pinHigh() ? 0 : 1);
