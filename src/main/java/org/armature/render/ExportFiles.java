@@ -42,6 +42,17 @@ public final class ExportFiles {
      * @throws ExportException when the folder is missing or unwritable, or the device is full
      */
     public static void write(Path file, byte[] content) {
+        write(file, content, ExportFiles::moveOver);
+    }
+
+    /** The last step of a write: put the finished temporary file in the target's place. */
+    @FunctionalInterface
+    interface Replace {
+        void replace(Path temp, Path target) throws IOException;
+    }
+
+    /** {@link #write(Path, byte[])} with the last step given (tests make it fail as a full disk would). */
+    static void write(Path file, byte[] content, Replace replace) {
         Path target = file.toAbsolutePath();
         Path dir = target.getParent();
         if (dir == null || Files.isDirectory(target)) {
@@ -57,11 +68,7 @@ public final class ExportFiles {
                 }
                 ch.force(true);
             }
-            try {
-                Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
+            replace.replace(temp, target);
             temp = null;
         } catch (AccessDeniedException e) {
             throw new ExportException("Cannot write " + file + ": permission denied.", e);
@@ -77,6 +84,14 @@ public final class ExportFiles {
                     // the write already failed and says so; a stray temporary file is the lesser harm
                 }
             }
+        }
+    }
+
+    private static void moveOver(Path temp, Path target) throws IOException {
+        try {
+            Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        } catch (AtomicMoveNotSupportedException e) {
+            Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
         }
     }
 
