@@ -191,9 +191,13 @@ class ExportTest {
     void oneCodePath() {
         StageSnapshot snap = snapshot(Templates.defaultStage(), true);
         Sheet sheet = snap.sheet(ExportTheme.LIGHT.palette());
-        // the canvas path: the renderer in grid units with the canvas's layers for an export
+        // the canvas path: the call SchematicCanvas makes for its drawing layer (options built as it
+        // builds them: every option of all(), its palette, the drawing layers, a visible area, no selection)
         RecordingPen canvas = new RecordingPen();
-        SchematicRenderer.draw(sheet.stage(), sheet.annotations(), sheet.renderOptions(), canvas);
+        RenderOptions canvasOptions = RenderOptions.all().withPalette(sheet.palette())
+                .withLayers(java.util.EnumSet.of(Layer.WIRES, Layer.PARTS, Layer.LABELS, Layer.ANNOTATIONS))
+                .withGridArea(new Box(-20, -20, 60, 60)).withSelection(Selection.EMPTY);
+        SchematicRenderer.draw(sheet.stage(), sheet.annotations(), canvasOptions, canvas);
         // the SVG export's drawing, recorded through the same call SvgExport makes, mapped back to grid units
         RecordingPen export = new RecordingPen();
         sheet.draw(export, true);
