@@ -112,9 +112,16 @@ public final class DesignReport {
             f.paragraph(s.stage().description(), 10.5, false, PdfFlow.INK);
         }
         f.paragraph("Readouts on the schematic: " + s.conditions() + ".", PdfFlow.BODY, false, PdfFlow.MUTED);
-        f.paragraph(s.solveStatus(), PdfFlow.BODY, false, PdfFlow.MUTED);
-        s.checks().ifPresent(r -> f.paragraph("Overall verdict: " + r.overall().word() + " (worst of "
-                + r.checks().size() + " checks over " + r.cornerCount() + " corners).", 10.5, true, colour(r.overall())));
+        f.paragraph(sentence(s.solveStatus()), PdfFlow.BODY, false, PdfFlow.MUTED);
+        s.checks().ifPresent(r -> {
+            if (r.checks().isEmpty()) {
+                // no verdict is not a pass
+                f.paragraph("No check could be judged, so there is no overall verdict.", 10.5, true, FAIL);
+            } else {
+                f.paragraph("Overall verdict: " + r.overall().word() + " (worst of " + r.checks().size()
+                        + " checks over " + r.cornerCount() + " corners).", 10.5, true, colour(r.overall()));
+            }
+        });
     }
 
     private static void cautions(PdfFlow f, StageSnapshot s) {
@@ -298,6 +305,11 @@ public final class DesignReport {
         for (String note : r.notes()) {
             f.paragraph(note, PdfFlow.SMALL, false, PdfFlow.MUTED);
         }
+    }
+
+    private static String sentence(String text) {
+        String t = text.strip();
+        return t.isEmpty() || t.endsWith(".") ? t : t + ".";
     }
 
     private static PdfFlow.Row row(String a, String b) {

@@ -124,6 +124,19 @@ class DesignReportTest {
     }
 
     @Test
+    @DisplayName("a stage with no operating point gets no overall verdict rather than a pass (failed before the fix)")
+    void unsolvedHasNoVerdict() throws IOException {
+        // the default stage with only its first three wires: most nodes have no DC path to ground
+        org.armature.model.Stage broken = Templates.defaultStage();
+        broken = broken.withWires(broken.wires().subList(0, 3));
+        StageSnapshot snap = StageSnapshot.evaluate("Bench", broken, true, StageSnapshot.Depth.REPORT, DAY);
+        String t = text(DesignReport.pdf(snap));
+        assertFalse(t.contains("Overall verdict: pass"), t);
+        assertTrue(snap.checks().orElseThrow().checks().isEmpty(), "the checks cannot judge an unsolvable stage");
+        assertTrue(holds(t, "No", "check", "could", "be", "judged"), t);
+    }
+
+    @Test
     @DisplayName("the sizing chain and both edges' figures are in the report")
     void sizingAndEdges() throws IOException {
         String t = text(lowVoltagePdf);
