@@ -7,6 +7,7 @@ import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import java.awt.font.FontRenderContext;
 import java.awt.font.LineMetrics;
+import java.awt.geom.AffineTransform;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Path2D;
 import java.util.HashMap;
@@ -109,7 +110,21 @@ public final class Graphics2DPen extends DevicePen {
             case BASELINE -> y;
             case BOTTOM -> y - lm.getDescent();
         };
-        g.drawString(text, (float) left, (float) baseline);
+        float whole = Math.max(1, Math.round(size));
+        if (whole == size) {
+            g.drawString(text, (float) left, (float) baseline);
+            return;
+        }
+        // SVG writers take the font's whole-point size (JFreeSVG writes Font.getSize()): set the text
+        // in the nearest whole size and scale it to the exact one, so text never outgrows its box
+        Font set = (style.bold() ? bold : regular).computeIfAbsent(whole,
+                s -> ExportFonts.awt(style.bold()).deriveFont(style.bold() ? Font.BOLD : Font.PLAIN, s));
+        double k = size / whole;
+        AffineTransform saved = g.getTransform();
+        g.setFont(set);
+        g.scale(k, k);
+        g.drawString(text, (float) (left / k), (float) (baseline / k));
+        g.setTransform(saved);
     }
 
     private static BasicStroke basic(Stroke s) {

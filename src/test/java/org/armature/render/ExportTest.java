@@ -61,8 +61,22 @@ class ExportTest {
         List<SvgText> out = new ArrayList<>();
         for (int i = 0; i < nodes.getLength(); i++) {
             Element e = (Element) nodes.item(i);
-            out.add(new SvgText(e.getTextContent(), Double.parseDouble(e.getAttribute("x")),
-                    Double.parseDouble(e.getAttribute("y"))));
+            double x = Double.parseDouble(e.getAttribute("x"));
+            double y = Double.parseDouble(e.getAttribute("y"));
+            // apply the transforms of the element and its groups, innermost first (JFreeSVG writes matrix(...))
+            for (org.w3c.dom.Node n = e; n instanceof Element el; n = n.getParentNode()) {
+                String t = el.getAttribute("transform");
+                if (!t.isEmpty()) {
+                    String[] m = t.replaceAll("^matrix\\(|\\)$", "").split("[ ,]+");
+                    assertEquals(6, m.length, "a matrix transform: " + t);
+                    double[] v = java.util.Arrays.stream(m).mapToDouble(Double::parseDouble).toArray();
+                    double nx = v[0] * x + v[2] * y + v[4];
+                    double ny = v[1] * x + v[3] * y + v[5];
+                    x = nx;
+                    y = ny;
+                }
+            }
+            out.add(new SvgText(e.getTextContent(), x, y));
         }
         return out;
     }
