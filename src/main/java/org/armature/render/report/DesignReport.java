@@ -178,6 +178,9 @@ public final class DesignReport {
         refs.addAll(lo.keySet());
         for (String ref : refs) {
             PartResult any = hi.containsKey(ref) ? hi.get(ref) : lo.get(ref);
+            if (readings(hi.get(ref)).equals("–") && readings(lo.get(ref)).equals("–")) {
+                continue; // ground symbols and the like carry no readings
+            }
             parts.add(new PdfFlow.Row(List.of(ref + " (" + any.kind().title() + ")", readings(hi.get(ref)),
                     readings(lo.get(ref)))));
         }
@@ -210,7 +213,7 @@ public final class DesignReport {
             rows.add(new PdfFlow.Row(List.of(c.status().word(), c.id(), EngineeringNotation.format(c.value(), c.unit()),
                     EngineeringNotation.format(c.limit(), c.unit()), corner), c.explanation(), colour(c.status())));
         }
-        f.table(new double[] {0.07, 0.29, 0.12, 0.12, 0.40}, List.of("Status", "Check", "Value", "Limit",
+        f.table(new double[] {0.085, 0.285, 0.12, 0.12, 0.39}, List.of("Status", "Check", "Value", "Limit",
                 "Deciding corner"), rows);
         List<Finding> other = r.findings().stream()
                 .filter(x -> !x.key().startsWith(StageSnapshot.CAUTION_PREFIX) && x.severity() != Severity.INFO).toList();
