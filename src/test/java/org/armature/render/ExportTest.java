@@ -49,8 +49,8 @@ class ExportTest {
         return StageSnapshot.evaluate("Greenhouse valves", stage, pinHigh, StageSnapshot.Depth.DRAWING, DAY);
     }
 
-    /** One {@code <text>} element of the SVG: its content and its start-of-baseline position. */
-    record SvgText(String text, double x, double y) {
+    /** One {@code <text>} element of the SVG: its content, its start-of-baseline position and its size as shown. */
+    record SvgText(String text, double x, double y, double size) {
     }
 
     static List<SvgText> svgTexts(String svg) throws Exception {
@@ -63,6 +63,9 @@ class ExportTest {
             Element e = (Element) nodes.item(i);
             double x = Double.parseDouble(e.getAttribute("x"));
             double y = Double.parseDouble(e.getAttribute("y"));
+            java.util.regex.Matcher fs = java.util.regex.Pattern.compile("font-size:\\s*([0-9.]+)px")
+                    .matcher(e.getAttribute("style"));
+            double size = fs.find() ? Double.parseDouble(fs.group(1)) : Double.NaN;
             // apply the transforms of the element and its groups, innermost first (JFreeSVG writes matrix(...))
             for (org.w3c.dom.Node n = e; n instanceof Element el; n = n.getParentNode()) {
                 String t = el.getAttribute("transform");
@@ -70,13 +73,14 @@ class ExportTest {
                     String[] m = t.replaceAll("^matrix\\(|\\)$", "").split("[ ,]+");
                     assertEquals(6, m.length, "a matrix transform: " + t);
                     double[] v = java.util.Arrays.stream(m).mapToDouble(Double::parseDouble).toArray();
+                    size *= Math.sqrt(Math.abs(v[0] * v[3] - v[1] * v[2]));
                     double nx = v[0] * x + v[2] * y + v[4];
                     double ny = v[1] * x + v[3] * y + v[5];
                     x = nx;
                     y = ny;
                 }
             }
-            out.add(new SvgText(e.getTextContent(), x, y));
+            out.add(new SvgText(e.getTextContent(), x, y, size));
         }
         return out;
     }
@@ -104,6 +108,9 @@ class ExportTest {
         SvgText s = found.get(0);
         assertTrue(box.contains(s.x(), s.y()), "\"" + text + "\" at (" + s.x() + ", " + s.y() + ") lies outside the canvas's "
                 + box);
+        // and at the canvas's size: JFreeSVG writes whole-pixel font sizes, which made badges outgrow their
+        // tags until the pen scaled such text (this check failed before that fix)
+        assertEquals(c.style().size(), s.size(), 1e-3, "size of \"" + text + "\"");
     }
 
     @ParameterizedTest(name = "{0}")
