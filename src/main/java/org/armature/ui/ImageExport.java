@@ -1,64 +1,61 @@
 package org.armature.ui;
 
-import java.awt.image.BufferedImage;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
+import java.time.LocalDate;
 import javafx.embed.swing.SwingFXUtils;
-import javafx.scene.SnapshotParameters;
-import javafx.scene.canvas.Canvas;
 import javafx.scene.image.WritableImage;
-import javax.imageio.ImageIO;
+import javafx.scene.input.Clipboard;
+import javafx.scene.input.ClipboardContent;
 import org.armature.model.Stage;
-import org.armature.render.Affine;
 import org.armature.render.Annotations;
-import org.armature.render.Box;
+import org.armature.render.ExportTheme;
 import org.armature.render.Palette;
-import org.armature.render.RenderOptions;
-import org.armature.render.SchematicRenderer;
-import org.armature.render.SvgExport;
+import org.armature.render.PngExport;
+import org.armature.render.Sheet;
+import org.armature.render.report.StageSnapshot;
 
-/** SVG and PNG images of a stage, drawn by the same renderer as the canvas. Call on the FX thread for PNG. */
+/**
+ * The window's side of the image exports: the Java2D rendering of {@link PngExport} (the same sheet
+ * and pen as the files) turned into JavaFX images, and the drawing copied to the clipboard. Nothing
+ * here draws on its own; the renderer is the canvas's.
+ */
 public final class ImageExport {
 
-    /** Pixels per grid unit of a PNG at scale 1 (the screen's size at zoom 1). */
-    public static final double PNG_PIXELS_PER_GRID = SchematicCanvas.BASE_PIXELS_PER_GRID;
+    /** Scale of the image put on the clipboard: 2×, sharp on high-density screens and in documents. */
+    public static final double CLIPBOARD_SCALE = 2;
 
     private ImageExport() {
     }
 
-    /** Renders a stage into an image; {@code hiDpi} multiplies the resolution (2 for print). */
-    public static WritableImage render(Stage stage, Annotations a, Palette palette, double hiDpi) {
-        double k = PNG_PIXELS_PER_GRID * hiDpi;
-        Box e = SchematicRenderer.layout(stage, a).extent().inflate(SvgExport.MARGIN);
-        Canvas c = new Canvas(Math.ceil(e.width() * k), Math.ceil(e.height() * k));
-        var g = c.getGraphicsContext2D();
-        g.setFill(FxPen.fx(palette.paper()));
-        g.fillRect(0, 0, c.getWidth(), c.getHeight());
-        SchematicRenderer.draw(stage, a, RenderOptions.export(palette),
-                new FxPen(g, new Affine(k, 0, -e.minX() * k, 0, k, -e.minY() * k)));
-        return c.snapshot(new SnapshotParameters(), null);
+    /**
+     * The bare drawing of a stage (no title block) as a JavaFX image; any thread.
+     *
+     * @param scale image pixels per sheet unit (1 is the canvas at zoom 1)
+     */
+    public static WritableImage render(Stage stage, Annotations a, Palette palette, double scale) {
+        return SwingFXUtils.toFXImage(PngExport.image(Sheet.bare(stage, a, palette), scale, false), null);
     }
 
-    /** Writes a PNG file. */
-    public static void writePng(Stage stage, Annotations a, Palette palette, double hiDpi, Path file) {
-        BufferedImage img = SwingFXUtils.fromFXImage(render(stage, a, palette, hiDpi), null);
-        try {
-            ImageIO.write(img, "png", file.toFile());
-        } catch (IOException ex) {
-            throw new UncheckedIOException("cannot write " + file, ex);
-        }
+    /** The sheet (drawing and title block) of a snapshot as a JavaFX image; any thread. */
+    public static WritableImage render(StageSnapshot snapshot, ExportTheme theme, double scale) {
+        return SwingFXUtils.toFXImage(PngExport.image(snapshot.sheet(theme.palette()), scale, false), null);
     }
 
-    /** Writes an SVG file. */
-    public static void writeSvg(Stage stage, Annotations a, Palette palette, Path file) {
-        try {
-            Files.writeString(file, SvgExport.toSvg(stage, a, RenderOptions.export(palette), PNG_PIXELS_PER_GRID),
-                    StandardCharsets.UTF_8);
-        } catch (IOException ex) {
-            throw new UncheckedIOException("cannot write " + file, ex);
-        }
+    /**
+     * Copies the annotated drawing of a stage, with its title block, to the system clipboard as an
+     * image. Call on the FX thread (the clipboard's rule); the one DC solve takes milliseconds.
+     *
+     * @param documentTitle the stage file's title for the title block
+     * @param stage the stage as shown
+     * @return one sentence for the status line
+     */
+    public static String copyToClipboard(String documentTitle, Stage stage) {
+        StageSnapshot snap = StageSnapshot.evaluate(documentTitle, stage, stage.conditions().pinHigh(),
+                StageSnapshot.Depth.DRAWING, LocalDate.now());
+        WritableImage img = render(snap, ExportTheme.LIGHT, CLIPBOARD_SCALE);
+        ClipboardContent content = new ClipboardContent();
+        content.putImage(img);
+        Clipboard.getSystemClipboard().setContent(content);
+        return "Copied the drawing of " + stage.name() + " (" + (int) img.getWidth() + " × " + (int) img.getHeight()
+                + " pixels).";
     }
 }

@@ -248,8 +248,9 @@ public final class MainWindow {
         MenuItem save = item("Save", "Shortcut+S", e -> save());
         MenuItem saveAs = item("Save As…", "Shortcut+Shift+S", e -> chooseSaveAs());
         refreshRecent();
-        MenuItem svg = item("Export SVG…", null, e -> export("svg"));
-        MenuItem png = item("Export PNG…", null, e -> export("png"));
+        MenuItem svg = item("Export…", "Shortcut+Shift+E", e -> export());
+        MenuItem png = item("Copy Drawing as Image", null, e -> vm.say(ImageExport.copyToClipboard(
+                ExportDialog.documentTitle(vm.fileProperty().get()), vm.stage())));
         MenuItem quit = item("Quit", "Shortcut+Q", e -> confirmDiscard(Platform::exit));
         file.getItems().addAll(fromTemplate, open, save, saveAs, recentMenu, new SeparatorMenuItem(), svg, png,
                 new SeparatorMenuItem(), quit);
@@ -424,7 +425,7 @@ public final class MainWindow {
         });
         vm.stageProperty().addListener((o, a, b) -> syncSupply.run());
         Label sup = new Label("Supply", new FontIcon("mdi2f-flash-outline"));
-        Button export = tool("mdi2e-export-variant", "Export the drawing as SVG", () -> export("svg"));
+        Button export = tool("mdi2e-export-variant", "Export the drawing or a report", this::export);
         Button edgesB = tool("mdi2w-waveform", "Show the edges: turn-on and turn-off waveforms",
                 () -> edgesDrawer.setExpanded(!edgesDrawer.isExpanded()));
         edgesB.setId("edges-button");
@@ -557,27 +558,8 @@ public final class MainWindow {
         }
     }
 
-    private void export(String kind) {
-        FileChooser fc = new FileChooser();
-        fc.setTitle("Export " + kind.toUpperCase(Locale.ROOT));
-        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter(kind.toUpperCase(Locale.ROOT) + " image", "*." + kind));
-        fc.setInitialFileName(vm.fileName().replace(StageFiles.EXTENSION, "") + "." + kind);
-        File f = fc.showSaveDialog(window());
-        if (f == null) {
-            return;
-        }
-        try {
-            // the evaluation on the screen, whole: its stage with its own readouts
-            Evaluation shown = canvas.drawnEvaluation();
-            if (kind.equals("svg")) {
-                ImageExport.writeSvg(shown.stage(), vm.annotations(shown), canvas.palette(), f.toPath());
-            } else {
-                ImageExport.writePng(shown.stage(), vm.annotations(shown), canvas.palette(), 2, f.toPath());
-            }
-            vm.say("Exported " + f.getName());
-        } catch (java.io.UncheckedIOException ex) {
-            vm.say("Export failed: " + ex.getCause().getMessage());
-        }
+    private void export() {
+        ExportDialog.show(window(), vm, ExportDialog.BACKGROUND);
     }
 
     private void confirmDiscard(Runnable then) {

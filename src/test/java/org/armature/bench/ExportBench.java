@@ -1,0 +1,75 @@
+package org.armature.bench;
+
+import java.time.LocalDate;
+import java.util.concurrent.TimeUnit;
+import org.armature.model.Stage;
+import org.armature.model.StageTemplate;
+import org.armature.model.Templates;
+import org.armature.render.ExportTheme;
+import org.armature.render.PngExport;
+import org.armature.render.SvgExport;
+import org.armature.render.report.DesignReport;
+import org.armature.render.report.StageSnapshot;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Measurement;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.Threads;
+import org.openjdk.jmh.annotations.Warmup;
+
+/**
+ * The exports of a template, each from the stage (evaluation included, as the command line and the
+ * window do it): SVG of the sheet and PNG at 2× (target ≤ 300 ms each after warm-up), and the PDF
+ * report with its checks, sizing and both transient runs (target ≤ 2 s).
+ *
+ * <p>Run: {@code mvn -B -o test-compile exec:exec -Dbench="ExportBench -f 1 -wi 2 -w 2s -i 3 -r 2s"}.
+ */
+@State(Scope.Benchmark)
+@BenchmarkMode(Mode.AverageTime)
+@OutputTimeUnit(TimeUnit.MILLISECONDS)
+@Threads(1)
+@Fork(1)
+@Warmup(iterations = 2, time = 2)
+@Measurement(iterations = 3, time = 2)
+public class ExportBench {
+
+    /** Every template: the targets hold for any of them. */
+    @Param({"LOW_SIDE_NPN", "LOW_SIDE_NMOS", "DARLINGTON_CHANNEL", "HIGH_SIDE_PNP"})
+    public String template;
+
+    private Stage stage;
+    private final LocalDate day = LocalDate.of(2026, 12, 5);
+
+    /** Builds the stage once. */
+    @Setup
+    public void setUp() {
+        stage = Templates.build(StageTemplate.valueOf(template));
+    }
+
+    /** Evaluate (one DC solve) and write the SVG of the sheet. */
+    @Benchmark
+    public String svg() {
+        StageSnapshot s = StageSnapshot.evaluate("Bench", stage, true, StageSnapshot.Depth.DRAWING, day);
+        return SvgExport.toSvg(s.sheet(ExportTheme.LIGHT.palette()));
+    }
+
+    /** Evaluate and encode the PNG at 2×. */
+    @Benchmark
+    public byte[] png2x() {
+        StageSnapshot s = StageSnapshot.evaluate("Bench", stage, true, StageSnapshot.Depth.DRAWING, day);
+        return PngExport.png(s.sheet(ExportTheme.LIGHT.palette()), 2, false);
+    }
+
+    /** Evaluate in full (both pin states, checks, sizing, turn-on and turn-off runs) and write the PDF. */
+    @Benchmark
+    public byte[] report() {
+        StageSnapshot s = StageSnapshot.evaluate("Bench", stage, true, StageSnapshot.Depth.REPORT, day);
+        return DesignReport.pdf(s);
+    }
+}
