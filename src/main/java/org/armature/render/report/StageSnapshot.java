@@ -9,7 +9,7 @@ import org.armature.analysis.CheckOptions;
 import org.armature.analysis.CheckReport;
 import org.armature.analysis.SizingResult;
 import org.armature.analysis.StageChecks;
-import org.armature.analysis.StageRoles;
+import org.armature.model.StageRoles;
 import org.armature.analysis.TopologyCheck;
 import org.armature.model.Finding;
 import org.armature.model.Part;
