@@ -34,6 +34,8 @@ public final class EdgePlot {
     public static final double AXIS_HEIGHT = 26;
     /** Gap between strips, pen units. */
     public static final double STRIP_GAP = 8;
+    /** Smallest distance between time ticks, pen units: room for a label of four digits. */
+    public static final double TICK_SPACING = 44;
     /** Text size, pen units. */
     public static final double TEXT_SIZE = 11;
 
@@ -327,7 +329,8 @@ public final class EdgePlot {
 
     private static void timeAxis(Pen pen, double x0, double x1, double y, double t0, double t1, Palette pal) {
         double span = (t1 - t0) * 1e3;
-        double step = PlotAxis.niceStep(span / 8);
+        // as many ticks as fit with room for their labels (about TICK_SPACING pen units apart), at most 8
+        double step = PlotAxis.niceStep(span / Math.max(2, Math.min(8, Math.floor((x1 - x0) / TICK_SPACING))));
         // one format for every tick: as many decimals as the step needs ("0.5", "1.0", ... "10.0")
         String format = "%." + PlotAxis.decimalsFor(step) + "f";
         TextStyle tick = new TextStyle(TEXT_SIZE * 0.85, false, TextStyle.HAnchor.MIDDLE, TextStyle.VAnchor.TOP);

@@ -33,6 +33,8 @@ public record PlotAxis(double lo, double hi, double step, int exponent, int deci
     public static final double HEADROOM = 0.05;
     /** Spread below this share of a trace's magnitude counts as flat (numerical rounding). */
     public static final double FLAT_SHARE = 1e-6;
+    /** Largest share of the span that rounding an end out to a whole step may add. */
+    public static final double ROUNDING_SHARE = 0.15;
     /** Steps an axis is divided into, about. */
     public static final int TARGET_STEPS = 4;
 
@@ -84,14 +86,30 @@ public record PlotAxis(double lo, double hi, double step, int exponent, int deci
             lo = Math.max(floor, lo - HEADROOM * span);
         }
         double step = niceStep((hi - lo) / TARGET_STEPS);
-        double niceLo = Math.max(floor, Math.floor(lo / step + 1e-9) * step);
-        double niceHi = Math.min(ceiling, Math.ceil(hi / step - 1e-9) * step);
+        // the finer step: the decade of a 2 or 5 step, a fifth of a 1 step (10 mA gives 2 mA, 50 nA gives 10 nA)
+        double decade = Math.pow(10, Math.floor(Math.log10(step) + 1e-9));
+        double minor = step / decade < 1.5 ? decade / 5 : decade;
+        double niceLo = Math.floor(lo / step + 1e-9) * step;
+        double niceHi = Math.ceil(hi / step - 1e-9) * step;
+        // a whole step that would add more than ROUNDING_SHARE of the span (a small dip below zero
+        // rounded to a whole step down) is replaced by a tenth-of-a-decade step
+        boolean fine = false;
+        if (lo - niceLo > ROUNDING_SHARE * (hi - lo)) {
+            niceLo = Math.floor(lo / minor + 1e-9) * minor;
+            fine = true;
+        }
+        if (niceHi - hi > ROUNDING_SHARE * (hi - lo)) {
+            niceHi = Math.ceil(hi / minor - 1e-9) * minor;
+            fine = true;
+        }
+        niceLo = Math.max(floor, niceLo);
+        niceHi = Math.min(ceiling, niceHi);
         if (!(niceHi > niceLo)) {
             niceLo = lo;
             niceHi = hi;
         }
         int exponent = engineeringExponent(Math.max(Math.abs(niceLo), Math.abs(niceHi)));
-        int decimals = Math.max(0, exponent - (int) Math.floor(Math.log10(step) + 1e-9));
+        int decimals = Math.max(0, exponent - (int) Math.floor(Math.log10(fine ? minor : step) + 1e-9));
         return new PlotAxis(niceLo, niceHi, step, exponent, Math.min(decimals, 6), unit);
     }
 

@@ -30,9 +30,11 @@ import org.armature.model.Wire;
  *   <li>{@link Layer#WIRES}: segments, then junction dots where three or more ends meet (a pin or a
  *       wire end counts one, a wire passing through counts two);</li>
  *   <li>{@link Layer#PARTS}: IEC 60617-style symbols, then open rings on unconnected pins;</li>
- *   <li>{@link Layer#LABELS}: designator and value beside each part, test point names as small tags;</li>
- *   <li>{@link Layer#ANNOTATIONS}: node voltage tags, current arrows and tags, verdict badges, relay
- *       gauges, finding markers;</li>
+ *   <li>{@link Layer#LABELS}: designator and value beside each part;</li>
+ *   <li>{@link Layer#ANNOTATIONS}: test point tags (with their net's voltage when it is shown), other
+ *       node voltage tags, current arrows and tags, verdict badges, relay gauges, finding markers. Test
+ *       point tags are placed with the readouts, so they are drawn with them: a view may cache
+ *       everything below this layer while only readouts change.</li>
  *   <li>{@link Layer#SELECTION}: selection highlight, wires being drawn, rubber band, hovered pin.</li>
  * </ol>
  *
@@ -114,7 +116,7 @@ public final class SchematicRenderer {
         }
         if (options.draws(Layer.LABELS)) {
             for (PlacedLabel l : layout.labels()) {
-                if (l.kind() == PlacedLabel.Kind.PART || l.kind() == PlacedLabel.Kind.TEST_POINT) {
+                if (l.kind() == PlacedLabel.Kind.PART) {
                     label(pen, l, pal, annotations);
                 }
             }
@@ -122,7 +124,7 @@ public final class SchematicRenderer {
         if (options.draws(Layer.ANNOTATIONS)) {
             currentArrows(pen, stage, annotations, pal);
             for (PlacedLabel l : layout.labels()) {
-                if (l.kind() != PlacedLabel.Kind.PART && l.kind() != PlacedLabel.Kind.TEST_POINT) {
+                if (l.kind() != PlacedLabel.Kind.PART) {
                     label(pen, l, pal, annotations);
                 }
             }

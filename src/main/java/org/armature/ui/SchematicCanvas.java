@@ -57,13 +57,22 @@ public final class SchematicCanvas extends Region {
     private final EditorViewModel vm;
     private final Canvas gridLayer = new Canvas();
     private final Canvas drawingLayer = new Canvas();
+    private final Canvas annotationLayer = new Canvas();
     private final Canvas overlayLayer = new Canvas();
+    /** What the drawing layer shows; it is repainted only when this changes. */
+    private Object drawnKey;
     private Palette palette = Palette.LIGHT;
     private double zoom = 1;
     private double offsetX = 40;
     private double offsetY = 40;
     private boolean gridDirty = true;
     private Layout lastLayout;
+    /** True while the view follows the drawing (until the user zooms or pans). */
+    private boolean autoFit = true;
+    private boolean fitting;
+    private org.armature.model.StageDocument shownDocument;
+    /** Margin around the drawing when fitted, grid units. */
+    static final double FIT_MARGIN = 1.5;
 
     /** Screen pixels of vertical drag per preferred-value step when dragging a value label. */
     public static final double VALUE_DRAG_PIXELS = 8;
@@ -90,10 +99,22 @@ public final class SchematicCanvas extends Region {
     public SchematicCanvas(EditorViewModel vm) {
         this.vm = vm;
         getStyleClass().add("schematic-canvas");
-        getChildren().addAll(gridLayer, drawingLayer, overlayLayer);
+        getChildren().addAll(gridLayer, drawingLayer, annotationLayer, overlayLayer);
         setFocusTraversable(true);
         setMinSize(200, 200);
+        shownDocument = vm.document();
         vm.stageProperty().addListener((o, a, b) -> {
+            // a new document (open, new from a template) is fitted again; a save in between edits is not
+            if (vm.document() != shownDocument) {
+                boolean replaced = a == null || !vm.document().stages().contains(a);
+                shownDocument = vm.document();
+                if (replaced) {
+                    lastLayout = null;
+                    autoFit = true;
+                    fit();
+                    return;
+                }
+            }
             // a change of values only (a slider step) is drawn with its readouts, which follow at once:
             // one repaint per edit instead of two
             if (a == null || b == null || !sameDrawing(a, b)) {
@@ -178,8 +199,9 @@ public final class SchematicCanvas extends Region {
         return palette;
     }
 
-    /** Zooms by a factor about a screen point. */
+    /** Zooms by a factor about a screen point; the view stops following the drawing's size. */
     public void zoomAt(double factor, double screenX, double screenY) {
+        autoFit = false;
         double gx = gridX(screenX);
         double gy = gridY(screenY);
         zoom = Math.max(MIN_ZOOM, Math.min(MAX_ZOOM, zoom * factor));
@@ -199,14 +221,19 @@ public final class SchematicCanvas extends Region {
         zoomAt(1 / ZOOM_STEP, getWidth() / 2, getHeight() / 2);
     }
 
-    /** Fits the whole drawing (with labels) into the view. */
+    /**
+     * Fits the whole drawing (with labels and readouts) into the view, and keeps it fitted on every
+     * resize and readout change until the user zooms or pans ({@link #fitsAutomatically()}).
+     */
     public void fit() {
+        autoFit = true;
         double w = getWidth();
         double h = getHeight();
         if (w <= 0 || h <= 0) {
             return;
         }
-        Box e = SchematicRenderer.layout(vm.stage(), vm.annotationsProperty().get()).extent().inflate(1.5);
+        Box e = SchematicRenderer.layout(vm.shownStage(), vm.annotationsProperty().get(),
+                lastLayout == null ? Layout.NONE : lastLayout).extent().inflate(FIT_MARGIN);
         zoom = Math.max(MIN_ZOOM, Math.min(MAX_ZOOM, Math.min(w / e.width(), h / e.height()) / BASE_PIXELS_PER_GRID));
         offsetX = (w - e.width() * scale()) / 2 - e.minX() * scale();
         offsetY = (h - e.height() * scale()) / 2 - e.minY() * scale();
@@ -214,7 +241,24 @@ public final class SchematicCanvas extends Region {
         redrawAll();
     }
 
+    /** True while the view follows the drawing: fitted on open, on a new stage and on resize. */
+    public boolean fitsAutomatically() {
+        return autoFit;
+    }
+
+    /** The drawing's extent (parts, wires, labels, readouts) in screen pixels, as last drawn. */
+    public Optional<javafx.geometry.BoundingBox> drawingBoundsOnScreen() {
+        if (lastLayout == null) {
+            return Optional.empty();
+        }
+        Box e = lastLayout.extent();
+        double x = e.minX() * scale() + offsetX;
+        double y = e.minY() * scale() + offsetY;
+        return Optional.of(new javafx.geometry.BoundingBox(x, y, e.width() * scale(), e.height() * scale()));
+    }
+
     private void pan(double dxScreen, double dyScreen) {
+        autoFit = false;
         offsetX += dxScreen;
         offsetY += dyScreen;
         gridDirty = true;
@@ -225,7 +269,7 @@ public final class SchematicCanvas extends Region {
     protected void layoutChildren() {
         double w = Math.floor(getWidth());
         double h = Math.floor(getHeight());
-        for (Canvas c : new Canvas[] {gridLayer, drawingLayer, overlayLayer}) {
+        for (Canvas c : new Canvas[] {gridLayer, drawingLayer, annotationLayer, overlayLayer}) {
             if (c.getWidth() != w || c.getHeight() != h) {
                 c.setWidth(w);
                 c.setHeight(h);
@@ -233,7 +277,11 @@ public final class SchematicCanvas extends Region {
             }
         }
         if (gridDirty) {
-            redrawAll();
+            if (autoFit) {
+                fit();
+            } else {
+                redrawAll();
+            }
         }
     }
 
@@ -266,14 +314,73 @@ public final class SchematicCanvas extends Region {
         return lastRepaintNanos;
     }
 
+    /**
+     * Repaints what changed since the last repaint: the label layout is computed once, keeping every
+     * label where it was while only numbers change ({@link SchematicRenderer#layout(Stage,
+     * org.armature.render.Annotations, Layout)}); the drawing layer (wires, symbols, designators and
+     * values) is repainted only when those change, the annotation layer (test point tags and
+     * readouts) every time. A slider drag therefore repaints the readouts alone.
+     */
     private void redrawDrawing() {
         long start = System.nanoTime();
-        GraphicsContext g = drawingLayer.getGraphicsContext2D();
-        g.clearRect(0, 0, drawingLayer.getWidth(), drawingLayer.getHeight());
-        lastLayout = SchematicRenderer.draw(vm.shownStage(), vm.annotationsProperty().get(),
-                options(EnumSet.of(Layer.WIRES, Layer.PARTS, Layer.LABELS, Layer.ANNOTATIONS)), new FxPen(g, view()));
+        Stage st = vm.shownStage();
+        org.armature.render.Annotations a = vm.annotationsProperty().get();
+        lastLayout = SchematicRenderer.layout(st, a, lastLayout == null ? Layout.NONE : lastLayout);
+        if (autoFit && !fitting && getWidth() > 0 && getHeight() > 0) {
+            Box visible = Box.spanning(gridX(0), gridY(0), gridX(getWidth()), gridY(getHeight()));
+            if (!visible.contains(lastLayout.extent())) {
+                // readouts arrived and reach past the view: fit again (once; fit redraws)
+                fitting = true;
+                try {
+                    fit();
+                } finally {
+                    fitting = false;
+                }
+                return;
+            }
+        }
+        Object key = List.of(st.parts(), st.wires(), st.conditions().pinHigh(), operated(a), palette, view(),
+                drawingLayer.getWidth(), drawingLayer.getHeight(), partLabels(lastLayout));
+        if (!key.equals(drawnKey)) {
+            GraphicsContext g = drawingLayer.getGraphicsContext2D();
+            g.clearRect(0, 0, drawingLayer.getWidth(), drawingLayer.getHeight());
+            SchematicRenderer.draw(st, a, options(EnumSet.of(Layer.WIRES, Layer.PARTS, Layer.LABELS)),
+                    new FxPen(g, view()), lastLayout);
+            drawnKey = key;
+        }
+        redrawAnnotations(st, a);
         lastRepaintNanos = System.nanoTime() - start;
         repainted.accept(vm.shownGenerationProperty().get());
+    }
+
+    /** Repaints the annotation layer alone, with the layout of the last repaint. */
+    private void redrawAnnotations(Stage st, org.armature.render.Annotations a) {
+        GraphicsContext g = annotationLayer.getGraphicsContext2D();
+        g.clearRect(0, 0, annotationLayer.getWidth(), annotationLayer.getHeight());
+        SchematicRenderer.draw(st, a, options(EnumSet.of(Layer.ANNOTATIONS)), new FxPen(g, view()), lastLayout);
+    }
+
+    /** The relays drawn operated: their contact sets belong to the drawing layer. */
+    private static Set<String> operated(org.armature.render.Annotations a) {
+        Set<String> out = new java.util.TreeSet<>();
+        for (org.armature.render.Annotations.RelayGauge g : a.gauges()) {
+            if (g.operated()) {
+                out.add(g.ref());
+            }
+        }
+        return out;
+    }
+
+    private static List<org.armature.render.PlacedLabel> partLabels(Layout l) {
+        return l.labels(org.armature.render.PlacedLabel.Kind.PART);
+    }
+
+    /** True when the drawing layer was last painted for exactly what it would show now (tests). */
+    boolean drawingLayerCurrent() {
+        Stage st = vm.shownStage();
+        org.armature.render.Annotations a = vm.annotationsProperty().get();
+        return drawnKey != null && drawnKey.equals(List.of(st.parts(), st.wires(), st.conditions().pinHigh(),
+                operated(a), palette, view(), drawingLayer.getWidth(), drawingLayer.getHeight(), partLabels(lastLayout)));
     }
 
     /**

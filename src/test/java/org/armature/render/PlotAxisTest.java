@@ -28,8 +28,9 @@ class PlotAxisTest {
         PlotAxis a = PlotAxis.of(-203e-9, -203e-9, NONE_LO, NONE_HI, "A");
         assertTrue(a.lo() < -203e-9 && a.hi() >= 0, a.toString());
         assertNotEquals(a.label(a.lo()), a.label(a.hi()));
-        // derived: span 203 nA + 5 % headroom, step niceStep(213/4 nA) = 50 nA, lo rounded out to −250 nA
-        assertEquals("−250 nA", a.label(a.lo()));
+        // derived: span 203 nA + 5 % headroom = 213 nA, step niceStep(213/4 nA) = 50 nA; a whole step
+        // down (−250 nA) would add 17 % > ROUNDING_SHARE, so the end is rounded to 10 nA: −220 nA
+        assertEquals("−220 nA", a.label(a.lo()));
         assertEquals("0 nA", a.label(a.hi()));
     }
 
@@ -56,6 +57,16 @@ class PlotAxisTest {
         assertEquals(0, a.lo());
         assertTrue(a.hi() >= 3e-9 && a.hi() <= 4e-9, a.toString());
         assertTrue(a.label(a.lo()).endsWith(" nA") && a.label(a.hi()).endsWith(" nA"), a.label(a.hi()));
+    }
+
+    @Test
+    @DisplayName("a small dip below zero does not cost a whole step: 30 mA with a −0.3 mA dip ends at −2 mA")
+    void smallDip() {
+        PlotAxis a = PlotAxis.of(-0.3e-3, 28.5e-3, NONE_LO, NONE_HI, "A");
+        // derived: headroom 5 % of 28.8 mA, step niceStep(31.2/4 mA) = 10 mA; −10 mA would add 33 %,
+        // so the low end is rounded to a fifth of the step (2 mA)
+        assertEquals("−2 mA", a.label(a.lo()));
+        assertEquals("30 mA", a.label(a.hi()));
     }
 
     @Test
