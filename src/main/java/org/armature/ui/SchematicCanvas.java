@@ -70,7 +70,7 @@ public final class SchematicCanvas extends Region {
     /** True while the view follows the drawing (until the user zooms or pans). */
     private boolean autoFit = true;
     private boolean fitting;
-    private org.armature.model.StageDocument shownDocument;
+    private boolean refitOnNextStage;
     /** Margin around the drawing when fitted, grid units. */
     static final double FIT_MARGIN = 1.5;
 
@@ -102,18 +102,16 @@ public final class SchematicCanvas extends Region {
         getChildren().addAll(gridLayer, drawingLayer, annotationLayer, overlayLayer);
         setFocusTraversable(true);
         setMinSize(200, 200);
-        shownDocument = vm.document();
+        // a file opened (another path) is fitted when its stage arrives
+        vm.fileProperty().addListener((o, a, b) -> refitOnNextStage = b.isPresent() && !b.equals(a));
         vm.stageProperty().addListener((o, a, b) -> {
-            // a new document (open, new from a template) is fitted again; a save in between edits is not
-            if (vm.document() != shownDocument) {
-                boolean replaced = a == null || !vm.document().stages().contains(a);
-                shownDocument = vm.document();
-                if (replaced) {
-                    lastLayout = null;
-                    autoFit = true;
-                    fit();
-                    return;
-                }
+            // another drawing (a new stage from a template, an opened file) is fitted again; edits are not
+            boolean another = a == null || b == null || !sameDrawing(a, b) && !a.name().equals(b.name());
+            if (another || refitOnNextStage) {
+                refitOnNextStage = false;
+                lastLayout = null;
+                fit();
+                return;
             }
             // a change of values only (a slider step) is drawn with its readouts, which follow at once:
             // one repaint per edit instead of two

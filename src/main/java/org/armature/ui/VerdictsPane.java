@@ -54,6 +54,9 @@ public final class VerdictsPane extends VBox {
         checks.setPlaceholder(placeholder);
         checks.setPrefHeight(360);
         findings.list().setPrefHeight(120);
+        // the checks list takes the height that is left, but never squeezes the findings below two rows
+        findings.setMinHeight(FINDINGS_MIN_HEIGHT);
+        checks.setMinHeight(FINDINGS_MIN_HEIGHT);
         checks.setCellFactory(v -> new CheckCell());
         checks.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
             if (b != null) {
@@ -159,6 +162,9 @@ public final class VerdictsPane extends VBox {
         }
         return EngineeringNotation.format(v, u);
     }
+
+    /** Smallest height of the findings list and of the checks list, pixels: two rows. */
+    static final double FINDINGS_MIN_HEIGHT = 64;
 
     /** Width a check cell leaves for the list's scroll bar and padding, pixels. */
     static final double CELL_INSET = 30;
