@@ -202,6 +202,10 @@ public final class SchematicRenderer {
                 bestScore = score;
                 labels = out;
             }
+            if (score < TIDY_ENOUGH) {
+                // every leader strict and none longer than TIDY_LEADER: the other orders cannot do much better
+                break;
+            }
         }
         for (PlacedLabel l : labels) {
             extent = extent.union(l.box());
@@ -323,6 +327,11 @@ public final class SchematicRenderer {
             List.of(Group.GAUGES, Group.CURRENTS, Group.BADGES, Group.MARKERS, Group.NETS),
             List.of(Group.GAUGES, Group.BADGES, Group.MARKERS, Group.CURRENTS, Group.NETS),
             List.of(Group.GAUGES, Group.NETS, Group.CURRENTS, Group.BADGES, Group.MARKERS));
+
+    /** Longest leader of a layout that is kept without trying the other orders, grid units. */
+    private static final double TIDY_LEADER = 3.0;
+    /** Untidiness below which the first order is kept: no relaxed leader, none longer than TIDY_LEADER. */
+    private static final double TIDY_ENOUGH = 10 * TIDY_LEADER + 40;
 
     /**
      * How untidy a layout is: every placement that had to let its leader through another label
