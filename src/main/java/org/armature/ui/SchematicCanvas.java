@@ -29,12 +29,18 @@ import org.armature.render.Selection;
 import org.armature.render.Snap;
 
 /**
- * The drawing surface of the editor: three stacked canvases drawn by {@link SchematicRenderer}.
+ * The drawing surface of the editor: four stacked canvases drawn by {@link SchematicRenderer}.
  *
  * <p>Layers, bottom to top: (1) paper and {@link Layer#GRID}, redrawn only when the view (zoom, pan,
- * size, theme) changes; (2) {@link Layer#WIRES}, {@link Layer#PARTS}, {@link Layer#LABELS} and
- * {@link Layer#ANNOTATIONS}, redrawn when the stage or its readouts change; (3)
- * {@link Layer#SELECTION} and editing previews, redrawn on every pointer move that changes them.
+ * size, theme) changes; (2) {@link Layer#WIRES}, {@link Layer#PARTS} and {@link Layer#LABELS},
+ * redrawn only when the parts, wires, values, pin state, a relay's drawn contact state, the theme or
+ * the view change; (3) {@link Layer#ANNOTATIONS}, redrawn on every published solve; (4)
+ * {@link Layer#SELECTION} and editing previews, redrawn on every pointer move that changes them. The
+ * label layout is computed once per repaint and handed on to the next, so labels stay put while
+ * only numbers change.
+ *
+ * <p>The view follows the drawing (fitted on open, on another drawing or file, on resize and when
+ * readouts reach past it) until the user zooms or pans; {@link #fit()} makes it follow again.
  *
  * <p>Screen coordinates ({@code screenX}) and grid coordinates ({@code gridX}) never mix: the view
  * transform converts between them, and all hit testing happens in grid units.
