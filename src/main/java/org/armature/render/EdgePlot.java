@@ -8,6 +8,7 @@ import org.armature.model.StageRoles;
 import org.armature.netlist.ContactState;
 import org.armature.model.Connectivity;
 import org.armature.model.Part;
+import org.armature.model.PartKind;
 import org.armature.model.Stage;
 import org.armature.model.StageRecognition;
 import org.armature.solver.timedomain.TransientEvent;
@@ -34,6 +35,8 @@ public final class EdgePlot {
     public static final double AXIS_HEIGHT = 26;
     /** Gap between strips, pen units. */
     public static final double STRIP_GAP = 8;
+    /** Smallest distance between time ticks, pen units: room for a label of four digits. */
+    public static final double TICK_SPACING = 44;
     /** Text size, pen units. */
     public static final double TEXT_SIZE = 11;
 
@@ -49,8 +52,39 @@ public final class EdgePlot {
      * @param displayUnit unit written on the axis after scaling ("mm")
      * @param values samples, one per time point
      * @param binary true for a 0/1 state (drawn as a step, labelled open/closed)
+     * @param floor lowest value the quantity can take, in its SI unit ({@code -Infinity} for none)
+     * @param ceiling highest value the quantity can take, in its SI unit ({@code +Infinity} for none)
      */
-    public record Channel(String title, String unit, double scale, String displayUnit, double[] values, boolean binary) {
+    public record Channel(String title, String unit, double scale, String displayUnit, double[] values, boolean binary,
+                          double floor, double ceiling) {
+
+        /** A channel whose quantity has no physical limits. */
+        public Channel(String title, String unit, double scale, String displayUnit, double[] values, boolean binary) {
+            this(title, unit, scale, displayUnit, values, binary, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY);
+        }
+
+        public Channel {
+            if (!(ceiling > floor)) {
+                throw new IllegalArgumentException("channel " + title + " needs ceiling > floor");
+            }
+        }
+
+        /** The value axis of this channel, in display units. */
+        public PlotAxis axis() {
+            double lo = Double.POSITIVE_INFINITY;
+            double hi = Double.NEGATIVE_INFINITY;
+            for (double v : values) {
+                lo = Math.min(lo, v * scale);
+                hi = Math.max(hi, v * scale);
+            }
+            if (values.length == 0) {
+                lo = 0;
+                hi = 0;
+            }
+            double f = scale > 0 ? floor * scale : Double.NEGATIVE_INFINITY;
+            double c = scale > 0 ? ceiling * scale : Double.POSITIVE_INFINITY;
+            return PlotAxis.of(lo, hi, f, c, displayUnit);
+        }
     }
 
     /**
@@ -106,8 +140,11 @@ public final class EdgePlot {
         List<Channel> ch = new ArrayList<>();
         w.trace(Waveform.COIL_CURRENT).ifPresent(t -> ch.add(new Channel("coil current", "A", 1, "A", t.values(), false)));
         switchVolts(stage, w).ifPresent(v -> ch.add(new Channel("switch voltage", "V", 1, "V", v, false)));
+        // travel runs from the released stop (0) to the attracted one: the axis spans stop to stop
+        double travel = stage.parts().stream().filter(p -> p.kind() == PartKind.RELAY).findFirst()
+                .map(p -> p.value("travelMetres")).filter(v -> v > 0).orElse(Double.POSITIVE_INFINITY);
         w.trace(Waveform.ARMATURE_POSITION).ifPresent(t -> ch.add(new Channel("armature travel", "m", 1, "m",
-                t.values(), false)));
+                t.values(), false, 0, travel)));
         w.trace(Waveform.CONTACT_STATE).ifPresent(t -> ch.add(new Channel("contacts", "", 1, "", t.values(), true)));
         return new Plot(w.time(), ch, w.events());
     }
@@ -188,24 +225,9 @@ public final class EdgePlot {
             Channel c = plot.channels().get(k);
             double sy0 = top + k * (stripH + STRIP_GAP);
             double sy1 = sy0 + stripH;
-            double lo = Double.POSITIVE_INFINITY;
-            double hi = Double.NEGATIVE_INFINITY;
-            for (double v : c.values()) {
-                lo = Math.min(lo, v * c.scale());
-                hi = Math.max(hi, v * c.scale());
-            }
-            if (c.binary()) {
-                lo = 0;
-                hi = 1;
-            } else {
-                lo = Math.min(lo, 0);
-                if (!(hi > lo)) {
-                    hi = lo + 1;
-                }
-                double pad = (hi - lo) * 0.08;
-                hi += pad;
-                lo -= lo < 0 ? pad : 0;
-            }
+            PlotAxis axis = c.binary() ? null : c.axis();
+            double lo = c.binary() ? 0 : axis.lo();
+            double hi = c.binary() ? 1 : axis.hi();
             Box strip = new Box(x0, sy0, x1, sy1);
             pen.fillRect(strip, pal.tagFill());
             double zeroY = mapY(0, lo, hi, sy0, sy1);
@@ -215,8 +237,8 @@ public final class EdgePlot {
             pen.strokeRect(strip, pal.gridMajor().mix(pal.valueInk(), 0.3), frame);
             pen.text(c.title(), 8, (sy0 + sy1) / 2, title.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.MIDDLE),
                     pal.labelInk());
-            String hiText = c.binary() ? "closed" : axisText(hi, c.displayUnit());
-            String loText = c.binary() ? "open" : axisText(lo, c.displayUnit());
+            String hiText = c.binary() ? "closed" : axis.label(hi);
+            String loText = c.binary() ? "open" : axis.label(lo);
             pen.text(hiText, x0 - 6, sy0 + TEXT_SIZE * 0.6, small, pal.valueInk());
             pen.text(loText, x0 - 6, sy1 - TEXT_SIZE * 0.6, small, pal.valueInk());
             polyline(pen, plot, c, x0, x1, t0, t1, lo, hi, sy0, sy1, k == 0 ? pal.current() : k == 1 ? pal.voltage()
@@ -308,13 +330,20 @@ public final class EdgePlot {
 
     private static void timeAxis(Pen pen, double x0, double x1, double y, double t0, double t1, Palette pal) {
         double span = (t1 - t0) * 1e3;
-        double step = niceStep(span / 8);
+        // as many ticks as fit with room for their labels (about TICK_SPACING pen units apart), at most 8
+        double step = PlotAxis.niceStep(span / Math.max(2, Math.min(8, Math.floor((x1 - x0) / TICK_SPACING))));
+        // one format for every tick: as many decimals as the step needs ("0.5", "1.0", ... "10.0")
+        String format = "%." + PlotAxis.decimalsFor(step) + "f";
         TextStyle tick = new TextStyle(TEXT_SIZE * 0.85, false, TextStyle.HAnchor.MIDDLE, TextStyle.VAnchor.TOP);
         pen.line(x0, y, x1, y, pal.valueInk(), Stroke.solid(1));
-        for (double ms = Math.ceil(t0 * 1e3 / step) * step; ms <= t1 * 1e3 + 1e-9; ms += step) {
+        long first = (long) Math.ceil(t0 * 1e3 / step - 1e-9);
+        long last = (long) Math.floor(t1 * 1e3 / step + 1e-9);
+        for (long i = first; i <= last; i++) {
+            double ms = i * step;
             double x = x0 + (ms / 1e3 - t0) / (t1 - t0) * (x1 - x0);
             pen.line(x, y, x, y + 4, pal.valueInk(), Stroke.solid(1));
-            pen.text(String.format(Locale.ROOT, "%.3g", ms), x, y + 5, tick, pal.valueInk());
+            pen.text(String.format(Locale.ROOT, format, Math.abs(ms) < step * 1e-9 ? 0.0 : ms), x, y + 5, tick,
+                    pal.valueInk());
         }
         pen.text("time, ms", x0 - 22, y + 5, tick.anchored(TextStyle.HAnchor.END, TextStyle.VAnchor.TOP), pal.valueInk());
     }
@@ -344,13 +373,4 @@ public final class EdgePlot {
         pen.text(tt, x, bottom + 5, tick, pal.tagFill());
     }
 
-    private static String axisText(double v, String unit) {
-        return Notation.format(v, unit);
-    }
-
-    private static double niceStep(double raw) {
-        double p = Math.pow(10, Math.floor(Math.log10(raw)));
-        double m = raw / p;
-        return (m < 1.5 ? 1 : m < 3.5 ? 2 : m < 7.5 ? 5 : 10) * p;
-    }
 }

@@ -12,9 +12,9 @@ public enum Layer {
     WIRES,
     /** Part symbols and open-pin marks. */
     PARTS,
-    /** Designators, values and test point tags. */
+    /** Designators and values. */
     LABELS,
-    /** Readouts: voltages, currents, badges, gauges, finding markers. */
+    /** Test point tags and readouts: voltages, currents, badges, gauges, finding markers. */
     ANNOTATIONS,
     /** Selection highlight and editing previews (wire being drawn, rubber band). */
     SELECTION

@@ -11,6 +11,9 @@ import java.util.List;
  */
 public record Layout(List<PlacedLabel> labels, Box extent) {
 
+    /** No labels over an empty extent: the "previous layout" of a first drawing. */
+    public static final Layout NONE = new Layout(List.of(), new Box(0, 0, 0, 0));
+
     public Layout {
         labels = List.copyOf(labels);
     }

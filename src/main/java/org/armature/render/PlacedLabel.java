@@ -14,15 +14,21 @@ import java.util.List;
  * @param anchorX x of the point the leader runs to; {@code NaN} for labels without a leader
  * @param anchorY y of the point the leader runs to; {@code NaN} for labels without a leader
  * @param state verdict state for badges and markers; {@code OK} otherwise
+ * @param target what the label describes, as a box: the part's body for part labels, badges, gauges
+ *     and markers, the anchor point for tags; a layout keeps a label where it was only while its
+ *     target stays put
  */
 public record PlacedLabel(Kind kind, String owner, List<String> lines, Box box, TextStyle.HAnchor align,
-                          double anchorX, double anchorY, Annotations.State state) {
+                          double anchorX, double anchorY, Annotations.State state, Box target) {
 
     /** What a label is. */
     public enum Kind { PART, TEST_POINT, VOLTAGE, CURRENT, BADGE, GAUGE, MARKER }
 
     public PlacedLabel {
         lines = List.copyOf(lines);
+        if (target == null) {
+            throw new IllegalArgumentException("a placed label needs a target");
+        }
     }
 
     /** True when the label has a leader line to an anchor point. */

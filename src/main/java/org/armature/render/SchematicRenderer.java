@@ -31,9 +31,11 @@ import org.armature.model.Wire;
  *   <li>{@link Layer#WIRES}: segments, then junction dots where three or more ends meet (a pin or a
  *       wire end counts one, a wire passing through counts two);</li>
  *   <li>{@link Layer#PARTS}: IEC 60617-style symbols, then open rings on unconnected pins;</li>
- *   <li>{@link Layer#LABELS}: designator and value beside each part, test point names as small tags;</li>
- *   <li>{@link Layer#ANNOTATIONS}: node voltage tags, current arrows and tags, verdict badges, relay
- *       gauges, finding markers;</li>
+ *   <li>{@link Layer#LABELS}: designator and value beside each part;</li>
+ *   <li>{@link Layer#ANNOTATIONS}: test point tags (with their net's voltage when it is shown), other
+ *       node voltage tags, current arrows and tags, verdict badges, relay gauges, finding markers. Test
+ *       point tags are placed with the readouts, so they are drawn with them: a view may cache
+ *       everything below this layer while only readouts change.</li>
  *   <li>{@link Layer#SELECTION}: selection highlight, wires being drawn, rubber band, hovered pin.</li>
  * </ol>
  *
@@ -63,6 +65,16 @@ public final class SchematicRenderer {
     private static final double GAUGE_WIDTH = 5.8;
     private static final double GAUGE_HEIGHT = 1.75;
     private static final double MARKER_RADIUS = 0.27;
+    private static final TextStyle BADGE_STYLE = TAG.weight(true);
+    private static final TextStyle GAUGE_TITLE = new TextStyle(0.44, true, TextStyle.HAnchor.START, TextStyle.VAnchor.TOP);
+    private static final TextStyle GAUGE_STATE = new TextStyle(0.4, true, TextStyle.HAnchor.END, TextStyle.VAnchor.TOP);
+    private static final TextStyle GAUGE_MARK = new TextStyle(0.36, false, TextStyle.HAnchor.START, TextStyle.VAnchor.TOP);
+    /** Extra cost of setting a badge or marker on two lines instead of one, grid units of distance. */
+    private static final double WRAP_COST = 0.8;
+    /** Extra cost of pointing a net's tag at a wire or pin other than its preferred point, grid units. */
+    private static final double OTHER_ANCHOR_COST = 1.0;
+    /** Inset of the gauge's texts and bar from its border, grid units. */
+    private static final double GAUGE_INSET = 0.25;
 
     private SchematicRenderer() {
     }
@@ -77,7 +89,22 @@ public final class SchematicRenderer {
      * @return the layout used (label boxes and extent)
      */
     public static Layout draw(Stage stage, Annotations annotations, RenderOptions options, Pen pen) {
-        Layout layout = layout(stage, annotations);
+        return draw(stage, annotations, options, pen, layout(stage, annotations));
+    }
+
+    /**
+     * Draws a stage with its readouts using a layout computed before by {@link #layout(Stage,
+     * Annotations, Layout)} for exactly this stage and these readouts (so that a view can draw its
+     * layers separately, each with the same labels).
+     *
+     * @param stage what to draw
+     * @param annotations readouts to draw over it
+     * @param options colours, layers, selection and previews
+     * @param pen where to draw; its transform is left as found
+     * @param layout the label layout of this stage and these readouts
+     * @return {@code layout}
+     */
+    public static Layout draw(Stage stage, Annotations annotations, RenderOptions options, Pen pen, Layout layout) {
         Palette pal = options.palette();
         if (options.draws(Layer.GRID)) {
             grid(pen, options.gridArea().orElse(layout.extent().inflate(3)), pal);
@@ -90,7 +117,7 @@ public final class SchematicRenderer {
         }
         if (options.draws(Layer.LABELS)) {
             for (PlacedLabel l : layout.labels()) {
-                if (l.kind() == PlacedLabel.Kind.PART || l.kind() == PlacedLabel.Kind.TEST_POINT) {
+                if (l.kind() == PlacedLabel.Kind.PART) {
                     label(pen, l, pal, annotations);
                 }
             }
@@ -98,7 +125,7 @@ public final class SchematicRenderer {
         if (options.draws(Layer.ANNOTATIONS)) {
             currentArrows(pen, stage, annotations, pal);
             for (PlacedLabel l : layout.labels()) {
-                if (l.kind() != PlacedLabel.Kind.PART && l.kind() != PlacedLabel.Kind.TEST_POINT) {
+                if (l.kind() != PlacedLabel.Kind.PART) {
                     label(pen, l, pal, annotations);
                 }
             }
@@ -111,6 +138,25 @@ public final class SchematicRenderer {
 
     /** The label layout of a stage with readouts, without drawing (deterministic). */
     public static Layout layout(Stage stage, Annotations annotations) {
+        return layout(stage, annotations, Layout.NONE);
+    }
+
+    /**
+     * The label layout of a stage with readouts, keeping every label of {@code previous} where it was
+     * when it still describes the same thing at the same anchor and still fits there without breaking
+     * any rule of {@link LabelPlacer}: while only numbers change (a slider drag), labels do not jump.
+     * Deterministic for equal arguments.
+     *
+     * @param stage what is drawn
+     * @param annotations its readouts
+     * @param previous the layout drawn before ({@link Layout#NONE} for a fresh layout); not modified
+     * @return the layout
+     */
+    public static Layout layout(Stage stage, Annotations annotations, Layout previous) {
+        Map<String, PlacedLabel> before = new HashMap<>();
+        for (PlacedLabel l : previous.labels()) {
+            before.put(l.kind() + "|" + l.owner(), l);
+        }
         List<Box> bodies = new ArrayList<>();
         List<double[]> segments = new ArrayList<>();
         Box extent = null;
@@ -140,21 +186,27 @@ public final class SchematicRenderer {
             extent = new Box(0, 0, 10, 10);
         }
         LabelPlacer placer = new LabelPlacer(inflated(bodies, 0.04), segments);
-        List<PlacedLabel> labels = new ArrayList<>();
+        List<PlacedLabel> partLabels = new ArrayList<>();
         for (Part p : stage.parts()) {
-            partLabel(p, placer).ifPresent(labels::add);
+            partLabel(p, placer, before).ifPresent(partLabels::add);
         }
-        for (TestPoint tp : stage.testPoints()) {
-            Optional<Part> part = stage.part(tp.ref());
-            if (part.isEmpty() || part.get().kind().pin(tp.pin()).isEmpty()) {
-                continue;
+        // a greedy placer depends on its order: try a few and keep the tidiest (a previous layout, when
+        // given, is kept in the first order so that nothing moves while numbers change)
+        List<PlacedLabel> labels = null;
+        double bestScore = Double.POSITIVE_INFINITY;
+        for (List<Group> order : before.isEmpty() ? ORDERS : ORDERS.subList(0, 1)) {
+            LabelPlacer trial = placer.copy();
+            List<PlacedLabel> out = new ArrayList<>(partLabels);
+            annotationLabels(stage, annotations, trial, out, before, order);
+            double score = untidiness(out, trial);
+            if (score < bestScore) {
+                bestScore = score;
+                labels = out;
             }
-            GridPoint g = part.get().pinPoint(tp.pin());
-            labels.add(tag(PlacedLabel.Kind.TEST_POINT, tp.net(), tp.net(), g.gridX(), g.gridY(), placer,
-                    Annotations.State.OK));
-        }
-        if (!annotations.isEmpty()) {
-            annotationLabels(stage, annotations, placer, labels);
+            if (score < TIDY_ENOUGH) {
+                // every leader strict and none longer than TIDY_LEADER: the other orders cannot do much better
+                break;
+            }
         }
         for (PlacedLabel l : labels) {
             extent = extent.union(l.box());
@@ -185,7 +237,7 @@ public final class SchematicRenderer {
 
     // ---------------------------------------------------------------- layout
 
-    private static Optional<PlacedLabel> partLabel(Part p, LabelPlacer placer) {
+    private static Optional<PlacedLabel> partLabel(Part p, LabelPlacer placer, Map<String, PlacedLabel> before) {
         if (p.kind() == PartKind.GROUND) {
             return Optional.empty();
         }
@@ -233,57 +285,347 @@ public final class SchematicRenderer {
             candidates.addAll(right);
             candidates.addAll(left);
         }
-        Box chosen = placer.choose(candidates)
-                .orElseGet(() -> placer.near(bb.maxX(), bb.centreY(), w, h));
+        PlacedLabel old = before.get(PlacedLabel.Kind.PART + "|" + p.ref());
+        Box chosen = null;
+        double ax = Double.NaN;
+        double ay = Double.NaN;
+        if (old != null && old.target().equals(bb)) {
+            Box again = resized(old.box(), w, h, bb.centreX(), bb.centreY());
+            if (!old.hasLeader() ? placer.choose(List.of(again)).isPresent()
+                    : placer.tryAt(again, old.anchorX(), old.anchorY())) {
+                chosen = again;
+                ax = old.anchorX();
+                ay = old.anchorY();
+            }
+        }
+        if (chosen == null) {
+            Optional<Box> beside = placer.choose(candidates);
+            if (beside.isPresent()) {
+                chosen = beside.get();
+            } else {
+                // no place against the body: the label moves away and keeps a leader to the body's edge
+                ax = bb.maxX();
+                ay = bb.centreY();
+                chosen = placer.near(ax, ay, w, h);
+            }
+        }
         TextStyle.HAnchor align = chosen.minX() >= bb.maxX() ? TextStyle.HAnchor.START
                 : chosen.maxX() <= bb.minX() ? TextStyle.HAnchor.END : TextStyle.HAnchor.MIDDLE;
-        return Optional.of(new PlacedLabel(PlacedLabel.Kind.PART, p.ref(), lines, chosen, align, Double.NaN,
-                Double.NaN, Annotations.State.OK));
+        return Optional.of(new PlacedLabel(PlacedLabel.Kind.PART, p.ref(), lines, chosen, align, ax, ay,
+                Annotations.State.OK, bb));
     }
 
-    private static void annotationLabels(Stage stage, Annotations a, LabelPlacer placer, List<PlacedLabel> out) {
-        Connectivity c = Connectivity.of(stage);
-        for (Annotations.NodeVoltage nv : a.voltages()) {
-            netAnchor(stage, c, nv.net()).ifPresent(g -> out.add(tag(PlacedLabel.Kind.VOLTAGE, nv.net(),
-                    Notation.format(nv.volts(), "V"), g[0], g[1], placer, Annotations.State.OK)));
+    /** The kinds of readout label, placed as groups. */
+    private enum Group { GAUGES, CURRENTS, BADGES, MARKERS, NETS }
+
+    /**
+     * The placing orders tried. The first places the relay gauges first (biggest, tied to one part),
+     * then the current tags (one anchor each, on the arrow), the badges and markers (any side of
+     * their part), and last the net tags, which may point at any wire of their net and so fit
+     * wherever room is left; the others give the badges or the net tags the first choice.
+     */
+    private static final List<List<Group>> ORDERS = List.of(
+            List.of(Group.GAUGES, Group.CURRENTS, Group.BADGES, Group.MARKERS, Group.NETS),
+            List.of(Group.GAUGES, Group.BADGES, Group.MARKERS, Group.CURRENTS, Group.NETS),
+            List.of(Group.GAUGES, Group.NETS, Group.CURRENTS, Group.BADGES, Group.MARKERS));
+
+    /** Longest leader of a layout that is kept without trying the other orders, grid units. */
+    private static final double TIDY_LEADER = 3.0;
+    /** Untidiness below which the first order is kept: no relaxed leader, none longer than TIDY_LEADER. */
+    private static final double TIDY_ENOUGH = 10 * TIDY_LEADER + 40;
+
+    /**
+     * How untidy a layout is: every placement that had to let its leader through another label
+     * weighs most, then the longest leader, then the sum of leader lengths (grid units).
+     */
+    private static double untidiness(List<PlacedLabel> labels, LabelPlacer placer) {
+        double longest = 0;
+        double sum = 0;
+        for (PlacedLabel l : labels) {
+            if (l.hasLeader()) {
+                double d = l.box().distanceTo(l.anchorX(), l.anchorY());
+                longest = Math.max(longest, d);
+                sum += d;
+            }
         }
-        for (Annotations.BranchCurrent bc : a.currents()) {
-            currentArrow(stage, bc).ifPresent(arrow -> out.add(tag(PlacedLabel.Kind.CURRENT, bc.pin().toString(),
-                    Notation.format(Math.abs(bc.ampsIntoPin()), "A"), arrow[0], arrow[1], placer, Annotations.State.OK)));
+        return 1000.0 * placer.relaxedPlacements() + 10 * longest + sum;
+    }
+
+    private static void annotationLabels(Stage stage, Annotations a, LabelPlacer placer, List<PlacedLabel> out,
+                                         Map<String, PlacedLabel> before, List<Group> order) {
+        for (Group g : order) {
+            switch (g) {
+                case GAUGES -> gauges(stage, a, placer, out, before);
+                case CURRENTS -> currents(stage, a, placer, out, before);
+                case BADGES -> badges(stage, a, placer, out, before);
+                case MARKERS -> markers(stage, a, placer, out, before);
+                case NETS -> netTags(stage, a, placer, out, before);
+                default -> throw new IllegalStateException("unknown label group " + g);
+            }
         }
-        for (Annotations.PartBadge badge : a.badges()) {
-            stage.part(badge.ref()).ifPresent(p -> {
-                Box bb = PartGeometry.bodyBounds(p);
-                out.add(tag(PlacedLabel.Kind.BADGE, badge.ref(), badge.text(), bb.maxX(), bb.centreY(), placer,
-                        badge.state()));
-            });
-        }
+    }
+
+    private static void gauges(Stage stage, Annotations a, LabelPlacer placer, List<PlacedLabel> out,
+                               Map<String, PlacedLabel> before) {
         for (Annotations.RelayGauge g : a.gauges()) {
             stage.part(g.ref()).ifPresent(p -> {
-                Box coil = PartGeometry.bodies(p).get(0);
-                Box box = placer.near(coil.maxX(), coil.maxY(), GAUGE_WIDTH, GAUGE_HEIGHT);
-                out.add(new PlacedLabel(PlacedLabel.Kind.GAUGE, g.ref(), List.of(gaugeText(g)), box,
-                        TextStyle.HAnchor.START, coil.maxX(), coil.maxY(), gaugeState(g)));
-            });
-        }
-        for (Annotations.FindingMarker m : a.markers()) {
-            stage.part(m.ref()).ifPresent(p -> {
-                Box bb = PartGeometry.bodyBounds(p);
-                double w = 2 * MARKER_RADIUS + (m.text().isEmpty() ? 0 : TAG.width(m.text()) + 0.15) + 2 * PAD;
-                double h = Math.max(2 * MARKER_RADIUS, TAG.height()) + 2 * PAD;
-                Box box = placer.near(bb.maxX(), bb.minY(), w, h);
-                out.add(new PlacedLabel(PlacedLabel.Kind.MARKER, m.ref(), List.of(m.text()), box,
-                        TextStyle.HAnchor.START, bb.maxX(), bb.minY(), m.state()));
+                // the gauge describes the whole relay: it may sit by the coil or by the contact set
+                out.add(placeAround(PlacedLabel.Kind.GAUGE, g.ref(),
+                        List.of(new Shape(List.of(gaugeText(g)), gaugeWidth(g), GAUGE_HEIGHT)), PartGeometry.bodies(p),
+                        TextStyle.HAnchor.START, gaugeState(g), placer, before));
             });
         }
     }
 
-    private static PlacedLabel tag(PlacedLabel.Kind kind, String owner, String text, double ax, double ay,
-                                   LabelPlacer placer, Annotations.State state) {
-        double w = TAG.width(text) + 2 * PAD + 0.1;
+    private static void currents(Stage stage, Annotations a, LabelPlacer placer, List<PlacedLabel> out,
+                                 Map<String, PlacedLabel> before) {
+        for (Annotations.BranchCurrent bc : a.currents()) {
+            currentArrow(stage, bc).ifPresent(arrow -> out.add(tag(PlacedLabel.Kind.CURRENT, bc.pin().toString(),
+                    List.of(Notation.format(Math.abs(bc.ampsIntoPin()), "A")), "A",
+                    List.of(new double[] {arrow[0], arrow[1]}), placer, before)));
+        }
+    }
+
+    private static void badges(Stage stage, Annotations a, LabelPlacer placer, List<PlacedLabel> out,
+                               Map<String, PlacedLabel> before) {
+        for (Annotations.PartBadge badge : a.badges()) {
+            stage.part(badge.ref()).ifPresent(p -> {
+                List<Shape> shapes = new ArrayList<>();
+                for (List<String> lines : wraps(badge.text())) {
+                    double w = 0;
+                    for (String line : lines) {
+                        w = Math.max(w, BADGE_STYLE.width(reserved(line, "")));
+                    }
+                    shapes.add(new Shape(lines, w + 2 * PAD + 0.1, lines.size() * TAG.height() + 2 * PAD));
+                }
+                out.add(placeAround(PlacedLabel.Kind.BADGE, badge.ref(), shapes, PartGeometry.bodies(p),
+                        TextStyle.HAnchor.MIDDLE, badge.state(), placer, before));
+            });
+        }
+    }
+
+    private static void markers(Stage stage, Annotations a, LabelPlacer placer, List<PlacedLabel> out,
+                                Map<String, PlacedLabel> before) {
+        for (Annotations.FindingMarker m : a.markers()) {
+            stage.part(m.ref()).ifPresent(p -> {
+                List<Shape> shapes = new ArrayList<>();
+                for (List<String> lines : wraps(m.text())) {
+                    double w = 0;
+                    for (String line : lines) {
+                        w = Math.max(w, BADGE_STYLE.width(line));
+                    }
+                    shapes.add(new Shape(lines, 2 * MARKER_RADIUS + (m.text().isEmpty() ? 0 : w + 0.15) + 2 * PAD,
+                            Math.max(2 * MARKER_RADIUS, lines.size() * TAG.height()) + 2 * PAD));
+                }
+                out.add(placeAround(PlacedLabel.Kind.MARKER, m.ref(), shapes, PartGeometry.bodies(p),
+                        TextStyle.HAnchor.START, m.state(), placer, before));
+            });
+        }
+    }
+
+    /** Test point names and node voltages: a test point with its net's voltage is one tag, "control 773 mV". */
+    private static void netTags(Stage stage, Annotations a, LabelPlacer placer, List<PlacedLabel> out,
+                                Map<String, PlacedLabel> before) {
+        Map<String, Double> volts = new HashMap<>();
+        for (Annotations.NodeVoltage nv : a.voltages()) {
+            volts.putIfAbsent(nv.net(), nv.volts());
+        }
+        Set<String> shown = new HashSet<>();
+        Connectivity c = Connectivity.of(stage);
+        for (TestPoint tp : stage.testPoints()) {
+            Optional<Part> part = stage.part(tp.ref());
+            if (part.isEmpty() || part.get().kind().pin(tp.pin()).isEmpty()) {
+                continue;
+            }
+            GridPoint g = part.get().pinPoint(tp.pin());
+            List<double[]> anchors = netAnchors(stage, c, tp.net(), g.gridX(), g.gridY());
+            if (volts.containsKey(tp.net()) && shown.add(tp.net())) {
+                out.add(tag(PlacedLabel.Kind.VOLTAGE, tp.net(), List.of(tp.net(), Notation.format(volts.get(tp.net()), "V")),
+                        "V", anchors, placer, before));
+            } else {
+                out.add(tag(PlacedLabel.Kind.TEST_POINT, tp.net(), List.of(tp.net()), "", anchors, placer, before));
+            }
+        }
+        for (Annotations.NodeVoltage nv : a.voltages()) {
+            if (shown.add(nv.net())) {
+                netAnchor(stage, c, nv.net()).ifPresent(g -> out.add(tag(PlacedLabel.Kind.VOLTAGE, nv.net(),
+                        List.of(Notation.format(nv.volts(), "V")), "V", netAnchors(stage, c, nv.net(), g[0], g[1]),
+                        placer, before)));
+            }
+        }
+    }
+
+    /**
+     * A label that describes a part, beside any side of its body (the middle of each side is an
+     * anchor), where it was before if the body has not moved and the place is still free.
+     */
+    private static PlacedLabel placeAround(PlacedLabel.Kind kind, String owner, List<Shape> shapes, List<Box> bodies,
+                                           TextStyle.HAnchor align, Annotations.State state, LabelPlacer placer,
+                                           Map<String, PlacedLabel> before) {
+        Box body = bodies.get(0);
+        for (Box b : bodies) {
+            body = body.union(b);
+        }
+        PlacedLabel old = before.get(kind + "|" + owner);
+        if (old != null && old.target().equals(body)) {
+            for (Shape shape : shapes) {
+                if (shape.lines().size() == old.lines().size()) {
+                    Box again = resized(old.box(), shape.w(), shape.h(), old.anchorX(), old.anchorY());
+                    if (placer.tryAt(again, old.anchorX(), old.anchorY())) {
+                        return new PlacedLabel(kind, owner, shape.lines(), again, align, old.anchorX(), old.anchorY(),
+                                state, body);
+                    }
+                }
+            }
+        }
+        List<double[]> anchors = new ArrayList<>();
+        for (Box b : bodies) {
+            anchors.addAll(List.of(new double[] {b.maxX(), b.centreY()}, new double[] {b.centreX(), b.minY()},
+                    new double[] {b.centreX(), b.maxY()}, new double[] {b.minX(), b.centreY()}));
+        }
+        LabelPlacer.Spot best = null;
+        Shape chosen = null;
+        double bestCost = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < shapes.size(); i++) {
+            Shape shape = shapes.get(i);
+            LabelPlacer.Spot spot = placer.find(anchors, shape.w(), shape.h());
+            double cost = spot.cost() + i * WRAP_COST + (spot.relaxed() ? 1000 : 0);
+            if (cost < bestCost) {
+                best = spot;
+                chosen = shape;
+                bestCost = cost;
+            }
+        }
+        placer.take(best);
+        return new PlacedLabel(kind, owner, chosen.lines(), best.box(), align, best.anchorX(), best.anchorY(), state, body);
+    }
+
+    /** One way to set a label's text: its lines and the box they need. */
+    private record Shape(List<String> lines, double w, double h) {
+    }
+
+    /**
+     * A short text on one line, and when it has a break point, also on two: after a comma or colon
+     * if there is one ("saturated," / "×6.1 margin"), else at the space nearest the middle.
+     */
+    static List<List<String>> wraps(String text) {
+        List<List<String>> out = new ArrayList<>();
+        out.add(List.of(text));
+        int cut = -1;
+        for (String mark : List.of(", ", ": ")) {
+            int at = text.indexOf(mark);
+            if (at > 0) {
+                cut = at + 1;
+                break;
+            }
+        }
+        if (cut < 0) {
+            int mid = text.length() / 2;
+            for (int d = 0; d < mid && cut < 0; d++) {
+                if (text.charAt(mid - d) == ' ') {
+                    cut = mid - d;
+                } else if (mid + d < text.length() && text.charAt(mid + d) == ' ') {
+                    cut = mid + d;
+                }
+            }
+        }
+        if (cut > 0 && cut < text.length() - 1) {
+            out.add(List.of(text.substring(0, cut).strip(), text.substring(cut).strip()));
+        }
+        return out;
+    }
+
+    /**
+     * A tag's box: where it was before if its anchor has not moved and the place is still free, else
+     * the nearest free place.
+     */
+    private static PlacedLabel tag(PlacedLabel.Kind kind, String owner, List<String> lines, String unit,
+                                   List<double[]> anchors, LabelPlacer placer, Map<String, PlacedLabel> before) {
+        double w = tagTextWidth(kind, lines, unit) + 2 * PAD + 0.1;
         double h = TAG.height() + 2 * PAD;
-        Box box = placer.near(ax, ay, w, h);
-        return new PlacedLabel(kind, owner, List.of(text), box, TextStyle.HAnchor.MIDDLE, ax, ay, state);
+        Box target = new Box(anchors.get(0)[0], anchors.get(0)[1], anchors.get(0)[0], anchors.get(0)[1]);
+        PlacedLabel old = before.get(kind + "|" + owner);
+        if (old != null && old.target().equals(target)) {
+            Box again = resized(old.box(), w, h, old.anchorX(), old.anchorY());
+            if (placer.tryAt(again, old.anchorX(), old.anchorY())) {
+                return new PlacedLabel(kind, owner, lines, again, TextStyle.HAnchor.MIDDLE, old.anchorX(), old.anchorY(),
+                        Annotations.State.OK, target);
+            }
+        }
+        LabelPlacer.Spot spot = placer.near(anchors, w, h);
+        return new PlacedLabel(kind, owner, lines, spot.box(), TextStyle.HAnchor.MIDDLE, spot.anchorX(), spot.anchorY(),
+                Annotations.State.OK, target);
+    }
+
+    /**
+     * Where a net's tag may point: the preferred point first, then points every half grid unit along
+     * every wire of the net and every other pin on it except ground symbols, each less preferred by
+     * {@link #OTHER_ANCHOR_COST} (a voltage describes the whole net).
+     */
+    private static List<double[]> netAnchors(Stage stage, Connectivity c, String net, double px, double py) {
+        List<double[]> out = new ArrayList<>();
+        out.add(new double[] {px, py, 0});
+        for (int i = 0; i < stage.wires().size(); i++) {
+            Wire w = stage.wires().get(i);
+            if (!w.isPoint() && c.netOfWire().get(i).equals(net)) {
+                // every half grid unit along the wire, ends excluded (they are pins or other wires' ends)
+                int steps = 2 * w.from().manhattan(w.to());
+                for (int k = 1; k < steps; k++) {
+                    double t = (double) k / steps;
+                    out.add(new double[] {w.from().gridX() + t * (w.to().gridX() - w.from().gridX()),
+                            w.from().gridY() + t * (w.to().gridY() - w.from().gridY()), OTHER_ANCHOR_COST});
+                }
+            }
+        }
+        for (PinRef pr : c.pinsOn(net)) {
+            Optional<Part> p = stage.part(pr.ref());
+            if (p.isPresent() && p.get().kind() != PartKind.GROUND) {
+                GridPoint g = p.get().pinPoint(pr.pin());
+                if (g.gridX() != px || g.gridY() != py) {
+                    out.add(new double[] {g.gridX(), g.gridY(), OTHER_ANCHOR_COST});
+                }
+            }
+        }
+        return out;
+    }
+
+    /**
+     * Width of a tag's text on one row: a name in regular weight, then a value in bold sized for its
+     * widest number ({@link #reserved}); a test point's name alone in regular weight.
+     */
+    private static double tagTextWidth(PlacedLabel.Kind kind, List<String> lines, String unit) {
+        if (kind == PlacedLabel.Kind.TEST_POINT) {
+            return TAG.weight(false).width(lines.get(0));
+        }
+        double value = BADGE_STYLE.width(reserved(lines.get(lines.size() - 1), unit));
+        return lines.size() == 1 ? value : TAG.weight(false).width(lines.get(0) + " ") + value;
+    }
+
+    /**
+     * A box of a new size in place of an old one, keeping the edges that face the anchor, so that
+     * a tag that grows by a digit grows away from what it points at.
+     */
+    static Box resized(Box old, double w, double h, double ax, double ay) {
+        double minX = old.minX() >= ax ? old.minX() : old.maxX() <= ax ? old.maxX() - w : old.centreX() - w / 2;
+        double minY = old.minY() >= ay ? old.minY() : old.maxY() <= ay ? old.maxY() - h : old.centreY() - h / 2;
+        return new Box(minX, minY, minX + w, minY + h);
+    }
+
+    /**
+     * The text a readout's box is sized for: a number of the widest form engineering notation gives
+     * ("8.88 mV": three digits, point, space, prefix; a sign more when negative) where the text is shorter, so that a tag
+     * keeps its size while only its number changes.
+     */
+    static String reserved(String text, String unit) {
+        int widest = (text.startsWith("−") || text.startsWith("-") ? "−8.88 m" : "8.88 m").length() + unit.length();
+        int n = text.codePointCount(0, text.length());
+        return n >= widest ? text : text + "8".repeat(widest - n);
+    }
+
+    /** Gauge width: its title and state words side by side, at least {@link #GAUGE_WIDTH}. */
+    private static double gaugeWidth(Annotations.RelayGauge g) {
+        double words = GAUGE_TITLE.width("coil " + reserved(Notation.format(g.coilAmps(), "A"), "A")) + GAUGE_STATE.width("released");
+        return Math.max(GAUGE_WIDTH, words + 2 * GAUGE_INSET + 0.4);
     }
 
     private static String gaugeText(Annotations.RelayGauge g) {
@@ -487,6 +829,7 @@ public final class SchematicRenderer {
         Box b = l.box();
         switch (l.kind()) {
             case PART -> {
+                leader(pen, l, pal.valueInk(), false);
                 double x = switch (l.align()) {
                     case START -> b.minX() + PAD;
                     case END -> b.maxX() - PAD;
@@ -512,7 +855,19 @@ public final class SchematicRenderer {
                 Box inner = b.inflate(-0.04);
                 pen.fillRect(inner, pal.tagFill());
                 pen.strokeRect(inner, accent, Stroke.solid(0.045));
-                pen.text(l.lines().get(0), b.centreX(), b.centreY(), TAG.weight(true), accent);
+                if (l.lines().size() == 1) {
+                    pen.text(l.lines().get(0), b.centreX(), b.centreY(), BADGE_STYLE, accent);
+                } else {
+                    // "control 773 mV": the test point's name, then the value, centred as one row
+                    String name = l.lines().get(0) + " ";
+                    String value = l.lines().get(1);
+                    double nw = TAG.weight(false).width(name);
+                    double x = b.centreX() - (nw + BADGE_STYLE.width(value)) / 2;
+                    pen.text(l.lines().get(0), x, b.centreY(), TAG.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.MIDDLE),
+                            pal.valueInk());
+                    pen.text(value, x + nw, b.centreY(),
+                            BADGE_STYLE.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.MIDDLE), accent);
+                }
             }
             case BADGE -> {
                 Colour accent = pal.of(l.state());
@@ -520,7 +875,10 @@ public final class SchematicRenderer {
                 pen.fillRect(inner, pal.tagFill().mix(accent, 0.14));
                 leader(pen, l, accent, false);
                 pen.strokeRect(inner, accent, Stroke.solid(0.05));
-                pen.text(l.lines().get(0), b.centreX(), b.centreY(), TAG.weight(true), accent);
+                double top = b.centreY() - (l.lines().size() - 1) * TAG.height() / 2;
+                for (int i = 0; i < l.lines().size(); i++) {
+                    pen.text(l.lines().get(i), b.centreX(), top + i * TAG.height(), BADGE_STYLE, accent);
+                }
             }
             case GAUGE -> gauge(pen, l, pal, a);
             case MARKER -> {
@@ -530,9 +888,12 @@ public final class SchematicRenderer {
                 double cy = b.centreY();
                 pen.fillCircle(cx, cy, MARKER_RADIUS, accent);
                 pen.text("!", cx, cy, TextStyle.centred(0.42).weight(true), pal.tagFill());
-                if (!l.lines().get(0).isEmpty()) {
-                    pen.text(l.lines().get(0), cx + MARKER_RADIUS + 0.12, cy,
-                            TAG.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.MIDDLE).weight(true), accent);
+                double top = cy - (l.lines().size() - 1) * TAG.height() / 2;
+                for (int i = 0; i < l.lines().size(); i++) {
+                    if (!l.lines().get(i).isEmpty()) {
+                        pen.text(l.lines().get(i), cx + MARKER_RADIUS + 0.12, top + i * TAG.height(),
+                                TAG.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.MIDDLE).weight(true), accent);
+                    }
                 }
             }
             default -> throw new IllegalStateException("unknown label kind " + l.kind());
@@ -560,17 +921,15 @@ public final class SchematicRenderer {
         Annotations.RelayGauge g = found.get();
         Box b = l.box();
         Box inner = b.inflate(-0.04);
+        leader(pen, l, pal.valueInk(), false);
         pen.fillRect(inner, pal.tagFill());
         pen.strokeRect(inner, pal.valueInk(), Stroke.solid(0.03));
-        double x0 = b.minX() + 0.3;
-        double x1 = b.maxX() - 0.3;
+        double x0 = b.minX() + GAUGE_INSET + 0.05;
+        double x1 = b.maxX() - GAUGE_INSET - 0.05;
         double full = Math.max(g.pickUpAmps() * 1.35, g.coilAmps() * 1.1);
         double ty = b.minY() + 0.95;
-        TextStyle small = new TextStyle(0.36, false, TextStyle.HAnchor.MIDDLE, TextStyle.VAnchor.TOP);
-        pen.text(gaugeText(g), b.minX() + 0.25, b.minY() + 0.1,
-                new TextStyle(0.44, true, TextStyle.HAnchor.START, TextStyle.VAnchor.TOP), pal.current());
-        pen.text(g.operated() ? "operated" : "released", b.maxX() - 0.25, b.minY() + 0.12,
-                new TextStyle(0.4, true, TextStyle.HAnchor.END, TextStyle.VAnchor.TOP),
+        pen.text(gaugeText(g), b.minX() + GAUGE_INSET, b.minY() + 0.1, GAUGE_TITLE, pal.current());
+        pen.text(g.operated() ? "operated" : "released", b.maxX() - GAUGE_INSET, b.minY() + 0.12, GAUGE_STATE,
                 g.operated() ? pal.ok() : pal.valueInk());
         double xd = x0 + (x1 - x0) * g.dropOutAmps() / full;
         double xp = x0 + (x1 - x0) * g.pickUpAmps() / full;
@@ -580,9 +939,16 @@ public final class SchematicRenderer {
         pen.line(x0, ty, xd, ty, pal.tagFill().mix(pal.valueInk(), 0.45), Stroke.solid(0.14));
         pen.line(xd, ty - 0.2, xd, ty + 0.2, pal.valueInk(), Stroke.solid(0.05));
         pen.line(xp, ty - 0.2, xp, ty + 0.2, pal.valueInk(), Stroke.solid(0.05));
+        // the mark names sit under their ticks, kept inside the border and apart from each other
         double ly = ty + 0.28;
-        pen.text("drop-out", xd + 0.1, ly, small.anchored(TextStyle.HAnchor.END, TextStyle.VAnchor.TOP), pal.valueInk());
-        pen.text("pick-up", xp - 0.1, ly, small.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.TOP), pal.valueInk());
+        double left = b.minX() + GAUGE_INSET;
+        double right = b.maxX() - GAUGE_INSET;
+        double wd = GAUGE_MARK.width("drop-out");
+        double wp = GAUGE_MARK.width("pick-up");
+        double dropX = Math.max(left, Math.min(xd - wd / 2, right - wd - wp - 0.15));
+        double pickX = Math.min(right - wp, Math.max(xp - wp / 2, dropX + wd + 0.15));
+        pen.text("drop-out", dropX, ly, GAUGE_MARK, pal.valueInk());
+        pen.text("pick-up", pickX, ly, GAUGE_MARK, pal.valueInk());
         pen.fillPolygon(new double[] {xc, xc - 0.17, xc + 0.17}, new double[] {ty - 0.02, ty - 0.34, ty - 0.34}, pal.current());
     }
 

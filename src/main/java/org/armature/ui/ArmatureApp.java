@@ -61,7 +61,9 @@ public final class ArmatureApp extends Application {
                 solver, Platform::runLater, slow);
         MainWindow w = new MainWindow(vm, new RecentFiles());
         this.window = w;
-        primary.setScene(w.scene(1560, 960));
+        // the first window fits the screen (down to 1024×700), later ones restore their stored layout
+        Rectangle2D screen = Screen.getPrimary().getVisualBounds();
+        primary.setScene(w.scene(Math.min(1560, screen.getWidth()), Math.min(960, screen.getHeight())));
         w.guardClose(primary);
         Runnable title = () -> primary.setTitle("Armature — " + vm.fileName() + (vm.dirtyProperty().get() ? " ●" : ""));
         title.run();

@@ -11,7 +11,10 @@ import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.input.MouseEvent;
 import javafx.scene.layout.BorderPane;
-import javafx.scene.layout.HBox;
+import javafx.scene.layout.ColumnConstraints;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.Pane;
 import javafx.scene.layout.VBox;
 import org.armature.render.Affine;
@@ -167,14 +170,27 @@ public final class EdgesPane extends BorderPane {
             rows.add(new String[] {"peak suppressor current", Notation.format(m.peakSuppressorAmps(), "A")});
             rows.add(new String[] {"switch breakdown", m.switchBreakdown() ? "yes: avalanche" : "no"});
         }
-        for (String[] row : rows) {
-            Label k = new Label(row[0]);
+        // names wrap rather than being cut ("peak suppressor current"); values keep their width
+        GridPane grid = new GridPane();
+        grid.setHgap(6);
+        grid.setVgap(2);
+        ColumnConstraints names = new ColumnConstraints();
+        names.setHgrow(Priority.ALWAYS);
+        names.setMinWidth(60);
+        ColumnConstraints values = new ColumnConstraints();
+        values.setMinWidth(Region.USE_PREF_SIZE);
+        grid.getColumnConstraints().addAll(names, values);
+        for (int i = 0; i < rows.size(); i++) {
+            Label k = new Label(rows.get(i)[0]);
             k.getStyleClass().add("param-label");
-            k.setPrefWidth(150);
-            Label v = new Label(row[1]);
+            k.setWrapText(true);
+            k.setMinHeight(Region.USE_PREF_SIZE);
+            Label v = new Label(rows.get(i)[1]);
             v.getStyleClass().add("reading");
-            figures.getChildren().add(new HBox(6, k, v));
+            v.setMinWidth(Region.USE_PREF_SIZE);
+            grid.addRow(i, k, v);
         }
+        figures.getChildren().add(grid);
         for (String note : r.get().notes()) {
             Label n = new Label(note);
             n.setWrapText(true);

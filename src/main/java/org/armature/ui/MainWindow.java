@@ -2,6 +2,7 @@ package org.armature.ui;
 
 import java.io.File;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.function.BooleanSupplier;
@@ -25,7 +26,6 @@ import javafx.scene.control.Slider;
 import javafx.scene.control.TitledPane;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
-import javafx.scene.control.ToolBar;
 import javafx.scene.control.Tooltip;
 import javafx.scene.input.KeyCombination;
 import javafx.scene.layout.BorderPane;
@@ -68,12 +68,24 @@ public final class MainWindow {
     private final TitledPane edgesDrawer;
     private final StageTabs stageTabs;
     private final MenuBar menuBar = new MenuBar();
+    private HBox toolBar;
     private final RecentFiles recent;
     private final Menu recentMenu = new Menu("Recent");
     private Scene scene;
     private boolean syncingAmbient;
     private boolean syncingSupply;
     private BooleanSupplier discardQuestion = this::askDiscard;
+
+    /** Narrowest a tool bar slider gets, pixels: still about 3 px per volt of the supply range. */
+    public static final double SLIDER_MIN_WIDTH = 90;
+    /** Width of a tool bar slider when there is room, pixels. */
+    public static final double SLIDER_PREF_WIDTH = 150;
+    /** Share of the centre's height the open edges drawer takes, between its limits below. */
+    public static final double DRAWER_SHARE = 0.36;
+    /** Smallest height of the open edges drawer, pixels: four strips of about 30 px and the time axis. */
+    public static final double DRAWER_MIN_HEIGHT = 170;
+    /** Largest height of the open edges drawer, pixels. */
+    public static final double DRAWER_MAX_HEIGHT = 300;
 
     /** Range of the supply slider, V: a 3.3 V rail up to a 36 V one (the stages this tool is for). */
     public static final double SUPPLY_MIN_VOLTS = 3;
@@ -91,7 +103,8 @@ public final class MainWindow {
         this.edgesDrawer = new TitledPane("Edges: turn-on and turn-off", edges);
         root.getStyleClass().add("armature-root");
         this.stageTabs = new StageTabs(vm);
-        VBox top = new VBox(buildMenus(), toolBar());
+        toolBar = toolBar();
+        VBox top = new VBox(buildMenus(), toolBar);
         root.setTop(top);
         palette = new PartPalette(vm, Palette.LIGHT);
         palette.setPrefWidth(64);
@@ -102,14 +115,28 @@ public final class MainWindow {
             }
         });
         root.setLeft(palette);
-        BorderPane centre = new BorderPane(canvas);
-        centre.setTop(stageTabs);
-        root.setCenter(centre);
+        root.setCenter(centre());
         root.setRight(rightSide());
+        root.setBottom(statusBar());
+    }
+
+    /**
+     * The drawing with the edges drawer under it: the drawer shares the centre column only, so the
+     * part sheet and the verdicts keep the full height beside it; open, it takes
+     * {@link #DRAWER_SHARE} of the column within its limits.
+     */
+    private Region centre() {
         edgesDrawer.setId("edges-drawer");
         edgesDrawer.setExpanded(false);
-        edges.setPrefHeight(270);
-        root.setBottom(new VBox(edgesDrawer, statusBar()));
+        BorderPane centre = new BorderPane(canvas);
+        centre.setTop(stageTabs);
+        centre.setBottom(edgesDrawer);
+        centre.setMinSize(0, 0);
+        canvas.setMinSize(0, 0);
+        centre.heightProperty().addListener((o, a, b) -> edges.setPrefHeight(
+                Math.max(DRAWER_MIN_HEIGHT, Math.min(DRAWER_MAX_HEIGHT, DRAWER_SHARE * b.doubleValue()))));
+        edges.setPrefHeight(DRAWER_MIN_HEIGHT);
+        return centre;
     }
 
     /**
@@ -348,7 +375,18 @@ public final class MainWindow {
 
     // ------------------------------------------------------------------ tool bar
 
-    private ToolBar toolBar() {
+    private static javafx.scene.control.Separator separator() {
+        javafx.scene.control.Separator sep = new javafx.scene.control.Separator(Orientation.VERTICAL);
+        sep.setPadding(new Insets(0, 2, 0, 2));
+        return sep;
+    }
+
+    /** The tool bar (tests look its controls up). */
+    public HBox toolBarRow() {
+        return toolBar;
+    }
+
+    private HBox toolBar() {
         Button newB = tool("mdi2f-file-plus-outline", "New stage: low-side NPN with a freewheeling diode",
                 () -> confirmDiscard(() -> vm.newFromTemplate(StageTemplate.LOW_SIDE_NPN, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT)));
         Button openB = tool("mdi2f-folder-open-outline", "Open a stage file", this::chooseOpen);
@@ -379,7 +417,6 @@ public final class MainWindow {
         vm.stageProperty().addListener((o, a, b) -> syncPin.run());
         Slider ambient = new Slider(-40, 85, vm.stage().conditions().ambientCelsius());
         ambient.setId("ambient-slider");
-        ambient.setPrefWidth(150);
         ambient.setMajorTickUnit(25);
         ambient.setBlockIncrement(5);
         ambient.setTooltip(new Tooltip("Ambient temperature of the nominal operating point"));
@@ -400,9 +437,9 @@ public final class MainWindow {
         });
         vm.stageProperty().addListener((o, a, b) -> syncAmbient.run());
         Label amb = new Label("Ambient", new FontIcon("mdi2t-thermometer"));
+        amb.setTooltip(new Tooltip("Ambient temperature of the nominal operating point"));
         Slider supply = new Slider(SUPPLY_MIN_VOLTS, SUPPLY_MAX_VOLTS, supplyVolts());
         supply.setId("supply-slider");
-        supply.setPrefWidth(150);
         supply.setBlockIncrement(0.5);
         supply.setTooltip(new Tooltip("Coil supply voltage of the nominal operating point"));
         Label supplyReading = new Label();
@@ -425,15 +462,29 @@ public final class MainWindow {
         });
         vm.stageProperty().addListener((o, a, b) -> syncSupply.run());
         Label sup = new Label("Supply", new FontIcon("mdi2f-flash-outline"));
+        sup.setTooltip(new Tooltip("Coil supply voltage of the nominal operating point"));
         Button export = tool("mdi2e-export-variant", "Export the drawing or a report", this::export);
         Button edgesB = tool("mdi2w-waveform", "Show the edges: turn-on and turn-off waveforms",
                 () -> edgesDrawer.setExpanded(!edgesDrawer.isExpanded()));
         edgesB.setId("edges-button");
-        ToolBar bar = new ToolBar(newB, openB, saveB, new javafx.scene.control.Separator(Orientation.VERTICAL), undoB, redoB,
-                rotB, mirB, new javafx.scene.control.Separator(Orientation.VERTICAL), pin, amb, ambient, reading, sup, supply,
-                supplyReading,
-                new javafx.scene.control.Separator(Orientation.VERTICAL), edgesB, fitB, export);
+        // one row that never overflows into a hidden menu: buttons and words keep their full size, the
+        // two sliders give up width first (down to SLIDER_MIN_WIDTH) when the window narrows
+        for (Slider sl : List.of(ambient, supply)) {
+            sl.setMinWidth(SLIDER_MIN_WIDTH);
+            sl.setPrefWidth(SLIDER_PREF_WIDTH);
+            sl.setMaxWidth(SLIDER_PREF_WIDTH);
+            HBox.setHgrow(sl, Priority.SOMETIMES);
+        }
+        HBox bar = new HBox(newB, openB, saveB, separator(), undoB, redoB, rotB, mirB, separator(), pin, amb, ambient,
+                reading, sup, supply, supplyReading, separator(), edgesB, fitB, export);
+        bar.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+        bar.setId("main-toolbar");
         bar.getStyleClass().add("main-toolbar");
+        for (javafx.scene.Node n : bar.getChildren()) {
+            if (!(n instanceof Slider) && n instanceof Region r) {
+                r.setMinWidth(Region.USE_PREF_SIZE);
+            }
+        }
         return bar;
     }
 
@@ -460,22 +511,35 @@ public final class MainWindow {
 
     // ------------------------------------------------------------------ right side and status
 
+    /**
+     * The part sheet above the verdicts, each collapsible. Both share the height while open; a
+     * collapsed one shrinks to its title and gives the other its room. The verdicts scroll in their
+     * own lists, so they sit in no scroll pane (no nested scrolling); the part sheet has one.
+     */
     private Region rightSide() {
         ScrollPane sheetScroll = new ScrollPane(sheet);
         sheetScroll.setFitToWidth(true);
         sheetScroll.setPadding(new Insets(6));
         TitledPane sheetPane = new TitledPane("Part sheet", sheetScroll);
         sheetPane.setId("part-sheet-pane");
-        ScrollPane verdictScroll = new ScrollPane(verdicts);
-        verdictScroll.setFitToWidth(true);
-        verdictScroll.setPadding(new Insets(6));
-        verdictScroll.setPrefViewportHeight(340);
-        TitledPane verdictPane = new TitledPane("Verdicts", verdictScroll);
+        verdicts.setPadding(new Insets(6));
+        TitledPane verdictPane = new TitledPane("Verdicts", verdicts);
         verdictPane.setId("verdicts-pane");
         VBox box = new VBox(sheetPane, verdictPane);
-        sheetPane.setMaxHeight(Double.MAX_VALUE);
-        VBox.setVgrow(sheetPane, Priority.ALWAYS);
+        Runnable share = () -> {
+            for (TitledPane t : List.of(sheetPane, verdictPane)) {
+                boolean open = t.isExpanded();
+                VBox.setVgrow(t, open ? Priority.ALWAYS : Priority.NEVER);
+                t.setMaxHeight(open ? Double.MAX_VALUE : Region.USE_PREF_SIZE);
+                t.setPrefHeight(open ? 200 : Region.USE_COMPUTED_SIZE);
+                t.setMinHeight(open ? 0 : Region.USE_PREF_SIZE);
+            }
+        };
+        share.run();
+        sheetPane.expandedProperty().addListener((o, a, b) -> share.run());
+        verdictPane.expandedProperty().addListener((o, a, b) -> share.run());
         box.setPrefWidth(330);
+        box.setMinWidth(260);
         box.getStyleClass().add("right-side");
         return box;
     }

@@ -29,12 +29,18 @@ import org.armature.render.Selection;
 import org.armature.render.Snap;
 
 /**
- * The drawing surface of the editor: three stacked canvases drawn by {@link SchematicRenderer}.
+ * The drawing surface of the editor: four stacked canvases drawn by {@link SchematicRenderer}.
  *
  * <p>Layers, bottom to top: (1) paper and {@link Layer#GRID}, redrawn only when the view (zoom, pan,
- * size, theme) changes; (2) {@link Layer#WIRES}, {@link Layer#PARTS}, {@link Layer#LABELS} and
- * {@link Layer#ANNOTATIONS}, redrawn when the stage or its readouts change; (3)
- * {@link Layer#SELECTION} and editing previews, redrawn on every pointer move that changes them.
+ * size, theme) changes; (2) {@link Layer#WIRES}, {@link Layer#PARTS} and {@link Layer#LABELS},
+ * redrawn only when the parts, wires, values, pin state, a relay's drawn contact state, the theme or
+ * the view change; (3) {@link Layer#ANNOTATIONS}, redrawn on every published solve; (4)
+ * {@link Layer#SELECTION} and editing previews, redrawn on every pointer move that changes them. The
+ * label layout is computed once per repaint and handed on to the next, so labels stay put while
+ * only numbers change.
+ *
+ * <p>The view follows the drawing (fitted on open, on another drawing or file, on resize and when
+ * readouts reach past it) until the user zooms or pans; {@link #fit()} makes it follow again.
  *
  * <p>Screen coordinates ({@code screenX}) and grid coordinates ({@code gridX}) never mix: the view
  * transform converts between them, and all hit testing happens in grid units.
@@ -57,7 +63,10 @@ public final class SchematicCanvas extends Region {
     private final EditorViewModel vm;
     private final Canvas gridLayer = new Canvas();
     private final Canvas drawingLayer = new Canvas();
+    private final Canvas annotationLayer = new Canvas();
     private final Canvas overlayLayer = new Canvas();
+    /** What the drawing layer shows; it is repainted only when this changes. */
+    private Object drawnKey;
     private Palette palette = Palette.LIGHT;
     private double zoom = 1;
     private double offsetX = 40;
@@ -65,6 +74,12 @@ public final class SchematicCanvas extends Region {
     private boolean gridDirty = true;
     private Layout lastLayout;
     private Evaluation drawn;
+    /** True while the view follows the drawing (until the user zooms or pans). */
+    private boolean autoFit = true;
+    private boolean fitting;
+    private boolean refitOnNextStage;
+    /** Margin around the drawing when fitted, grid units. */
+    static final double FIT_MARGIN = 1.5;
 
     /** Screen pixels of vertical drag per preferred-value step when dragging a value label. */
     public static final double VALUE_DRAG_PIXELS = 8;
@@ -91,11 +106,13 @@ public final class SchematicCanvas extends Region {
     public SchematicCanvas(EditorViewModel vm) {
         this.vm = vm;
         getStyleClass().add("schematic-canvas");
-        getChildren().addAll(gridLayer, drawingLayer, overlayLayer);
+        getChildren().addAll(gridLayer, drawingLayer, annotationLayer, overlayLayer);
         setFocusTraversable(true);
         setMinSize(200, 200);
         drawn = vm.evaluation();
         vm.evaluationProperty().addListener((o, a, b) -> evaluated(b));
+        // a file opened (another path) is fitted when its stage arrives
+        vm.fileProperty().addListener((o, x, y) -> refitOnNextStage = y.isPresent() && !y.equals(x));
         vm.previewProperty().addListener((o, a, b) -> redrawDrawing());
         vm.shownReadoutsProperty().addListener((o, a, b) -> redrawDrawing());
         vm.selectionProperty().addListener((o, a, b) -> redrawOverlay());
@@ -115,10 +132,26 @@ public final class SchematicCanvas extends Region {
      * old readouts.
      */
     private void evaluated(Evaluation e) {
-        if (e.readoutsReady() || drawn == null || !sameDrawing(drawn.stage(), e.stage())) {
+        Evaluation before = drawn;
+        if (e.readoutsReady() || before == null || !sameDrawing(before.stage(), e.stage())) {
             drawn = e;
+            // another drawing (a new stage from a template, another tab, an opened file) is fitted
+            // again; an edit of the same stage is not
+            boolean another = before == null
+                    || !sameDrawing(before.stage(), e.stage()) && !before.stage().name().equals(e.stage().name());
+            if (another || refitOnNextStage) {
+                refitOnNextStage = false;
+                lastLayout = null;
+                fit();
+                return;
+            }
             redrawDrawing();
         }
+    }
+
+    /** The readouts drawn with {@link #shownStage()}: none on a drag preview, which no one has solved. */
+    private org.armature.render.Annotations shownAnnotations() {
+        return vm.previewProperty().get().isPresent() ? org.armature.render.Annotations.NONE : vm.annotations(drawn);
     }
 
     /** The evaluation the drawing layer shows. */
@@ -191,8 +224,9 @@ public final class SchematicCanvas extends Region {
         return palette;
     }
 
-    /** Zooms by a factor about a screen point. */
+    /** Zooms by a factor about a screen point; the view stops following the drawing's size. */
     public void zoomAt(double factor, double screenX, double screenY) {
+        autoFit = false;
         double gx = gridX(screenX);
         double gy = gridY(screenY);
         zoom = Math.max(MIN_ZOOM, Math.min(MAX_ZOOM, zoom * factor));
@@ -212,14 +246,19 @@ public final class SchematicCanvas extends Region {
         zoomAt(1 / ZOOM_STEP, getWidth() / 2, getHeight() / 2);
     }
 
-    /** Fits the whole drawing (with labels) into the view. */
+    /**
+     * Fits the whole drawing (with labels and readouts) into the view, and keeps it fitted on every
+     * resize and readout change until the user zooms or pans ({@link #fitsAutomatically()}).
+     */
     public void fit() {
+        autoFit = true;
         double w = getWidth();
         double h = getHeight();
         if (w <= 0 || h <= 0) {
             return;
         }
-        Box e = SchematicRenderer.layout(drawn.stage(), vm.annotations(drawn)).extent().inflate(1.5);
+        Box e = SchematicRenderer.layout(shownStage(), shownAnnotations(),
+                lastLayout == null ? Layout.NONE : lastLayout).extent().inflate(FIT_MARGIN);
         zoom = Math.max(MIN_ZOOM, Math.min(MAX_ZOOM, Math.min(w / e.width(), h / e.height()) / BASE_PIXELS_PER_GRID));
         offsetX = (w - e.width() * scale()) / 2 - e.minX() * scale();
         offsetY = (h - e.height() * scale()) / 2 - e.minY() * scale();
@@ -227,7 +266,24 @@ public final class SchematicCanvas extends Region {
         redrawAll();
     }
 
+    /** True while the view follows the drawing: fitted on open, on a new stage and on resize. */
+    public boolean fitsAutomatically() {
+        return autoFit;
+    }
+
+    /** The drawing's extent (parts, wires, labels, readouts) in screen pixels, as last drawn. */
+    public Optional<javafx.geometry.BoundingBox> drawingBoundsOnScreen() {
+        if (lastLayout == null) {
+            return Optional.empty();
+        }
+        Box e = lastLayout.extent();
+        double x = e.minX() * scale() + offsetX;
+        double y = e.minY() * scale() + offsetY;
+        return Optional.of(new javafx.geometry.BoundingBox(x, y, e.width() * scale(), e.height() * scale()));
+    }
+
     private void pan(double dxScreen, double dyScreen) {
+        autoFit = false;
         offsetX += dxScreen;
         offsetY += dyScreen;
         gridDirty = true;
@@ -238,7 +294,7 @@ public final class SchematicCanvas extends Region {
     protected void layoutChildren() {
         double w = Math.floor(getWidth());
         double h = Math.floor(getHeight());
-        for (Canvas c : new Canvas[] {gridLayer, drawingLayer, overlayLayer}) {
+        for (Canvas c : new Canvas[] {gridLayer, drawingLayer, annotationLayer, overlayLayer}) {
             if (c.getWidth() != w || c.getHeight() != h) {
                 c.setWidth(w);
                 c.setHeight(h);
@@ -246,7 +302,11 @@ public final class SchematicCanvas extends Region {
             }
         }
         if (gridDirty) {
-            redrawAll();
+            if (autoFit) {
+                fit();
+            } else {
+                redrawAll();
+            }
         }
     }
 
@@ -279,16 +339,73 @@ public final class SchematicCanvas extends Region {
         return lastRepaintNanos;
     }
 
+    /**
+     * Repaints what changed since the last repaint: the label layout is computed once, keeping every
+     * label where it was while only numbers change ({@link SchematicRenderer#layout(Stage,
+     * org.armature.render.Annotations, Layout)}); the drawing layer (wires, symbols, designators and
+     * values) is repainted only when those change, the annotation layer (test point tags and
+     * readouts) every time. A slider drag therefore repaints the readouts alone.
+     */
     private void redrawDrawing() {
         long start = System.nanoTime();
-        GraphicsContext g = drawingLayer.getGraphicsContext2D();
-        g.clearRect(0, 0, drawingLayer.getWidth(), drawingLayer.getHeight());
-        // a drag preview is a stage no one has solved: it is drawn without readouts
-        var readouts = vm.previewProperty().get().isPresent() ? org.armature.render.Annotations.NONE : vm.annotations(drawn);
-        lastLayout = SchematicRenderer.draw(shownStage(), readouts,
-                options(EnumSet.of(Layer.WIRES, Layer.PARTS, Layer.LABELS, Layer.ANNOTATIONS)), new FxPen(g, view()));
+        Stage st = shownStage();
+        org.armature.render.Annotations a = shownAnnotations();
+        lastLayout = SchematicRenderer.layout(st, a, lastLayout == null ? Layout.NONE : lastLayout);
+        if (autoFit && !fitting && getWidth() > 0 && getHeight() > 0) {
+            Box visible = Box.spanning(gridX(0), gridY(0), gridX(getWidth()), gridY(getHeight()));
+            if (!visible.contains(lastLayout.extent())) {
+                // readouts arrived and reach past the view: fit again (once; fit redraws)
+                fitting = true;
+                try {
+                    fit();
+                } finally {
+                    fitting = false;
+                }
+                return;
+            }
+        }
+        Object key = List.of(st.parts(), st.wires(), st.conditions().pinHigh(), operated(a), palette, view(),
+                drawingLayer.getWidth(), drawingLayer.getHeight(), partLabels(lastLayout));
+        if (!key.equals(drawnKey)) {
+            GraphicsContext g = drawingLayer.getGraphicsContext2D();
+            g.clearRect(0, 0, drawingLayer.getWidth(), drawingLayer.getHeight());
+            SchematicRenderer.draw(st, a, options(EnumSet.of(Layer.WIRES, Layer.PARTS, Layer.LABELS)),
+                    new FxPen(g, view()), lastLayout);
+            drawnKey = key;
+        }
+        redrawAnnotations(st, a);
         lastRepaintNanos = System.nanoTime() - start;
         repainted.accept(drawn.generation());
+    }
+
+    /** Repaints the annotation layer alone, with the layout of the last repaint. */
+    private void redrawAnnotations(Stage st, org.armature.render.Annotations a) {
+        GraphicsContext g = annotationLayer.getGraphicsContext2D();
+        g.clearRect(0, 0, annotationLayer.getWidth(), annotationLayer.getHeight());
+        SchematicRenderer.draw(st, a, options(EnumSet.of(Layer.ANNOTATIONS)), new FxPen(g, view()), lastLayout);
+    }
+
+    /** The relays drawn operated: their contact sets belong to the drawing layer. */
+    private static Set<String> operated(org.armature.render.Annotations a) {
+        Set<String> out = new java.util.TreeSet<>();
+        for (org.armature.render.Annotations.RelayGauge g : a.gauges()) {
+            if (g.operated()) {
+                out.add(g.ref());
+            }
+        }
+        return out;
+    }
+
+    private static List<org.armature.render.PlacedLabel> partLabels(Layout l) {
+        return l.labels(org.armature.render.PlacedLabel.Kind.PART);
+    }
+
+    /** True when the drawing layer was last painted for exactly what it would show now (tests). */
+    boolean drawingLayerCurrent() {
+        Stage st = shownStage();
+        org.armature.render.Annotations a = shownAnnotations();
+        return drawnKey != null && drawnKey.equals(List.of(st.parts(), st.wires(), st.conditions().pinHigh(),
+                operated(a), palette, view(), drawingLayer.getWidth(), drawingLayer.getHeight(), partLabels(lastLayout)));
     }
 
     /**

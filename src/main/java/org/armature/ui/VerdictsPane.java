@@ -37,6 +37,8 @@ public final class VerdictsPane extends VBox {
     private final Label status = new Label();
     private Analyses.Verdicts shownVerdicts = Analyses.Verdicts.NONE;
     private boolean shownRunning;
+    /** Whether the cautions are shown in full; closed by default, kept across updates. */
+    private boolean cautionsOpen;
 
     /** A panel following the view model's verdicts and findings. */
     public VerdictsPane(EditorViewModel vm) {
@@ -54,6 +56,9 @@ public final class VerdictsPane extends VBox {
         checks.setPlaceholder(placeholder);
         checks.setPrefHeight(360);
         findings.list().setPrefHeight(120);
+        // the checks list takes the height that is left, but never squeezes the findings below two rows
+        findings.setMinHeight(FINDINGS_MIN_HEIGHT);
+        checks.setMinHeight(FINDINGS_MIN_HEIGHT);
         checks.setCellFactory(v -> new CheckCell());
         checks.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
             if (b != null) {
@@ -103,22 +108,59 @@ public final class VerdictsPane extends VBox {
                 .filter(f -> f.key().startsWith(CAUTION_PREFIX)).toList()).orElse(List.of());
         cautions.getChildren().clear();
         if (!caution.isEmpty()) {
-            Label head = new Label("Mains or high voltage on the contacts", new FontIcon("mdi2f-flash-alert"));
+            // one line that opens on click: the cautions stay in view without crowding out the checks
+            javafx.scene.control.Button head = new javafx.scene.control.Button(cautionLine(caution.size(), cautionsOpen),
+                    new FontIcon("mdi2f-flash-alert"));
+            head.setId("cautions-toggle");
             head.getStyleClass().add("caution-title");
-            // the panel is narrow: the heading wraps like the cautions under it instead of being cut
             head.setWrapText(true);
-            cautions.getChildren().add(head);
+            head.setMaxWidth(Double.MAX_VALUE);
+            head.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+            head.setTooltip(new javafx.scene.control.Tooltip("Show or hide the cautions for contacts above safety"
+                    + " extra-low voltage"));
+            head.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+            VBox body = new VBox(4);
+            body.setId("caution-messages");
             for (Finding f : caution) {
                 Label l = new Label(f.message());
                 l.setWrapText(true);
                 l.getStyleClass().add("caution-text");
-                cautions.getChildren().add(l);
+                body.getChildren().add(l);
             }
+            body.setVisible(cautionsOpen);
+            body.setManaged(cautionsOpen);
+            head.setOnAction(e -> {
+                cautionsOpen = !cautionsOpen;
+                body.setVisible(cautionsOpen);
+                body.setManaged(cautionsOpen);
+                head.setText(cautionLine(caution.size(), cautionsOpen));
+            });
+            cautions.getChildren().addAll(head, body);
         }
         cautions.setVisible(!caution.isEmpty());
         cautions.setManaged(!caution.isEmpty());
-        String overall = v.report().map(r -> "Overall " + r.overall().word() + " · " + v.status()).orElse(v.status());
+        String overall = v.report().map(r -> overallLine(r, v.status())).orElse(v.status());
         status.setText(running ? "Judging the corners…" + (overall.isEmpty() ? "" : "  (shown: " + overall + ")") : overall);
+    }
+
+    /**
+     * The caution box's one line: "Contacts above SELV: 3 cautions ▸" (SELV, safety extra-low voltage,
+     * the trade's word for the limit the cautions start at; short enough for the narrow pane).
+     */
+    static String cautionLine(int count, boolean open) {
+        return "Contacts above SELV: " + count + (count == 1 ? " caution " : " cautions ") + (open ? "▾" : "▸");
+    }
+
+    /**
+     * "Overall warn · 512 corners judged"; when no check has a value (a stage with no operating
+     * point at its corners) there is no overall verdict to give, and the line says so.
+     */
+    static String overallLine(CheckReport r, String status) {
+        boolean judged = r.checks().stream().anyMatch(c -> !Double.isNaN(c.value()));
+        if (!judged) {
+            return "Not judged: no check could be evaluated on this stage";
+        }
+        return "Overall " + r.overall().word() + (status.isEmpty() ? "" : " · " + status);
     }
 
     /** Value against limit: "10.7 V against 12.4 V". */
@@ -135,6 +177,12 @@ public final class VerdictsPane extends VBox {
         }
         return EngineeringNotation.format(v, u);
     }
+
+    /** Smallest height of the findings list and of the checks list, pixels: two rows. */
+    static final double FINDINGS_MIN_HEIGHT = 64;
+
+    /** Width a check cell leaves for the list's scroll bar and padding, pixels. */
+    static final double CELL_INSET = 30;
 
     /** One check: status icon, id and numbers on the first line, corner and explanation below. */
     private static final class CheckCell extends ListCell<CheckResult> {
@@ -172,9 +220,11 @@ public final class VerdictsPane extends VBox {
                 corner.getStyleClass().add("check-corner");
                 box.getChildren().add(corner);
             }
-            box.setMaxWidth(280);
-            box.setPrefWidth(280);
-            why.setMaxWidth(280);
+            // as wide as the list leaves room for (its scroll bar included), never wider: words wrap
+            if (getListView() != null) {
+                box.prefWidthProperty().bind(getListView().widthProperty().subtract(CELL_INSET));
+                box.maxWidthProperty().bind(getListView().widthProperty().subtract(CELL_INSET));
+            }
             setText(null);
             setGraphic(box);
             setPrefWidth(0);

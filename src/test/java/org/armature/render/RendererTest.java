@@ -117,7 +117,7 @@ class RendererTest {
     }
 
     @Test
-    @DisplayName("layers are independent: the grid layer alone draws no text; wires alone draw no text; labels alone draw the designators")
+    @DisplayName("layers are independent: the grid layer alone draws no text; wires alone draw no text; labels alone draw the designators, annotations the test point tags")
     void layerSubsets() {
         Stage st = Templates.defaultStage();
         RecordingPen grid = new RecordingPen();
@@ -129,7 +129,11 @@ class RendererTest {
         assertTrue(wires.texts().isEmpty());
         RecordingPen labels = new RecordingPen();
         SchematicRenderer.draw(st, Annotations.NONE, RenderOptions.all().withLayers(EnumSet.of(Layer.LABELS)), labels);
-        assertTrue(labels.texts().containsAll(List.of("K1", "Q1", "control")));
+        assertTrue(labels.texts().containsAll(List.of("K1", "Q1")));
+        assertFalse(labels.texts().contains("control"), "test point tags go with the readouts");
+        RecordingPen tags = new RecordingPen();
+        SchematicRenderer.draw(st, Annotations.NONE, RenderOptions.all().withLayers(EnumSet.of(Layer.ANNOTATIONS)), tags);
+        assertTrue(tags.texts().contains("control"));
     }
 
     @Test
