@@ -251,15 +251,35 @@ public final class SchematicCanvas extends Region {
      * resize and readout change until the user zooms or pans ({@link #fitsAutomatically()}).
      */
     public void fit() {
+        fit(true);
+    }
+
+    /**
+     * Fits the view to the drawing.
+     *
+     * @param zoomIn whether the view may grow; false while the user draws (a part placed past the
+     *     edge widens the view, but the first part placed on an empty sheet does not fill the window)
+     */
+    private void fit(boolean zoomIn) {
         autoFit = true;
         double w = getWidth();
         double h = getHeight();
         if (w <= 0 || h <= 0) {
             return;
         }
+        if (shownStage().parts().isEmpty() && shownStage().wires().isEmpty()) {
+            // nothing to fit: an empty drawing keeps the default view instead of zooming into its origin
+            zoom = 1;
+            offsetX = 40;
+            offsetY = 40;
+            gridDirty = true;
+            redrawAll();
+            return;
+        }
         Box e = SchematicRenderer.layout(shownStage(), shownAnnotations(),
                 lastLayout == null ? Layout.NONE : lastLayout).extent().inflate(FIT_MARGIN);
-        zoom = Math.max(MIN_ZOOM, Math.min(MAX_ZOOM, Math.min(w / e.width(), h / e.height()) / BASE_PIXELS_PER_GRID));
+        double fitted = Math.max(MIN_ZOOM, Math.min(MAX_ZOOM, Math.min(w / e.width(), h / e.height()) / BASE_PIXELS_PER_GRID));
+        zoom = zoomIn ? fitted : Math.min(zoom, fitted);
         offsetX = (w - e.width() * scale()) / 2 - e.minX() * scale();
         offsetY = (h - e.height() * scale()) / 2 - e.minY() * scale();
         gridDirty = true;
@@ -357,7 +377,7 @@ public final class SchematicCanvas extends Region {
                 // readouts arrived and reach past the view: fit again (once; fit redraws)
                 fitting = true;
                 try {
-                    fit();
+                    fit(false);
                 } finally {
                     fitting = false;
                 }

@@ -134,7 +134,13 @@ class ExportTest {
         assertTrue(v.fullyOn(), "each template is sized to switch fully on at nominal values");
         String words = (stage.part(v.ref()).orElseThrow().kind() == org.armature.model.PartKind.NMOS
                 ? "fully on, ×" : "saturated, ×") + String.format(Locale.ROOT, "%.2g", v.margin()) + " margin";
-        placedLikeCanvas(words, texts, canvas);
+        // the placer may set a badge on one line or wrap it after its comma ("saturated," / "×9.4 margin")
+        List<String> lines = SchematicRenderer.wraps(words).stream()
+                .filter(l -> l.stream().allMatch(t -> canvas.stream().anyMatch(c -> c.text().equals(t))))
+                .findFirst().orElseThrow(() -> new AssertionError("the canvas draws \"" + words + "\" on one line or two"));
+        for (String line : lines) {
+            placedLikeCanvas(line, texts, canvas);
+        }
 
         // the title block names the stage, the document, the date and the conditions
         List<String> all = texts.stream().map(SvgText::text).toList();
