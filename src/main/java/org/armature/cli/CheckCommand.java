@@ -18,6 +18,7 @@ import org.armature.analysis.YieldResult;
 import org.armature.io.StageFiles;
 import org.armature.model.Conditions;
 import org.armature.model.Finding;
+import org.armature.model.ModelRange;
 import org.armature.model.Stage;
 import org.armature.solver.DcAnalysis;
 import org.armature.units.EngineeringNotation;
@@ -95,12 +96,22 @@ final class CheckCommand implements Callable<Integer> {
 
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
+    /** Refuses an ambient option outside the range the device models hold over. */
+    private static void requireModelRange(CommandLine cl, String option, Double celsius) {
+        if (celsius != null && !ModelRange.ambientInRange(celsius)) {
+            throw new CommandLine.ParameterException(cl, option + " must lie " + ModelRange.ambientRangeText()
+                    + ", the range the copper and junction models hold over.");
+        }
+    }
+
     @Override
     public Integer call() {
         CommandLine cl = spec.commandLine();
         if (monteCarlo != null && monteCarlo < 0) {
             throw new CommandLine.ParameterException(cl, "--monte-carlo must not be negative.");
         }
+        requireModelRange(cl, "--ambient-min", ambientMin);
+        requireModelRange(cl, "--ambient-max", ambientMax);
         if (supplyTolerance != null && !(supplyTolerance >= 0 && supplyTolerance <= 50)) {
             throw new CommandLine.ParameterException(cl, "--supply-tolerance must lie from 0 to 50 %.");
         }

@@ -24,6 +24,12 @@ import org.armature.netlist.StampContext;
  */
 public final class NewtonSolver {
 
+    /**
+     * Rounding allowance of a residual sum, in units in the last place of the sum of its terms'
+     * magnitudes: a row of a dozen terms loses a few ulps per addition, so 64 ulps bounds it.
+     */
+    private static final double ROUNDING_ULPS = 64.0;
+
     private Netlist netlist;
     private final NewtonOptions options;
     private final LinearSolver lu;
@@ -33,9 +39,11 @@ public final class NewtonSolver {
     private final int nodes;
     private final double[] next;
     private final ArraySolution view;
+    private final CurrentScale currentScale;
 
     private int iterations;
     private double maxResidualAmps;
+    private int worstResidualNode;
     private int worstUnknown;
     private boolean singular;
     private int singularUnknown = -1;
@@ -68,6 +76,7 @@ public final class NewtonSolver {
         this.elements = list.toArray(new Element[0]);
         this.next = new double[n];
         this.view = new ArraySolution(nodes, next, new double[0]);
+        this.currentScale = new CurrentScale(nodes);
     }
 
     /** @return the netlist */
@@ -189,7 +198,8 @@ public final class NewtonSolver {
             boolean mayConverge = !limited && stepOk && statesOk;
             if (mayConverge || pass == options.maxIterations()) {
                 boolean residualOk = residual(x, a, b, tol);
-                if (mayConverge && residualOk) {
+                // the last word has the test with each node's own element currents as its scale
+                if (mayConverge && residualOk && honestResidual(x, states, ctx, tol)) {
                     return true;
                 }
             }
@@ -225,8 +235,22 @@ public final class NewtonSolver {
      * junction between two 20 V nodes pass with a residual far above its own current).
      */
     private boolean residual(double[] x, double[] a, double[] b, ConvergenceTolerances tol) {
+        return residual(x, a, b, tol, null);
+    }
+
+    /**
+     * The node test at x with the scale of each node taken from the elements' own currents
+     * ({@link CurrentScale}); the elements must be stamped at x (begun there) in {@code a} and {@code b}.
+     */
+    private boolean honestResidual(double[] x, double[] states, StampContext ctx, ConvergenceTolerances tol) {
+        double[] elementScale = currentScale.compute(elements, x, view, ctx);
+        return residual(x, mna.matrix(), mna.rhs(), tol, elementScale);
+    }
+
+    private boolean residual(double[] x, double[] a, double[] b, ConvergenceTolerances tol, double[] elementScale) {
         boolean ok = true;
         double worst = 0.0;
+        int worstNode = 0;
         for (int i = 0; i < n; i++) {
             int row = i * n;
             double s = -b[i];
@@ -234,11 +258,14 @@ public final class NewtonSolver {
             if (i < nodes) {
                 double xi = x[i];
                 double rowSum = 0.0;
+                double terms = Math.abs(b[i]);
                 // zero entries (most of a sparse MNA row) add nothing to any of the sums
                 for (int j = 0; j < nodes; j++) {
                     double aij = a[row + j];
                     if (aij != 0.0) {
-                        s += aij * x[j];
+                        double t = aij * x[j];
+                        s += t;
+                        terms += Math.abs(t);
                         rowSum += aij;
                         if (j != i) {
                             scale += Math.abs(aij * (x[j] - xi));
@@ -251,12 +278,21 @@ public final class NewtonSolver {
                     if (aij != 0.0) {
                         double t = aij * x[j];
                         s += t;
+                        terms += Math.abs(t);
                         scale += Math.abs(t);
                     }
                 }
+                if (elementScale != null) {
+                    scale = elementScale[i];
+                }
                 double r = Math.abs(s);
-                worst = Math.max(worst, r);
-                if (r > tol.reltol() * scale + tol.abstolAmps()) {
+                if (!(r <= worst)) {
+                    worst = r;
+                    worstNode = i;
+                }
+                // the sum cannot be known better than the rounding of its terms (a 1 kΩ series node at 20 V
+                // sums currents of 20 mA to a residual of picoamps)
+                if (!(r <= tol.reltol() * scale + tol.abstolAmps() + ROUNDING_ULPS * Math.ulp(terms))) {
                     ok = false;
                 }
             } else {
@@ -268,12 +304,13 @@ public final class NewtonSolver {
                         scale += Math.abs(t);
                     }
                 }
-                if (Math.abs(s) > tol.reltol() * scale + tol.vntolVolts()) {
+                if (!(Math.abs(s) <= tol.reltol() * scale + tol.vntolVolts())) {
                     ok = false;
                 }
             }
         }
         maxResidualAmps = worst;
+        worstResidualNode = worstNode;
         return ok;
     }
 
@@ -350,6 +387,69 @@ public final class NewtonSolver {
         }
         System.arraycopy(next, 0, x, 0, n);
         return true;
+    }
+
+    /**
+     * The one convergence test of an answer, applied to the answer itself: the elements are
+     * stamped at {@code x} (their limiting memory starts at {@code x}, so the linearisation is the
+     * devices' own currents there), every node's residual r = A·x − b must pass the NM-6 node test
+     * (absolute plus relative to the currents meeting there) and every branch row its voltage test,
+     * and the Newton step from {@code x} must pass the update test (|Δv| ≤ reltol·|v| + vntol,
+     * |Δi| ≤ reltol·|i| + abstol). Afterwards {@link #maxResidualAmps()} and
+     * {@link #worstResidualNode()} describe {@code x}, whatever the verdict.
+     *
+     * <p>Neither {@code x} nor {@code states} is modified. On return the linear solver holds the
+     * factors of the Jacobian at {@code x} (when it was not singular).
+     *
+     * @param x the answer to test
+     * @param states the element states it was solved with
+     * @param ctx analysis context
+     * @return true only if both tests pass, no element limits at {@code x} and everything is finite
+     */
+    public boolean verify(double[] x, double[] states, StampContext ctx) {
+        maxResidualAmps = 0.0;
+        worstResidualNode = 0;
+        if (n == 0) {
+            return true;
+        }
+        if (!allFinite(x)) {
+            maxResidualAmps = Double.MAX_VALUE;
+            return false;
+        }
+        view.bind(x, states);
+        for (Element e : elements) {
+            e.begin(view);
+        }
+        mna.clear();
+        boolean limited = false;
+        for (Element e : elements) {
+            limited |= e.stamp(mna, view, ctx);
+        }
+        ConvergenceTolerances tol = options.tolerances();
+        boolean residualOk = honestResidual(x, states, ctx, tol);
+        if (!Double.isFinite(maxResidualAmps)) {
+            maxResidualAmps = Double.MAX_VALUE;
+            return false;
+        }
+        if (!lu.factor(mna.matrix())) {
+            return false;
+        }
+        System.arraycopy(mna.rhs(), 0, next, 0, n);
+        lu.solve(next);
+        boolean updateOk = true;
+        for (int i = 0; i < n; i++) {
+            double allowed = tol.reltol() * Math.max(Math.abs(next[i]), Math.abs(x[i]))
+                    + (i < nodes ? tol.vntolVolts() : tol.abstolAmps());
+            if (!(Math.abs(next[i] - x[i]) <= allowed)) {
+                updateOk = false;
+            }
+        }
+        return residualOk && updateOk && !limited;
+    }
+
+    /** @return the node with the largest KCL residual at the last residual evaluation */
+    public int worstResidualNode() {
+        return worstResidualNode;
     }
 
     /** @return Newton iterations (linear solves) of the last run */

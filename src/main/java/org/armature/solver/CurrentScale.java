@@ -1,0 +1,102 @@
+package org.armature.solver;
+
+import org.armature.netlist.Element;
+import org.armature.netlist.Solution;
+import org.armature.netlist.StampContext;
+import org.armature.netlist.Stamper;
+
+/**
+ * The scale of each node's KCL test: the sum over the elements of the magnitude of the current each
+ * element carries into the node at x (CHECKS.md NM-6, "the currents meeting there"). Each element
+ * is stamped on its own and its stamp evaluated at x, so a junction's companion model counts as the
+ * junction's current, not as the two large terms g·v and g·v − i it is stamped with (counting those
+ * let a zener in breakdown carry milliamps that nothing supplied while its node passed the test).
+ *
+ * <p>Allocates its arrays once; one instance serves one thread.
+ */
+final class CurrentScale implements Stamper {
+
+    private final int nodes;
+    private final double[] current;
+    private final double[] scale;
+    private final int[] touched;
+    private int touchedCount;
+    private double[] x;
+
+    /** @param nodes non-ground nodes */
+    CurrentScale(int nodes) {
+        this.nodes = nodes;
+        this.current = new double[nodes];
+        this.scale = new double[nodes];
+        this.touched = new int[4 * Math.max(1, nodes) + 16];
+    }
+
+    /**
+     * Fills the scale of every node from the elements stamped at {@code x}. The elements must have
+     * begun at {@code x} (so they linearise there without limiting).
+     *
+     * @param elements the netlist's elements
+     * @param x the answer (nodes then branch currents); not modified
+     * @param view {@code x} with its states, as the elements read it
+     * @param ctx analysis context
+     * @return the scale by node, A (live array)
+     */
+    double[] compute(Element[] elements, double[] x, Solution view, StampContext ctx) {
+        this.x = x;
+        java.util.Arrays.fill(scale, 0.0);
+        for (Element e : elements) {
+            touchedCount = 0;
+            e.stamp(this, view, ctx);
+            for (int k = 0; k < touchedCount; k++) {
+                int node = touched[k];
+                scale[node] += Math.abs(current[node]);
+                current[node] = 0.0;
+            }
+        }
+        return scale;
+    }
+
+    private void add(int node, double amps) {
+        if (node < 0 || node >= nodes) {
+            return;
+        }
+        if (current[node] == 0.0 && touchedCount < touched.length) {
+            touched[touchedCount++] = node;
+        }
+        current[node] += amps;
+        if (current[node] == 0.0) {
+            // keep the node listed: a later term may make it nonzero again
+            current[node] = Double.MIN_VALUE;
+        }
+    }
+
+    private double v(int node) {
+        return node >= 0 ? x[node] : 0.0;
+    }
+
+    @Override
+    public void conductance(int a, int b, double siemens) {
+        double i = siemens * (v(a) - v(b));
+        add(a, i);
+        add(b, -i);
+    }
+
+    @Override
+    public void transconductance(int p, int n, int cp, int cn, double siemens) {
+        double i = siemens * (v(cp) - v(cn));
+        add(p, i);
+        add(n, -i);
+    }
+
+    @Override
+    public void current(int node, double amps) {
+        add(node, -amps);
+    }
+
+    @Override
+    public void voltageBranch(int branch, int p, int n, double volts, double ohms) {
+        double i = x[nodes + branch];
+        add(p, i);
+        add(n, -i);
+    }
+}
