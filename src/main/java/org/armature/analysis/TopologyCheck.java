@@ -50,6 +50,7 @@ import org.armature.model.Stage;
  * <tr><td>{@code topology.no-base-resistor}</td><td>WARNING</td><td>a base driven with nothing to limit its current</td></tr>
  * <tr><td>{@code topology.floating-control}</td><td>WARNING</td><td>base or gate without pull-down (PNP: pull-up)</td></tr>
  * <tr><td>{@code topology.high-side-cannot-turn-off}</td><td>ERROR</td><td>PNP driven from a pin whose high level is below the supply (CHECKS, beyond the hand calculation, 4)</td></tr>
+ * <tr><td>{@code topology.coil-supply-reversed}</td><td>ERROR</td><td>the coil rail is not positive: it forward-biases the freewheeling diode</td></tr>
  * <tr><td>{@code topology.suppressor-missing}</td><td>WARNING</td><td>nothing limits the turn-off voltage (SU-0)</td></tr>
  * <tr><td>{@code topology.suppressor-reversed}</td><td>ERROR</td><td>a suppressor conducts forward when the stage turns on: a short across the supply</td></tr>
  * <tr><td>{@code topology.suppressor-conducts}</td><td>WARNING</td><td>a clamp breaks down at or below the supply's maximum in normal operation</td></tr>
@@ -199,6 +200,14 @@ public final class TopologyCheck {
                         "No supply rail feeds " + who + ": the coil can never be energised. Connect the coil supply"
                                 + (r.topology.isLowSide() ? " to the coil's free end." : " to the PNP's emitter."),
                         r.topology.isLowSide() ? List.of(k.ref()) : List.of(r.sw.ref(), k.ref()));
+            } else if (!(supply.get().value("volts") > 0)) {
+                Part v = supply.get();
+                add(Severity.ERROR, "topology.coil-supply-reversed", "volts",
+                        "Coil supply " + v.ref() + " is " + volts(v.value("volts")) + ": these stages switch a positive coil"
+                                + " rail, and a reversed one forward-biases the freewheeling diode across " + k.ref()
+                                + "'s coil (a short through the diode) while the switch cannot control the relay."
+                                + " Make " + v.ref() + " positive.",
+                        List.of(v.ref(), k.ref()));
             }
             return supply;
         }

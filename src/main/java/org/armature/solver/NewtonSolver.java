@@ -199,7 +199,7 @@ public final class NewtonSolver {
             if (mayConverge || pass == options.maxIterations()) {
                 boolean residualOk = residual(x, a, b, tol);
                 // the last word has the test with each node's own element currents as its scale
-                if (mayConverge && residualOk && honestResidual(x, states, ctx, tol)) {
+                if (mayConverge && residualOk && honestResidual(x, states, ctx, tol, nodeShuntSiemens)) {
                     return true;
                 }
             }
@@ -242,8 +242,12 @@ public final class NewtonSolver {
      * The node test at x with the scale of each node taken from the elements' own currents
      * ({@link CurrentScale}); the elements must be stamped at x (begun there) in {@code a} and {@code b}.
      */
-    private boolean honestResidual(double[] x, double[] states, StampContext ctx, ConvergenceTolerances tol) {
+    private boolean honestResidual(double[] x, double[] states, StampContext ctx, ConvergenceTolerances tol,
+                                   double nodeShuntSiemens) {
         double[] elementScale = currentScale.compute(elements, x, view, ctx);
+        for (int i = 0; nodeShuntSiemens > 0 && i < nodes; i++) {
+            elementScale[i] += Math.abs(nodeShuntSiemens * x[i]);
+        }
         return residual(x, mna.matrix(), mna.rhs(), tol, elementScale);
     }
 
@@ -426,7 +430,7 @@ public final class NewtonSolver {
             limited |= e.stamp(mna, view, ctx);
         }
         ConvergenceTolerances tol = options.tolerances();
-        boolean residualOk = honestResidual(x, states, ctx, tol);
+        boolean residualOk = honestResidual(x, states, ctx, tol, 0.0);
         if (!Double.isFinite(maxResidualAmps)) {
             maxResidualAmps = Double.MAX_VALUE;
             return false;
@@ -445,6 +449,50 @@ public final class NewtonSolver {
             }
         }
         return residualOk && updateOk && !limited;
+    }
+
+    /**
+     * The node test alone at an answer ({@link #verify} without the update test), as a time-domain
+     * run applies it to each point it accepts: the elements stamped at {@code x}, each node's
+     * residual within reltol × its elements' own currents + abstol (+ the rounding of the sum).
+     * Afterwards {@link #maxResidualAmps()} describes {@code x}.
+     *
+     * @param x the answer; not modified
+     * @param states its element states; not modified
+     * @param ctx the analysis context it was solved in
+     * @param nodeShuntSiemens the node shunt it was solved with (0 normally)
+     * @return true if every node passes and no element limits at {@code x}
+     */
+    public boolean residualTest(double[] x, double[] states, StampContext ctx, double nodeShuntSiemens) {
+        maxResidualAmps = 0.0;
+        worstResidualNode = 0;
+        if (n == 0) {
+            return true;
+        }
+        if (!allFinite(x)) {
+            maxResidualAmps = Double.MAX_VALUE;
+            return false;
+        }
+        view.bind(x, states);
+        for (Element e : elements) {
+            e.begin(view);
+        }
+        mna.clear();
+        boolean limited = false;
+        for (Element e : elements) {
+            limited |= e.stamp(mna, view, ctx);
+        }
+        if (nodeShuntSiemens > 0) {
+            mna.addNodeShunt(nodeShuntSiemens);
+        }
+        double[] elementScale = currentScale.compute(elements, x, view, ctx);
+        if (nodeShuntSiemens > 0) {
+            for (int i = 0; i < nodes; i++) {
+                elementScale[i] += Math.abs(nodeShuntSiemens * x[i]);
+            }
+        }
+        boolean ok = residual(x, mna.matrix(), mna.rhs(), options.tolerances(), elementScale);
+        return ok && !limited && Double.isFinite(maxResidualAmps);
     }
 
     /** @return the node with the largest KCL residual at the last residual evaluation */

@@ -61,7 +61,7 @@ class EngineTruthRegressionTest {
     }
 
     @Test
-    @DisplayName("TVS across a 30 V coil, ambient 85 °C → −40 °C: the reported residual is the returned answer's (failed before: 7 mA reported, pins miss by 0.17 mA)")
+    @DisplayName("TVS across a 30 V coil, ambient 85 °C → −40 °C: the warm answer meets KCL and equals fresh (a guard: it passed before the fix too)")
     void tvsAmbientStepReportsItsOwnResidual() {
         Stage s = withSupply(StageTemplate.LOW_SIDE_NPN, Suppressor.TVS, 30);
         DcAnalysis live = new DcAnalysis();

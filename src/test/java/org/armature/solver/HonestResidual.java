@@ -57,6 +57,23 @@ public final class HonestResidual {
                 what + ": the answer's own pin currents miss KCL by " + worst + " A but it reports " + reported + " A");
     }
 
+    /**
+     * Asserts the invariant on every accepted time point of a run: the run re-tests the values it
+     * keeps at each point with the engine's node test (elements stamped at the point, reltol of each
+     * node's element currents plus abstol), whatever path solved the point.
+     *
+     * @param run a completed run
+     * @param what a label for the failure message
+     * @return the run, for chaining
+     */
+    public static org.armature.solver.timedomain.TransientResult assertHonest(
+            org.armature.solver.timedomain.TransientResult run, String what) {
+        assertTrue(run.acceptedFailingKcl() == 0,
+                what + ": " + run.acceptedFailingKcl() + " accepted time points fail the KCL node test (NM-6)");
+        assertTrue(Double.isFinite(run.maxAcceptedResidualAmps()), what + ": residual " + run.maxAcceptedResidualAmps());
+        return run;
+    }
+
     private static double gminAllowance(OperatingPoint op) {
         double maxVolts = 0;
         for (double v : op.nodeVoltages().values()) {

@@ -46,6 +46,6 @@ public final class TransientAnalysis {
                                StepOptions options) {
         TimeDomainResult raw = new TimeDomainRun(circuit, drive, durationSeconds, options).run();
         return new TransientResult(raw.waveform(), MetricsCalculator.compute(raw, circuit), raw.acceptedSteps(),
-                raw.rejectedSteps(), raw.newtonIterations(), circuit.notes);
+                raw.rejectedSteps(), raw.newtonIterations(), circuit.notes, raw.maxAcceptedResidualAmps(), raw.acceptedFailingKcl());
     }
 }

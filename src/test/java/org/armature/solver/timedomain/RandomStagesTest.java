@@ -65,7 +65,7 @@ class RandomStagesTest {
         TransientOptions o = off ? TransientOptions.turnOff() : TransientOptions.turnOn();
         TransientResult r;
         try {
-            r = TransientAnalysis.run(st, o);
+            r = Runs.run(st, o);
         } catch (ModelLimitException e) {
             // a coil past the hottest insulation class ends with that finding (issue 10); the closed form of a
             // coil across the full supply, (T − Ta)·(234.5 + T) = V²·Rθ·(234.5 + Tref)/R0 (copper law PC-7, derived),
@@ -91,7 +91,7 @@ class RandomStagesTest {
     void mosfetDrainBelowGround() {
         Stage st = stage(StageTemplate.LOW_SIDE_NMOS, Suppressor.NONE, HighSideDrive.LEVEL_SHIFT, 1591.0, 0.0681,
                 0.1021, 27.0e-12, 0, 5.30);
-        assertDoesNotThrow(() -> TransientAnalysis.run(st, TransientOptions.turnOff()));
+        assertDoesNotThrow(() -> Runs.run(st, TransientOptions.turnOff()));
     }
 
     @Test
@@ -99,6 +99,6 @@ class RandomStagesTest {
     void zenerChainWithoutCapacitance() {
         Stage st = stage(StageTemplate.HIGH_SIDE_PNP, Suppressor.DIODE_ZENER, HighSideDrive.LEVEL_SHIFT, 1929.4, 0.2411,
                 0, 0, 0, 43.1);
-        assertDoesNotThrow(() -> TransientAnalysis.run(st, TransientOptions.turnOn()));
+        assertDoesNotThrow(() -> Runs.run(st, TransientOptions.turnOn()));
     }
 }
