@@ -42,18 +42,70 @@ final class CurrentScale implements Stamper {
      * @return the scale by node, A (live array)
      */
     double[] compute(Element[] elements, double[] x, Solution view, StampContext ctx) {
-        this.x = x;
-        java.util.Arrays.fill(scale, 0.0);
+        begin(x);
         for (Element e : elements) {
-            touchedCount = 0;
             e.stamp(this, view, ctx);
-            for (int k = 0; k < touchedCount; k++) {
-                int node = touched[k];
-                scale[node] += Math.abs(current[node]);
-                current[node] = 0.0;
-            }
+            endElement();
         }
         return scale;
+    }
+
+    /** Starts an accumulation at {@code x} (not modified), for stamps passed through {@link #tee}. */
+    void begin(double[] x) {
+        this.x = x;
+        java.util.Arrays.fill(scale, 0.0);
+        touchedCount = 0;
+    }
+
+    /** Closes one element's stamp: its current at each node it touched joins that node's scale. */
+    void endElement() {
+        for (int k = 0; k < touchedCount; k++) {
+            int node = touched[k];
+            scale[node] += Math.abs(current[node]);
+            current[node] = 0.0;
+        }
+        touchedCount = 0;
+    }
+
+    /** @return the scale by node accumulated since {@link #begin}, A (live array) */
+    double[] scale() {
+        return scale;
+    }
+
+    /**
+     * A stamper that stamps into {@code target} and accumulates here at once, so that one device
+     * evaluation serves both the Newton matrix and the scale of its node test.
+     *
+     * @param target the MNA system
+     * @return the combined stamper
+     */
+    Stamper tee(Stamper target) {
+        CurrentScale self = this;
+        return new Stamper() {
+            @Override
+            public void conductance(int a, int b, double siemens) {
+                target.conductance(a, b, siemens);
+                self.conductance(a, b, siemens);
+            }
+
+            @Override
+            public void transconductance(int p, int n, int cp, int cn, double siemens) {
+                target.transconductance(p, n, cp, cn, siemens);
+                self.transconductance(p, n, cp, cn, siemens);
+            }
+
+            @Override
+            public void current(int node, double amps) {
+                target.current(node, amps);
+                self.current(node, amps);
+            }
+
+            @Override
+            public void voltageBranch(int branch, int p, int n, double volts, double ohms) {
+                target.voltageBranch(branch, p, n, volts, ohms);
+                self.voltageBranch(branch, p, n, volts, ohms);
+            }
+        };
     }
 
     private void add(int node, double amps) {

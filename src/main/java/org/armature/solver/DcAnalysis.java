@@ -256,6 +256,8 @@ public final class DcAnalysis {
         private double ambient;
         private int[] changed;
         private boolean settled;
+        /** True when the answer in {@link #x} ends with a polishing Newton step. */
+        private boolean polished;
         /** The linear solver of {@link #newton}: after a polish step it holds the factors at the solution. */
         private final LinearSolver lu;
         /** Each relay's contact state of a start without a guess: the caller's previous state, else released. */
@@ -443,6 +445,7 @@ public final class DcAnalysis {
                 guessed |= guess != defaultContacts[r];
             }
             hasLast = false;
+            polished = false;
             boolean fast = !cold || guessed;
             int iterations = 0;
             boolean verified = false;
@@ -463,7 +466,8 @@ public final class DcAnalysis {
                 }
                 try {
                     iterations += relayLoop(true, previous);
-                    if (newton.polish(x, states, StampContext.DC)) {
+                    polished = newton.polish(x, states, StampContext.DC);
+                    if (polished) {
                         iterations++;
                     }
                 } catch (NonConvergenceException | SingularCircuitException e) {
@@ -473,7 +477,7 @@ public final class DcAnalysis {
             }
             checkCoilLimits();
             if (!verified) {
-                throw new NonConvergenceException(iterations, netlist.unknownName(newton.worstResidualNode()),
+                throw NonConvergenceException.failedTest(iterations, netlist.unknownName(newton.worstResidualNode()),
                         newton.maxResidualAmps());
             }
             System.arraycopy(x, 0, lastX, 0, x.length);
@@ -498,7 +502,7 @@ public final class DcAnalysis {
                 System.arraycopy(states, 0, startTemps, 0, states.length);
                 try {
                     iterations += relayLoop(cold, previous);
-                    boolean polished = newton.polish(x, states, StampContext.DC);
+                    polished = newton.polish(x, states, StampContext.DC);
                     if (polished) {
                         iterations++;
                     }
@@ -517,7 +521,8 @@ public final class DcAnalysis {
             }
             if (!confirmed) {
                 iterations += relayLoop(cold, previous);
-                if (newton.polish(x, states, StampContext.DC)) {
+                polished = newton.polish(x, states, StampContext.DC);
+                if (polished) {
                     iterations++;
                 }
             }
@@ -530,7 +535,10 @@ public final class DcAnalysis {
          * Sets the residual the result reports.
          */
         private boolean verify() {
-            boolean ok = newton.verify(x, states, StampContext.DC);
+            // after a polishing step the update test is that step's (the last update of the answer), and only
+            // the node test remains to be done at the answer; otherwise the full test takes its own step
+            boolean ok = polished ? newton.polishUpdateOk() && newton.residualTest(x, states, StampContext.DC, 0.0)
+                    : newton.verify(x, states, StampContext.DC);
             for (RelayHandle h : relays) {
                 double t = states[h.temperatureSlot()];
                 double target = ambient + square(h.coil().current(view)) * h.coil().ohmsAt(t)

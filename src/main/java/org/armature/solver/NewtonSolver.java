@@ -40,8 +40,11 @@ public final class NewtonSolver {
     private final double[] next;
     private final ArraySolution view;
     private final CurrentScale currentScale;
+    /** Stamps into {@link #mna} and gathers the node-test scale in one device evaluation. */
+    private final org.armature.netlist.Stamper tee;
 
     private int iterations;
+    private boolean polishUpdateOk;
     private double maxResidualAmps;
     private int worstResidualNode;
     private int worstUnknown;
@@ -77,6 +80,7 @@ public final class NewtonSolver {
         this.next = new double[n];
         this.view = new ArraySolution(nodes, next, new double[0]);
         this.currentScale = new CurrentScale(nodes);
+        this.tee = currentScale.tee(mna);
     }
 
     /** @return the netlist */
@@ -188,8 +192,18 @@ public final class NewtonSolver {
         for (int pass = 0; pass <= options.maxIterations(); pass++) {
             mna.clear();
             boolean limited = false;
-            for (Element e : elements) {
-                limited |= e.stamp(mna, view, ctx);
+            // a pass that may converge also gathers each node's element currents for the node test
+            boolean gather = stepOk && statesOk;
+            if (gather) {
+                currentScale.begin(x);
+                for (Element e : elements) {
+                    limited |= e.stamp(tee, view, ctx);
+                    currentScale.endElement();
+                }
+            } else {
+                for (Element e : elements) {
+                    limited |= e.stamp(mna, view, ctx);
+                }
             }
             if (nodeShuntSiemens > 0) {
                 mna.addNodeShunt(nodeShuntSiemens);
@@ -199,7 +213,7 @@ public final class NewtonSolver {
             if (mayConverge || pass == options.maxIterations()) {
                 boolean residualOk = residual(x, a, b, tol);
                 // the last word has the test with each node's own element currents as its scale
-                if (mayConverge && residualOk && honestResidual(x, states, ctx, tol, nodeShuntSiemens)) {
+                if (mayConverge && residualOk && residual(x, a, b, tol, shunted(currentScale.scale(), x, nodeShuntSiemens))) {
                     return true;
                 }
             }
@@ -238,17 +252,12 @@ public final class NewtonSolver {
         return residual(x, a, b, tol, null);
     }
 
-    /**
-     * The node test at x with the scale of each node taken from the elements' own currents
-     * ({@link CurrentScale}); the elements must be stamped at x (begun there) in {@code a} and {@code b}.
-     */
-    private boolean honestResidual(double[] x, double[] states, StampContext ctx, ConvergenceTolerances tol,
-                                   double nodeShuntSiemens) {
-        double[] elementScale = currentScale.compute(elements, x, view, ctx);
+    /** Adds a node shunt's current to each node's scale (gmin stepping, the transient fallback). */
+    private double[] shunted(double[] elementScale, double[] x, double nodeShuntSiemens) {
         for (int i = 0; nodeShuntSiemens > 0 && i < nodes; i++) {
             elementScale[i] += Math.abs(nodeShuntSiemens * x[i]);
         }
-        return residual(x, mna.matrix(), mna.rhs(), tol, elementScale);
+        return elementScale;
     }
 
     private boolean residual(double[] x, double[] a, double[] b, ConvergenceTolerances tol, double[] elementScale) {
@@ -389,8 +398,27 @@ public final class NewtonSolver {
                 return false;
             }
         }
+        ConvergenceTolerances tol = options.tolerances();
+        boolean updateOk = true;
+        for (int i = 0; i < n; i++) {
+            double allowed = tol.reltol() * Math.max(Math.abs(next[i]), Math.abs(x[i]))
+                    + (i < nodes ? tol.vntolVolts() : tol.abstolAmps());
+            if (!(Math.abs(next[i] - x[i]) <= allowed)) {
+                updateOk = false;
+            }
+        }
+        polishUpdateOk = updateOk;
         System.arraycopy(next, 0, x, 0, n);
         return true;
+    }
+
+    /**
+     * @return true if the step of the last {@link #polish} that was taken passed the update test
+     *     (|Δv| ≤ reltol·|v| + vntol, |Δi| ≤ reltol·|i| + abstol): the last update of an answer that
+     *     ends with a polishing step
+     */
+    public boolean polishUpdateOk() {
+        return polishUpdateOk;
     }
 
     /**
@@ -426,11 +454,13 @@ public final class NewtonSolver {
         }
         mna.clear();
         boolean limited = false;
+        currentScale.begin(x);
         for (Element e : elements) {
-            limited |= e.stamp(mna, view, ctx);
+            limited |= e.stamp(tee, view, ctx);
+            currentScale.endElement();
         }
         ConvergenceTolerances tol = options.tolerances();
-        boolean residualOk = honestResidual(x, states, ctx, tol, 0.0);
+        boolean residualOk = residual(x, mna.matrix(), mna.rhs(), tol, currentScale.scale());
         if (!Double.isFinite(maxResidualAmps)) {
             maxResidualAmps = Double.MAX_VALUE;
             return false;
@@ -479,18 +509,15 @@ public final class NewtonSolver {
         }
         mna.clear();
         boolean limited = false;
+        currentScale.begin(x);
         for (Element e : elements) {
-            limited |= e.stamp(mna, view, ctx);
+            limited |= e.stamp(tee, view, ctx);
+            currentScale.endElement();
         }
         if (nodeShuntSiemens > 0) {
             mna.addNodeShunt(nodeShuntSiemens);
         }
-        double[] elementScale = currentScale.compute(elements, x, view, ctx);
-        if (nodeShuntSiemens > 0) {
-            for (int i = 0; i < nodes; i++) {
-                elementScale[i] += Math.abs(nodeShuntSiemens * x[i]);
-            }
-        }
+        double[] elementScale = shunted(currentScale.scale(), x, nodeShuntSiemens);
         boolean ok = residual(x, mna.matrix(), mna.rhs(), options.tolerances(), elementScale);
         return ok && !limited && Double.isFinite(maxResidualAmps);
     }
