@@ -122,4 +122,72 @@ class EngineTruthRegressionTest {
         assertEquals(ModelLimitException.PART_OUTSIDE_MODEL,
                 assertThrows(SolverException.class, () -> live.solve(bad)).messageKey());
     }
+
+    @Test
+    @DisplayName("supply step 204 V → 49.9 V on a high-side stage with a zener: warm and fresh end with the same coil finding (before: 'converged' at 78 V against 49.5 V)")
+    void supplyStepLeavesNoNodeAboveTheRail() {
+        // found by EngineDifferentialTest's sequence on the engine before this work (sequence 11, edit 154): the
+        // warm answer put the node between diode and zener at 78 V on a 49.9 V rail, with a KCL miss of 5 µA
+        Stage s = Templates.build(StageTemplate.HIGH_SIDE_PNP, Suppressor.DIODE_ZENER, HighSideDrive.LEVEL_SHIFT);
+        s = s.withPart(s.require("V1").with("tolerancePercent", 1.318648709769313));
+        s = s.withPart(s.require("V1").with("volts", 204.49202485303329));
+        s = s.withPart(s.require("Q1").with("betaReverse", 2.261939616644116));
+        s = s.withPart(s.require("Q1").with("hfeMin", 223.65506786128498));
+        s = s.withPart(s.require("Q1").with("icMaxAmps", 1.2366375272118482));
+        s = s.withPart(s.require("Q1").with("saturationCurrentAmps", 7.894888301251686E-15));
+        s = s.withPart(s.require("Q1").with("vbeSatVolts", 2.6745468948596947));
+        s = s.withPart(s.require("K1").with("coilCapacitanceFarads", 2.0733006740318364E-10));
+        s = s.withPart(s.require("K1").with("coreLossOhms", 24540.585380673434));
+        s = s.withPart(s.require("K1").with("inductanceAttractedHenries", 2.226910732355786));
+        s = s.withPart(s.require("K1").with("referenceTemperatureCelsius", 40.35072552431028));
+        s = s.withPart(s.require("D1").with("breakdownCurrentAmps", 5.0575691814843355E-6));
+        s = s.withPart(s.require("D1").with("maxCurrentAmps", 4.526909673738766));
+        s = s.withPart(s.require("D1").with("powerRatingWatts", 2.372890768801262));
+        s = s.withPart(s.require("D1").with("saturationCurrentAmps", 2.0665567032849574E-10));
+        s = s.withPart(s.require("D1").with("seriesResistanceOhms", 0.05223931323099162));
+        s = s.withPart(s.require("D2").with("breakdownCurrentAmps", 0.0043118589309015885));
+        s = s.withPart(s.require("D2").with("breakdownVolts", 28.501888155408984));
+        s = s.withPart(s.require("D2").with("emissionCoefficient", 1.114395937850376));
+        s = s.withPart(s.require("D2").with("maxCurrentAmps", 0.15553311682055176));
+        s = s.withPart(s.require("D2").with("powerRatingWatts", 0.7755439285985268));
+        s = s.withPart(s.require("D2").with("saturationCurrentAmps", 2.0834284341931553E-12));
+        s = s.withPart(s.require("R3").with("powerRatingWatts", 0.35607579730628613));
+        s = s.withPart(s.require("R3").with("resistanceOhms", 14878.747802539516));
+        s = s.withPart(s.require("R3").with("tolerancePercent", 8.981778320987877));
+        s = s.withPart(s.require("R4").with("powerRatingWatts", 0.06531544767053434));
+        s = s.withPart(s.require("R4").with("resistanceOhms", 1102.9788088573835));
+        s = s.withPart(s.require("R4").with("tolerancePercent", 9.407325256278881));
+        s = s.withPart(s.require("Q2").with("baseResistanceOhms", 17.653286718671723));
+        s = s.withPart(s.require("Q2").with("kneeCurrentAmps", 0.15864967552085546));
+        s = s.withPart(s.require("Q2").with("vceoVolts", 122.1102194173193));
+        s = s.withPart(s.require("R1").with("powerRatingWatts", 0.12667905905566715));
+        s = s.withPart(s.require("R1").with("resistanceOhms", 7934.579751149315));
+        s = s.withPart(s.require("R1").with("tolerancePercent", 0.6362440696498725));
+        s = s.withPart(s.require("U1").with("highToleranceVolts", 0.09662069360988539));
+        s = s.withPart(s.require("U1").with("highVolts", 3.2478276675058573));
+        s = s.withPart(s.require("U1").with("lowVolts", 0.0));
+        s = s.withPart(s.require("U1").with("packageCurrentLimitAmps", 0.1403147287378102));
+        s = s.withPart(s.require("R2").with("powerRatingWatts", 0.2858693574571203));
+        s = s.withPart(s.require("R2").with("resistanceOhms", 197255.2684375678));
+        s = s.withPart(s.require("R2").with("tolerancePercent", 3.571449210601814));
+        s = s.withPart(s.require("V2").with("tolerancePercent", 10.508035496698426));
+        s = s.withPart(s.require("V2").with("volts", 21.24795490075774));
+        s = s.withPart(s.require("E1").with("ratedWatts", 55.78758209466914));
+        s = s.withPart(s.require("E1").with("resistanceOhms", 271.0476882138024));
+        SolveOptions so = SolveOptions.DEFAULT.withAmbient(-25.195098675518516).withPinHigh(true);
+        DcAnalysis live = new DcAnalysis();
+        try {
+            live.solve(s, so);
+        } catch (SolverException e) {
+            // 204 V on a 12 V coil: the coil finding is a right answer too; the step below must still be right
+        }
+        Stage low = s.withPart(s.require("V1").with("volts", 49.91802635313026));
+        // 49.9 V across a 12 V coil heats it to about 296 °C: both engines must end with the same coil finding
+        // (before, both called it converged, with different answers)
+        ModelLimitException warm = assertThrows(ModelLimitException.class, () -> live.solve(low, so));
+        ModelLimitException fresh = assertThrows(ModelLimitException.class, () -> new DcAnalysis().solve(low, so));
+        assertEquals(ModelLimitException.COIL_TOO_HOT, warm.messageKey());
+        assertEquals(ModelLimitException.COIL_TOO_HOT, fresh.messageKey());
+        assertEquals(fresh.valueReached(), warm.valueReached(), 1.0, "the same coil temperature, °C");
+    }
 }
