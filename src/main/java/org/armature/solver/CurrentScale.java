@@ -1,16 +1,14 @@
 package org.armature.solver;
 
-import org.armature.netlist.Element;
-import org.armature.netlist.Solution;
-import org.armature.netlist.StampContext;
 import org.armature.netlist.Stamper;
 
 /**
  * The scale of each node's KCL test: the sum over the elements of the magnitude of the current each
- * element carries into the node at x (CHECKS.md NM-6, "the currents meeting there"). Each element
- * is stamped on its own and its stamp evaluated at x, so a junction's companion model counts as the
- * junction's current, not as the two large terms g·v and g·v − i it is stamped with (counting those
- * let a zener in breakdown carry milliamps that nothing supplied while its node passed the test).
+ * element carries into the node at x (CHECKS.md NM-6, "the currents meeting there"). Each element's
+ * stamp (passed through {@link #tee} alongside the Newton matrix) is evaluated at x and closed with
+ * {@link #endElement}, so a junction's companion model counts as the junction's current, not as the
+ * two large terms g·v and g·v − i it is stamped with (counting those let a zener in breakdown carry
+ * milliamps that nothing supplied while its node passed the test).
  *
  * <p>Allocates its arrays once; one instance serves one thread.
  */
@@ -29,25 +27,6 @@ final class CurrentScale implements Stamper {
         this.current = new double[nodes];
         this.scale = new double[nodes];
         this.touched = new int[4 * Math.max(1, nodes) + 16];
-    }
-
-    /**
-     * Fills the scale of every node from the elements stamped at {@code x}. The elements must have
-     * begun at {@code x} (so they linearise there without limiting).
-     *
-     * @param elements the netlist's elements
-     * @param x the answer (nodes then branch currents); not modified
-     * @param view {@code x} with its states, as the elements read it
-     * @param ctx analysis context
-     * @return the scale by node, A (live array)
-     */
-    double[] compute(Element[] elements, double[] x, Solution view, StampContext ctx) {
-        begin(x);
-        for (Element e : elements) {
-            e.stamp(this, view, ctx);
-            endElement();
-        }
-        return scale;
     }
 
     /** Starts an accumulation at {@code x} (not modified), for stamps passed through {@link #tee}. */
