@@ -98,6 +98,13 @@ public final class TopologyCheck {
         }
 
         void run() {
+            r.coilSupplyRef().map(stage::require).filter(v -> !(v.value(ParamKeys.VOLTS) > 0)).ifPresent(v ->
+                    add(Severity.ERROR, "topology.coil-supply-reversed", ParamKeys.VOLTS,
+                            "Coil supply " + v.ref() + " is " + volts(v.value(ParamKeys.VOLTS)) + ": these stages switch a"
+                                    + " positive coil rail, and a reversed one forward-biases the freewheeling diode across "
+                                    + k.ref() + "'s coil (a short through the diode) while the switch cannot control the"
+                                    + " relay. Make " + v.ref() + " positive.",
+                            List.of(v.ref(), k.ref())));
             double supplyMax = r.coilSupplyRef().map(v -> supplyMaxVolts(stage.require(v))).orElse(Double.NaN);
             if (r.highSideDrive().equals(Optional.of(HighSideDrive.DIRECT)) && r.drivePinRef().isPresent()
                     && r.coilSupplyRef().isPresent()) {

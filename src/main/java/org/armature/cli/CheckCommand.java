@@ -19,6 +19,7 @@ import org.armature.analysis.YieldResult;
 import org.armature.io.StageFiles;
 import org.armature.model.Conditions;
 import org.armature.model.Finding;
+import org.armature.model.ModelRange;
 import org.armature.model.Stage;
 import org.armature.model.StageSettings;
 import org.armature.solver.DcAnalysis;
@@ -104,6 +105,14 @@ final class CheckCommand implements Callable<Integer> {
 
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
+    /** Refuses an ambient option outside the range the device models hold over. */
+    private static void requireModelRange(CommandLine cl, String option, Double celsius) {
+        if (celsius != null && !ModelRange.ambientInRange(celsius)) {
+            throw new CommandLine.ParameterException(cl, option + " must lie " + ModelRange.ambientRangeText()
+                    + ", the range the copper and junction models hold over.");
+        }
+    }
+
     @Override
     public Integer call() {
         CommandLine cl = spec.commandLine();
@@ -112,6 +121,8 @@ final class CheckCommand implements Callable<Integer> {
                     + MAX_MONTE_CARLO_TEXT + " samples; expected at most " + MAX_MONTE_CARLO_TEXT
                     + " (about 10 s on one core), which puts a yield near 99 % within ±0.1 %.");
         }
+        requireModelRange(cl, "--ambient-min", ambientMin);
+        requireModelRange(cl, "--ambient-max", ambientMax);
         if (supplyTolerance != null && !(supplyTolerance >= 0 && supplyTolerance <= 50)) {
             throw new CommandLine.ParameterException(cl, "--supply-tolerance must lie from 0 to 50 %.");
         }

@@ -139,6 +139,11 @@ final class NewCommand implements Callable<Integer> {
         Stage stage = Templates.build(template, supp, d);
         for (StageValue v : StageValue.values()) {
             Double value = spec.findOption(v.optionName()).getValue();
+            if (v == StageValue.SUPPLY && value != null && !(value > 0)) {
+                // every template switches a positive coil rail: a reversed one forward-biases the freewheeling diode
+                throw usage("--supply must be a positive coil rail (the templates switch a positive supply; a reversed"
+                        + " one would forward-bias the freewheeling diode): expected a value above 0 V up to 1000 V.");
+            }
             if (value != null) {
                 stage = apply(stage, v, value, supp, d);
             }

@@ -14,6 +14,7 @@ import java.util.concurrent.Callable;
 import org.armature.model.ParamKeys;
 import org.armature.netlist.Readings;
 import org.armature.io.StageFiles;
+import org.armature.model.ModelRange;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
 import org.armature.model.StageRecognition;
@@ -91,6 +92,10 @@ final class SolveCommand implements Callable<Integer> {
             options = options.withPinHigh(pinState.isHigh());
         }
         if (ambient != null) {
+            if (!ModelRange.ambientInRange(ambient)) {
+                throw new CommandLine.ParameterException(spec.commandLine(), "--ambient must lie "
+                        + ModelRange.ambientRangeText() + ", the range the copper and junction models hold over.");
+            }
             options = options.withAmbient(ambient);
         }
         OperatingPoint op;

@@ -54,6 +54,16 @@ public final class Validator {
                 relayFigures(part, out);
             }
         }
+        Conditions cond = stage.conditions();
+        double[] temps = {cond.ambientCelsius(), cond.ambientMinCelsius(), cond.ambientMaxCelsius()};
+        String[] labels = {"nominal ambient", "coldest ambient", "hottest ambient"};
+        for (int i = 0; i < temps.length; i++) {
+            if (!ModelRange.ambientInRange(temps[i])) {
+                out.add(new Finding(Severity.ERROR, "conditions.ambient-out-of-range", "", labels[i],
+                        "The " + labels[i] + " is " + temps[i] + " °C; expected a value " + ModelRange.ambientRangeText()
+                                + ", the range the copper and junction models hold over."));
+            }
+        }
         Connectivity c = Connectivity.of(stage);
         for (TestPoint tp : c.nameConflicts()) {
             out.add(new Finding(Severity.WARNING, "testpoint.conflict", tp.ref(), tp.pin(),

@@ -5,6 +5,8 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.armature.model.Connectivity;
+import org.armature.model.ModelRange;
 import org.armature.model.Part;
 import org.armature.model.Stage;
 import org.armature.model.StageRecognition;
@@ -93,6 +95,7 @@ public final class DcAnalysis {
     public OperatingPoint solve(Stage stage, SolveOptions solveOptions) {
         boolean pinHigh = solveOptions.pinHigh().orElse(stage.conditions().pinHigh());
         double ambient = solveOptions.ambientCelsius().orElse(stage.conditions().ambientCelsius());
+        requireModelRange(stage, ambient);
         Compiled c = compile(stage, options.flattenOptions(pinHigh, ambient));
         return c.solve(solveOptions, pinHigh, ambient);
     }
@@ -134,6 +137,42 @@ public final class DcAnalysis {
         return new DcSweep(spec.variable(), points);
     }
 
+    /**
+     * Refuses an ambient, or a relay reference temperature, outside the range the device laws hold
+     * over ({@link ModelRange}).
+     *
+     * @throws ModelLimitException naming the value and the valid range
+     */
+    static void requireModelRange(Stage stage, double ambient) {
+        if (!ModelRange.ambientInRange(ambient)) {
+            throw new ModelLimitException(ModelLimitException.AMBIENT_OUT_OF_RANGE, "", ambient, "An ambient of "
+                    + ambient + " °C is outside the range the copper and junction models hold over; expected "
+                    + ModelRange.ambientRangeText() + ".");
+        }
+        for (Part p : stage.parts()) {
+            if (p.kind() == org.armature.model.PartKind.RELAY) {
+                double ref = p.value("referenceTemperatureCelsius");
+                if (!ModelRange.ambientInRange(ref)) {
+                    throw new ModelLimitException(ModelLimitException.AMBIENT_OUT_OF_RANGE, p.ref(), ref, "The reference"
+                            + " temperature of " + p.ref() + " is " + ref + " °C, outside the range the copper law holds"
+                            + " over; expected " + ModelRange.ambientRangeText() + ".");
+                }
+            }
+        }
+    }
+
+    /**
+     * Flattens, turning a part value the device models cannot take (a relay whose drop-out is not
+     * below its pick-up, a coil without resistance) into the engine's own failure.
+     */
+    private static Netlist flatten(Stage stage, Connectivity conn, FlattenOptions fo) {
+        try {
+            return NetlistBuilder.flatten(stage, conn, fo);
+        } catch (IllegalArgumentException e) {
+            throw ModelLimitException.partOutsideModel(e);
+        }
+    }
+
     private Compiled compile(Stage stage, FlattenOptions fo) {
         int slot = fo.pinHigh() ? 1 : 0;
         Compiled c = byPin[slot];
@@ -158,7 +197,7 @@ public final class DcAnalysis {
         } else {
             conn = StageRecognition.of(stage);
         }
-        Netlist nl = NetlistBuilder.flatten(stage, conn.connectivity(), fo);
+        Netlist nl = flatten(stage, conn.connectivity(), fo);
         DcPathCheck.check(nl);
         Compiled fresh = new Compiled(stage, fo, conn, nl, options);
         if (c != null && options.warmStart()) {
@@ -222,6 +261,8 @@ public final class DcAnalysis {
         private double ambient;
         private int[] changed;
         private boolean settled;
+        /** True when the answer in {@link #x} ends with a polishing Newton step. */
+        private boolean polished;
         /** The linear solver of {@link #newton}: after a polish step it holds the factors at the solution. */
         private final LinearSolver lu;
         /** Each relay's contact state of a start without a guess: the caller's previous state, else released. */
@@ -229,6 +270,9 @@ public final class DcAnalysis {
         /** The start point and coil temperatures, kept to redo a solve whose contact guess is not confirmed. */
         private final double[] startX;
         private final double[] startTemps;
+        /** The start of a relay-loop pass, kept to redo it without the in-Newton coil update. */
+        private final double[] passX;
+        private final double[] passStates;
         /** Every relay contact element of the netlist (refreshed when a part is re-flattened). */
         private final SwitchedResistor[] contacts;
         /** Work of the contact check: flipped contacts' nodes and conductance changes, J⁻¹·u, the small system. */
@@ -270,6 +314,8 @@ public final class DcAnalysis {
             this.defaultContacts = new double[relays.length];
             this.startX = new double[netlist.unknownCount()];
             this.startTemps = new double[states.length];
+            this.passX = new double[netlist.unknownCount()];
+            this.passStates = new double[states.length];
             int m = 0;
             for (Element e : netlist.elements()) {
                 if (e instanceof SwitchedResistor) {
@@ -319,8 +365,13 @@ public final class DcAnalysis {
                 }
             }
             if (count > 0) {
-                Optional<Netlist> patched = NetlistBuilder.reflatten(netlist, next, fo, donor,
-                        count == changed.length ? changed : Arrays.copyOf(changed, count));
+                Optional<Netlist> patched;
+                try {
+                    patched = NetlistBuilder.reflatten(netlist, next, fo, donor,
+                            count == changed.length ? changed : Arrays.copyOf(changed, count));
+                } catch (IllegalArgumentException e) {
+                    throw ModelLimitException.partOutsideModel(e);
+                }
                 if (patched.isEmpty()) {
                     return false;
                 }
@@ -400,6 +451,56 @@ public final class DcAnalysis {
                 guessed |= guess != defaultContacts[r];
             }
             hasLast = false;
+            polished = false;
+            boolean fast = !cold || guessed;
+            int iterations = 0;
+            boolean verified = false;
+            try {
+                iterations += fastOrFull(guessed, cold, previous);
+                verified = verify();
+            } catch (NonConvergenceException | SingularCircuitException e) {
+                if (!fast) {
+                    throw coilLimitOr(e);
+                }
+            }
+            if (!verified && fast) {
+                // the fast path gave no answer that passes the test: the full solve from 0 V decides
+                Arrays.fill(x, 0.0);
+                for (int r = 0; r < relays.length; r++) {
+                    states[relays[r].temperatureSlot()] = ambient;
+                    states[relays[r].contactSlot()] = defaultContacts[r];
+                }
+                try {
+                    iterations += relayLoop(true, previous);
+                    polished = newton.polish(x, states, StampContext.DC);
+                    if (polished) {
+                        iterations++;
+                    }
+                } catch (NonConvergenceException | SingularCircuitException e) {
+                    throw coilLimitOr(e);
+                }
+                verified = verify();
+            }
+            checkCoilLimits();
+            if (!verified) {
+                throw NonConvergenceException.failedTest(iterations, netlist.unknownName(newton.worstResidualNode()),
+                        newton.maxResidualAmps());
+            }
+            System.arraycopy(x, 0, lastX, 0, x.length);
+            System.arraycopy(states, 0, lastStates, 0, states.length);
+            hasLast = true;
+            return new OperatingPoint(netlist, x, states, settled, iterations, newton.maxResidualAmps(), pinHigh,
+                    ambient, contactsFrom, switchRef);
+        }
+
+        /**
+         * The solve from the prepared start: with a contact guess, the relay loop from the guess,
+         * kept only when the low-rank check confirms it, else the relay loop from the default
+         * contacts; then one polishing Newton step.
+         *
+         * @return Newton iterations spent
+         */
+        private int fastOrFull(boolean guessed, boolean cold, Map<String, Boolean> previous) {
             int iterations = 0;
             boolean confirmed = false;
             if (guessed) {
@@ -407,7 +508,7 @@ public final class DcAnalysis {
                 System.arraycopy(states, 0, startTemps, 0, states.length);
                 try {
                     iterations += relayLoop(cold, previous);
-                    boolean polished = newton.polish(x, states, StampContext.DC);
+                    polished = newton.polish(x, states, StampContext.DC);
                     if (polished) {
                         iterations++;
                     }
@@ -426,15 +527,71 @@ public final class DcAnalysis {
             }
             if (!confirmed) {
                 iterations += relayLoop(cold, previous);
-                if (newton.polish(x, states, StampContext.DC)) {
+                polished = newton.polish(x, states, StampContext.DC);
+                if (polished) {
                     iterations++;
                 }
             }
-            System.arraycopy(x, 0, lastX, 0, x.length);
-            System.arraycopy(states, 0, lastStates, 0, states.length);
-            hasLast = true;
-            return new OperatingPoint(netlist, x, states, settled, iterations, strategy.maxResidualAmps(), pinHigh,
-                    ambient, contactsFrom, switchRef);
+            return iterations;
+        }
+
+        /**
+         * The one convergence test, on what is about to be returned ({@link NewtonSolver#verify}):
+         * node residuals and the update test at {@code x}, with every coil temperature settled there.
+         * Sets the residual the result reports.
+         */
+        private boolean verify() {
+            // after a polishing step the update test is that step's (the last update of the answer), and only
+            // the node test remains to be done at the answer; otherwise the full test takes its own step
+            boolean ok = polished ? newton.polishUpdateOk() && newton.residualTest(x, states, StampContext.DC, 0.0)
+                    : newton.verify(x, states, StampContext.DC);
+            for (RelayHandle h : relays) {
+                double t = states[h.temperatureSlot()];
+                double target = ambient + square(h.coil().current(view)) * h.coil().ohmsAt(t)
+                        * h.thermalResistanceKelvinPerWatt();
+                // the relay loop settles to its tolerance at a Newton answer whose coil current may sit reltol
+                // from the polished one (the rise goes with the square of it): twice each
+                double allowed = 2 * relayLoop.coilTemperatureToleranceKelvin()
+                        + 4 * newton.options().tolerances().reltol() * Math.abs(target - ambient);
+                ok &= Math.abs(target - t) <= allowed;
+            }
+            return ok;
+        }
+
+        private static double square(double v) {
+            return v * v;
+        }
+
+        /** Throws the coil finding when a coil ran past the insulation limit. */
+        private void checkCoilLimits() {
+            for (RelayHandle h : relays) {
+                double t = states[h.temperatureSlot()];
+                if (!(t <= ModelRange.COIL_INSULATION_LIMIT_CELSIUS)) {
+                    throw coilTooHot(h.ref(), t);
+                }
+            }
+        }
+
+        /** The coil finding in place of a failure when a coil temperature passed the limit, else the failure. */
+        private SolverException coilLimitOr(SolverException e) {
+            for (RelayHandle h : relays) {
+                double t = states[h.temperatureSlot()];
+                if (!(t <= ModelRange.COIL_INSULATION_LIMIT_CELSIUS)) {
+                    return coilTooHot(h.ref(), t);
+                }
+            }
+            return e;
+        }
+
+        private ModelLimitException coilTooHot(String ref, double celsius) {
+            String reached = Double.isFinite(celsius) && celsius < MAX_COIL_CELSIUS
+                    ? "reaches " + Math.round(celsius) + " °C"
+                    : "has no steady state (it passes " + Math.round(MAX_COIL_CELSIUS) + " °C)";
+            return new ModelLimitException(ModelLimitException.COIL_TOO_HOT, ref, celsius, "The coil of " + ref
+                    + " heats itself past every insulation class: its winding " + reached + " at "
+                    + ambient + " °C ambient, above the " + Math.round(ModelRange.COIL_INSULATION_LIMIT_CELSIUS)
+                    + " °C of the hottest class (IEC 60085); check the coil voltage, the supply polarity and the coil's"
+                    + " thermal resistance.");
         }
 
         /**
@@ -448,7 +605,23 @@ public final class DcAnalysis {
             settled = false;
             StateUpdater coilHeat = relays.length > 0 ? this : null;
             for (int pass = 0; pass < relayLoop.maxPasses(); pass++) {
-                strategy.solve(x, states, cold && pass == 0, coilHeat);
+                if (coilHeat == null) {
+                    strategy.solve(x, states, cold && pass == 0, null);
+                } else {
+                    System.arraycopy(x, 0, passX, 0, x.length);
+                    System.arraycopy(states, 0, passStates, 0, states.length);
+                    try {
+                        strategy.solve(x, states, cold && pass == 0, coilHeat);
+                    } catch (NonConvergenceException e) {
+                        // the coil temperature inside Newton can cycle with a soft coil drive (a switch with a
+                        // large output conductance); the passes below then settle it as a plain fixed point
+                        iterations += strategy.iterations();
+                        coilHeat = null;
+                        System.arraycopy(passX, 0, x, 0, x.length);
+                        System.arraycopy(passStates, 0, states, 0, states.length);
+                        strategy.solve(x, states, cold && pass == 0, null);
+                    }
+                }
                 iterations += strategy.iterations();
                 settled = true;
                 for (int r = 0; r < relays.length; r++) {
@@ -641,7 +814,7 @@ public final class DcAnalysis {
                 if (Math.abs(target - t) > relayLoop.coilTemperatureToleranceKelvin()) {
                     ok = false;
                     double slope = -rise * (h.coil().ohmsAt(t + 1.0) - r) / r;
-                    st[ts] = Math.max(t + (target - t) / (1.0 - slope), MIN_COIL_CELSIUS);
+                    st[ts] = Math.min(Math.max(t + (target - t) / (1.0 - slope), MIN_COIL_CELSIUS), MAX_COIL_CELSIUS);
                 }
             }
             return ok;
@@ -664,7 +837,7 @@ public final class DcAnalysis {
                 }
                 lastTemp[r] = t;
                 lastTarget[r] = target;
-                states[ts] = Math.max(next, MIN_COIL_CELSIUS);
+                states[ts] = Math.min(Math.max(next, MIN_COIL_CELSIUS), MAX_COIL_CELSIUS);
             }
             RelayHandle.State st = h.stateFor(i);
             Boolean prev = previous.get(h.ref());
@@ -705,4 +878,10 @@ public final class DcAnalysis {
     private static final double MAX_SECANT_SLOPE = 5.0;
     /** Floor of a coil temperature update, °C: just above copper's zero-resistance intercept. */
     private static final double MIN_COIL_CELSIUS = -234.0;
+    /**
+     * Ceiling of a coil temperature update, °C: far above the insulation limit
+     * ({@link ModelRange#COIL_INSULATION_LIMIT_CELSIUS}), so a coil pinned here has no steady state
+     * worth the name, while the numbers stay finite for the finding.
+     */
+    private static final double MAX_COIL_CELSIUS = 5000.0;
 }

@@ -24,6 +24,12 @@ import org.armature.netlist.StampContext;
  */
 public final class NewtonSolver {
 
+    /**
+     * Rounding allowance of a residual sum, in units in the last place of the sum of its terms'
+     * magnitudes: a row of a dozen terms loses a few ulps per addition, so 64 ulps bounds it.
+     */
+    private static final double ROUNDING_ULPS = 64.0;
+
     private Netlist netlist;
     private final NewtonOptions options;
     private final LinearSolver lu;
@@ -33,9 +39,14 @@ public final class NewtonSolver {
     private final int nodes;
     private final double[] next;
     private final ArraySolution view;
+    private final CurrentScale currentScale;
+    /** Stamps into {@link #mna} and gathers the node-test scale in one device evaluation. */
+    private final org.armature.netlist.Stamper tee;
 
     private int iterations;
+    private boolean polishUpdateOk;
     private double maxResidualAmps;
+    private int worstResidualNode;
     private int worstUnknown;
     private boolean singular;
     private int singularUnknown = -1;
@@ -68,6 +79,8 @@ public final class NewtonSolver {
         this.elements = list.toArray(new Element[0]);
         this.next = new double[n];
         this.view = new ArraySolution(nodes, next, new double[0]);
+        this.currentScale = new CurrentScale(nodes);
+        this.tee = currentScale.tee(mna);
     }
 
     /** @return the netlist */
@@ -179,8 +192,18 @@ public final class NewtonSolver {
         for (int pass = 0; pass <= options.maxIterations(); pass++) {
             mna.clear();
             boolean limited = false;
-            for (Element e : elements) {
-                limited |= e.stamp(mna, view, ctx);
+            // a pass that may converge also gathers each node's element currents for the node test
+            boolean gather = stepOk && statesOk;
+            if (gather) {
+                currentScale.begin(x);
+                for (Element e : elements) {
+                    limited |= e.stamp(tee, view, ctx);
+                    currentScale.endElement();
+                }
+            } else {
+                for (Element e : elements) {
+                    limited |= e.stamp(mna, view, ctx);
+                }
             }
             if (nodeShuntSiemens > 0) {
                 mna.addNodeShunt(nodeShuntSiemens);
@@ -189,7 +212,8 @@ public final class NewtonSolver {
             boolean mayConverge = !limited && stepOk && statesOk;
             if (mayConverge || pass == options.maxIterations()) {
                 boolean residualOk = residual(x, a, b, tol);
-                if (mayConverge && residualOk) {
+                // the last word has the test with each node's own element currents as its scale
+                if (mayConverge && residualOk && residual(x, a, b, tol, shunted(currentScale.scale(), x, nodeShuntSiemens))) {
                     return true;
                 }
             }
@@ -225,8 +249,21 @@ public final class NewtonSolver {
      * junction between two 20 V nodes pass with a residual far above its own current).
      */
     private boolean residual(double[] x, double[] a, double[] b, ConvergenceTolerances tol) {
+        return residual(x, a, b, tol, null);
+    }
+
+    /** Adds a node shunt's current to each node's scale (gmin stepping, the transient fallback). */
+    private double[] shunted(double[] elementScale, double[] x, double nodeShuntSiemens) {
+        for (int i = 0; nodeShuntSiemens > 0 && i < nodes; i++) {
+            elementScale[i] += Math.abs(nodeShuntSiemens * x[i]);
+        }
+        return elementScale;
+    }
+
+    private boolean residual(double[] x, double[] a, double[] b, ConvergenceTolerances tol, double[] elementScale) {
         boolean ok = true;
         double worst = 0.0;
+        int worstNode = 0;
         for (int i = 0; i < n; i++) {
             int row = i * n;
             double s = -b[i];
@@ -234,11 +271,14 @@ public final class NewtonSolver {
             if (i < nodes) {
                 double xi = x[i];
                 double rowSum = 0.0;
+                double terms = Math.abs(b[i]);
                 // zero entries (most of a sparse MNA row) add nothing to any of the sums
                 for (int j = 0; j < nodes; j++) {
                     double aij = a[row + j];
                     if (aij != 0.0) {
-                        s += aij * x[j];
+                        double t = aij * x[j];
+                        s += t;
+                        terms += Math.abs(t);
                         rowSum += aij;
                         if (j != i) {
                             scale += Math.abs(aij * (x[j] - xi));
@@ -251,12 +291,21 @@ public final class NewtonSolver {
                     if (aij != 0.0) {
                         double t = aij * x[j];
                         s += t;
+                        terms += Math.abs(t);
                         scale += Math.abs(t);
                     }
                 }
+                if (elementScale != null) {
+                    scale = elementScale[i];
+                }
                 double r = Math.abs(s);
-                worst = Math.max(worst, r);
-                if (r > tol.reltol() * scale + tol.abstolAmps()) {
+                if (!(r <= worst)) {
+                    worst = r;
+                    worstNode = i;
+                }
+                // the sum cannot be known better than the rounding of its terms (a 1 kΩ series node at 20 V
+                // sums currents of 20 mA to a residual of picoamps)
+                if (!(r <= tol.reltol() * scale + tol.abstolAmps() + ROUNDING_ULPS * Math.ulp(terms))) {
                     ok = false;
                 }
             } else {
@@ -268,12 +317,13 @@ public final class NewtonSolver {
                         scale += Math.abs(t);
                     }
                 }
-                if (Math.abs(s) > tol.reltol() * scale + tol.vntolVolts()) {
+                if (!(Math.abs(s) <= tol.reltol() * scale + tol.vntolVolts())) {
                     ok = false;
                 }
             }
         }
         maxResidualAmps = worst;
+        worstResidualNode = worstNode;
         return ok;
     }
 
@@ -348,8 +398,133 @@ public final class NewtonSolver {
                 return false;
             }
         }
+        ConvergenceTolerances tol = options.tolerances();
+        boolean updateOk = true;
+        for (int i = 0; i < n; i++) {
+            double allowed = tol.reltol() * Math.max(Math.abs(next[i]), Math.abs(x[i]))
+                    + (i < nodes ? tol.vntolVolts() : tol.abstolAmps());
+            if (!(Math.abs(next[i] - x[i]) <= allowed)) {
+                updateOk = false;
+            }
+        }
+        polishUpdateOk = updateOk;
         System.arraycopy(next, 0, x, 0, n);
         return true;
+    }
+
+    /**
+     * @return true if the step of the last {@link #polish} that was taken passed the update test
+     *     (|Δv| ≤ reltol·|v| + vntol, |Δi| ≤ reltol·|i| + abstol): the last update of an answer that
+     *     ends with a polishing step
+     */
+    public boolean polishUpdateOk() {
+        return polishUpdateOk;
+    }
+
+    /**
+     * The one convergence test of an answer, applied to the answer itself: the elements are
+     * stamped at {@code x} (their limiting memory starts at {@code x}, so the linearisation is the
+     * devices' own currents there), every node's residual r = A·x − b must pass the NM-6 node test
+     * (absolute plus relative to the currents meeting there) and every branch row its voltage test,
+     * and the Newton step from {@code x} must pass the update test (|Δv| ≤ reltol·|v| + vntol,
+     * |Δi| ≤ reltol·|i| + abstol). Afterwards {@link #maxResidualAmps()} and
+     * {@link #worstResidualNode()} describe {@code x}, whatever the verdict.
+     *
+     * <p>Neither {@code x} nor {@code states} is modified. On return the linear solver holds the
+     * factors of the Jacobian at {@code x} (when it was not singular).
+     *
+     * @param x the answer to test
+     * @param states the element states it was solved with
+     * @param ctx analysis context
+     * @return true only if both tests pass, no element limits at {@code x} and everything is finite
+     */
+    public boolean verify(double[] x, double[] states, StampContext ctx) {
+        maxResidualAmps = 0.0;
+        worstResidualNode = 0;
+        if (n == 0) {
+            return true;
+        }
+        if (!allFinite(x)) {
+            maxResidualAmps = Double.MAX_VALUE;
+            return false;
+        }
+        view.bind(x, states);
+        for (Element e : elements) {
+            e.begin(view);
+        }
+        mna.clear();
+        boolean limited = false;
+        currentScale.begin(x);
+        for (Element e : elements) {
+            limited |= e.stamp(tee, view, ctx);
+            currentScale.endElement();
+        }
+        ConvergenceTolerances tol = options.tolerances();
+        boolean residualOk = residual(x, mna.matrix(), mna.rhs(), tol, currentScale.scale());
+        if (!Double.isFinite(maxResidualAmps)) {
+            maxResidualAmps = Double.MAX_VALUE;
+            return false;
+        }
+        if (!lu.factor(mna.matrix())) {
+            return false;
+        }
+        System.arraycopy(mna.rhs(), 0, next, 0, n);
+        lu.solve(next);
+        boolean updateOk = true;
+        for (int i = 0; i < n; i++) {
+            double allowed = tol.reltol() * Math.max(Math.abs(next[i]), Math.abs(x[i]))
+                    + (i < nodes ? tol.vntolVolts() : tol.abstolAmps());
+            if (!(Math.abs(next[i] - x[i]) <= allowed)) {
+                updateOk = false;
+            }
+        }
+        return residualOk && updateOk && !limited;
+    }
+
+    /**
+     * The node test alone at an answer ({@link #verify} without the update test), as a time-domain
+     * run applies it to each point it accepts: the elements stamped at {@code x}, each node's
+     * residual within reltol × its elements' own currents + abstol (+ the rounding of the sum).
+     * Afterwards {@link #maxResidualAmps()} describes {@code x}.
+     *
+     * @param x the answer; not modified
+     * @param states its element states; not modified
+     * @param ctx the analysis context it was solved in
+     * @param nodeShuntSiemens the node shunt it was solved with (0 normally)
+     * @return true if every node passes and no element limits at {@code x}
+     */
+    public boolean residualTest(double[] x, double[] states, StampContext ctx, double nodeShuntSiemens) {
+        maxResidualAmps = 0.0;
+        worstResidualNode = 0;
+        if (n == 0) {
+            return true;
+        }
+        if (!allFinite(x)) {
+            maxResidualAmps = Double.MAX_VALUE;
+            return false;
+        }
+        view.bind(x, states);
+        for (Element e : elements) {
+            e.begin(view);
+        }
+        mna.clear();
+        boolean limited = false;
+        currentScale.begin(x);
+        for (Element e : elements) {
+            limited |= e.stamp(tee, view, ctx);
+            currentScale.endElement();
+        }
+        if (nodeShuntSiemens > 0) {
+            mna.addNodeShunt(nodeShuntSiemens);
+        }
+        double[] elementScale = shunted(currentScale.scale(), x, nodeShuntSiemens);
+        boolean ok = residual(x, mna.matrix(), mna.rhs(), options.tolerances(), elementScale);
+        return ok && !limited && Double.isFinite(maxResidualAmps);
+    }
+
+    /** @return the node with the largest KCL residual at the last residual evaluation */
+    public int worstResidualNode() {
+        return worstResidualNode;
     }
 
     /** @return Newton iterations (linear solves) of the last run */

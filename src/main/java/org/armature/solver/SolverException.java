@@ -2,11 +2,12 @@ package org.armature.solver;
 
 /**
  * The solver's failures: a circuit that has no unique DC solution ({@link SingularCircuitException})
- * or a Newton iteration that found none ({@link NonConvergenceException}). Unchecked; each carries a
+ * or a Newton iteration that found none ({@link NonConvergenceException}), or a circuit that asks the
+ * models for something outside their physics ({@link ModelLimitException}). Unchecked; each carries a
  * stable message key for user-facing text.
  */
 public abstract sealed class SolverException extends RuntimeException
-        permits SingularCircuitException, NonConvergenceException {
+        permits SingularCircuitException, NonConvergenceException, ModelLimitException {
 
     private static final long serialVersionUID = 1L;
 

@@ -34,13 +34,26 @@
  *     the edited part and starts Newton from the last solution of the same stage and pin state,
  *     with the last contact states as the relay loop's first guess (kept only when a start with
  *     released contacts is shown to settle the same way, ContactGuessTest);
- *     the answer equals a cold start's within the NM-6 tolerances (WarmStartTest). Turn it off to make
+ *     the answer equals a cold start's within the NM-6 tolerances (WarmStartTest,
+ *     EngineDifferentialTest). Turn it off to make
  *     every solve independent of the engine's history, for example to compare iteration counts.</li>
  * </ul>
+ *
+ * <h2>One convergence test, on what is returned</h2>
+ * Whatever path produced an answer (warm start, contact guess, start point, gmin or source
+ * stepping), {@link org.armature.solver.NewtonSolver#verify} tests the returned node voltages and
+ * branch currents themselves: each node's residual within reltol × the sum of the currents its
+ * elements carry there (each element evaluated on its own, so a junction's companion terms are not
+ * mistaken for current) + abstol, and the Newton step from the answer within the update test. The
+ * residual an operating point reports is that one. A fast path whose answer fails is redone by the
+ * full solve from 0 V; a full solve that fails throws, naming the node and its residual.
  *
  * <p>Failures are one unchecked family, {@link org.armature.solver.SolverException}: a
  * {@link org.armature.solver.SingularCircuitException} names the floating node(s) and parts or the
  * sources of a loop, a {@link org.armature.solver.NonConvergenceException} gives iterations, the
- * node that moved most and the last residual. No result ever holds NaN or infinity.
+ * node with the largest residual and that residual, a {@link org.armature.solver.ModelLimitException}
+ * says the stage asks the models for something outside their range (an ambient outside
+ * {@link org.armature.model.ModelRange}, a coil heating past 220 °C or without a steady state, a part
+ * value a device model refuses). No result ever holds NaN or infinity.
  */
 package org.armature.solver;

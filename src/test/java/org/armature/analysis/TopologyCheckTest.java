@@ -280,4 +280,16 @@ class TopologyCheckTest {
         boolean recognisedInfo = report.findings().stream().anyMatch(f -> f.key().equals("topology.recognised"));
         assertEquals(report.roles().isPresent(), recognisedInfo);
     }
+
+    @Test
+    @DisplayName("a reversed coil rail (new low-side-npn --supply -24 was accepted before) is a plain-words finding: it forward-biases the freewheeling diode")
+    void reversedCoilSupply() {
+        // issue 10 reproducer: the solve then printed "Converged" with a negative forced beta
+        Stage s = Templates.defaultStage();
+        Stage reversed = s.withPart(s.require("V1").with("volts", -24));
+        TopologyIssue i = issue(reversed, "topology.coil-supply-reversed").orElseThrow();
+        assertEquals(Severity.ERROR, i.finding().severity());
+        assertTrue(i.finding().message().contains("forward-biases the freewheeling diode"), i.finding().message());
+        assertTrue(!problemKeys(s).contains("topology.coil-supply-reversed"), "the positive rail raises nothing");
+    }
 }

@@ -171,4 +171,13 @@ class CheckCommandTest {
         assertEquals(2, bad.status());
         assertTrue(bad.noStackTrace(), bad.err());
     }
+
+    @Test
+    @DisplayName("--ambient-max outside the models' range is refused with the valid range")
+    void ambientMaxOutsideTheModels() {
+        CliRun r = CliRun.of("check", file.toString(), "--no-transient", "--ambient-max", "300");
+        assertEquals(2, r.status(), r.err());
+        assertTrue(r.err().contains("--ambient-max must lie from -60 °C to 200 °C"), r.err());
+        assertEquals(1, r.err().strip().lines().count(), r.err());
+    }
 }

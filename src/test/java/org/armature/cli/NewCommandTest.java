@@ -175,6 +175,8 @@ class NewCommandTest {
             low-side-npn --coil-resistance 5M                  | 2      | expected a value from
             low-side-npn --must-release 10                     | 2      | must be below its must-operate voltage
             low-side-npn --frequency 5                         | 2      | Unknown options: '--frequency'
+            low-side-npn --supply -24                          | 2      | --supply must be a positive coil rail
+            low-side-npn --ambient -250                        | 2      | expected a value from -60 °C to 200 °C
             """)
     @DisplayName("bad input: one sentence on stderr, exit status 2, no file, no stack trace")
     void usageErrors(String args, int status, String fragment) {

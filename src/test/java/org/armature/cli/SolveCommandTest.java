@@ -188,6 +188,15 @@ class SolveCommandTest {
     }
 
     @Test
+    @DisplayName("--ambient below copper's −234.5 °C intercept is refused with the valid range (issue 10: 'last KCL residual 0.0 A' before)")
+    void ambientOutsideTheModels() {
+        CliRun r = CliRun.of("solve", file.toString(), "--ambient", "-250");
+        assertEquals(2, r.status(), r.err());
+        assertTrue(r.err().contains("--ambient must lie from -60 °C to 200 °C"), r.err());
+        assertEquals(1, r.err().strip().lines().count(), r.err());
+    }
+
+    @Test
     @DisplayName("the table shows nodes, parts and the switch verdict")
     void table() {
         CliRun r = CliRun.of("solve", file.toString());

@@ -56,4 +56,15 @@ class ValidatorTest {
         Connectivity c = Connectivity.of(s);
         assertEquals(c.net("R1", "b"), c.net("R2", "a"), "R2.a at (4,4) lies on the wire from R1.b");
     }
+
+    @Test
+    @DisplayName("an ambient below copper's −234.5 °C intercept is an error finding that says the valid range")
+    void ambientOutsideTheModels() {
+        Stage s = Templates.defaultStage();
+        Stage cold = s.withConditions(new Conditions(true, -250, -250, 50));
+        List<Finding> f = Validator.validate(cold);
+        assertTrue(f.stream().anyMatch(x -> x.key().equals("conditions.ambient-out-of-range")
+                && x.severity() == Severity.ERROR && x.message().contains("from -60 °C to 200 °C")), f.toString());
+        assertTrue(Validator.validate(s).stream().noneMatch(x -> x.key().equals("conditions.ambient-out-of-range")));
+    }
 }

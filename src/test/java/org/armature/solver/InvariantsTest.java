@@ -74,6 +74,7 @@ class InvariantsTest {
         Stage stage = randomStage(seed);
         OperatingPoint op = new DcAnalysis().solve(stage);
         Connectivity c = Connectivity.of(stage);
+        HonestResidual.assertHonest(c, op, "seed " + seed);
         Map<String, Double> sum = new HashMap<>();
         Map<String, Double> scale = new HashMap<>();
         for (PartResult p : op.parts().values()) {

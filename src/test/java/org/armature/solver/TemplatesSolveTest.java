@@ -39,6 +39,7 @@ class TemplatesSolveTest {
         Stage stage = Templates.build(t, s, d);
         OperatingPoint op = new DcAnalysis().solve(stage, SolveOptions.DEFAULT.withPinHigh(high));
         assertTrue(op.converged());
+        HonestResidual.assertHonest(stage, op, t.id() + " pin high " + high);
         PartResult k = op.requirePart("K1");
         // the high-side direct-drive variant exists to show the classic mistake: a 3.3 V pin cannot
         // pull the PNP's base up to a 12 V emitter, so the relay stays operated with the pin low

@@ -82,6 +82,8 @@ class WarmStartTest {
             OperatingPoint w = warm.solve(s, so);
             OperatingPoint c = new DcAnalysis(DcOptions.DEFAULT.withWarmStart(false)).solve(s, so);
             assertSamePoint(c, w, t.id() + " edit " + k);
+            HonestResidual.assertHonest(s, w, t.id() + " edit " + k + " warm");
+            HonestResidual.assertHonest(s, c, t.id() + " edit " + k + " cold");
             assertTrue(w.converged() && c.converged());
         }
     }

@@ -9,7 +9,9 @@ package org.armature.solver.timedomain;
  * @param acceptedSteps accepted time points after the start
  * @param rejectedSteps steps rejected by the error test or Newton
  * @param newtonIterations all Newton iterations including the operating point
+ * @param maxAcceptedResidualAmps largest KCL residual over the accepted points, A
+ * @param acceptedFailingKcl accepted points whose values fail the node test (0 for a sound run)
  */
 record TimeDomainResult(Waveform waveform, double[][] internal, int acceptedSteps, int rejectedSteps,
-                        int newtonIterations) {
+                        int newtonIterations, double maxAcceptedResidualAmps, int acceptedFailingKcl) {
 }

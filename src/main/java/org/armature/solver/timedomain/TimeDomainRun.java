@@ -153,6 +153,8 @@ final class TimeDomainRun {
         System.arraycopy(trial, 0, retryStart, 0, n);
         boolean ok = s.run(trial, states, ctx, 0);
         newtonIterations += s.iterations();
+        lastCtx = ctx;
+        lastShunt = 0.0;
         return ok || shunted(s, trial, ctx);
     }
 
@@ -162,6 +164,8 @@ final class TimeDomainRun {
         System.arraycopy(trial, 0, retryStart, 0, n);
         boolean ok = s.runPredicted(trial, x, states, ctx);
         newtonIterations += s.iterations();
+        lastCtx = ctx;
+        lastShunt = 0.0;
         if (ok) {
             return true;
         }
@@ -181,7 +185,30 @@ final class TimeDomainRun {
         System.arraycopy(retryStart, 0, trial, 0, n);
         boolean ok = s.run(trial, states, ctx, FALLBACK_SHUNT_SIEMENS);
         newtonIterations += s.iterations();
+        lastShunt = FALLBACK_SHUNT_SIEMENS;
         return ok;
+    }
+
+    /** The context and node shunt of the last time-point solve, for the test of the point accepted. */
+    private StampContext lastCtx;
+    private double lastShunt;
+    /** Largest KCL residual over the accepted points, A, and how many failed the node test. */
+    private double maxAcceptedResidualAmps;
+    private int acceptedFailingKcl;
+
+    /**
+     * The honest-residual test of a point about to be accepted, on the values kept
+     * ({@link NewtonSolver#residualTest}), whatever path solved it.
+     */
+    private void testAccepted(double[] point) {
+        if (lastCtx == null) {
+            return;
+        }
+        NewtonSolver s = highNow ? newtonHigh : newtonLow;
+        if (!s.residualTest(point, states, lastCtx, lastShunt)) {
+            acceptedFailingKcl++;
+        }
+        maxAcceptedResidualAmps = Math.max(maxAcceptedResidualAmps, s.maxResidualAmps());
     }
 
     /**
@@ -336,6 +363,7 @@ final class TimeDomainRun {
             }
             // accept
             double tNew = t + hTry;
+            testAccepted(trial);
             record(tNew, trial);
             statesAt(trial, newStates);
             view.bind(trial, states);
@@ -408,7 +436,7 @@ final class TimeDomainRun {
             }
         }
         return new TimeDomainResult(new Waveform(time, traces, events), internal, accepted, rejected,
-                newtonIterations);
+                newtonIterations, maxAcceptedResidualAmps, acceptedFailingKcl);
     }
 
     /** Columns of the internal (metrics) record. */

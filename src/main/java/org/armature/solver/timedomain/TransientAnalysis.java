@@ -23,12 +23,19 @@ public final class TransientAnalysis {
      * @param options drive, window, step control and ambient
      * @return the waveform, events and metrics
      * @throws TransientFailureException if the run cannot continue (Newton fails at the smallest step)
-     * @throws org.armature.solver.SolverException if the stage has no DC operating point
+     * @throws org.armature.solver.SolverException if the stage has no DC operating point, or asks the
+     *     models for something outside their range ({@link org.armature.solver.ModelLimitException})
      */
     public static TransientResult run(org.armature.model.Stage stage, TransientOptions options) {
         double ambient = Double.isNaN(options.ambientCelsius()) ? stage.conditions().ambientCelsius()
                 : options.ambientCelsius();
-        TimeDomainCircuit c = StageCircuit.build(stage, ambient, options.drive().initialHigh());
+        TimeDomainCircuit c;
+        try {
+            c = StageCircuit.build(stage, ambient, options.drive().initialHigh());
+        } catch (IllegalArgumentException e) {
+            // a device model refused a part value: the engine's own failure, naming the field
+            throw org.armature.solver.ModelLimitException.partOutsideModel(e);
+        }
         return run(c, options.drive(), options.durationSeconds(), options.step());
     }
 
@@ -39,6 +46,6 @@ public final class TransientAnalysis {
                                StepOptions options) {
         TimeDomainResult raw = new TimeDomainRun(circuit, drive, durationSeconds, options).run();
         return new TransientResult(raw.waveform(), MetricsCalculator.compute(raw, circuit), raw.acceptedSteps(),
-                raw.rejectedSteps(), raw.newtonIterations(), circuit.notes);
+                raw.rejectedSteps(), raw.newtonIterations(), circuit.notes, raw.maxAcceptedResidualAmps(), raw.acceptedFailingKcl());
     }
 }

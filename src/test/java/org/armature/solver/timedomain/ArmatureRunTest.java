@@ -51,7 +51,7 @@ class ArmatureRunTest {
         MovingArmature m = rc13();
         double onOhms = VOLTS / (fraction * PICK_UP_AMPS) - OHMS;
         TimeDomainCircuit c = Circuits.armature(VOLTS, m, onOhms, 1e9, false, 0, false);
-        TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOn(EDGE), 0.04, StepOptions.DEFAULTS);
+        TransientResult r = Runs.run(c, new DriveWaveform.TurnOn(EDGE), 0.04, StepOptions.DEFAULTS);
         assertEquals(operates, happened(r, TransientEvent.PICK_UP));
         assertEquals(operates, happened(r, TransientEvent.CONTACTS_CLOSED));
         assertEquals(operates, happened(r, TransientEvent.ATTRACTED));
@@ -71,7 +71,7 @@ class ArmatureRunTest {
         MovingArmature m = rc13();
         double offOhms = VOLTS / (fraction * DROP_OUT_AMPS) - OHMS;
         TimeDomainCircuit c = Circuits.armature(VOLTS, m, 1e-3, offOhms, false, 0, true);
-        TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOff(EDGE), 0.06, StepOptions.DEFAULTS);
+        TransientResult r = Runs.run(c, new DriveWaveform.TurnOff(EDGE), 0.06, StepOptions.DEFAULTS);
         assertEquals(releases, happened(r, TransientEvent.DROP_OUT));
         assertEquals(releases, happened(r, TransientEvent.CONTACTS_OPEN));
         assertEquals(releases, happened(r, TransientEvent.RELEASED));
@@ -85,7 +85,7 @@ class ArmatureRunTest {
     @DisplayName("RC-13 relay, plain diode: decay to drop-out about 16–19 ms (DESIGN.md sanity figure, derived: τ·ln((I0 + VF/R)/(Ido + VF/R)), τ = 8.3 ms)")
     void rc13PlainDiodeDecay() {
         TimeDomainCircuit c = Circuits.armature(VOLTS, rc13(), 1e-3, 1e9, true, 0, true);
-        TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOff(EDGE), 0.03, StepOptions.DEFAULTS);
+        TransientResult r = Runs.run(c, new DriveWaveform.TurnOff(EDGE), 0.03, StepOptions.DEFAULTS);
         double decay = r.metrics().decayToReleaseCurrentSeconds();
         assertEquals(17.5e-3, decay, 2.0e-3, "decay " + decay); // DESIGN 16–19 ms; 15.5 ms allows VF ≈ 0.75 V (derived)
         assertTrue(happened(r, TransientEvent.CONTACTS_OPEN));
@@ -97,7 +97,7 @@ class ArmatureRunTest {
     @DisplayName("RC-13 relay, 12.7 V clamp (diode + 12 V zener): decay to drop-out about 5 ms (DESIGN.md; check-values.md closed form τ·ln((I0 + Vc/R)/(Ido + Vc/R)) = 4.79 ms, derived)")
     void rc13ZenerDecay() {
         TimeDomainCircuit c = Circuits.armature(VOLTS, rc13(), 1e-3, 1e9, false, 12.7, true);
-        TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOff(EDGE), 0.008, StepOptions.DEFAULTS);
+        TransientResult r = Runs.run(c, new DriveWaveform.TurnOff(EDGE), 0.008, StepOptions.DEFAULTS);
         double tau = 2.29 / OHMS;
         double i0 = VOLTS / (OHMS + 1e-3);
         double vcOverR = 12.7 / OHMS;
@@ -107,7 +107,7 @@ class ArmatureRunTest {
 
     private static TransientResult templateOff(Suppressor s) {
         Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN, s, HighSideDrive.LEVEL_SHIFT);
-        return TransientAnalysis.run(stage, TransientOptions.turnOff().withDuration(0.04));
+        return Runs.run(stage, TransientOptions.turnOff().withDuration(0.04));
     }
 
     @Test
@@ -138,7 +138,7 @@ class ArmatureRunTest {
         Stage zener = Templates.build(StageTemplate.LOW_SIDE_NPN, Suppressor.DIODE_ZENER, HighSideDrive.LEVEL_SHIFT);
         org.armature.model.Part z = zener.parts().stream()
                 .filter(p -> p.kind() == org.armature.model.PartKind.ZENER).findFirst().orElseThrow();
-        TransientMetrics dz24 = TransientAnalysis.run(zener.withPart(z.with("breakdownVolts", 24)),
+        TransientMetrics dz24 = Runs.run(zener.withPart(z.with("breakdownVolts", 24)),
                 TransientOptions.turnOff().withDuration(0.04)).metrics();
         // SU-12 (relay makers' application notes): about ×3 to ×8
         assertTrue(d / none.releaseTimeSeconds() > 3 && d / none.releaseTimeSeconds() < 8,
@@ -153,7 +153,7 @@ class ArmatureRunTest {
     @Test
     @DisplayName("template turn-on: operate time from the physics, after the L/R rise to pick-up (derived: τ·ln(I/(I − Ipu)))")
     void templateOperateTime() {
-        TransientResult r = TransientAnalysis.run(Templates.defaultStage(), TransientOptions.turnOn());
+        TransientResult r = Runs.run(Templates.defaultStage(), TransientOptions.turnOn());
         double operate = r.metrics().operateTimeSeconds();
         double pickUp = r.waveform().firstEvent(TransientEvent.PICK_UP).orElseThrow().timeSeconds() - EDGE;
         double attracted = r.waveform().firstEvent(TransientEvent.ATTRACTED).orElseThrow().timeSeconds() - EDGE;
@@ -168,7 +168,7 @@ class ArmatureRunTest {
     @Test
     @DisplayName("current dip at pull-in: the coil current peaks before the armature closes, falls, then rises again (DESIGN.md)")
     void currentDipAtPullIn() {
-        TransientResult r = TransientAnalysis.run(Templates.defaultStage(), TransientOptions.turnOn());
+        TransientResult r = Runs.run(Templates.defaultStage(), TransientOptions.turnOn());
         Waveform w = r.waveform();
         Trace i = w.require(Waveform.COIL_CURRENT);
         double closed = w.firstEvent(TransientEvent.ATTRACTED).orElseThrow().timeSeconds();
@@ -191,7 +191,7 @@ class ArmatureRunTest {
         Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT);
         TimeDomainCircuit c = StageCircuit.build(stage, stage.conditions().ambientCelsius(), true);
         ArmatureDynamics a = c.armatures.get(0);
-        TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOff(EDGE), 0.04,
+        TransientResult r = Runs.run(c, new DriveWaveform.TurnOff(EDGE), 0.04,
                 StepOptions.DEFAULTS.withTolerance(1e-4));
         TransientMetrics m = r.metrics();
         Waveform w = r.waveform();
@@ -216,7 +216,7 @@ class ArmatureRunTest {
         MovingArmature m = RelayArmatureFit.fit(RelayArmatureDatasheet.typical(OHMS, 1.15, 2.29, PICK_UP_AMPS,
                 DROP_OUT_AMPS, 0.3e-3).withMechanics(RelayArmatureDatasheet.DEFAULT_MASS_KILOGRAMS,
                 RelayArmatureDatasheet.DEFAULT_DAMPING_NEWTON_SECONDS_PER_METRE, 0.3)).moving().orElseThrow();
-        TransientResult r = TransientAnalysis.run(Circuits.armature(VOLTS, m, 1e-3, 1e9, false, 0, false),
+        TransientResult r = Runs.run(Circuits.armature(VOLTS, m, 1e-3, 1e9, false, 0, false),
                 new DriveWaveform.TurnOn(EDGE), 0.03, StepOptions.DEFAULTS);
         long strikes = r.waveform().events().stream().filter(e -> e.what().equals(TransientEvent.ATTRACTED)).count();
         // each rebound keeps 0.3 of the speed until it falls below 1 mm/s: several strikes (derived)
@@ -235,7 +235,7 @@ class ArmatureRunTest {
         TimeDomainCircuit c = StageCircuit.build(constant, 25, true);
         assertTrue(c.armatures.isEmpty());
         assertFalse(c.relays.isEmpty());
-        TransientResult r = TransientAnalysis.run(constant, TransientOptions.turnOff());
+        TransientResult r = Runs.run(constant, TransientOptions.turnOff());
         Optional<TransientEvent> stop = r.waveform().firstEvent(TransientEvent.RELEASED);
         assertTrue(stop.isEmpty(), "no armature motion events without an attracted inductance");
     }
@@ -246,8 +246,8 @@ class ArmatureRunTest {
         Stage light = Templates.defaultStage();
         org.armature.model.Part k1 = light.part("K1").orElseThrow();
         Stage heavy = light.withPart(k1.with("armatureMassGrams", 4));
-        double flightLight = flight(TransientAnalysis.run(light, TransientOptions.turnOn().withDuration(0.04)));
-        double flightHeavy = flight(TransientAnalysis.run(heavy, TransientOptions.turnOn().withDuration(0.04)));
+        double flightLight = flight(Runs.run(light, TransientOptions.turnOn().withDuration(0.04)));
+        double flightHeavy = flight(Runs.run(heavy, TransientOptions.turnOn().withDuration(0.04)));
         // under a force that did not change with time the flight would scale as √4 = 2; the pull
         // grows as the gap closes and the current dips, so allow ±25 % (derived)
         assertEquals(2.0, flightHeavy / flightLight, 0.5, flightLight + " s vs " + flightHeavy + " s");

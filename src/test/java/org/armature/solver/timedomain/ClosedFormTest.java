@@ -17,14 +17,14 @@ class ClosedFormTest {
     private static final double EDGE = 1e-3;
 
     private static TransientResult off(TimeDomainCircuit c, double duration, StepOptions o) {
-        return TransientAnalysis.run(c, new DriveWaveform.TurnOff(EDGE), duration, o);
+        return Runs.run(c, new DriveWaveform.TurnOff(EDGE), duration, o);
     }
 
     @Test
     @DisplayName("RL rise i = V/R·(1 − e^(−t/τ)) (derived, circuit theory)")
     void rlRise() {
         TimeDomainCircuit c = Circuits.lowSide(R, L, Circuits.Clamp.RESISTOR, 1e9, 0, 0);
-        TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOn(EDGE), 0.02, StepOptions.DEFAULTS);
+        TransientResult r = Runs.run(c, new DriveWaveform.TurnOn(EDGE), 0.02, StepOptions.DEFAULTS);
         Waveform w = r.waveform();
         for (double t = 0.5e-3; t < 19e-3; t += 1.3e-3) {
             double expected = I0 * (1 - Math.exp(-t / TAU));

@@ -26,7 +26,7 @@ class EnergyAndConvergenceTest {
         // NONE: the switch breaks down at 60 V and absorbs the energy; a 100 pF winding capacitance rings into it
         TimeDomainCircuit c = Circuits.lowSide(R, L, clamp, value, clamp == Circuits.Clamp.NONE ? 100e-12 : 0,
                 clamp == Circuits.Clamp.NONE ? 60 : 0);
-        TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOff(EDGE), 0.04, StepOptions.DEFAULTS);
+        TransientResult r = Runs.run(c, new DriveWaveform.TurnOff(EDGE), 0.04, StepOptions.DEFAULTS);
         TransientMetrics m = r.metrics();
         double stored = m.storedEnergyJoules();
         assertEquals(0.450e-3, stored, 0.001e-3); // PC-11 (I0 = 12 V / 400 Ω = 30 mA)
@@ -62,7 +62,7 @@ class EnergyAndConvergenceTest {
         for (double tol : tolerances) {
             TimeDomainCircuit c = Circuits.lowSide(R, L, Circuits.Clamp.RESISTOR, 400, 0, 0);
             // a 0.1 s window keeps the largest step (1 % of the window) out of the way
-            TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOff(EDGE), 0.1,
+            TransientResult r = Runs.run(c, new DriveWaveform.TurnOff(EDGE), 0.1,
                     StepOptions.DEFAULTS.withTolerance(tol));
             Waveform w = r.waveform();
             double i0 = w.valueAt(Waveform.COIL_CURRENT, EDGE);
@@ -94,7 +94,7 @@ class EnergyAndConvergenceTest {
             """)
     void methods(IntegrationMethod method) {
         TimeDomainCircuit c = Circuits.lowSide(R, L, Circuits.Clamp.RESISTOR, 400, 0, 0);
-        TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOff(EDGE), 0.01,
+        TransientResult r = Runs.run(c, new DriveWaveform.TurnOff(EDGE), 0.01,
                 StepOptions.DEFAULTS.withMethod(method).withTolerance(1e-4));
         double i0 = 12.0 / (R + 1e-3);
         // SU-10: to 10 % in 2.878 ms

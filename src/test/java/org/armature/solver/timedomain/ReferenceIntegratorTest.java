@@ -53,7 +53,7 @@ class ReferenceIntegratorTest {
     @DisplayName("relative tolerance 1e-5: unsuppressed ringing coil (R 400 Ω, L 1 H, C 100 pF) agrees with Dormand–Prince 853 (Hipparchus 4.0.3)")
     void ringAgrees() {
         TimeDomainCircuit c = Circuits.lowSide(R, L, Circuits.Clamp.NONE, 0, C, 0);
-        TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOff(EDGE), EDGE + 0.5e-3,
+        TransientResult r = Runs.run(c, new DriveWaveform.TurnOff(EDGE), EDGE + 0.5e-3,
                 StepOptions.DEFAULTS.withTolerance(1e-5));
         Waveform w = r.waveform();
         double i0 = ringStart()[0];
@@ -76,7 +76,7 @@ class ReferenceIntegratorTest {
     @DisplayName("resistor across the coil: decay agrees with Dormand–Prince 853 within 0.3 % of I0 (Hipparchus 4.0.3)")
     void rlAgrees() {
         TimeDomainCircuit c = Circuits.lowSide(R, L, Circuits.Clamp.RESISTOR, 400, 0, 0);
-        TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOff(EDGE), 0.02, StepOptions.DEFAULTS);
+        TransientResult r = Runs.run(c, new DriveWaveform.TurnOff(EDGE), 0.02, StepOptions.DEFAULTS);
         double i0 = Circuits.VOLTS / (R + ON_OHMS);
         OrdinaryDifferentialEquation rl = new OrdinaryDifferentialEquation() {
             @Override

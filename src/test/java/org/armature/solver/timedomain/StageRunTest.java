@@ -17,7 +17,7 @@ import org.junit.jupiter.params.provider.EnumSource;
 class StageRunTest {
 
     private static TransientResult off(StageTemplate t, Suppressor s) {
-        return TransientAnalysis.run(Templates.build(t, s, HighSideDrive.LEVEL_SHIFT), TransientOptions.turnOff());
+        return Runs.run(Templates.build(t, s, HighSideDrive.LEVEL_SHIFT), TransientOptions.turnOff());
     }
 
     @ParameterizedTest
@@ -37,7 +37,7 @@ class StageRunTest {
     void energyBalance(Suppressor s) {
         Stage stage = Templates.build(StageTemplate.LOW_SIDE_NPN, s, HighSideDrive.LEVEL_SHIFT);
         TimeDomainCircuit c = StageCircuit.build(stage, stage.conditions().ambientCelsius(), true);
-        TransientResult r = TransientAnalysis.run(c, new DriveWaveform.TurnOff(TransientOptions.DEFAULT_EDGE_SECONDS),
+        TransientResult r = Runs.run(c, new DriveWaveform.TurnOff(TransientOptions.DEFAULT_EDGE_SECONDS),
                 0.04, StepOptions.DEFAULTS.withTolerance(1e-4));
         TransientMetrics m = r.metrics();
         Waveform w = r.waveform();
@@ -84,7 +84,7 @@ class StageRunTest {
     @Test
     @DisplayName("turn-on: contacts close after pick-up; operate time from the armature physics near the datasheet's 8 ms (1 g default armature: 8–9 ms, RelayArmatureDatasheet, derived)")
     void turnOn() {
-        TransientResult r = TransientAnalysis.run(Templates.defaultStage(), TransientOptions.turnOn());
+        TransientResult r = Runs.run(Templates.defaultStage(), TransientOptions.turnOn());
         assertTrue(r.waveform().firstEvent(TransientEvent.PICK_UP).isPresent());
         assertEquals(8e-3, r.metrics().operateTimeSeconds(), 1e-3); // RELAY default operate time 8 ms (typical)
     }
