@@ -287,7 +287,7 @@ class TopologyCheckTest {
         // issue 10 reproducer: the solve then printed "Converged" with a negative forced beta
         Stage s = Templates.defaultStage();
         Stage reversed = s.withPart(s.require("V1").with("volts", -24));
-        TopologyIssue i = issue(reversed, "topology.coil-supply-reversed").orElseThrow();
+        RoleIssue i = issue(reversed, "topology.coil-supply-reversed").orElseThrow();
         assertEquals(Severity.ERROR, i.finding().severity());
         assertTrue(i.finding().message().contains("forward-biases the freewheeling diode"), i.finding().message());
         assertTrue(!problemKeys(s).contains("topology.coil-supply-reversed"), "the positive rail raises nothing");
