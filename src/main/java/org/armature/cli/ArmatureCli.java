@@ -42,7 +42,9 @@ public final class ArmatureCli {
             SolveCommand::new,
             SimulateCommand::new,
             CheckCommand::new,
-            SizeCommand::new);
+            SizeCommand::new,
+            FaultsCommand::new,
+            DiagnoseCommand::new);
 
     private ArmatureCli() {
     }
