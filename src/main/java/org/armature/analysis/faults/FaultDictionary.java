@@ -95,9 +95,10 @@ public final class FaultDictionary {
         List<Probe> probes = probes(stage, rec);
         List<Entry> entries = new ArrayList<>();
         DcAnalysis engine = new DcAnalysis();
-        entries.add(entry(engine, stage, Optional.empty(), probes, meter));
+        Metered healthyMetered = metered(stage, probes);
+        entries.add(entry(engine, stage, healthyMetered, Optional.empty(), probes, meter));
         for (Fault f : faults) {
-            entries.add(entry(engine, stage, Optional.of(f), probes, meter));
+            entries.add(entry(engine, stage, healthyMetered, Optional.of(f), probes, meter));
         }
         return new FaultDictionary(stage, meter, probes, entries);
     }
@@ -142,8 +143,11 @@ public final class FaultDictionary {
         return new PinRef(pin.ref(), pin.pin().equals("a") ? "a" : "b");
     }
 
-    private static Entry entry(DcAnalysis engine, Stage healthy, Optional<Fault> fault, List<Probe> probes, Meter meter) {
-        Stage faulted = fault.map(f -> FaultInjector.apply(healthy, f)).orElse(healthy);
+    /** The healthy stage with the idle meters drawn in, and their designators. */
+    private record Metered(Stage stage, Connectivity nets, List<String> meterRefs) {
+    }
+
+    private static Metered metered(Stage faulted, List<Probe> probes) {
         Connectivity fc = Connectivity.of(faulted);
         List<FaultInjector.Bridge> meters = new ArrayList<>();
         for (Probe p : probes) {
@@ -155,10 +159,41 @@ public final class FaultDictionary {
         Stage measured = FaultInjector.bridgeAll(faulted, fc, meters);
         List<String> meterRefs = measured.parts().subList(faulted.parts().size(), measured.parts().size())
                 .stream().map(Part::ref).toList();
-        Connectivity mc = Connectivity.of(measured);
+        return new Metered(measured, Connectivity.of(measured), meterRefs);
+    }
+
+    /** True when the fault changed values only: same parts (designator, kind, placement) and wires. */
+    private static boolean sameDrawing(Stage a, Stage b) {
+        if (a.parts().size() != b.parts().size() || !a.wires().equals(b.wires())) {
+            return false;
+        }
+        for (int i = 0; i < a.parts().size(); i++) {
+            Part x = a.parts().get(i);
+            Part y = b.parts().get(i);
+            if (x.kind() != y.kind() || !x.ref().equals(y.ref()) || !x.placement().equals(y.placement())) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static Entry entry(DcAnalysis engine, Stage healthy, Metered healthyMetered, Optional<Fault> fault,
+                               List<Probe> probes, Meter meter) {
+        Stage faulted = fault.map(f -> FaultInjector.apply(healthy, f)).orElse(healthy);
+        Metered m;
+        if (fault.isEmpty()) {
+            m = healthyMetered;
+        } else if (sameDrawing(healthy, faulted)) {
+            // a change of values only: the same drawing with the meters, so the engine patches its
+            // compiled circuit instead of compiling a new one
+            m = new Metered(FaultInjector.apply(healthyMetered.stage(), fault.get()), healthyMetered.nets(),
+                    healthyMetered.meterRefs());
+        } else {
+            m = metered(faulted, probes);
+        }
         try {
-            State high = state(engine, measured, mc, faulted, probes, meterRefs, meter, true);
-            State low = state(engine, measured, mc, faulted, probes, meterRefs, meter, false);
+            State high = state(engine, m.stage(), m.nets(), faulted, probes, m.meterRefs(), meter, true);
+            State low = state(engine, m.stage(), m.nets(), faulted, probes, m.meterRefs(), meter, false);
             return new Entry(fault, high, low, "");
         } catch (SolverException e) {
             return new Entry(fault, null, null, e.getMessage() == null ? "no operating point" : e.getMessage());
