@@ -54,7 +54,8 @@ public final class FaultCpuProbe {
                 Diagnosis.rank(d, Spread.DEFAULT, Priors.DEFAULT, Optional.of(Symptom.NO_OPERATE), readings);
             }
             double rankMs = (mx.getCurrentThreadCpuTime() - c0) / 1e6 / 200;
-            System.out.printf("%-20s dictionary %.1f ms CPU, diagnosis update %.3f ms CPU%n", t, dictionaryMs, rankMs);
+            System.out.printf("%-20s %d faults, dictionary %.1f ms CPU, diagnosis update %.3f ms CPU%n", t,
+                    d.entries().size() - 1, dictionaryMs, rankMs);
         }
     }
 }
