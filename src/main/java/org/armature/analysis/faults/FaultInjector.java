@@ -95,6 +95,7 @@ public final class FaultInjector {
                 case NMOS -> stage.withPart(p.with(ParamKeys.TRANSCONDUCTANCE_AMPS_PER_VOLT_SQUARED,
                         p.value(ParamKeys.TRANSCONDUCTANCE_AMPS_PER_VOLT_SQUARED) * 1e-9));
                 case DARLINGTON -> stage.withPart(p.with(ParamKeys.COLLECTOR_RESISTANCE_OHMS, OPEN_OHMS));
+                case GROUND -> groundOpen(stage, p);
                 default -> stage.withPart(asResistor(p, OPEN_OHMS));
             };
             case SHORT -> switch (p.kind()) {
@@ -134,6 +135,46 @@ public final class FaultInjector {
             case MISSING -> stage.withPart(p.with(ParamKeys.VOLTS, 0));
             case SAG -> stage.withPart(p.with(ParamKeys.VOLTS, p.value(ParamKeys.VOLTS) * SAG_FACTOR));
         };
+    }
+
+    /**
+     * A ground connection that has opened: the symbol is moved off the drawing (same designator, so
+     * the stage keeps a reference even if it had only this one) and joined to the point it grounded
+     * through {@value #OPEN_OHMS} Ω. A symbol whose point is still grounded through another symbol
+     * changes nothing, as on the board.
+     */
+    private static Stage groundOpen(Stage stage, Part ground) {
+        GridPoint at = ground.pinPoint("g");
+        int far = 0;
+        for (Part q : stage.parts()) {
+            for (PinSpec pin : q.kind().pins()) {
+                GridPoint g = q.pinPoint(pin.name());
+                far = Math.max(far, Math.max(g.gridX(), g.gridY()));
+            }
+        }
+        for (Wire w : stage.wires()) {
+            far = Math.max(far, Math.max(Math.max(w.from().gridX(), w.from().gridY()),
+                    Math.max(w.to().gridX(), w.to().gridY())));
+        }
+        Stage moved = stage.withPart(ground.withPlacement(Placement.at(far + 10, far + 10)));
+        Connectivity c = Connectivity.of(moved);
+        String net = null;
+        for (Part q : moved.parts()) {
+            for (PinSpec pin : q.kind().pins()) {
+                if (q.pinPoint(pin.name()).equals(at)) {
+                    net = c.net(q.ref(), pin.name());
+                }
+            }
+        }
+        for (int i = 0; i < moved.wires().size() && net == null; i++) {
+            if (moved.wires().get(i).contains(at)) {
+                net = c.netOfWire().get(i);
+            }
+        }
+        if (net == null || net.equals(Connectivity.GROUND)) {
+            return stage;
+        }
+        return bridgeNets(moved, c, net, Connectivity.GROUND, OPEN_OHMS);
     }
 
     /** A two-pin part replaced by a resistor of the same designator on the same pin positions. */
@@ -207,9 +248,9 @@ public final class FaultInjector {
         for (int i = 0; i < bridges.size(); i++) {
             Bridge br = bridges.get(i);
             int laneX = maxX + 4 + 8 * i;
-            int ya = route(taken, c, stage, br.netA(), laneX, minY - 4 - 4 * i, added)
+            int ya = route(taken, c, stage, br.netA(), laneX, minY - 4 - 4 * i, rowY + 4 + 4 * i, added)
                     .orElseThrow(() -> new IllegalStateException("no free route from net " + br.netA()));
-            int yb = route(taken, c, stage, br.netB(), laneX + 4, minY - 6 - 4 * i, added)
+            int yb = route(taken, c, stage, br.netB(), laneX + 4, minY - 6 - 4 * i, rowY + 6 + 4 * i, added)
                     .orElseThrow(() -> new IllegalStateException("no free route from net " + br.netB()));
             verticals.add(new Wire(new GridPoint(laneX, ya), new GridPoint(laneX, rowY)));
             verticals.add(new Wire(new GridPoint(laneX + 4, yb), new GridPoint(laneX + 4, rowY)));
@@ -242,13 +283,13 @@ public final class FaultInjector {
 
     /**
      * Routes from a point of {@code net} to the lane column {@code laneX}: straight right along the
-     * point's row, or else up to a row of its own above the drawing ({@code topY}) and right along
-     * it. A route must not pass through a pin or wire end of another net (an end there would join
+     * point's row, or else up to a row of its own above the drawing ({@code topY}), or down to one
+     * below it ({@code bottomY}), and right along that row. A route must not pass through a pin or wire end of another net (an end there would join
      * it). Adds the wires, marks their ends taken, and returns the row at which the route meets the
      * lane. Empty if no point of the net has a clear route.
      */
     private static Optional<Integer> route(Map<GridPoint, String> taken, Connectivity c, Stage stage, String net,
-                                           int laneX, int topY, List<Wire> added) {
+                                           int laneX, int topY, int bottomY, List<Wire> added) {
         List<GridPoint> candidates = new ArrayList<>();
         for (PinRef pin : c.pinsOn(net)) {
             candidates.add(stage.require(pin.ref()).pinPoint(pin.pin()));
@@ -275,15 +316,17 @@ public final class FaultInjector {
                 return Optional.of(p.gridY());
             }
         }
-        for (GridPoint p : candidates) {
-            GridPoint corner = new GridPoint(p.gridX(), topY);
-            GridPoint end = new GridPoint(laneX, topY);
-            if (clear(taken, net, p, corner) && clear(taken, net, corner, end)) {
-                added.add(new Wire(p, corner));
-                added.add(new Wire(corner, end));
-                taken.put(corner, net);
-                taken.put(end, net);
-                return Optional.of(topY);
+        for (int y : new int[] {topY, bottomY}) {
+            for (GridPoint p : candidates) {
+                GridPoint corner = new GridPoint(p.gridX(), y);
+                GridPoint end = new GridPoint(laneX, y);
+                if (clear(taken, net, p, corner) && clear(taken, net, corner, end)) {
+                    added.add(new Wire(p, corner));
+                    added.add(new Wire(corner, end));
+                    taken.put(corner, net);
+                    taken.put(end, net);
+                    return Optional.of(y);
+                }
             }
         }
         return Optional.empty();

@@ -18,7 +18,10 @@ import org.armature.model.PartKind;
  * are not taken from those tables, and users may set their own ({@link Priors}).
  */
 public enum FaultKind {
-    /** Resistor or load open: 1 TΩ in place of its value. */
+    /**
+     * Open: a resistor or load 1 TΩ in place of its value; a diode a 1 TΩ resistor; a MOSFET channel
+     * or Darlington output that carries no current; a ground symbol whose connection has opened.
+     */
     OPEN("open", 1.0),
     /** Resistor, load, diode or capacitor shorted: 0.1 Ω. */
     SHORT("short", 1.0),
@@ -101,7 +104,7 @@ public enum FaultKind {
             case RELAY -> List.of(COIL_OPEN, SHORTED_TURNS, WELDED, STUCK_OPEN);
             case DRIVE_PIN -> List.of(STUCK_LOW, STUCK_HIGH, WEAK);
             case SUPPLY -> List.of(MISSING, SAG);
-            case GROUND -> List.of();
+            case GROUND -> List.of(OPEN);
         };
     }
 }

@@ -207,6 +207,20 @@ class FaultInjectorTest {
         assertEquals(9, v(sag, solve(sag, true), "V1", "p"), 1e-9);
     }
 
+    @Test
+    void openGroundOfTheEmitterStopsTheCoilCurrent() {
+        // the ground symbol on Q1's emitter (the one whose net holds Q1.e)
+        String ref = NPN.parts().stream().filter(p -> p.kind() == org.armature.model.PartKind.GROUND)
+                .filter(p -> Connectivity.of(NPN).pinsOn(Connectivity.of(NPN).net("Q1", "e")).contains(new PinRef(p.ref(), "g")))
+                .findFirst().orElseThrow().ref();
+        Stage s = fault(NPN, ref, FaultKind.OPEN);
+        OperatingPoint op = solve(s, true);
+        // derived: the coil current's only return is 1 TΩ (12 pA) and the collector junction's reverse
+        // leakage (nanoamps): far below the 22.5 mA pick-up, the relay stays released
+        assertTrue(Math.abs(op.quantity("K1", Readings.COIL_CURRENT)) < 1e-6);
+        assertFalse(operated(op));
+    }
+
     @ParameterizedTest
     @EnumSource(StageTemplate.class)
     void bridgesKeepEveryNetAndJoinOnlyTheirTwo(StageTemplate t) {
