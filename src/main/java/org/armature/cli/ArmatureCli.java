@@ -43,7 +43,9 @@ public final class ArmatureCli {
             SimulateCommand::new,
             CheckCommand::new,
             SizeCommand::new,
-            ExportCommand::new);
+            ExportCommand::new,
+            FaultsCommand::new,
+            DiagnoseCommand::new);
 
     private ArmatureCli() {
     }

@@ -85,6 +85,11 @@ final class SimulateCommand implements Callable<Integer> {
             description = "Which stage of the file: its number from 1, or its name (default 1).")
     String stageSelector;
 
+    @Option(names = "--fault", paramLabel = "PART:KIND",
+            description = "Inject a fault before solving (repeatable), for example Q1:ce-short or D1:reversed; "
+                    + "'faults FILE' lists every fault of the stage.")
+    java.util.List<String> faults;
+
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
     @Override
@@ -95,6 +100,7 @@ final class SimulateCommand implements Callable<Integer> {
         StageDocument doc = StageFiles.open(file);
         Stage stage = StageSelection.select(doc, stageSelector, file, spec.commandLine());
         StageSelection.requireValid(stage, "simulated");
+        stage = FaultOptions.apply(stage, faults);
         double window = duration == null ? TransientOptions.DEFAULT_DURATION_SECONDS : duration;
         double at = TransientOptions.DEFAULT_EDGE_SECONDS;
         if (!(window > at)) {

@@ -72,6 +72,11 @@ final class SolveCommand implements Callable<Integer> {
             description = "Which stage of the file: its number from 1, or its name (default 1).")
     String stageSelector;
 
+    @Option(names = "--fault", paramLabel = "PART:KIND",
+            description = "Inject a fault before solving (repeatable), for example Q1:ce-short or D1:reversed; "
+                    + "'faults FILE' lists every fault of the stage.")
+    java.util.List<String> faults;
+
     @Option(names = "--pin-state", paramLabel = "STATE", converter = Choices.Pin.class,
             description = "Drive pin state to solve: high or low (default: as stored in the file).")
     Choices.PinState pinState;
@@ -87,6 +92,7 @@ final class SolveCommand implements Callable<Integer> {
         StageDocument doc = StageFiles.open(file);
         Stage stage = StageSelection.select(doc, stageSelector, file, spec.commandLine());
         StageSelection.requireValid(stage, "solved");
+        stage = FaultOptions.apply(stage, faults);
         SolveOptions options = SolveOptions.DEFAULT;
         if (pinState != null) {
             options = options.withPinHigh(pinState.isHigh());
