@@ -59,6 +59,9 @@ public final class EditorViewModel {
     private final Evaluations evaluations;
     private final List<Editor> editors = new ArrayList<>();
     private String title = "";
+    /** The opened document's line-up, by the editors of its stages (so tab moves keep it), and its context. */
+    private List<Editor> lineUpEditors = List.of();
+    private Optional<org.armature.model.LineUpContext> lineUpContext = Optional.empty();
     private boolean stagesChanged;
     private Editor editor;
 
@@ -290,7 +293,11 @@ public final class EditorViewModel {
 
     /** The document as it would be saved now: every stage as it stands, in tab order. */
     public StageDocument document() {
-        return new StageDocument(title, editors.stream().map(Editor::stage).toList());
+        List<Integer> indices = lineUpEditors.stream().map(editors::indexOf).filter(i -> i >= 0).toList();
+        Optional<org.armature.model.LineUp> lineUp = lineUpContext.isPresent()
+                && indices.size() >= org.armature.model.LineUp.MIN_STAGES
+                ? Optional.of(new org.armature.model.LineUp(indices, lineUpContext.get())) : Optional.empty();
+        return new StageDocument(title, editors.stream().map(Editor::stage).toList(), lineUp);
     }
 
     // ------------------------------------------------------------------ stages of the document
@@ -623,6 +630,8 @@ public final class EditorViewModel {
         doc.stages().forEach(s -> editors.add(new Editor(s)));
         editor = editors.get(0);
         title = doc.title();
+        lineUpEditors = doc.lineUp().map(l -> l.stageIndices().stream().map(editors::get).toList()).orElse(List.of());
+        lineUpContext = doc.lineUp().map(org.armature.model.LineUp::context);
         stagesChanged = false;
         preview.set(Optional.empty());
         publishDocument();
