@@ -42,7 +42,8 @@ public final class ArmatureCli {
             SolveCommand::new,
             SimulateCommand::new,
             CheckCommand::new,
-            SizeCommand::new);
+            SizeCommand::new,
+            CompareCommand::new);
 
     private ArmatureCli() {
     }
