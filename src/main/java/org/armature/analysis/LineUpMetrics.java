@@ -228,6 +228,40 @@ public final class LineUpMetrics {
         return out;
     }
 
+    /**
+     * The table as tab-separated text for a spreadsheet: a header row (figure, unit, one column per
+     * stage), one row per figure and per check, best values followed by {@code " *"}; numbers in SI
+     * units with a dot, empty where not available; lines end in {@code \n}.
+     *
+     * @param names the column headings, one per column
+     */
+    public static String tabSeparated(List<String> names, List<Column> columns) {
+        StringBuilder b = new StringBuilder("figure\tunit");
+        for (String n : names) {
+            b.append('\t').append(n.replace('\t', ' ').replace('\n', ' '));
+        }
+        b.append('\n');
+        for (Metric m : METRICS) {
+            List<Integer> best = best(m, columns);
+            b.append(m.label()).append('\t').append(m.unitSymbol());
+            for (int i = 0; i < columns.size(); i++) {
+                double v = columns.get(i).value(m.key());
+                b.append('\t').append(Double.isFinite(v) ? Double.toString(v) : "").append(best.contains(i) ? " *" : "");
+            }
+            b.append('\n');
+        }
+        for (String id : checkIds(columns)) {
+            List<Integer> best = bestCheck(id, columns);
+            b.append("check ").append(id).append('\t');
+            for (int i = 0; i < columns.size(); i++) {
+                b.append('\t').append(columns.get(i).report().check(id).map(r -> r.status().word()).orElse(""))
+                        .append(best.contains(i) ? " *" : "");
+            }
+            b.append('\n');
+        }
+        return b.toString();
+    }
+
     /** The check ids any column reports, in the order of {@link StageChecks#IDS}, then others. */
     public static List<String> checkIds(List<Column> columns) {
         List<String> ids = new ArrayList<>();

@@ -59,6 +59,9 @@ public final class EditorViewModel {
     private final Evaluations evaluations;
     private final List<Editor> editors = new ArrayList<>();
     private String title = "";
+    /** Where line-up figures are computed, and where they are published. */
+    private final Executor solveExecutor;
+    private final Executor fxExecutor;
     /** The opened document's line-up, by the editors of its stages (so tab moves keep it), and its context. */
     private List<Editor> lineUpEditors = List.of();
     private Optional<org.armature.model.LineUpContext> lineUpContext = Optional.empty();
@@ -108,6 +111,8 @@ public final class EditorViewModel {
     public EditorViewModel(Stage initial, DocumentStore store, ReadoutSource readouts, Executor solveExecutor,
                            Executor fxExecutor, Analyses analyses) {
         this.store = store;
+        this.solveExecutor = solveExecutor;
+        this.fxExecutor = fxExecutor;
         this.evaluations = new Evaluations(readouts, analyses, solveExecutor, fxExecutor, evaluation::set);
         load(StageDocument.of(initial));
     }
@@ -289,6 +294,37 @@ public final class EditorViewModel {
             message.set(e.getMessage());
             return false;
         }
+    }
+
+    /**
+     * The stages a line-up view shows, as they are judged: the document's line-up with its shared
+     * context applied; without one, the first {@value org.armature.model.LineUp#MAX_STAGES} stages
+     * under the context the first of them sets. Empty when the document has a single stage.
+     */
+    public List<org.armature.model.LineUpContext.Applied> lineUpStages() {
+        StageDocument doc = document();
+        if (doc.lineUp().isPresent()) {
+            return doc.lineUp().get().applied(doc);
+        }
+        if (doc.stages().size() < org.armature.model.LineUp.MIN_STAGES) {
+            return List.of();
+        }
+        List<Stage> stages = doc.stages().subList(0, Math.min(doc.stages().size(), org.armature.model.LineUp.MAX_STAGES));
+        org.armature.model.LineUpContext context = org.armature.model.LineUpContext.of(stages.get(0));
+        return stages.stream().map(context::applyTo).toList();
+    }
+
+    /**
+     * Computes the line-up's figures on the solve executor ({@link org.armature.analysis.LineUpMetrics})
+     * and hands them to {@code done} on the FX executor.
+     */
+    public void evaluateLineUp(List<org.armature.model.LineUpContext.Applied> stages,
+                               java.util.function.Consumer<List<org.armature.analysis.LineUpMetrics.Column>> done) {
+        solveExecutor.execute(() -> {
+            List<org.armature.analysis.LineUpMetrics.Column> columns =
+                    stages.stream().map(org.armature.analysis.LineUpMetrics::evaluate).toList();
+            fxExecutor.execute(() -> done.accept(columns));
+        });
     }
 
     /** The document as it would be saved now: every stage as it stands, in tab order. */

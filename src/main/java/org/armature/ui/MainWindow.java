@@ -293,7 +293,9 @@ public final class MainWindow {
         MenuItem size = item("Size base network…", null, e -> sizeBaseNetwork());
         size.setId("menu-size-base-network");
         MenuItem showEdges = item("Show edges", "Shortcut+E", e -> edgesDrawer.setExpanded(true));
-        tools.getItems().addAll(size, showEdges);
+        MenuItem lineUp = item("Line-up…", null, e -> showLineUp());
+        lineUp.setId("menu-line-up");
+        tools.getItems().addAll(size, showEdges, lineUp);
 
         Menu stages = new Menu("Stage");
         stages.getItems().setAll(stageTabs.menuItems());
@@ -438,6 +440,14 @@ public final class MainWindow {
 
     private double supplyVolts() {
         return vm.coilSupply().map(p -> p.value("volts")).orElse(12.0);
+    }
+
+    private void showLineUp() {
+        var d = LineUpView.dialog(vm, Palette.LIGHT);
+        if (window() != null) {
+            d.initOwner(window());
+        }
+        d.show();
     }
 
     private void sizeBaseNetwork() {

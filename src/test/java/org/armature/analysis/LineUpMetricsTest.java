@@ -58,6 +58,14 @@ class LineUpMetricsTest {
         assertEquals(List.of(1), LineUpMetrics.best(metric("releaseTime"), both));
         assertEquals(List.of(1), LineUpMetrics.best(metric("armatureSpeedAtBreak"), both));
         assertEquals(List.of(0), LineUpMetrics.best(metric("partsCount"), both), "the zener is one part more");
+
+        String tsv = LineUpMetrics.tabSeparated(List.of("diode", "diode + zener"), both);
+        List<String> lines = tsv.lines().toList();
+        assertEquals("figure\tunit\tdiode\tdiode + zener", lines.get(0));
+        String peak = lines.stream().filter(l -> l.startsWith("peak switch voltage\t")).findFirst().orElseThrow();
+        assertEquals("peak switch voltage\tV\t" + d.value("peakSwitchVoltage") + " *\t" + z.value("peakSwitchVoltage"),
+                peak);
+        assertTrue(lines.stream().anyMatch(l -> l.startsWith("check relay.operates\t\t")), tsv);
     }
 
     @Test

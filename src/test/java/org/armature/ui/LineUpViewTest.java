@@ -1,0 +1,92 @@
+package org.armature.ui;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.atomic.AtomicReference;
+import javafx.scene.control.Button;
+import javafx.scene.control.ButtonType;
+import javafx.scene.control.Dialog;
+import javafx.scene.control.Label;
+import javafx.scene.input.Clipboard;
+import javafx.scene.layout.GridPane;
+import org.armature.analysis.LineUpMetrics;
+import org.armature.io.StageFiles;
+import org.armature.model.LineUp;
+import org.armature.model.LineUpContext;
+import org.armature.model.StageDocument;
+import org.armature.model.Templates;
+import org.armature.render.Palette;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+
+/** The line-up view of an example file: the table, best values marked, copied as tab-separated text. */
+@ExtendWith(ApplicationExtension.class)
+class LineUpViewTest {
+
+    private static final Path GREENHOUSE = Path.of("examples", "greenhouse-valves.stage.json");
+
+    @TempDir
+    Path dir;
+
+    private EditorViewModel vm;
+
+    @Start
+    void start(javafx.stage.Stage stage) {
+        vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, ReadoutSource.NONE, Runnable::run,
+                Runnable::run);
+        stage.setScene(new MainWindow(vm, new RecentFiles()).scene(1200, 800));
+        stage.show();
+    }
+
+    @Test
+    @DisplayName("a saved line-up opens in the window and saves back unchanged")
+    void lineUpSurvivesTheWindow(FxRobot robot) {
+        StageDocument doc = StageFiles.open(GREENHOUSE);
+        StageDocument withLineUp = doc.withLineUp(Optional.of(new LineUp(List.of(2, 0),
+                LineUpContext.of(doc.stages().get(0)))));
+        Path file = dir.resolve("valves.stage.json");
+        StageFiles.save(withLineUp, file);
+        robot.interact(() -> assertTrue(vm.open(file)));
+        assertEquals(withLineUp, vm.document());
+        assertEquals(2, vm.lineUpStages().size());
+        assertEquals(doc.stages().get(2).name(), vm.lineUpStages().get(0).stage().name());
+    }
+
+    @Test
+    @DisplayName("open the example's stages side by side, read the table, copy it as tab-separated text")
+    void tableAndCopy(FxRobot robot) {
+        robot.interact(() -> assertTrue(vm.open(GREENHOUSE)));
+        AtomicReference<Dialog<ButtonType>> dialog = new AtomicReference<>();
+        robot.interact(() -> {
+            dialog.set(LineUpView.dialog(vm, Palette.LIGHT));
+            dialog.get().show();
+        });
+        GridPane table = robot.lookup("#line-up-table").queryAs(GridPane.class);
+        List<String> texts = table.getChildren().stream().map(n -> ((Label) n).getText()).toList();
+        assertTrue(texts.contains("peak switch voltage"), texts.toString());
+        assertTrue(texts.contains("armature speed at contact break"), texts.toString());
+        assertTrue(texts.stream().anyMatch(t -> t.endsWith(" ★")), "best values are marked");
+        Button copy = robot.lookup("#line-up-copy").queryButton();
+        assertFalse(copy.isDisabled());
+        AtomicReference<String> copied = new AtomicReference<>();
+        robot.interact(() -> {
+            copy.fire();
+            copied.set(Clipboard.getSystemClipboard().getString());
+        });
+        String header = copied.get().lines().findFirst().orElseThrow();
+        assertEquals("figure\tunit\tZone valve, NPN channel\tZone valve, N-MOSFET channel\tZone valve, Darlington channel",
+                header);
+        assertEquals(LineUpMetrics.METRICS.size() + 1, copied.get().lines().filter(l -> !l.startsWith("check ")).count());
+        robot.interact(() -> dialog.get().close());
+    }
+}
