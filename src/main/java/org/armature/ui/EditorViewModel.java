@@ -355,6 +355,44 @@ public final class EditorViewModel {
         insertStage(st.withName(freeName(st.name())));
     }
 
+    /**
+     * What-if in one action: adds a stage of another topology (a template with this suppressor and
+     * drive) on the active stage's relay, supply, pin and contact side, puts both into the line-up
+     * (the active stage's line-up when it is in one with room, else a new line-up of the two) and
+     * opens the new stage. The new stage is stored with the shared settings in its parts.
+     */
+    public void whatIfTopology(StageTemplate t, Suppressor s, HighSideDrive d) {
+        Stage st = Templates.build(t, s, d);
+        whatIf(context -> context.applyTo(st).stage().withName(freeName(st.name())));
+    }
+
+    /**
+     * What-if in one action: adds a copy of the active stage with one value changed (another
+     * resistor value, say), named after the change, and puts both into the line-up as
+     * {@link #whatIfTopology} does.
+     */
+    public void whatIfValue(String ref, String key, double value) {
+        Stage base = editor.stage();
+        Stage changed = base.updatePart(ref, p -> p.with(key, value));
+        String label = base.name() + " (" + ref + " " + org.armature.render.Notation.format(value,
+                base.part(ref).flatMap(p -> p.kind().param(key)).map(sp -> sp.unit().symbol()).orElse("")) + ")";
+        whatIf(context -> changed.withName(freeName(label)));
+    }
+
+    private void whatIf(java.util.function.Function<org.armature.model.LineUpContext, Stage> make) {
+        Editor from = editor;
+        boolean inLineUp = lineUpContext.isPresent() && lineUpEditors.contains(from)
+                && lineUpEditors.size() < org.armature.model.LineUp.MAX_STAGES;
+        org.armature.model.LineUpContext context = inLineUp ? lineUpContext.get()
+                : org.armature.model.LineUpContext.of(from.stage());
+        insertStage(make.apply(context));
+        List<Editor> members = new ArrayList<>(inLineUp ? lineUpEditors : List.of(from));
+        members.add(editor);
+        lineUpEditors = List.copyOf(members);
+        lineUpContext = Optional.of(context);
+        message.set("Line-up: " + String.join(", ", members.stream().map(e -> e.stage().name()).toList()));
+    }
+
     /** Adds a copy of the active stage after it ("… (copy)") and opens it. */
     public void duplicateStage() {
         insertStage(editor.stage().withName(freeName(editor.stage().name() + " (copy)")));

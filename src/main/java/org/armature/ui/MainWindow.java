@@ -295,7 +295,21 @@ public final class MainWindow {
         MenuItem showEdges = item("Show edges", "Shortcut+E", e -> edgesDrawer.setExpanded(true));
         MenuItem lineUp = item("Line-up…", null, e -> showLineUp());
         lineUp.setId("menu-line-up");
-        tools.getItems().addAll(size, showEdges, lineUp);
+        Menu whatIf = new Menu("Line up against…");
+        for (StageTemplate t : StageTemplate.values()) {
+            Menu m = new Menu(t.title());
+            for (Suppressor s : Suppressor.values()) {
+                MenuItem it = new MenuItem(suppressorTitle(s));
+                it.setId("what-if-" + t.id() + "-" + s.id());
+                it.setOnAction(e -> {
+                    vm.whatIfTopology(t, s, HighSideDrive.LEVEL_SHIFT);
+                    showLineUp();
+                });
+                m.getItems().add(it);
+            }
+            whatIf.getItems().add(m);
+        }
+        tools.getItems().addAll(size, showEdges, lineUp, whatIf);
 
         Menu stages = new Menu("Stage");
         stages.getItems().setAll(stageTabs.menuItems());

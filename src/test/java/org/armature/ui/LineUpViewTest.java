@@ -63,6 +63,28 @@ class LineUpViewTest {
     }
 
     @Test
+    @DisplayName("what-if in one action: another topology on the same relay, then another resistor value, in one line-up")
+    void whatIf(FxRobot robot) {
+        robot.interact(() -> vm.whatIfTopology(org.armature.model.StageTemplate.LOW_SIDE_NMOS,
+                org.armature.model.Suppressor.DIODE, org.armature.model.HighSideDrive.LEVEL_SHIFT));
+        StageDocument doc = vm.document();
+        assertEquals(2, doc.stages().size());
+        assertEquals(List.of(0, 1), doc.lineUp().orElseThrow().stageIndices());
+        // the new stage was built on the first one's relay, supply and pin: nothing differs
+        assertEquals(List.of(), vm.lineUpStages().get(1).differences());
+        robot.interact(() -> vm.selectStage(0));
+        String resistor = vm.stage().parts().stream().filter(p -> p.kind() == org.armature.model.PartKind.RESISTOR)
+                .findFirst().orElseThrow().ref();
+        robot.interact(() -> vm.whatIfValue(resistor, "resistanceOhms", 4700));
+        StageDocument three = vm.document();
+        assertEquals(3, three.stages().size());
+        assertEquals(3, three.lineUp().orElseThrow().stageIndices().size(), "added to the same line-up");
+        assertEquals(4700, vm.stage().require(resistor).value("resistanceOhms"));
+        assertEquals(three.stages().get(0).withName(vm.stage().name()).updatePart(resistor,
+                p -> p.with("resistanceOhms", 4700)), vm.stage(), "only the one value differs");
+    }
+
+    @Test
     @DisplayName("open the example's stages side by side, read the table, copy it as tab-separated text")
     void tableAndCopy(FxRobot robot) {
         robot.interact(() -> assertTrue(vm.open(GREENHOUSE)));
