@@ -65,6 +65,8 @@ public final class EditorViewModel {
     /** The opened document's line-up, by the editors of its stages (so tab moves keep it), and its context. */
     private List<Editor> lineUpEditors = List.of();
     private Optional<org.armature.model.LineUpContext> lineUpContext = Optional.empty();
+    /** Earlier shared contexts, for undoing a shared value (a change of one value applies to every stage). */
+    private final java.util.ArrayDeque<org.armature.model.LineUpContext> sharedUndo = new java.util.ArrayDeque<>();
     private boolean stagesChanged;
     private Editor editor;
 
@@ -377,6 +379,58 @@ public final class EditorViewModel {
         String label = base.name() + " (" + ref + " " + org.armature.render.Notation.format(value,
                 base.part(ref).flatMap(p -> p.kind().param(key)).map(sp -> sp.unit().symbol()).orElse("")) + ")";
         whatIf(context -> changed.withName(freeName(label)));
+    }
+
+    /**
+     * Changes one shared value of the document's line-up (for example the coil supply's volts): every
+     * stage of the line-up is judged with it from now on; the stored stages stay as drawn. Undone by
+     * {@link #undoSharedValue()}.
+     *
+     * @param role {@code coilSupply}, {@code relay}, {@code drivePin}, {@code contactSupply} or {@code load}
+     * @return false (with a message) when there is no line-up or it does not share that role
+     */
+    public boolean setSharedValue(String role, String key, double value) {
+        if (lineUpContext.isEmpty()) {
+            message.set("The document has no line-up; line stages up first (Tools ▸ Line up against…).");
+            return false;
+        }
+        org.armature.model.LineUpContext c = lineUpContext.get();
+        Optional<org.armature.model.SharedPart> part = switch (role) {
+            case "relay" -> c.relay();
+            case "coilSupply" -> c.coilSupply();
+            case "drivePin" -> c.drivePin();
+            case "contactSupply" -> c.contactSupply();
+            case "load" -> c.load();
+            default -> Optional.empty();
+        };
+        if (part.isEmpty()) {
+            message.set("The line-up shares no " + role + ".");
+            return false;
+        }
+        org.armature.model.SharedPart changed = part.get().with(key, value);
+        org.armature.model.LineUpContext next = new org.armature.model.LineUpContext(
+                role.equals("relay") ? Optional.of(changed) : c.relay(),
+                role.equals("coilSupply") ? Optional.of(changed) : c.coilSupply(),
+                role.equals("drivePin") ? Optional.of(changed) : c.drivePin(),
+                role.equals("contactSupply") ? Optional.of(changed) : c.contactSupply(),
+                role.equals("load") ? Optional.of(changed) : c.load(),
+                c.ambientCelsius(), c.ambientMinCelsius(), c.ambientMaxCelsius());
+        sharedUndo.push(c);
+        lineUpContext = Optional.of(next);
+        stagesChanged = true;
+        publishDocument();
+        return true;
+    }
+
+    /** Undoes the last {@link #setSharedValue}; false when there is none. */
+    public boolean undoSharedValue() {
+        if (sharedUndo.isEmpty()) {
+            return false;
+        }
+        lineUpContext = Optional.of(sharedUndo.pop());
+        stagesChanged = true;
+        publishDocument();
+        return true;
     }
 
     private void whatIf(java.util.function.Function<org.armature.model.LineUpContext, Stage> make) {
@@ -706,6 +760,7 @@ public final class EditorViewModel {
         title = doc.title();
         lineUpEditors = doc.lineUp().map(l -> l.stageIndices().stream().map(editors::get).toList()).orElse(List.of());
         lineUpContext = doc.lineUp().map(org.armature.model.LineUp::context);
+        sharedUndo.clear();
         stagesChanged = false;
         preview.set(Optional.empty());
         publishDocument();

@@ -7,6 +7,7 @@ import javafx.scene.control.ButtonType;
 import javafx.scene.control.Dialog;
 import javafx.scene.control.Label;
 import javafx.scene.control.ScrollPane;
+import javafx.scene.control.TextField;
 import javafx.scene.image.ImageView;
 import javafx.scene.input.Clipboard;
 import javafx.scene.input.ClipboardContent;
@@ -20,6 +21,8 @@ import org.armature.model.LineUpContext;
 import org.armature.render.Annotations;
 import org.armature.render.Notation;
 import org.armature.render.Palette;
+import org.armature.units.EngineeringNotation;
+import org.armature.units.Unit;
 
 /**
  * Tools ▸ Line-up…: the stages of the document's line-up side by side on their shared relay, supply
@@ -76,17 +79,52 @@ public final class LineUpView {
         Button copy = new Button("Copy table");
         copy.setId("line-up-copy");
         copy.setDisable(true);
-        content.getChildren().addAll(schematics, pending, table, copy);
-        vm.evaluateLineUp(stages, columns -> {
-            fill(table, columns);
-            content.getChildren().remove(pending);
-            copy.setDisable(false);
-            copy.setOnAction(e -> {
-                ClipboardContent c = new ClipboardContent();
-                c.putString(LineUpMetrics.tabSeparated(names, columns));
-                Clipboard.getSystemClipboard().setContent(c);
+        org.armature.model.Stage first = stages.get(0).stage();
+        TextField supply = new TextField(org.armature.model.StageRecognition.of(first).roles()
+                .flatMap(r -> r.coilSupplyRef()).flatMap(first::part)
+                .map(p -> Notation.format(p.value("volts"), "V")).orElse(""));
+        supply.setId("line-up-supply");
+        supply.setPrefColumnCount(8);
+        Button applySupply = new Button("Apply to every stage");
+        applySupply.setId("line-up-apply-supply");
+        Button undo = new Button("Undo");
+        undo.setId("line-up-undo");
+        Label note = new Label();
+        note.setId("line-up-note");
+        HBox shared = new HBox(8, new Label("Shared coil supply"), supply, applySupply, undo, note);
+        content.getChildren().addAll(schematics, shared, pending, table, copy);
+        Runnable refresh = () -> {
+            List<LineUpContext.Applied> now = vm.lineUpStages();
+            vm.evaluateLineUp(now, columns -> {
+                fill(table, columns);
+                content.getChildren().remove(pending);
+                copy.setDisable(false);
+                copy.setOnAction(e -> {
+                    ClipboardContent c = new ClipboardContent();
+                    c.putString(LineUpMetrics.tabSeparated(names, columns));
+                    Clipboard.getSystemClipboard().setContent(c);
+                });
             });
+        };
+        applySupply.setOnAction(e -> {
+            try {
+                double volts = EngineeringNotation.parse(supply.getText(), Unit.VOLT);
+                if (vm.setSharedValue("coilSupply", "volts", volts)) {
+                    note.setText("");
+                    refresh.run();
+                } else {
+                    note.setText(vm.messageProperty().get());
+                }
+            } catch (IllegalArgumentException ex) {
+                note.setText(ex.getMessage());
+            }
         });
+        undo.setOnAction(e -> {
+            if (vm.undoSharedValue()) {
+                refresh.run();
+            }
+        });
+        refresh.run();
         ScrollPane scroll = new ScrollPane(content);
         scroll.setPrefViewportWidth(Math.min(1500, stages.size() * (SCHEMATIC_WIDTH + 12) + 40));
         scroll.setPrefViewportHeight(760);
@@ -97,6 +135,7 @@ public final class LineUpView {
 
     /** Fills the table: one row per figure and per check, best values bold with a star. */
     static void fill(GridPane table, List<Column> columns) {
+        table.getChildren().clear();
         int row = 0;
         for (Metric m : LineUpMetrics.METRICS) {
             List<Integer> best = LineUpMetrics.best(m, columns);

@@ -111,4 +111,42 @@ class LineUpViewTest {
         assertEquals(LineUpMetrics.METRICS.size() + 1, copied.get().lines().filter(l -> !l.startsWith("check ")).count());
         robot.interact(() -> dialog.get().close());
     }
+
+    @Test
+    @DisplayName("changing the shared supply in the view re-solves every stage; undo restores all of them")
+    void sharedSupplyInTheView(FxRobot robot) {
+        StageDocument doc = StageFiles.open(GREENHOUSE);
+        Path file = dir.resolve("lined-up.stage.json");
+        StageFiles.save(doc.withLineUp(Optional.of(new LineUp(List.of(0, 1), LineUpContext.of(doc.stages().get(0))))),
+                file);
+        robot.interact(() -> assertTrue(vm.open(file)));
+        AtomicReference<Dialog<ButtonType>> dialog = new AtomicReference<>();
+        robot.interact(() -> {
+            dialog.set(LineUpView.dialog(vm, Palette.LIGHT));
+            dialog.get().show();
+        });
+        List<String> before = row(robot, "coil current (nominal)");
+        javafx.scene.control.TextField supply = robot.lookup("#line-up-supply").queryAs(javafx.scene.control.TextField.class);
+        robot.interact(() -> {
+            supply.setText("26.4");
+            robot.lookup("#line-up-apply-supply").queryButton().fire();
+        });
+        List<String> after = row(robot, "coil current (nominal)");
+        assertEquals(before.size(), after.size());
+        for (int i = 0; i < before.size(); i++) {
+            assertFalse(before.get(i).equals(after.get(i)), "stage " + i + " re-solved: " + before + " " + after);
+        }
+        robot.interact(() -> robot.lookup("#line-up-undo").queryButton().fire());
+        assertEquals(before, row(robot, "coil current (nominal)"), "undo restores every stage");
+        robot.interact(() -> dialog.get().close());
+    }
+
+    /** The cells of a table row, by its label. */
+    private static List<String> row(FxRobot robot, String label) {
+        GridPane table = robot.lookup("#line-up-table").queryAs(GridPane.class);
+        int r = table.getChildren().stream().filter(n -> ((Label) n).getText().equals(label))
+                .map(GridPane::getRowIndex).findFirst().orElseThrow();
+        return table.getChildren().stream().filter(n -> GridPane.getRowIndex(n) == r && GridPane.getColumnIndex(n) > 0)
+                .map(n -> ((Label) n).getText()).toList();
+    }
 }
