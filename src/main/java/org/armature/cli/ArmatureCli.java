@@ -45,7 +45,8 @@ public final class ArmatureCli {
             SizeCommand::new,
             ExportCommand::new,
             FaultsCommand::new,
-            DiagnoseCommand::new);
+            DiagnoseCommand::new,
+            CompareCommand::new);
 
     private ArmatureCli() {
     }

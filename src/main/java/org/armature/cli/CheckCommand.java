@@ -184,18 +184,7 @@ final class CheckCommand implements Callable<Integer> {
         root.put("stage", stage.name());
         ArrayNode checks = root.putArray("checks");
         for (CheckResult c : report.checks()) {
-            ObjectNode n = checks.addObject();
-            n.put("id", c.id());
-            n.put("status", c.status().word());
-            number(n, "value", c.value());
-            number(n, "limit", c.limit());
-            n.put("unit", c.unit().symbol());
-            ObjectNode corner = n.putObject("corner");
-            c.corner().forEach((k, v) -> number(corner, k, v));
-            n.put("explanation", c.explanation());
-            n.put("method", c.method());
-            ArrayNode refs = n.putArray("refs");
-            c.refs().forEach(refs::add);
+            putCheck(checks, c);
         }
         if (report.yield().isPresent()) {
             YieldResult y = report.yield().get();
@@ -230,6 +219,22 @@ final class CheckCommand implements Callable<Integer> {
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("a tree of plain values always serialises", e);
         }
+    }
+
+    /** One check as the JSON object {@code check --json} prints (also used by {@code compare}). */
+    static void putCheck(ArrayNode checks, CheckResult c) {
+        ObjectNode n = checks.addObject();
+        n.put("id", c.id());
+        n.put("status", c.status().word());
+        number(n, "value", c.value());
+        number(n, "limit", c.limit());
+        n.put("unit", c.unit().symbol());
+        ObjectNode corner = n.putObject("corner");
+        c.corner().forEach((k, v) -> number(corner, k, v));
+        n.put("explanation", c.explanation());
+        n.put("method", c.method());
+        ArrayNode refs = n.putArray("refs");
+        c.refs().forEach(refs::add);
     }
 
     private static void number(ObjectNode n, String key, double v) {

@@ -45,12 +45,14 @@ import picocli.CommandLine.Spec;
  * <pre>{@code
  * {"metrics": {"peakSwitchVoltage": V, "peakCoilReverseVoltage": V, "decayToDropOutCurrent": s,
  *              "decayToZero": s, "releaseTime": s, "operateTime": s, "suppressorEnergy": J,
- *              "switchEnergy": J, "switchBreakdown": true|false},
+ *              "switchEnergy": J, "switchBreakdown": true|false, "armatureSpeedAtBreak": m/s},
  *  "events": [{"time": s, "what": "..."}], "samples": N}
  * }</pre>
  *
  * A figure that did not occur within the window (no turn-off edge, contacts never opened) is
- * {@code null}. {@code --csv} writes one row per time point: time, node voltages, part currents,
+ * {@code null}. {@code armatureSpeedAtBreak} is the armature's speed when the normally-open contacts
+ * part after the turn-off edge ({@link TransientMetrics#armatureSpeedAtBreakMetresPerSecond()}).
+ * {@code --csv} writes one row per time point: time, node voltages, part currents,
  * coil current, armature position and contact state, with the unit of each column in its header.
  */
 @Command(name = "simulate", mixinStandardHelpOptions = true, sortOptions = false,
@@ -146,6 +148,7 @@ final class SimulateCommand implements Callable<Integer> {
         put(metrics, "suppressorEnergy", m.suppressorEnergyJoules());
         put(metrics, "switchEnergy", m.switchEnergyJoules());
         metrics.put("switchBreakdown", m.switchBreakdown());
+        put(metrics, "armatureSpeedAtBreak", m.armatureSpeedAtBreakMetresPerSecond());
         ArrayNode events = root.putArray("events");
         for (TransientEvent e : r.waveform().events()) {
             ObjectNode o = events.addObject();
@@ -181,6 +184,7 @@ final class SimulateCommand implements Callable<Integer> {
         line(b, "suppressor energy", m.suppressorEnergyJoules(), "J");
         line(b, "switch energy", m.switchEnergyJoules(), "J");
         b.append(String.format(Locale.ROOT, "%-28s %s%n", "switch breakdown", m.switchBreakdown() ? "yes" : "no"));
+        line(b, "armature speed at break", m.armatureSpeedAtBreakMetresPerSecond(), "m/s");
         for (TransientEvent e : r.waveform().events()) {
             String subject = e.subject() == null || e.subject().isBlank() ? "" : " " + e.subject();
             b.append(String.format(Locale.ROOT, "  %12.6f s  %s%s%n", e.timeSeconds(), e.what(), subject));
@@ -193,7 +197,9 @@ final class SimulateCommand implements Callable<Integer> {
     }
 
     private static void line(StringBuilder b, String label, double v, String unit) {
-        String value = Double.isFinite(v) ? org.armature.units.EngineeringNotation.format(v, unitOf(unit)) : "—";
+        String value = !Double.isFinite(v) ? "—" : unit.equals("m/s")
+                ? org.armature.units.EngineeringNotation.format(v, Unit.METRE) + "/s"
+                : org.armature.units.EngineeringNotation.format(v, unitOf(unit));
         b.append(String.format(Locale.ROOT, "%-28s %s%n", label, value));
     }
 

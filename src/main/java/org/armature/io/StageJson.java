@@ -34,10 +34,14 @@ public final class StageJson {
 
     /**
      * The newest format version this program reads and writes. Version 2 added a stage's
-     * {@code settings}; a document whose stages all keep the default settings is still written as
-     * {@link #VERSION_WITHOUT_SETTINGS}, so that older programs open it.
+     * {@code settings}, version 3 the document's {@code lineUp}; a document is written with the
+     * lowest version that holds it ({@link #VERSION_WITHOUT_SETTINGS} without settings and line-up,
+     * {@link #VERSION_WITH_SETTINGS} with settings but no line-up), so that older programs open it.
      */
-    public static final int VERSION = 2;
+    public static final int VERSION = 3;
+
+    /** The version written when a stage has settings but the document has no line-up. */
+    public static final int VERSION_WITH_SETTINGS = 2;
 
     /** The version written when no stage has settings of its own (the first format version). */
     public static final int VERSION_WITHOUT_SETTINGS = 1;

@@ -5,10 +5,14 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 import org.armature.model.Conditions;
 import org.armature.model.GridPoint;
+import org.armature.model.LineUp;
+import org.armature.model.LineUpContext;
+import org.armature.model.SharedPart;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
 import org.armature.model.Placement;
@@ -24,7 +28,16 @@ import org.armature.model.Wire;
  */
 final class StageReader {
 
-    private static final Set<String> TOP_FIELDS = Set.of("format", "version", "title", "stages");
+    private static final Set<String> TOP_FIELDS = Set.of("format", "version", "title", "stages", "lineUp");
+    private static final Set<String> LINE_UP_FIELDS = Set.of("stages", "context");
+    private static final Set<String> CONTEXT_FIELDS =
+            Set.of("ambient", "relay", "coilSupply", "drivePin", "contactSupply", "load");
+    private static final Set<String> AMBIENT_FIELDS = Set.of("ambientCelsius", "ambientMinCelsius", "ambientMaxCelsius");
+    private static final Set<String> SHARED_PART_FIELDS = Set.of("kind", "values", "options");
+    /** The kind each shared role must hold. */
+    private static final Map<String, PartKind> SHARED_ROLE_KINDS = Map.of("relay", PartKind.RELAY,
+            "coilSupply", PartKind.SUPPLY, "drivePin", PartKind.DRIVE_PIN, "contactSupply", PartKind.SUPPLY,
+            "load", PartKind.LOAD);
     private static final Set<String> STAGE_FIELDS =
             Set.of("name", "description", "conditions", "settings", "parts", "wires", "testPoints");
     private static final Set<String> SETTINGS_FIELDS =
@@ -60,8 +73,12 @@ final class StageReader {
             throw new StageFileException(StageFileException.UNKNOWN_FORMAT,
                     "This is not an Armature stage file: " + found + ".");
         }
-        readVersion(root.get("version"));
+        int version = readVersion(root.get("version"));
         checkFields(root, TOP_FIELDS, "The file");
+        if (root.has("lineUp") && version < StageJson.VERSION) {
+            throw new StageFileException(StageFileException.UNKNOWN_FIELD, "The file has a field \"lineUp\", which "
+                    + "stage files hold from version " + StageJson.VERSION + "; this one says version " + version + ".");
+        }
         String title = optionalText(root, "title", "title", "");
         JsonNode stagesNode = required(root, "stages", "The file");
         expectArray(stagesNode, "stages");
@@ -73,10 +90,116 @@ final class StageReader {
         for (int i = 0; i < stagesNode.size(); i++) {
             stages.add(readStage(stagesNode.get(i), "stages[" + i + "]"));
         }
-        return new StageDocument(title, stages);
+        Optional<LineUp> lineUp = root.has("lineUp")
+                ? Optional.of(readLineUp(root.get("lineUp"), "lineUp", stages.size()))
+                : Optional.empty();
+        return new StageDocument(title, stages, lineUp);
     }
 
-    private static void readVersion(JsonNode version) {
+    /** The document's line-up (format version 3). */
+    private static LineUp readLineUp(JsonNode node, String path, int stageCount) {
+        expectObject(node, path);
+        checkFields(node, LINE_UP_FIELDS, path);
+        JsonNode list = required(node, "stages", path);
+        expectArray(list, path + ".stages");
+        if (list.size() < LineUp.MIN_STAGES || list.size() > LineUp.MAX_STAGES) {
+            throw new StageFileException(StageFileException.INVALID_VALUE, path + ".stages holds " + list.size()
+                    + " stages; a line-up holds " + LineUp.MIN_STAGES + " to " + LineUp.MAX_STAGES + ".");
+        }
+        List<Integer> indices = new ArrayList<>();
+        for (int i = 0; i < list.size(); i++) {
+            JsonNode n = list.get(i);
+            String where = path + ".stages[" + i + "]";
+            if (!isInt(n)) {
+                throw new StageFileException(StageFileException.WRONG_TYPE,
+                        where + " must be a whole number (a stage's index from 0), not " + describe(n) + ".");
+            }
+            int index = n.intValue();
+            if (index < 0 || index >= stageCount || indices.contains(index)) {
+                throw new StageFileException(StageFileException.INVALID_VALUE, where + " is " + index
+                        + "; expected the index of another of the file's " + stageCount + " stages, from 0 to "
+                        + (stageCount - 1) + ".");
+            }
+            indices.add(index);
+        }
+        JsonNode ctx = required(node, "context", path);
+        String cpath = path + ".context";
+        expectObject(ctx, cpath);
+        checkFields(ctx, CONTEXT_FIELDS, cpath);
+        Conditions d = Conditions.DEFAULT;
+        double ambient = d.ambientCelsius();
+        double min = d.ambientMinCelsius();
+        double max = d.ambientMaxCelsius();
+        if (ctx.has("ambient")) {
+            JsonNode a = ctx.get("ambient");
+            String apath = cpath + ".ambient";
+            expectObject(a, apath);
+            checkFields(a, AMBIENT_FIELDS, apath);
+            ambient = optionalNumber(a, "ambientCelsius", apath, ambient);
+            min = optionalNumber(a, "ambientMinCelsius", apath, min);
+            max = optionalNumber(a, "ambientMaxCelsius", apath, max);
+            if (!Double.isFinite(ambient) || ambient < ABSOLUTE_ZERO_CELSIUS) {
+                throw new StageFileException(StageFileException.INVALID_VALUE,
+                        apath + ".ambientCelsius must be a finite temperature above absolute zero (−273.15 °C).");
+            }
+            if (!(min <= max)) {
+                throw new StageFileException(StageFileException.INVALID_VALUE,
+                        apath + ".ambientMinCelsius (" + min + ") must not exceed ambientMaxCelsius (" + max + ").");
+            }
+        }
+        LineUpContext context = new LineUpContext(shared(ctx, "relay", cpath), shared(ctx, "coilSupply", cpath),
+                shared(ctx, "drivePin", cpath), shared(ctx, "contactSupply", cpath), shared(ctx, "load", cpath),
+                ambient, min, max);
+        return new LineUp(indices, context);
+    }
+
+    /** One shared role: a kind, values and options, as a part has them. */
+    private static Optional<SharedPart> shared(JsonNode ctx, String role, String cpath) {
+        if (!ctx.has(role)) {
+            return Optional.empty();
+        }
+        JsonNode node = ctx.get(role);
+        String where = cpath + "." + role;
+        expectObject(node, where);
+        checkFields(node, SHARED_PART_FIELDS, where);
+        String kindId = requiredText(node, "kind", where);
+        PartKind expected = SHARED_ROLE_KINDS.get(role);
+        PartKind kind = PartKindIds.byId(kindId).orElseThrow(() -> new StageFileException(
+                StageFileException.UNKNOWN_KIND,
+                where + " has kind \"" + StageJson.excerpt(kindId) + "\", which is not a part kind; expected \""
+                        + PartKindIds.id(expected) + "\"."));
+        if (kind != expected) {
+            throw new StageFileException(StageFileException.INVALID_VALUE, where + " has kind \"" + kindId
+                    + "\"; the shared " + role + " must be \"" + PartKindIds.id(expected) + "\".");
+        }
+        return Optional.of(new SharedPart(kind, values(node, where), options(node, where)));
+    }
+
+    private static Map<String, Double> values(JsonNode node, String where) {
+        Map<String, Double> values = new LinkedHashMap<>();
+        if (node.has("values")) {
+            JsonNode v = node.get("values");
+            expectObject(v, where + ".values");
+            for (Map.Entry<String, JsonNode> e : v.properties()) {
+                values.put(e.getKey(), number(e.getValue(), where + ".values." + StageJson.excerpt(e.getKey())));
+            }
+        }
+        return values;
+    }
+
+    private static Map<String, String> options(JsonNode node, String where) {
+        Map<String, String> options = new LinkedHashMap<>();
+        if (node.has("options")) {
+            JsonNode o = node.get("options");
+            expectObject(o, where + ".options");
+            for (Map.Entry<String, JsonNode> e : o.properties()) {
+                options.put(e.getKey(), text(e.getValue(), where + ".options." + StageJson.excerpt(e.getKey())));
+            }
+        }
+        return options;
+    }
+
+    private static int readVersion(JsonNode version) {
         if (version == null) {
             throw new StageFileException(StageFileException.MISSING_FIELD,
                     "The file has no \"version\" field; stage files of this program are version "
@@ -92,6 +215,7 @@ final class StageReader {
                     "The file was written by a newer Armature (stage file version " + version.intValue()
                             + "); this program reads up to version " + StageJson.VERSION + ".");
         }
+        return version.intValue();
     }
 
     private static Stage readStage(JsonNode node, String path) {
@@ -234,22 +358,8 @@ final class StageReader {
             }
             mirrored = m.booleanValue();
         }
-        Map<String, Double> values = new LinkedHashMap<>();
-        if (node.has("values")) {
-            JsonNode v = node.get("values");
-            expectObject(v, where + ".values");
-            for (Map.Entry<String, JsonNode> e : v.properties()) {
-                values.put(e.getKey(), number(e.getValue(), where + ".values." + StageJson.excerpt(e.getKey())));
-            }
-        }
-        Map<String, String> options = new LinkedHashMap<>();
-        if (node.has("options")) {
-            JsonNode o = node.get("options");
-            expectObject(o, where + ".options");
-            for (Map.Entry<String, JsonNode> e : o.properties()) {
-                options.put(e.getKey(), text(e.getValue(), where + ".options." + StageJson.excerpt(e.getKey())));
-            }
-        }
+        Map<String, Double> values = values(node, where);
+        Map<String, String> options = options(node, where);
         Placement placement = new Placement(new GridPoint(at.get(0).intValue(), at.get(1).intValue()),
                 rotation, mirrored);
         return new Part(ref, kind, values, options, placement);

@@ -3,6 +3,10 @@ package org.armature.io;
 import com.fasterxml.jackson.core.io.JsonStringEncoder;
 import java.util.Iterator;
 import java.util.Map;
+import java.util.Optional;
+import org.armature.model.LineUp;
+import org.armature.model.LineUpContext;
+import org.armature.model.SharedPart;
 import org.armature.model.Conditions;
 import org.armature.model.StageSettings;
 import org.armature.model.Part;
@@ -46,17 +50,61 @@ final class StageWriter {
         b.append("{\n");
         b.append(INDENT).append("\"format\": ").append(quote(StageJson.FORMAT)).append(",\n");
         boolean settings = doc.stages().stream().anyMatch(st -> !st.settings().isDefault());
-        b.append(INDENT).append("\"version\": ")
-                .append(settings ? StageJson.VERSION : StageJson.VERSION_WITHOUT_SETTINGS).append(",\n");
+        int version = doc.lineUp().isPresent() ? StageJson.VERSION
+                : settings ? StageJson.VERSION_WITH_SETTINGS : StageJson.VERSION_WITHOUT_SETTINGS;
+        b.append(INDENT).append("\"version\": ").append(version).append(",\n");
         b.append(INDENT).append("\"title\": ").append(quote(doc.title())).append(",\n");
         b.append(INDENT).append("\"stages\": [\n");
         for (int i = 0; i < doc.stages().size(); i++) {
             stage(b, doc.stages().get(i), INDENT.repeat(2));
             b.append(i + 1 < doc.stages().size() ? ",\n" : "\n");
         }
-        b.append(INDENT).append("]\n");
+        b.append(INDENT).append(doc.lineUp().isPresent() ? "],\n" : "]\n");
+        doc.lineUp().ifPresent(l -> lineUp(b, l, INDENT));
         b.append("}\n");
         return b.toString();
+    }
+
+    /** The line-up (format version 3): stage indices, then the shared roles one per line group. */
+    private static void lineUp(StringBuilder b, LineUp l, String in) {
+        String in1 = in + INDENT;
+        String in2 = in1 + INDENT;
+        b.append(in).append("\"lineUp\": {\n");
+        b.append(in1).append("\"stages\": [");
+        for (int i = 0; i < l.stageIndices().size(); i++) {
+            b.append(i == 0 ? "" : ", ").append(l.stageIndices().get(i));
+        }
+        b.append("],\n");
+        LineUpContext c = l.context();
+        b.append(in1).append("\"context\": {\n");
+        b.append(in2).append("\"ambient\": {\"ambientCelsius\": ").append(number(c.ambientCelsius()))
+                .append(", \"ambientMinCelsius\": ").append(number(c.ambientMinCelsius()))
+                .append(", \"ambientMaxCelsius\": ").append(number(c.ambientMaxCelsius())).append('}');
+        shared(b, "relay", c.relay(), in2);
+        shared(b, "coilSupply", c.coilSupply(), in2);
+        shared(b, "drivePin", c.drivePin(), in2);
+        shared(b, "contactSupply", c.contactSupply(), in2);
+        shared(b, "load", c.load(), in2);
+        b.append('\n').append(in1).append("}\n");
+        b.append(in).append("}\n");
+    }
+
+    private static void shared(StringBuilder b, String role, Optional<SharedPart> part, String in) {
+        if (part.isEmpty()) {
+            return;
+        }
+        SharedPart p = part.get();
+        String in1 = in + INDENT;
+        b.append(",\n").append(in).append(quote(role)).append(": {\"kind\": ").append(quote(PartKindIds.id(p.kind())));
+        b.append(",\n").append(in1).append("\"values\": {");
+        appendMap(b, p.values(), in1, true);
+        b.append('}');
+        if (!p.options().isEmpty()) {
+            b.append(",\n").append(in1).append("\"options\": {");
+            appendMap(b, p.options(), in1, false);
+            b.append('}');
+        }
+        b.append('\n').append(in).append('}');
     }
 
     private static void stage(StringBuilder b, Stage s, String in) {

@@ -59,6 +59,14 @@ public final class EditorViewModel {
     private final Evaluations evaluations;
     private final List<Editor> editors = new ArrayList<>();
     private String title = "";
+    /** Where line-up figures are computed, and where they are published. */
+    private final Executor solveExecutor;
+    private final Executor fxExecutor;
+    /** The opened document's line-up, by the editors of its stages (so tab moves keep it), and its context. */
+    private List<Editor> lineUpEditors = List.of();
+    private Optional<org.armature.model.LineUpContext> lineUpContext = Optional.empty();
+    /** Earlier shared contexts, for undoing a shared value (a change of one value applies to every stage). */
+    private final java.util.ArrayDeque<org.armature.model.LineUpContext> sharedUndo = new java.util.ArrayDeque<>();
     private boolean stagesChanged;
     private Editor editor;
 
@@ -105,6 +113,8 @@ public final class EditorViewModel {
     public EditorViewModel(Stage initial, DocumentStore store, ReadoutSource readouts, Executor solveExecutor,
                            Executor fxExecutor, Analyses analyses) {
         this.store = store;
+        this.solveExecutor = solveExecutor;
+        this.fxExecutor = fxExecutor;
         this.evaluations = new Evaluations(readouts, analyses, solveExecutor, fxExecutor, evaluation::set);
         load(StageDocument.of(initial));
     }
@@ -288,9 +298,44 @@ public final class EditorViewModel {
         }
     }
 
+    /**
+     * The stages a line-up view shows, as they are judged: the document's line-up with its shared
+     * context applied; without one, the first {@value org.armature.model.LineUp#MAX_STAGES} stages
+     * under the context the first of them sets. Empty when the document has a single stage.
+     */
+    public List<org.armature.model.LineUpContext.Applied> lineUpStages() {
+        StageDocument doc = document();
+        if (doc.lineUp().isPresent()) {
+            return doc.lineUp().get().applied(doc);
+        }
+        if (doc.stages().size() < org.armature.model.LineUp.MIN_STAGES) {
+            return List.of();
+        }
+        List<Stage> stages = doc.stages().subList(0, Math.min(doc.stages().size(), org.armature.model.LineUp.MAX_STAGES));
+        org.armature.model.LineUpContext context = org.armature.model.LineUpContext.of(stages.get(0));
+        return stages.stream().map(context::applyTo).toList();
+    }
+
+    /**
+     * Computes the line-up's figures on the solve executor ({@link org.armature.analysis.LineUpMetrics})
+     * and hands them to {@code done} on the FX executor.
+     */
+    public void evaluateLineUp(List<org.armature.model.LineUpContext.Applied> stages,
+                               java.util.function.Consumer<List<org.armature.analysis.LineUpMetrics.Column>> done) {
+        solveExecutor.execute(() -> {
+            List<org.armature.analysis.LineUpMetrics.Column> columns =
+                    stages.stream().map(org.armature.analysis.LineUpMetrics::evaluate).toList();
+            fxExecutor.execute(() -> done.accept(columns));
+        });
+    }
+
     /** The document as it would be saved now: every stage as it stands, in tab order. */
     public StageDocument document() {
-        return new StageDocument(title, editors.stream().map(Editor::stage).toList());
+        List<Integer> indices = lineUpEditors.stream().map(editors::indexOf).filter(i -> i >= 0).toList();
+        Optional<org.armature.model.LineUp> lineUp = lineUpContext.isPresent()
+                && indices.size() >= org.armature.model.LineUp.MIN_STAGES
+                ? Optional.of(new org.armature.model.LineUp(indices, lineUpContext.get())) : Optional.empty();
+        return new StageDocument(title, editors.stream().map(Editor::stage).toList(), lineUp);
     }
 
     // ------------------------------------------------------------------ stages of the document
@@ -310,6 +355,96 @@ public final class EditorViewModel {
     public void addStage(StageTemplate t, Suppressor s, HighSideDrive d) {
         Stage st = Templates.build(t, s, d);
         insertStage(st.withName(freeName(st.name())));
+    }
+
+    /**
+     * What-if in one action: adds a stage of another topology (a template with this suppressor and
+     * drive) on the active stage's relay, supply, pin and contact side, puts both into the line-up
+     * (the active stage's line-up when it is in one with room, else a new line-up of the two) and
+     * opens the new stage. The new stage is stored with the shared settings in its parts.
+     */
+    public void whatIfTopology(StageTemplate t, Suppressor s, HighSideDrive d) {
+        Stage st = Templates.build(t, s, d);
+        whatIf(context -> context.applyTo(st).stage().withName(freeName(st.name())));
+    }
+
+    /**
+     * What-if in one action: adds a copy of the active stage with one value changed (another
+     * resistor value, say), named after the change, and puts both into the line-up as
+     * {@link #whatIfTopology} does.
+     */
+    public void whatIfValue(String ref, String key, double value) {
+        Stage base = editor.stage();
+        Stage changed = base.updatePart(ref, p -> p.with(key, value));
+        String label = base.name() + " (" + ref + " " + org.armature.render.Notation.format(value,
+                base.part(ref).flatMap(p -> p.kind().param(key)).map(sp -> sp.unit().symbol()).orElse("")) + ")";
+        whatIf(context -> changed.withName(freeName(label)));
+    }
+
+    /**
+     * Changes one shared value of the document's line-up (for example the coil supply's volts): every
+     * stage of the line-up is judged with it from now on; the stored stages stay as drawn. Undone by
+     * {@link #undoSharedValue()}.
+     *
+     * @param role {@code coilSupply}, {@code relay}, {@code drivePin}, {@code contactSupply} or {@code load}
+     * @return false (with a message) when there is no line-up or it does not share that role
+     */
+    public boolean setSharedValue(String role, String key, double value) {
+        if (lineUpContext.isEmpty()) {
+            message.set("The document has no line-up; line stages up first (Tools ▸ Line up against…).");
+            return false;
+        }
+        org.armature.model.LineUpContext c = lineUpContext.get();
+        Optional<org.armature.model.SharedPart> part = switch (role) {
+            case "relay" -> c.relay();
+            case "coilSupply" -> c.coilSupply();
+            case "drivePin" -> c.drivePin();
+            case "contactSupply" -> c.contactSupply();
+            case "load" -> c.load();
+            default -> Optional.empty();
+        };
+        if (part.isEmpty()) {
+            message.set("The line-up shares no " + role + ".");
+            return false;
+        }
+        org.armature.model.SharedPart changed = part.get().with(key, value);
+        org.armature.model.LineUpContext next = new org.armature.model.LineUpContext(
+                role.equals("relay") ? Optional.of(changed) : c.relay(),
+                role.equals("coilSupply") ? Optional.of(changed) : c.coilSupply(),
+                role.equals("drivePin") ? Optional.of(changed) : c.drivePin(),
+                role.equals("contactSupply") ? Optional.of(changed) : c.contactSupply(),
+                role.equals("load") ? Optional.of(changed) : c.load(),
+                c.ambientCelsius(), c.ambientMinCelsius(), c.ambientMaxCelsius());
+        sharedUndo.push(c);
+        lineUpContext = Optional.of(next);
+        stagesChanged = true;
+        publishDocument();
+        return true;
+    }
+
+    /** Undoes the last {@link #setSharedValue}; false when there is none. */
+    public boolean undoSharedValue() {
+        if (sharedUndo.isEmpty()) {
+            return false;
+        }
+        lineUpContext = Optional.of(sharedUndo.pop());
+        stagesChanged = true;
+        publishDocument();
+        return true;
+    }
+
+    private void whatIf(java.util.function.Function<org.armature.model.LineUpContext, Stage> make) {
+        Editor from = editor;
+        boolean inLineUp = lineUpContext.isPresent() && lineUpEditors.contains(from)
+                && lineUpEditors.size() < org.armature.model.LineUp.MAX_STAGES;
+        org.armature.model.LineUpContext context = inLineUp ? lineUpContext.get()
+                : org.armature.model.LineUpContext.of(from.stage());
+        insertStage(make.apply(context));
+        List<Editor> members = new ArrayList<>(inLineUp ? lineUpEditors : List.of(from));
+        members.add(editor);
+        lineUpEditors = List.copyOf(members);
+        lineUpContext = Optional.of(context);
+        message.set("Line-up: " + String.join(", ", members.stream().map(e -> e.stage().name()).toList()));
     }
 
     /** Adds a copy of the active stage after it ("… (copy)") and opens it. */
@@ -623,6 +758,9 @@ public final class EditorViewModel {
         doc.stages().forEach(s -> editors.add(new Editor(s)));
         editor = editors.get(0);
         title = doc.title();
+        lineUpEditors = doc.lineUp().map(l -> l.stageIndices().stream().map(editors::get).toList()).orElse(List.of());
+        lineUpContext = doc.lineUp().map(org.armature.model.LineUp::context);
+        sharedUndo.clear();
         stagesChanged = false;
         preview.set(Optional.empty());
         publishDocument();

@@ -321,7 +321,23 @@ public final class MainWindow {
         MenuItem size = item("Size base network…", null, e -> sizeBaseNetwork());
         size.setId("menu-size-base-network");
         MenuItem showEdges = item("Show edges", "Shortcut+E", e -> edgesDrawer.setExpanded(true));
-        tools.getItems().addAll(size, showEdges);
+        MenuItem lineUp = item("Line-up…", null, e -> showLineUp());
+        lineUp.setId("menu-line-up");
+        Menu whatIf = new Menu("Line up against…");
+        for (StageTemplate t : StageTemplate.values()) {
+            Menu m = new Menu(t.title());
+            for (Suppressor s : Suppressor.values()) {
+                MenuItem it = new MenuItem(suppressorTitle(s));
+                it.setId("what-if-" + t.id() + "-" + s.id());
+                it.setOnAction(e -> {
+                    vm.whatIfTopology(t, s, HighSideDrive.LEVEL_SHIFT);
+                    showLineUp();
+                });
+                m.getItems().add(it);
+            }
+            whatIf.getItems().add(m);
+        }
+        tools.getItems().addAll(size, showEdges, lineUp, whatIf);
 
         Menu stages = new Menu("Stage");
         stages.getItems().setAll(stageTabs.menuItems());
@@ -490,6 +506,14 @@ public final class MainWindow {
 
     private double supplyVolts() {
         return vm.coilSupply().map(p -> p.value("volts")).orElse(12.0);
+    }
+
+    private void showLineUp() {
+        var d = LineUpView.dialog(vm, Palette.LIGHT);
+        if (window() != null) {
+            d.initOwner(window());
+        }
+        d.show();
     }
 
     private void sizeBaseNetwork() {

@@ -37,7 +37,7 @@ class SimulateCommandTest {
     }
 
     @Test
-    @DisplayName("--json prints one object with the nine metrics, the events and the sample count")
+    @DisplayName("--json prints one object with the ten metrics (armature speed at break added), the events and the sample count")
     void jsonShape() throws Exception {
         CliRun r = CliRun.of("simulate", file.toString(), "--json");
         assertEquals(0, r.status(), r.err());
@@ -45,7 +45,7 @@ class SimulateCommandTest {
         JsonNode j = JSON.readTree(r.out());
         JsonNode m = j.get("metrics");
         assertEquals(List.of("peakSwitchVoltage", "peakCoilReverseVoltage", "decayToDropOutCurrent", "decayToZero",
-                "releaseTime", "operateTime", "suppressorEnergy", "switchEnergy", "switchBreakdown"),
+                "releaseTime", "operateTime", "suppressorEnergy", "switchEnergy", "switchBreakdown", "armatureSpeedAtBreak"),
                 iterate(m));
         // 12 V rail plus a rectifier's forward drop at ~30 mA (check-values.md: switch peak = Vsupply + Vc)
         assertEquals(12.8, m.get("peakSwitchVoltage").asDouble(), 0.3);

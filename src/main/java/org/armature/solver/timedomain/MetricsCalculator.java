@@ -37,6 +37,7 @@ final class MetricsCalculator {
         double stored = nan;
         double peakSuppressor = 0;
         boolean breakdown = false;
+        double breakSpeed = nan;
         for (int i = 0; i < t.length; i++) {
             double s = Math.abs(in[TimeDomainRun.SUPP_I][i]);
             if (s > peakSuppressor) {
@@ -82,13 +83,39 @@ final class MetricsCalculator {
             breakdown = !c.clamps.isEmpty() && peakSwitch >= c.clamps.get(0).ratedVolts();
             double open = firstEventAfter(w.events(), TransientEvent.CONTACTS_OPEN, tOff);
             release = open - tOff;
+            breakSpeed = speedAt(t, in[TimeDomainRun.ARMATURE_SPEED], open, c);
         }
         double operate = nan;
         if (Double.isFinite(tOn)) {
             operate = firstEventAfter(w.events(), TransientEvent.CONTACTS_CLOSED, tOn) - tOn;
         }
         return new TransientMetrics(peakSwitch, peakReverse, toRelease, toZero, release, operate, suppressorEnergy,
-                switchEnergy, breakdown, peakSuppressor, coilEnergy, stored);
+                switchEnergy, breakdown, peakSuppressor, coilEnergy, stored, breakSpeed);
+    }
+
+    /**
+     * The armature speed at the contact-break time: the moving-armature model's integrated speed at
+     * the accepted point nearest the located event (the event is a time point of the run, so this is
+     * the speed there); the constant-inductance model's transit speed.
+     */
+    private static double speedAt(double[] t, double[] speed, double when, TimeDomainCircuit c) {
+        if (!Double.isFinite(when)) {
+            return Double.NaN;
+        }
+        if (!c.relays.isEmpty()) {
+            RelayDynamics r = c.relays.get(0);
+            return r.travelMetres / Math.max(r.releaseTransitSeconds, Double.MIN_NORMAL);
+        }
+        if (c.armatures.isEmpty()) {
+            return Double.NaN;
+        }
+        int best = 0;
+        for (int i = 0; i < t.length; i++) {
+            if (Math.abs(t[i] - when) < Math.abs(t[best] - when)) {
+                best = i;
+            }
+        }
+        return speed[best];
     }
 
     private static double trapezoid(double[] p, int i, double dt) {

@@ -447,7 +447,9 @@ final class TimeDomainRun {
     static final int SUPP_P = 4;
     static final int SUPP_I = 5;
     static final int COIL_LOSS_P = 6;
-    static final int INTERNALS = 7;
+    /** Armature speed of a moving-armature relay, m/s (0 for the constant-inductance model). */
+    static final int ARMATURE_SPEED = 7;
+    static final int INTERNALS = 8;
 
     private double coilCurrentCommitted(RelayDynamics r) {
         return samples.isEmpty() ? 0 : r.coil.lambdaNow() / r.coil.henries();
@@ -813,6 +815,7 @@ final class TimeDomainRun {
         in[SUPP_P] = read(c.suppressorPower);
         in[SUPP_I] = read(c.suppressorCurrent);
         in[COIL_LOSS_P] = read(c.coilLossPower);
+        in[ARMATURE_SPEED] = c.relays.isEmpty() && !c.armatures.isEmpty() ? Math.abs(c.armatures.get(0).uTrial) : 0;
         internals.add(in);
     }
 

@@ -23,10 +23,15 @@ package org.armature.solver.timedomain;
  *     after the turn-off edge, joules
  * @param storedEnergyJoules magnetic energy ½·L·I² at the turn-off edge, joules (flux-state relay:
  *     the integral of i·dλ to zero current at the attracted gap)
+ * @param armatureSpeedAtBreakMetresPerSecond the armature's speed when the normally-open contacts part
+ *     after the turn-off edge, metres per second, not negative: for a moving-armature relay the
+ *     integrated speed at the located contact event; for a constant-inductance relay the speed of its
+ *     linear transit, travel ÷ release transit time (a stand-in, as its position trace is); NaN when the
+ *     contacts did not open within the run. A slow break lets a DC load's arc dwell on the contacts
  */
 public record TransientMetrics(double peakSwitchVolts, double peakCoilReverseVolts, double decayToReleaseCurrentSeconds,
                                double decayToZeroSeconds, double releaseTimeSeconds, double operateTimeSeconds,
                                double suppressorEnergyJoules, double switchEnergyJoules, boolean switchBreakdown,
                                double peakSuppressorAmps, double coilResistiveEnergyJoules,
-                               double storedEnergyJoules) {
+                               double storedEnergyJoules, double armatureSpeedAtBreakMetresPerSecond) {
 }

@@ -1,0 +1,152 @@
+package org.armature.ui;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.atomic.AtomicReference;
+import javafx.scene.control.Button;
+import javafx.scene.control.ButtonType;
+import javafx.scene.control.Dialog;
+import javafx.scene.control.Label;
+import javafx.scene.input.Clipboard;
+import javafx.scene.layout.GridPane;
+import org.armature.analysis.LineUpMetrics;
+import org.armature.io.StageFiles;
+import org.armature.model.LineUp;
+import org.armature.model.LineUpContext;
+import org.armature.model.StageDocument;
+import org.armature.model.Templates;
+import org.armature.render.Palette;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+
+/** The line-up view of an example file: the table, best values marked, copied as tab-separated text. */
+@ExtendWith(ApplicationExtension.class)
+class LineUpViewTest {
+
+    private static final Path GREENHOUSE = Path.of("examples", "greenhouse-valves.stage.json");
+
+    @TempDir
+    Path dir;
+
+    private EditorViewModel vm;
+
+    @Start
+    void start(javafx.stage.Stage stage) {
+        vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, ReadoutSource.NONE, Runnable::run,
+                Runnable::run);
+        stage.setScene(new MainWindow(vm, new RecentFiles()).scene(1200, 800));
+        stage.show();
+    }
+
+    @Test
+    @DisplayName("a saved line-up opens in the window and saves back unchanged")
+    void lineUpSurvivesTheWindow(FxRobot robot) {
+        StageDocument doc = StageFiles.open(GREENHOUSE);
+        StageDocument withLineUp = doc.withLineUp(Optional.of(new LineUp(List.of(2, 0),
+                LineUpContext.of(doc.stages().get(0)))));
+        Path file = dir.resolve("valves.stage.json");
+        StageFiles.save(withLineUp, file);
+        robot.interact(() -> assertTrue(vm.open(file)));
+        assertEquals(withLineUp, vm.document());
+        assertEquals(2, vm.lineUpStages().size());
+        assertEquals(doc.stages().get(2).name(), vm.lineUpStages().get(0).stage().name());
+    }
+
+    @Test
+    @DisplayName("what-if in one action: another topology on the same relay, then another resistor value, in one line-up")
+    void whatIf(FxRobot robot) {
+        robot.interact(() -> vm.whatIfTopology(org.armature.model.StageTemplate.LOW_SIDE_NMOS,
+                org.armature.model.Suppressor.DIODE, org.armature.model.HighSideDrive.LEVEL_SHIFT));
+        StageDocument doc = vm.document();
+        assertEquals(2, doc.stages().size());
+        assertEquals(List.of(0, 1), doc.lineUp().orElseThrow().stageIndices());
+        // the new stage was built on the first one's relay, supply and pin: nothing differs
+        assertEquals(List.of(), vm.lineUpStages().get(1).differences());
+        robot.interact(() -> vm.selectStage(0));
+        String resistor = vm.stage().parts().stream().filter(p -> p.kind() == org.armature.model.PartKind.RESISTOR)
+                .findFirst().orElseThrow().ref();
+        robot.interact(() -> vm.whatIfValue(resistor, "resistanceOhms", 4700));
+        StageDocument three = vm.document();
+        assertEquals(3, three.stages().size());
+        assertEquals(3, three.lineUp().orElseThrow().stageIndices().size(), "added to the same line-up");
+        assertEquals(4700, vm.stage().require(resistor).value("resistanceOhms"));
+        assertEquals(three.stages().get(0).withName(vm.stage().name()).updatePart(resistor,
+                p -> p.with("resistanceOhms", 4700)), vm.stage(), "only the one value differs");
+    }
+
+    @Test
+    @DisplayName("open the example's stages side by side, read the table, copy it as tab-separated text")
+    void tableAndCopy(FxRobot robot) {
+        robot.interact(() -> assertTrue(vm.open(GREENHOUSE)));
+        AtomicReference<Dialog<ButtonType>> dialog = new AtomicReference<>();
+        robot.interact(() -> {
+            dialog.set(LineUpView.dialog(vm, Palette.LIGHT));
+            dialog.get().show();
+        });
+        GridPane table = robot.lookup("#line-up-table").queryAs(GridPane.class);
+        List<String> texts = table.getChildren().stream().map(n -> ((Label) n).getText()).toList();
+        assertTrue(texts.contains("peak switch voltage"), texts.toString());
+        assertTrue(texts.contains("armature speed at contact break"), texts.toString());
+        assertTrue(texts.stream().anyMatch(t -> t.endsWith(" ★")), "best values are marked");
+        Button copy = robot.lookup("#line-up-copy").queryButton();
+        assertFalse(copy.isDisabled());
+        AtomicReference<String> copied = new AtomicReference<>();
+        robot.interact(() -> {
+            copy.fire();
+            copied.set(Clipboard.getSystemClipboard().getString());
+        });
+        String header = copied.get().lines().findFirst().orElseThrow();
+        assertEquals("figure\tunit\tZone valve, NPN channel\tZone valve, N-MOSFET channel\tZone valve, Darlington channel",
+                header);
+        assertEquals(LineUpMetrics.METRICS.size() + 1, copied.get().lines().filter(l -> !l.startsWith("check ")).count());
+        robot.interact(() -> dialog.get().close());
+    }
+
+    @Test
+    @DisplayName("changing the shared supply in the view re-solves every stage; undo restores all of them")
+    void sharedSupplyInTheView(FxRobot robot) {
+        StageDocument doc = StageFiles.open(GREENHOUSE);
+        Path file = dir.resolve("lined-up.stage.json");
+        StageFiles.save(doc.withLineUp(Optional.of(new LineUp(List.of(0, 1), LineUpContext.of(doc.stages().get(0))))),
+                file);
+        robot.interact(() -> assertTrue(vm.open(file)));
+        AtomicReference<Dialog<ButtonType>> dialog = new AtomicReference<>();
+        robot.interact(() -> {
+            dialog.set(LineUpView.dialog(vm, Palette.LIGHT));
+            dialog.get().show();
+        });
+        List<String> before = row(robot, "coil current (nominal)");
+        javafx.scene.control.TextField supply = robot.lookup("#line-up-supply").queryAs(javafx.scene.control.TextField.class);
+        robot.interact(() -> {
+            supply.setText("26.4");
+            robot.lookup("#line-up-apply-supply").queryButton().fire();
+        });
+        List<String> after = row(robot, "coil current (nominal)");
+        assertEquals(before.size(), after.size());
+        for (int i = 0; i < before.size(); i++) {
+            assertFalse(before.get(i).equals(after.get(i)), "stage " + i + " re-solved: " + before + " " + after);
+        }
+        robot.interact(() -> robot.lookup("#line-up-undo").queryButton().fire());
+        assertEquals(before, row(robot, "coil current (nominal)"), "undo restores every stage");
+        robot.interact(() -> dialog.get().close());
+    }
+
+    /** The cells of a table row, by its label. */
+    private static List<String> row(FxRobot robot, String label) {
+        GridPane table = robot.lookup("#line-up-table").queryAs(GridPane.class);
+        int r = table.getChildren().stream().filter(n -> ((Label) n).getText().equals(label))
+                .map(GridPane::getRowIndex).findFirst().orElseThrow();
+        return table.getChildren().stream().filter(n -> GridPane.getRowIndex(n) == r && GridPane.getColumnIndex(n) > 0)
+                .map(n -> ((Label) n).getText()).toList();
+    }
+}
