@@ -279,4 +279,24 @@ public final class LineUpMetrics {
         }
         return ids;
     }
+
+    /**
+     * One figure as the table prints it: engineering notation with the metric's unit, a whole number
+     * of parts, the yield in percent, the armature speed in m/s; a dash where it is not available.
+     */
+    public static String format(Metric m, double v) {
+        if (!Double.isFinite(v)) {
+            return "\u2014";
+        }
+        if (m.key().equals("partsCount")) {
+            return Long.toString(Math.round(v));
+        }
+        if (m.key().equals("yield")) {
+            return org.armature.units.EngineeringNotation.format(100 * v, Unit.PERCENT);
+        }
+        if (m.unitSymbol().equals("m/s")) {
+            return org.armature.units.EngineeringNotation.format(v, Unit.METRE) + "/s";
+        }
+        return org.armature.units.EngineeringNotation.format(v, m.unit());
+    }
 }

@@ -115,7 +115,7 @@ final class ExportCommand implements Callable<Integer> {
                     + String.format(Locale.ROOT, "%.0f", k * PngExport.CSS_DPI) + " dpi).");
         }
         if (pdf != null) {
-            write(pdf, DesignReport.pdf(snap));
+            write(pdf, DesignReport.pdf(snap, DesignReport.lineUpOf(doc, stage)));
             out.println("Wrote " + pdf + " (PDF design report" + (snap.cautions().isEmpty() ? "" : ", with safety cautions")
                     + ").");
         }

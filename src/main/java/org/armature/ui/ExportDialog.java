@@ -144,10 +144,19 @@ public final class ExportDialog {
      * @param documentTitle the stage file's title for the title block and the report's running head
      */
     public static byte[] render(Choice c, String documentTitle, Stage stage, LocalDate date) {
-        StageSnapshot snap = StageSnapshot.evaluate(documentTitle, stage, c.pinHigh(),
+        return render(c, new org.armature.model.StageDocument(documentTitle, List.of(stage), Optional.empty()), stage,
+                date);
+    }
+
+    /**
+     * Renders a choice for a stage of a document: the document gives the title and, for the report,
+     * the line-up the stage belongs to.
+     */
+    public static byte[] render(Choice c, org.armature.model.StageDocument doc, Stage stage, LocalDate date) {
+        StageSnapshot snap = StageSnapshot.evaluate(doc.title(), stage, c.pinHigh(),
                 c.format() == Format.PDF ? StageSnapshot.Depth.REPORT : StageSnapshot.Depth.DRAWING, date);
         if (c.format() == Format.PDF) {
-            return DesignReport.pdf(snap);
+            return DesignReport.pdf(snap, DesignReport.lineUpOf(doc, stage));
         }
         Sheet sheet = snap.sheet(c.theme().palette()).withTitle(c.titleBlock());
         if (!c.readouts()) {
@@ -177,12 +186,12 @@ public final class ExportDialog {
         }
         d.showAndWait().ifPresent(c -> {
             Stage stage = vm.stage();
-            Optional<Path> file = vm.fileProperty().get();
+            org.armature.model.StageDocument doc = vm.document();
             vm.say("Exporting " + c.file().getFileName() + "…");
             background.execute(() -> {
                 String said;
                 try {
-                    ExportFiles.write(c.file(), render(c, documentTitle(file), stage, LocalDate.now()));
+                    ExportFiles.write(c.file(), render(c, doc, stage, LocalDate.now()));
                     said = "Exported " + c.file().getFileName() + ".";
                 } catch (ExportFiles.ExportException e) {
                     said = "Export failed: " + e.getMessage();

@@ -37,6 +37,7 @@ import org.armature.solver.PartResult;
 import org.armature.solver.SwitchVerdict;
 import org.armature.solver.timedomain.TransientMetrics;
 import org.armature.solver.timedomain.TransientResult;
+import org.armature.analysis.LineUpMetrics;
 import org.armature.units.EngineeringNotation;
 import org.armature.units.Unit;
 
@@ -48,9 +49,9 @@ import org.armature.units.Unit;
  * document title and date at the top and its number at the bottom. Fonts are embedded
  * ({@link PdfFonts}); all text is real text.
  *
- * <p>The report draws only what the {@link StageSnapshot} holds; it never solves. The line-up and
- * fault hunt sections have no data in a stage file yet; when the snapshot carries them, they go
- * between the edges and the closing statement (see {@link #write}).
+ * <p>The report draws only what the {@link StageSnapshot} and the line-up section hold; it never
+ * solves. The line-up table follows the edges when the stage belongs to the document's line-up; a
+ * fault hunt is not saved in a stage file, so the report has no section for one yet.
  */
 public final class DesignReport {
 
@@ -66,10 +67,52 @@ public final class DesignReport {
     private DesignReport() {
     }
 
+    /**
+     * The line-up the stage belongs to, for the report's table: one column per stage, judged under
+     * the line-up's shared context ({@link LineUpMetrics#evaluate(org.armature.model.LineUpContext.Applied)}).
+     *
+     * @param names the column headings, one per column
+     * @param columns the figures of each stage
+     */
+    public record LineUpSection(List<String> names, List<LineUpMetrics.Column> columns) {
+        public LineUpSection {
+            names = List.copyOf(names);
+            columns = List.copyOf(columns);
+        }
+    }
+
+    /**
+     * The line-up section of a stage's report: present when the document holds a line-up with this
+     * very stage in it. Solves every stage of the line-up under its shared context (the figures of
+     * {@code compare}).
+     */
+    public static Optional<LineUpSection> lineUpOf(org.armature.model.StageDocument doc, org.armature.model.Stage stage) {
+        if (doc.lineUp().isEmpty()) {
+            return Optional.empty();
+        }
+        org.armature.model.LineUp l = doc.lineUp().get();
+        boolean member = l.stageIndices().stream().anyMatch(i -> i < doc.stages().size() && doc.stages().get(i) == stage);
+        if (!member) {
+            return Optional.empty();
+        }
+        List<String> names = new ArrayList<>();
+        List<LineUpMetrics.Column> columns = new ArrayList<>();
+        for (int i : l.stageIndices()) {
+            names.add(doc.stages().get(i).name());
+            columns.add(LineUpMetrics.evaluate(l.context().applyTo(doc.stages().get(i))));
+        }
+        return Optional.of(new LineUpSection(names, columns));
+    }
+
     /** The report of a snapshot evaluated with {@link StageSnapshot.Depth#REPORT}, as PDF bytes. */
     public static byte[] pdf(StageSnapshot s) {
+        return pdf(s, Optional.empty());
+    }
+
+    /** The report with the table of the line-up the stage belongs to, if any, as PDF bytes. */
+    public static byte[] pdf(StageSnapshot s, Optional<LineUpSection> lineUp) {
         try (PDDocument doc = new PDDocument()) {
-            write(s, doc);
+            write(s, doc, lineUp);
             ByteArrayOutputStream out = new ByteArrayOutputStream();
             doc.save(out);
             return out.toByteArray();
@@ -80,6 +123,11 @@ public final class DesignReport {
 
     /** Lays the report out into an empty document. */
     public static void write(StageSnapshot s, PDDocument doc) {
+        write(s, doc, Optional.empty());
+    }
+
+    /** Lays the report out into an empty document, with the line-up's table where one is given. */
+    public static void write(StageSnapshot s, PDDocument doc, Optional<LineUpSection> lineUp) {
         String title = s.documentTitle().isBlank() ? s.stage().name() : s.documentTitle();
         PDDocumentInformation info = doc.getDocumentInformation();
         info.setTitle(title + ": " + s.stage().name());
@@ -98,7 +146,8 @@ public final class DesignReport {
             verdicts(flow, s);
             sizing(flow, s);
             edges(flow, s);
-            // the line-up table and the fault hunt go here once a stage file can hold them
+            lineUp.ifPresent(l -> lineUp(flow, l));
+            // a fault hunt goes here once a stage file can hold one
             flow.heading("What this report is", 12);
             flow.paragraph(CLOSING, PdfFlow.BODY, false, PdfFlow.INK);
             flow.finish(title, s.date().toString(), "Design report · " + s.stage().name());
@@ -380,5 +429,41 @@ public final class DesignReport {
             case WARN -> WARN;
             case FAIL -> FAIL;
         };
+    }
+
+    private static void lineUp(PdfFlow f, LineUpSection l) {
+        f.heading("Line-up", 13);
+        f.paragraph("The stages of the document's line-up side by side, each judged under the shared relay, supply, "
+                + "pin and ambient range; a star marks the best value of a row.", PdfFlow.BODY, false, PdfFlow.MUTED);
+        int n = l.columns().size();
+        double[] fractions = new double[n + 1];
+        fractions[0] = 0.32;
+        for (int i = 1; i <= n; i++) {
+            fractions[i] = 0.68 / n;
+        }
+        List<String> header = new ArrayList<>();
+        header.add("Figure");
+        header.addAll(l.names());
+        List<PdfFlow.Row> rows = new ArrayList<>();
+        for (LineUpMetrics.Metric m : LineUpMetrics.METRICS) {
+            List<Integer> best = LineUpMetrics.best(m, l.columns());
+            List<String> cells = new ArrayList<>();
+            cells.add(m.label());
+            for (int i = 0; i < n; i++) {
+                cells.add(LineUpMetrics.format(m, l.columns().get(i).value(m.key())) + (best.contains(i) ? " *" : ""));
+            }
+            rows.add(new PdfFlow.Row(cells));
+        }
+        for (String id : LineUpMetrics.checkIds(l.columns())) {
+            List<Integer> best = LineUpMetrics.bestCheck(id, l.columns());
+            List<String> cells = new ArrayList<>();
+            cells.add(id);
+            for (int i = 0; i < n; i++) {
+                cells.add(l.columns().get(i).report().check(id).map(r -> r.status().word()).orElse("\u2014")
+                        + (best.contains(i) ? " *" : ""));
+            }
+            rows.add(new PdfFlow.Row(cells));
+        }
+        f.table(fractions, header, rows);
     }
 }
