@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.atomic.AtomicLong;
 
 /**
  * The one place where a stage's roles are found: which part is the drive pin, the base or gate
@@ -85,13 +86,51 @@ public record StageRecognition(Connectivity connectivity, Optional<StageRoles> r
         netDescriptions = Collections.unmodifiableMap(new LinkedHashMap<>(netDescriptions));
     }
 
+    /** The drawing recognised last, with its recognition (an immutable pair, swapped whole). */
+    private record Memo(Stage stage, StageRecognition recognition) {
+    }
+
     /**
-     * Recognises a stage.
+     * The last drawing's recognition. The validator, the topology check, the engines, the readouts
+     * and the renderer each ask about the stage on the screen, on the FX, solver and analysis
+     * threads; the answer depends on the drawing only (parts' designators, kinds and placements,
+     * wires, test points), so it is found once per drawing and a value edit finds none anew. One
+     * entry, replaced whole through a volatile reference: thread-safe without locks, and it keeps at
+     * most one stage alive.
+     */
+    private static volatile Memo last;
+
+    /** How many recognitions were computed (memo misses); read by tests and benchmarks only. */
+    private static final AtomicLong COMPUTED = new AtomicLong();
+
+    /**
+     * Recognises a stage, once per drawing: a stage that differs from the last one asked about only
+     * in values, options and conditions gets the same (immutable) recognition.
      *
      * @param stage the stage as drawn; not modified
      * @return its roles, findings and named nets; never throws for a stage the editor can hold
      */
     public static StageRecognition of(Stage stage) {
+        Memo m = last;
+        if (m != null && (m.stage == stage || Connectivity.sameDrawing(m.stage, stage))) {
+            return m.recognition;
+        }
+        StageRecognition r = recognise(stage);
+        last = new Memo(stage, r);
+        return r;
+    }
+
+    /**
+     * The number of recognitions computed in this JVM so far (calls of {@link #of} the memo did not
+     * answer). A diagnostic, so tests and benchmarks can show that a value edit finds no roles anew.
+     */
+    public static long computedCount() {
+        return COMPUTED.get();
+    }
+
+    /** Recognises a stage without the memo. */
+    static StageRecognition recognise(Stage stage) {
+        COMPUTED.incrementAndGet();
         Connectivity drawn = Connectivity.drawn(stage);
         Finder f = new Finder(stage, drawn);
         Optional<StageRoles> roles = f.run();
