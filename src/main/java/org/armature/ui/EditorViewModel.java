@@ -15,6 +15,7 @@ import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
+import org.armature.model.ParamKeys;
 import org.armature.model.StageRoles;
 import org.armature.analysis.Suggestion;
 import org.armature.analysis.TopologyCheck;
@@ -564,7 +565,7 @@ public final class EditorViewModel {
 
     /** Sets the coil supply's voltage; slider drags merge into one step. No supply: nothing. */
     public void setSupplyVolts(double volts) {
-        coilSupply().ifPresent(p -> edit(() -> editor.setValueMerging(p.ref(), "volts", volts, "supply:" + p.ref())));
+        coilSupply().ifPresent(p -> edit(() -> editor.setValueMerging(p.ref(), ParamKeys.VOLTS, volts, "supply:" + p.ref())));
     }
 
     /** Writes the sizing assistant's proposals back as one undoable step. */

@@ -11,6 +11,7 @@ import javafx.scene.control.Tooltip;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.VBox;
 import org.armature.model.Conditions;
+import org.armature.model.ParamKeys;
 import org.armature.model.Part;
 import org.armature.model.Stage;
 import org.armature.model.StageSettings;
@@ -72,7 +73,7 @@ final class StageSheet extends VBox {
             vm.setAmbientRange(Math.min(v, c.ambientMinCelsius()), v);
         }));
         commitOn(tolerance, t -> number(tolerance, t, Unit.PERCENT).ifPresent(v -> vm.coilSupply().ifPresent(
-                p -> vm.setValue(p.ref(), "tolerancePercent", v))));
+                p -> vm.setValue(p.ref(), ParamKeys.TOLERANCE_PERCENT, v))));
         commitOn(releaseTime, t -> {
             if (t.isBlank()) {
                 settings(vm.stage().settings().withReleaseTimeRequirement(OptionalDouble.empty()), "Remove release-time requirement");
@@ -101,7 +102,7 @@ final class StageSheet extends VBox {
         set(ambientMax, was == null ? null : celsius(was.conditions().ambientMaxCelsius()), celsius(s.conditions().ambientMaxCelsius()));
         Optional<Part> supply = vm.coilSupply();
         tolerance.setDisable(supply.isEmpty());
-        set(tolerance, null, supply.map(p -> Notation.format(p.value("tolerancePercent"), "%")).orElse(""));
+        set(tolerance, null, supply.map(p -> Notation.format(p.value(ParamKeys.TOLERANCE_PERCENT), "%")).orElse(""));
         set(releaseTime, null, s.settings().releaseTimeRequirementSeconds().isPresent()
                 ? Notation.format(s.settings().releaseTimeRequirementSeconds().getAsDouble(), "s") : "");
         set(samples, null, Integer.toString(s.settings().monteCarloSamples()));
