@@ -361,9 +361,9 @@ public final class EditorViewModel {
         edit(() -> editor.describe(description));
     }
 
-    /** Changes the active stage's own check settings (an undoable step of that stage). */
-    public void setStageSettings(StageSettings settings, String label) {
-        edit(() -> editor.setSettings(settings, label));
+    /** Changes the active stage's own check settings (an undoable step of that stage, named by what changed). */
+    public void setStageSettings(StageSettings settings) {
+        edit(() -> editor.setSettings(settings));
     }
 
     /** Sets the active stage's corner ambient range. */

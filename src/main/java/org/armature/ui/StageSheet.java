@@ -76,19 +76,16 @@ final class StageSheet extends VBox {
                 p -> vm.setValue(p.ref(), ParamKeys.TOLERANCE_PERCENT, v))));
         commitOn(releaseTime, t -> {
             if (t.isBlank()) {
-                settings(vm.stage().settings().withReleaseTimeRequirement(OptionalDouble.empty()), "Remove release-time requirement");
+                settings(vm.stage().settings().withReleaseTimeRequirement(OptionalDouble.empty()));
             } else {
                 number(releaseTime, t, Unit.SECOND).filter(v -> v > 0).ifPresent(v -> settings(
-                        vm.stage().settings().withReleaseTimeRequirement(OptionalDouble.of(v)),
-                        "Release time at most " + Notation.format(v, "s")));
+                        vm.stage().settings().withReleaseTimeRequirement(OptionalDouble.of(v))));
             }
         });
         commitOn(samples, t -> whole(samples, t, 0, StageSettings.MAX_MONTE_CARLO_SAMPLES).ifPresent(n -> settings(
-                vm.stage().settings().withMonteCarlo(n.intValue(), vm.stage().settings().monteCarloSeed()),
-                "Monte Carlo samples " + n)));
+                vm.stage().settings().withMonteCarlo(n.intValue(), vm.stage().settings().monteCarloSeed()))));
         commitOn(seed, t -> whole(seed, t, Long.MIN_VALUE, Long.MAX_VALUE).ifPresent(n -> settings(
-                vm.stage().settings().withMonteCarlo(vm.stage().settings().monteCarloSamples(), n),
-                "Monte Carlo seed " + n)));
+                vm.stage().settings().withMonteCarlo(vm.stage().settings().monteCarloSamples(), n))));
     }
 
     /** Brings the fields up to the stage; a field whose value did not change keeps what is typed in it. */
@@ -120,8 +117,8 @@ final class StageSheet extends VBox {
         }
     }
 
-    private void settings(StageSettings s, String label) {
-        vm.setStageSettings(s, label);
+    private void settings(StageSettings s) {
+        vm.setStageSettings(s);
     }
 
     private static TextField field(String id) {

@@ -62,7 +62,7 @@ class StageSheetTest {
         assertEquals(70, s.conditions().ambientMaxCelsius(), 0);
         assertEquals(10, vm.coilSupply().orElseThrow().value(ParamKeys.TOLERANCE_PERCENT), 0);
         assertEquals(new StageSettings(OptionalDouble.of(0.008), 200, 7), s.settings());
-        assertEquals("Undo Monte Carlo seed 7", vm.undoLabelProperty().get());
+        assertEquals("Undo Monte Carlo seed 1 → 7", vm.undoLabelProperty().get());
         for (int i = 0; i < 7; i++) {
             robot.interact(vm::undo);
         }

@@ -132,7 +132,7 @@ class EditorDefectsTest {
         Editor e = new Editor(s);
         e.rename("Zone 2 valve");
         e.describe("Second zone.");
-        e.setSettings(new StageSettings(OptionalDouble.of(0.01), 100, 3), "Change Monte Carlo run");
+        e.setSettings(new StageSettings(OptionalDouble.of(0.01), 100, 3));
         e.setAmbientRange(0, 40);
         assertEquals("Zone 2 valve", e.stage().name());
         assertEquals("Second zone.", e.stage().description());
