@@ -12,7 +12,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
-import java.util.concurrent.atomic.AtomicLong;
 
 /**
  * The one place where a stage's roles are found: which part is the drive pin, the base or gate
@@ -100,8 +99,11 @@ public record StageRecognition(Connectivity connectivity, Optional<StageRoles> r
      */
     private static volatile Memo last;
 
-    /** How many recognitions were computed (memo misses); read by tests and benchmarks only. */
-    private static final AtomicLong COMPUTED = new AtomicLong();
+    /**
+     * How many recognitions each thread computed (memo misses); read by tests and benchmarks only.
+     * Per thread, so a test that runs its pipeline on its own thread is not disturbed by others.
+     */
+    private static final ThreadLocal<long[]> COMPUTED = ThreadLocal.withInitial(() -> new long[1]);
 
     /**
      * Recognises a stage, once per drawing: a stage that differs from the last one asked about only
@@ -121,16 +123,17 @@ public record StageRecognition(Connectivity connectivity, Optional<StageRoles> r
     }
 
     /**
-     * The number of recognitions computed in this JVM so far (calls of {@link #of} the memo did not
-     * answer). A diagnostic, so tests and benchmarks can show that a value edit finds no roles anew.
+     * The number of recognitions the calling thread has computed so far (calls of {@link #of} the
+     * memo did not answer). A diagnostic, so tests and benchmarks can show that a value edit finds
+     * no roles anew.
      */
-    public static long computedCount() {
-        return COMPUTED.get();
+    public static long computedOnThisThread() {
+        return COMPUTED.get()[0];
     }
 
     /** Recognises a stage without the memo. */
     static StageRecognition recognise(Stage stage) {
-        COMPUTED.incrementAndGet();
+        COMPUTED.get()[0]++;
         Connectivity drawn = Connectivity.drawn(stage);
         Finder f = new Finder(stage, drawn);
         Optional<StageRoles> roles = f.run();

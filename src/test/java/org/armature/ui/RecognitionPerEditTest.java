@@ -13,10 +13,10 @@ import org.junit.jupiter.api.Test;
 /**
  * The stage's roles and nets are found once per drawing, not once per value edit: the window's
  * whole pipeline (validation, topology check, both pin states' solves, readouts, corner checks and
- * edges) runs on same-thread executors and {@link StageRecognition#computedCount()} counts what was
- * found anew. Before the readouts passed one recognition through, the topology check and the
- * readout builder each found the roles on every edit (two per value edit), on top of the
- * validator's and the engine's memoized copies.
+ * edges) runs on same-thread executors and {@link StageRecognition#computedOnThisThread()} counts
+ * what was found anew. Failed before the fix: only the nets were memoized, and the topology check,
+ * the readout builder, the corner checks and the edge runs each found the roles again (with the
+ * memo switched off this test counts 48 recognitions for the four value edits).
  */
 class RecognitionPerEditTest {
 
@@ -27,20 +27,20 @@ class RecognitionPerEditTest {
         EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, new EngineReadouts(),
                 Runnable::run, Runnable::run, analyses);
         assertTrue(vm.evaluation().readoutsReady(), vm.evaluation().status());
-        long before = StageRecognition.computedCount();
+        long before = StageRecognition.computedOnThisThread();
         vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 1500);
         vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 2200);
         vm.setValue("Q1", ParamKeys.HFE_MIN, 80);
         vm.setPinHigh(false);
         assertTrue(vm.evaluation().readoutsReady() && vm.evaluation().verdicts().isPresent()
                 && vm.evaluation().edges().isPresent(), "every part of the evaluation ran");
-        assertEquals(before, StageRecognition.computedCount(), "four value and condition edits: no recognition");
+        assertEquals(before, StageRecognition.computedOnThisThread(), "four value and condition edits: no recognition");
 
         vm.select(Selection.ofPart("R1"));
         vm.moveSelection(0, -1);
         assertTrue(vm.evaluation().readoutsReady(), vm.evaluation().status());
-        assertEquals(before + 1, StageRecognition.computedCount(), "a move changes the drawing: one recognition");
+        assertEquals(before + 1, StageRecognition.computedOnThisThread(), "a move changes the drawing: one recognition");
         vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 1000);
-        assertEquals(before + 1, StageRecognition.computedCount(), "and the next value edit none");
+        assertEquals(before + 1, StageRecognition.computedOnThisThread(), "and the next value edit none");
     }
 }
