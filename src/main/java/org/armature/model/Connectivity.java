@@ -55,39 +55,20 @@ public record Connectivity(Map<PinRef, String> netOfPin, List<String> netOfWire,
                 .toList();
     }
 
-    /** The drawing whose nets were found last, with them (an immutable pair, swapped whole). */
-    private record Memo(Stage stage, Connectivity nets) {
-    }
-
-    /**
-     * The last drawing's nets. The validator, the topology check, the engine and the renderer each
-     * ask for the nets of the stage on the screen, on the FX and the solver threads; the answer
-     * depends on the drawing only (parts' designators, kinds and placements, wires, test points), so
-     * it is found once per drawing and a value edit finds none anew. One entry, replaced whole
-     * through a volatile reference: thread-safe without locks, and it keeps at most one stage alive.
-     */
-    private static volatile Memo last;
-
     /**
      * Finds the nets of a stage and gives them the names people can find on a board (see the class
-     * comment). Recognises the stage's roles on the way: callers that need the roles too should
-     * call {@link StageRecognition#of(Stage)} once and take its connectivity. Computed once per
-     * drawing: a stage that differs from the last one asked about only in values and conditions gets
-     * the same (immutable) answer.
+     * comment). The nets of {@link StageRecognition#of(Stage)}: callers that need the roles too
+     * should call that once and take its connectivity. Computed once per drawing (the recognition's
+     * one-entry memo): a stage that differs from the last one asked about only in values and
+     * conditions gets the same (immutable) answer.
      */
     public static Connectivity of(Stage stage) {
-        Memo m = last;
-        if (m != null && (m.stage == stage || sameDrawing(m.stage, stage))) {
-            return m.nets;
-        }
-        Connectivity c = compute(stage);
-        last = new Memo(stage, c);
-        return c;
+        return StageRecognition.of(stage).connectivity();
     }
 
     /** Finds the nets of a stage with their role names, without the memo. */
     static Connectivity compute(Stage stage) {
-        return StageRecognition.of(stage).connectivity();
+        return StageRecognition.recognise(stage).connectivity();
     }
 
     /** True when two stages have the same nets: same parts (designator, kind, placement) in order, wires, test points. */

@@ -85,13 +85,55 @@ public record StageRecognition(Connectivity connectivity, Optional<StageRoles> r
         netDescriptions = Collections.unmodifiableMap(new LinkedHashMap<>(netDescriptions));
     }
 
+    /** The drawing recognised last, with its recognition (an immutable pair, swapped whole). */
+    private record Memo(Stage stage, StageRecognition recognition) {
+    }
+
     /**
-     * Recognises a stage.
+     * The last drawing's recognition. The validator, the topology check, the engines, the readouts
+     * and the renderer each ask about the stage on the screen, on the FX, solver and analysis
+     * threads; the answer depends on the drawing only (parts' designators, kinds and placements,
+     * wires, test points), so it is found once per drawing and a value edit finds none anew. One
+     * entry, replaced whole through a volatile reference: thread-safe without locks, and it keeps at
+     * most one stage alive.
+     */
+    private static volatile Memo last;
+
+    /**
+     * How many recognitions each thread computed (memo misses); read by tests and benchmarks only.
+     * Per thread, so a test that runs its pipeline on its own thread is not disturbed by others.
+     */
+    private static final ThreadLocal<long[]> COMPUTED = ThreadLocal.withInitial(() -> new long[1]);
+
+    /**
+     * Recognises a stage, once per drawing: a stage that differs from the last one asked about only
+     * in values, options and conditions gets the same (immutable) recognition.
      *
      * @param stage the stage as drawn; not modified
      * @return its roles, findings and named nets; never throws for a stage the editor can hold
      */
     public static StageRecognition of(Stage stage) {
+        Memo m = last;
+        if (m != null && (m.stage == stage || Connectivity.sameDrawing(m.stage, stage))) {
+            return m.recognition;
+        }
+        StageRecognition r = recognise(stage);
+        last = new Memo(stage, r);
+        return r;
+    }
+
+    /**
+     * The number of recognitions the calling thread has computed so far (calls of {@link #of} the
+     * memo did not answer). A diagnostic, so tests and benchmarks can show that a value edit finds
+     * no roles anew.
+     */
+    public static long computedOnThisThread() {
+        return COMPUTED.get()[0];
+    }
+
+    /** Recognises a stage without the memo. */
+    static StageRecognition recognise(Stage stage) {
+        COMPUTED.get()[0]++;
         Connectivity drawn = Connectivity.drawn(stage);
         Finder f = new Finder(stage, drawn);
         Optional<StageRoles> roles = f.run();

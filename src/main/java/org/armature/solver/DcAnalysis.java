@@ -12,6 +12,7 @@ import org.armature.model.Stage;
 import org.armature.model.StageRecognition;
 import org.armature.model.StageRoles;
 import org.armature.netlist.ArraySolution;
+import org.armature.netlist.ContactState;
 import org.armature.netlist.Element;
 import org.armature.netlist.FlattenOptions;
 import org.armature.netlist.Netlist;
@@ -443,9 +444,9 @@ public final class DcAnalysis {
                 // first guess only: a result that differs from the default start is confirmed below
                 double guess = defaultContacts[r];
                 if (prev == null && startStates) {
-                    guess = startOp.stateValue(cs) > 0.5 ? 1.0 : 0.0;
+                    guess = ContactState.of(startOp.stateValue(cs)).slotValue();
                 } else if (prev == null && startOp == null && warmStart && hasLast) {
-                    guess = lastStates[cs] > 0.5 ? 1.0 : 0.0;
+                    guess = ContactState.of(lastStates[cs]).slotValue();
                 }
                 states[cs] = guess;
                 guessed |= guess != defaultContacts[r];
@@ -668,7 +669,7 @@ public final class DcAnalysis {
                 if (now == back) {
                     continue;
                 }
-                double change = 1.0 / c.ohms(back > 0.5) - 1.0 / c.ohms(now > 0.5);
+                double change = 1.0 / c.ohms(ContactState.of(back).operated()) - 1.0 / c.ohms(ContactState.of(now).operated());
                 if (change == 0.0) {
                     continue;
                 }

@@ -12,6 +12,7 @@ import org.armature.devices.DiodeParams;
 import org.armature.devices.LogicOutputPin;
 import org.armature.devices.MosfetFit;
 import org.armature.devices.MosfetParams;
+import org.armature.model.ParamKeys;
 import org.armature.model.ParamSpec;
 import org.armature.model.Part;
 import org.armature.netlist.DeviceParameters;
@@ -134,8 +135,8 @@ public final class DatasheetFit {
                     sign * hfeVce, sign * vbeSat, sign * f.satCollectorAmps(),
                     SATURATION_FORCED_BETA, DiodeParams.DATASHEET_TEMPERATURE_KELVIN);
             return checked(part, List.of(
-                    new Editor.ValueChange(part.ref(), "betaForward", fit.betaForward()),
-                    new Editor.ValueChange(part.ref(), "saturationCurrentAmps", fit.saturationCurrentAmps())));
+                    new Editor.ValueChange(part.ref(), ParamKeys.BETA_FORWARD, fit.betaForward()),
+                    new Editor.ValueChange(part.ref(), ParamKeys.SATURATION_CURRENT_AMPS, fit.saturationCurrentAmps())));
         } catch (IllegalArgumentException | DeviceConvergenceException e) {
             return Result.refused("No fit: " + e.getMessage());
         }
@@ -170,11 +171,11 @@ public final class DatasheetFit {
             }
             MosfetParams p = fit.params().get();
             return checked(part, List.of(
-                    new Editor.ValueChange(part.ref(), "thresholdVolts", p.thresholdVolts()),
-                    new Editor.ValueChange(part.ref(), "transconductanceAmpsPerVoltSquared", p.transconductanceAmpsPerVoltSquared()),
-                    new Editor.ValueChange(part.ref(), "vgsThMaxVolts", f.thresholdVolts()),
-                    new Editor.ValueChange(part.ref(), "rdsOnOhms", f.rdsOnOhms()),
-                    new Editor.ValueChange(part.ref(), "rdsOnGateVolts", f.rdsOnGateVolts())));
+                    new Editor.ValueChange(part.ref(), ParamKeys.THRESHOLD_VOLTS, p.thresholdVolts()),
+                    new Editor.ValueChange(part.ref(), ParamKeys.TRANSCONDUCTANCE_AMPS_PER_VOLT_SQUARED, p.transconductanceAmpsPerVoltSquared()),
+                    new Editor.ValueChange(part.ref(), ParamKeys.VGS_TH_MAX_VOLTS, f.thresholdVolts()),
+                    new Editor.ValueChange(part.ref(), ParamKeys.RDS_ON_OHMS, f.rdsOnOhms()),
+                    new Editor.ValueChange(part.ref(), ParamKeys.RDS_ON_GATE_VOLTS, f.rdsOnGateVolts())));
         } catch (IllegalArgumentException e) {
             return Result.refused("No fit: " + e.getMessage());
         }
@@ -191,8 +192,8 @@ public final class DatasheetFit {
         try {
             LogicOutputPin pin = LogicOutputPin.fromTwoPoints(f.volts1(), f.amps1(), f.volts2(), f.amps2());
             return checked(part, List.of(
-                    new Editor.ValueChange(part.ref(), "highVolts", pin.openCircuitVolts()),
-                    new Editor.ValueChange(part.ref(), "outputResistanceOhms", pin.outputResistanceOhms())));
+                    new Editor.ValueChange(part.ref(), ParamKeys.HIGH_VOLTS, pin.openCircuitVolts()),
+                    new Editor.ValueChange(part.ref(), ParamKeys.OUTPUT_RESISTANCE_OHMS, pin.outputResistanceOhms())));
         } catch (IllegalArgumentException e) {
             return Result.refused("No fit: " + e.getMessage());
         }

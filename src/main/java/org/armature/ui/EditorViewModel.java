@@ -15,6 +15,7 @@ import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
+import org.armature.model.ParamKeys;
 import org.armature.model.StageRoles;
 import org.armature.analysis.Suggestion;
 import org.armature.analysis.TopologyCheck;
@@ -495,9 +496,9 @@ public final class EditorViewModel {
         edit(() -> editor.describe(description));
     }
 
-    /** Changes the active stage's own check settings (an undoable step of that stage). */
-    public void setStageSettings(StageSettings settings, String label) {
-        edit(() -> editor.setSettings(settings, label));
+    /** Changes the active stage's own check settings (an undoable step of that stage, named by what changed). */
+    public void setStageSettings(StageSettings settings) {
+        edit(() -> editor.setSettings(settings));
     }
 
     /** Sets the active stage's corner ambient range. */
@@ -699,7 +700,7 @@ public final class EditorViewModel {
 
     /** Sets the coil supply's voltage; slider drags merge into one step. No supply: nothing. */
     public void setSupplyVolts(double volts) {
-        coilSupply().ifPresent(p -> edit(() -> editor.setValueMerging(p.ref(), "volts", volts, "supply:" + p.ref())));
+        coilSupply().ifPresent(p -> edit(() -> editor.setValueMerging(p.ref(), ParamKeys.VOLTS, volts, "supply:" + p.ref())));
     }
 
     /** Writes the sizing assistant's proposals back as one undoable step. */

@@ -4,9 +4,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.armature.analysis.TopologyCheck;
+import org.armature.analysis.TopologyOptions;
 import org.armature.model.Finding;
 import org.armature.model.Severity;
 import org.armature.model.Stage;
+import org.armature.model.StageRecognition;
 import org.armature.model.Validator;
 import org.armature.render.Notation;
 import org.armature.render.ReadoutBuilder;
@@ -19,7 +21,8 @@ import org.armature.solver.SolverException;
 /**
  * The readouts over the DC engine: validates the stage, runs the topology check, solves the
  * operating point of each pin state and hands the one of the stage's own state to
- * {@link ReadoutBuilder}. Solver failures become one plain sentence
+ * {@link ReadoutBuilder}. The stage's roles are found once ({@link StageRecognition#of}, memoized
+ * per drawing) and passed to both the topology check and the readouts. Solver failures become one plain sentence
  * in the status line and a finding (keys of {@link SolverException#messageKey()}); the readouts are
  * then empty rather than stale.
  *
@@ -47,12 +50,15 @@ public final class EngineReadouts implements ReadoutSource {
             return new Readouts(ReadoutBuilder.markersOnly(stage, invalid),
                     "Not solved: " + invalid.get(0).message(), List.of());
         }
-        List<Finding> findings = new ArrayList<>(TopologyCheck.check(stage));
+        // one recognition per drawing (its memo): a value edit finds no roles anew
+        StageRecognition recognition = StageRecognition.of(stage);
+        List<Finding> findings = new ArrayList<>(
+                TopologyCheck.analyse(stage, recognition, TopologyOptions.DEFAULT).findings());
         try {
             OperatingPoint op = dc.solve(stage);
             boolean high = stage.conditions().pinHigh();
             Optional<OperatingPoint> other = otherPinState(stage);
-            return new Readouts(ReadoutBuilder.build(stage, op, findings), status(op), findings,
+            return new Readouts(ReadoutBuilder.build(stage, recognition, op, findings), status(op), findings,
                     high ? Optional.of(op) : other, high ? other : Optional.of(op));
         } catch (SolverException e) {
             Finding f = failure(e);

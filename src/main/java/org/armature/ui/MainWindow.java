@@ -38,6 +38,7 @@ import javafx.stage.Window;
 import javafx.stage.WindowEvent;
 import org.armature.io.StageFiles;
 import org.armature.model.HighSideDrive;
+import org.armature.model.ParamKeys;
 import org.armature.model.StageTemplate;
 import org.armature.model.Suppressor;
 import org.armature.render.Notation;
@@ -505,7 +506,7 @@ public final class MainWindow {
     }
 
     private double supplyVolts() {
-        return vm.coilSupply().map(p -> p.value("volts")).orElse(12.0);
+        return vm.coilSupply().map(p -> p.value(ParamKeys.VOLTS)).orElse(12.0);
     }
 
     private void showLineUp() {

@@ -20,6 +20,7 @@ import javafx.scene.layout.GridPane;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import org.armature.model.OptionSpec;
+import org.armature.model.ParamKeys;
 import org.armature.model.ParamSpec;
 import org.armature.model.Part;
 import org.armature.model.PinSpec;
@@ -282,16 +283,16 @@ public final class PartSheet extends VBox {
     private List<Figure> figures(Part p) {
         return switch (p.kind()) {
             case NPN, PNP -> List.of(
-                    new Figure("fit-hfe", "hFE (typical)", Unit.RATIO, Notation.format(p.value("betaForward"), "")),
+                    new Figure("fit-hfe", "hFE (typical)", Unit.RATIO, Notation.format(p.value(ParamKeys.BETA_FORWARD), "")),
                     new Figure("fit-hfe-ic", "at IC", Unit.AMPERE, "10 mA"),
                     new Figure("fit-hfe-vce", "and VCE", Unit.VOLT, "1 V"),
                     new Figure("fit-vbesat", "VBE(sat)", Unit.VOLT, "850 mV"),
                     new Figure("fit-vbesat-ic", "at IC (IC/IB = 10)", Unit.AMPERE, "50 mA"));
             case NMOS -> List.of(
-                    new Figure("fit-vth", "VGS(th)", Unit.VOLT, Notation.format(p.value("vgsThMaxVolts"), "V")),
+                    new Figure("fit-vth", "VGS(th)", Unit.VOLT, Notation.format(p.value(ParamKeys.VGS_TH_MAX_VOLTS), "V")),
                     new Figure("fit-vth-id", "at ID", Unit.AMPERE, "250 µA"),
-                    new Figure("fit-rdson", "RDS(on)", Unit.OHM, Notation.format(p.value("rdsOnOhms"), "Ω")),
-                    new Figure("fit-rdson-vgs", "at VGS", Unit.VOLT, Notation.format(p.value("rdsOnGateVolts"), "V")),
+                    new Figure("fit-rdson", "RDS(on)", Unit.OHM, Notation.format(p.value(ParamKeys.RDS_ON_OHMS), "Ω")),
+                    new Figure("fit-rdson-vgs", "at VGS", Unit.VOLT, Notation.format(p.value(ParamKeys.RDS_ON_GATE_VOLTS), "V")),
                     new Figure("fit-rdson-id", "and ID", Unit.AMPERE, "100 mA"));
             case DRIVE_PIN -> List.of(
                     new Figure("fit-voh1", "VOH", Unit.VOLT, "2.9 V"),

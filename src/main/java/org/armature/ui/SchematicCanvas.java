@@ -14,6 +14,7 @@ import javafx.scene.input.MouseEvent;
 import javafx.scene.input.ScrollEvent;
 import javafx.scene.layout.Region;
 import org.armature.model.GridPoint;
+import org.armature.model.ParamKeys;
 import org.armature.model.Stage;
 import org.armature.model.Wire;
 import org.armature.render.Affine;
@@ -451,8 +452,8 @@ public final class SchematicCanvas extends Region {
                 Optional<org.armature.model.Part> p = vm.stage().part(l.owner());
                 if (p.isPresent()) {
                     String key = switch (p.get().kind()) {
-                        case RESISTOR -> "resistanceOhms";
-                        case CAPACITOR -> "capacitanceFarads";
+                        case RESISTOR -> ParamKeys.RESISTANCE_OHMS;
+                        case CAPACITOR -> ParamKeys.CAPACITANCE_FARADS;
                         default -> "";
                     };
                     if (!key.isEmpty()) {

@@ -11,6 +11,7 @@ import javafx.scene.control.Tooltip;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.VBox;
 import org.armature.model.Conditions;
+import org.armature.model.ParamKeys;
 import org.armature.model.Part;
 import org.armature.model.Stage;
 import org.armature.model.StageSettings;
@@ -72,22 +73,19 @@ final class StageSheet extends VBox {
             vm.setAmbientRange(Math.min(v, c.ambientMinCelsius()), v);
         }));
         commitOn(tolerance, t -> number(tolerance, t, Unit.PERCENT).ifPresent(v -> vm.coilSupply().ifPresent(
-                p -> vm.setValue(p.ref(), "tolerancePercent", v))));
+                p -> vm.setValue(p.ref(), ParamKeys.TOLERANCE_PERCENT, v))));
         commitOn(releaseTime, t -> {
             if (t.isBlank()) {
-                settings(vm.stage().settings().withReleaseTimeRequirement(OptionalDouble.empty()), "Remove release-time requirement");
+                settings(vm.stage().settings().withReleaseTimeRequirement(OptionalDouble.empty()));
             } else {
                 number(releaseTime, t, Unit.SECOND).filter(v -> v > 0).ifPresent(v -> settings(
-                        vm.stage().settings().withReleaseTimeRequirement(OptionalDouble.of(v)),
-                        "Release time at most " + Notation.format(v, "s")));
+                        vm.stage().settings().withReleaseTimeRequirement(OptionalDouble.of(v))));
             }
         });
         commitOn(samples, t -> whole(samples, t, 0, StageSettings.MAX_MONTE_CARLO_SAMPLES).ifPresent(n -> settings(
-                vm.stage().settings().withMonteCarlo(n.intValue(), vm.stage().settings().monteCarloSeed()),
-                "Monte Carlo samples " + n)));
+                vm.stage().settings().withMonteCarlo(n.intValue(), vm.stage().settings().monteCarloSeed()))));
         commitOn(seed, t -> whole(seed, t, Long.MIN_VALUE, Long.MAX_VALUE).ifPresent(n -> settings(
-                vm.stage().settings().withMonteCarlo(vm.stage().settings().monteCarloSamples(), n),
-                "Monte Carlo seed " + n)));
+                vm.stage().settings().withMonteCarlo(vm.stage().settings().monteCarloSamples(), n))));
     }
 
     /** Brings the fields up to the stage; a field whose value did not change keeps what is typed in it. */
@@ -101,7 +99,7 @@ final class StageSheet extends VBox {
         set(ambientMax, was == null ? null : celsius(was.conditions().ambientMaxCelsius()), celsius(s.conditions().ambientMaxCelsius()));
         Optional<Part> supply = vm.coilSupply();
         tolerance.setDisable(supply.isEmpty());
-        set(tolerance, null, supply.map(p -> Notation.format(p.value("tolerancePercent"), "%")).orElse(""));
+        set(tolerance, null, supply.map(p -> Notation.format(p.value(ParamKeys.TOLERANCE_PERCENT), "%")).orElse(""));
         set(releaseTime, null, s.settings().releaseTimeRequirementSeconds().isPresent()
                 ? Notation.format(s.settings().releaseTimeRequirementSeconds().getAsDouble(), "s") : "");
         set(samples, null, Integer.toString(s.settings().monteCarloSamples()));
@@ -119,8 +117,8 @@ final class StageSheet extends VBox {
         }
     }
 
-    private void settings(StageSettings s, String label) {
-        vm.setStageSettings(s, label);
+    private void settings(StageSettings s) {
+        vm.setStageSettings(s);
     }
 
     private static TextField field(String id) {

@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Optional;
 import org.armature.io.Autosave;
 import org.armature.io.StageFiles;
+import org.armature.model.ParamKeys;
 import org.armature.model.StageDocument;
 import org.armature.model.Templates;
 import org.armature.render.Annotations;
@@ -38,14 +39,14 @@ class AutosaveControllerTest {
         EditorViewModel vm = vm();
         AutosaveController c = new AutosaveController(vm, store);
         assertFalse(c.autosaveNow(), "nothing to keep before an edit");
-        vm.setValue("R1", "resistanceOhms", 2200);
+        vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 2200);
         assertTrue(c.autosaveNow());
         assertTrue(store.exists(c.key()));
         Path file = dir.resolve("valves.stage.json");
         assertTrue(vm.saveAs(file));
         assertEquals(Autosave.keyFor(file), c.key(), "the key follows the file");
         assertEquals(List.of(), store.pending(), "saving removed the untitled autosave and left none for the file");
-        vm.setValue("R1", "resistanceOhms", 3300);
+        vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 3300);
         c.autosaveNow();
         assertEquals(Optional.of(file.toAbsolutePath()), store.pending().get(0).original());
         vm.undo();
@@ -62,7 +63,7 @@ class AutosaveControllerTest {
         EditorViewModel first = vm();
         AutosaveController crashed = new AutosaveController(first, store);
         assertTrue(first.open(file));
-        first.setValue("R1", "resistanceOhms", 4700);
+        first.setValue("R1", ParamKeys.RESISTANCE_OHMS, 4700);
         crashed.autosaveNow();
         // the process dies here: no stop(), no save
 
@@ -73,12 +74,12 @@ class AutosaveControllerTest {
         assertTrue(AutosaveController.question(pending.get(0)).contains("pump.stage.json"));
         assertTrue(AutosaveController.question(pending.get(0)).contains("autosaved"));
         assertTrue(c.recover(pending.get(0)));
-        assertEquals(4700, next.stage().require("R1").value("resistanceOhms"), 0.0);
+        assertEquals(4700, next.stage().require("R1").value(ParamKeys.RESISTANCE_OHMS), 0.0);
         assertTrue(next.dirtyProperty().get(), "recovered work is unsaved");
         assertEquals(Optional.of(file.toAbsolutePath()), next.fileProperty().get().map(Path::toAbsolutePath));
         assertTrue(next.save());
         assertEquals(List.of(), store.pending());
-        assertEquals(4700, StageFiles.open(file).first().require("R1").value("resistanceOhms"), 0.0);
+        assertEquals(4700, StageFiles.open(file).first().require("R1").value(ParamKeys.RESISTANCE_OHMS), 0.0);
     }
 
     @Test
@@ -87,11 +88,11 @@ class AutosaveControllerTest {
         Autosave store = new Autosave(dir.resolve("recovery"));
         EditorViewModel a = vm();
         AutosaveController ca = new AutosaveController(a, store);
-        a.setValue("R1", "resistanceOhms", 5600);
+        a.setValue("R1", ParamKeys.RESISTANCE_OHMS, 5600);
         ca.autosaveNow();
         EditorViewModel b = vm();
         AutosaveController cb = new AutosaveController(b, store);
-        b.setValue("R1", "resistanceOhms", 6800);
+        b.setValue("R1", ParamKeys.RESISTANCE_OHMS, 6800);
         cb.autosaveNow();
 
         EditorViewModel next = vm();
@@ -113,7 +114,7 @@ class AutosaveControllerTest {
         for (int i = 0; i < 3; i++) {
             EditorViewModel crashed = vm();
             AutosaveController c = new AutosaveController(crashed, store);
-            crashed.setValue("R1", "resistanceOhms", 1100 + i);
+            crashed.setValue("R1", ParamKeys.RESISTANCE_OHMS, 1100 + i);
             c.autosaveNow();
         }
         EditorViewModel next = vm();

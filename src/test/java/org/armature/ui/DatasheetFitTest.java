@@ -12,6 +12,7 @@ import org.armature.devices.BjtJunctionSolution;
 import org.armature.devices.DeviceNewtonOptions;
 import org.armature.devices.DiodeParams;
 import org.armature.model.HighSideDrive;
+import org.armature.model.ParamKeys;
 import org.armature.model.Part;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
@@ -39,7 +40,7 @@ class DatasheetFitTest {
             + "VOH(20 mA) = VDD − 1.3 gives 75 Ω and 3.5 V, applied as one step that one undo takes back")
     void pinGp7ThroughViewModel() {
         Stage start = Templates.defaultStage();
-        start = start.withPart(start.require("U1").with("highVolts", 5.05).with("outputResistanceOhms", 50));
+        start = start.withPart(start.require("U1").with(ParamKeys.HIGH_VOLTS, 5.05).with(ParamKeys.OUTPUT_RESISTANCE_OHMS, 50));
         EditorViewModel vm = vm(start);
         StageDocument before = vm.document();
         DatasheetFit.Result r = DatasheetFit.pin(vm.stage().require("U1"),
@@ -47,8 +48,8 @@ class DatasheetFitTest {
         assertTrue(r.fitted(), r.problem().orElse(""));
         assertTrue(vm.applyDatasheetFit("U1", r));
         Part u1 = vm.stage().require("U1");
-        assertEquals(75, u1.value("outputResistanceOhms"), 1e-9, "GP-7: Rout = 0.9 V / 12 mA");
-        assertEquals(3.5, u1.value("highVolts"), 1e-9, "GP-7: V0 = 2.9 V + 75 Ω · 8 mA = VDD + 0.2 V");
+        assertEquals(75, u1.value(ParamKeys.OUTPUT_RESISTANCE_OHMS), 1e-9, "GP-7: Rout = 0.9 V / 12 mA");
+        assertEquals(3.5, u1.value(ParamKeys.HIGH_VOLTS), 1e-9, "GP-7: V0 = 2.9 V + 75 Ω · 8 mA = VDD + 0.2 V");
         assertEquals("Undo Fit U1 to datasheet", vm.undoLabelProperty().get());
         vm.undo();
         assertEquals(before, vm.document());
@@ -85,17 +86,17 @@ class DatasheetFitTest {
         assertTrue(r.fitted(), r.problem().orElse(""));
         assertTrue(vm.applyDatasheetFit("Q1", r));
         Part q = vm.stage().require("Q1");
-        double vt0 = q.value("thresholdVolts");
-        double beta = q.value("transconductanceAmpsPerVoltSquared");
-        double lambda = q.value("lambdaPerVolt");
+        double vt0 = q.value(ParamKeys.THRESHOLD_VOLTS);
+        double beta = q.value(ParamKeys.TRANSCONDUCTANCE_AMPS_PER_VOLT_SQUARED);
+        double lambda = q.value(ParamKeys.LAMBDA_PER_VOLT);
         assertEquals(ith, beta / 2 * Math.pow(vth - vt0, 2) * (1 + lambda * vth), ith * 1e-9,
                 "derived: ID(th) = β/2·(VGS(th) − VT0)²·(1 + λ·VGS(th))");
         double vds = id * rds;
         assertEquals(id, beta * (vgs - vt0 - vds / 2) * vds * (1 + lambda * vds), id * 1e-9,
                 "derived: ID = β·(VGS − VT0 − VDS/2)·VDS·(1 + λ·VDS) at VDS = ID·RDS(on)");
-        assertEquals(vth, q.value("vgsThMaxVolts"), 0, "as entered");
-        assertEquals(rds, q.value("rdsOnOhms"), 0, "as entered");
-        assertEquals(vgs, q.value("rdsOnGateVolts"), 0, "as entered");
+        assertEquals(vth, q.value(ParamKeys.VGS_TH_MAX_VOLTS), 0, "as entered");
+        assertEquals(rds, q.value(ParamKeys.RDS_ON_OHMS), 0, "as entered");
+        assertEquals(vgs, q.value(ParamKeys.RDS_ON_GATE_VOLTS), 0, "as entered");
         vm.undo();
         assertEquals(before, vm.document());
     }
@@ -120,9 +121,9 @@ class DatasheetFitTest {
         Part npn = vm.stage().require("Q1");
         DatasheetFit.Result r = DatasheetFit.bjt(npn, f);
         assertTrue(r.fitted(), r.problem().orElse(""));
-        assertEquals(java.util.Set.of("betaForward", "saturationCurrentAmps"), byKey(r).keySet());
+        assertEquals(java.util.Set.of(ParamKeys.BETA_FORWARD, ParamKeys.SATURATION_CURRENT_AMPS), byKey(r).keySet());
         assertTrue(vm.applyDatasheetFit("Q1", r));
-        assertEquals(byKey(r).get("betaForward"), vm.stage().require("Q1").value("betaForward"), 0);
+        assertEquals(byKey(r).get(ParamKeys.BETA_FORWARD), vm.stage().require("Q1").value(ParamKeys.BETA_FORWARD), 0);
         // derived: the fitted model reproduces both statements at the terminals (hFE at 10 mA, 1 V; VBE(sat) at 50 mA, 5 mA)
         Bjt fitted = new Bjt(DatasheetFit.bjtParams(vm.stage().require("Q1")));
         double t = DiodeParams.DATASHEET_TEMPERATURE_KELVIN;
@@ -145,8 +146,8 @@ class DatasheetFitTest {
         }
         Map<String, Double> a = byKey(r);
         Map<String, Double> b = byKey(DatasheetFit.bjt(pnp, f));
-        assertEquals(a.get("betaForward"), b.get("betaForward"), a.get("betaForward") * 1e-9);
-        assertEquals(a.get("saturationCurrentAmps"), b.get("saturationCurrentAmps"), a.get("saturationCurrentAmps") * 1e-9);
+        assertEquals(a.get(ParamKeys.BETA_FORWARD), b.get(ParamKeys.BETA_FORWARD), a.get(ParamKeys.BETA_FORWARD) * 1e-9);
+        assertEquals(a.get(ParamKeys.SATURATION_CURRENT_AMPS), b.get(ParamKeys.SATURATION_CURRENT_AMPS), a.get(ParamKeys.SATURATION_CURRENT_AMPS) * 1e-9);
     }
 
     @Test

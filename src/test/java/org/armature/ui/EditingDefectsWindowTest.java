@@ -12,6 +12,7 @@ import javafx.scene.Node;
 import javafx.scene.control.TextField;
 import javafx.scene.control.ToggleButton;
 import javafx.scene.input.KeyCode;
+import org.armature.model.ParamKeys;
 import org.armature.model.PartKind;
 import org.armature.model.Templates;
 import org.armature.render.Selection;
@@ -51,10 +52,10 @@ class EditingDefectsWindowTest {
         robot.interact(f::requestFocus);
         robot.type(KeyCode.UP, 2);
         WaitForAsyncUtils.waitForFxEvents();
-        assertEquals(1200, vm.stage().require("R1").value("resistanceOhms"), 1e-9, "IEC 60063 E24");
+        assertEquals(1200, vm.stage().require("R1").value(ParamKeys.RESISTANCE_OHMS), 1e-9, "IEC 60063 E24");
         robot.type(KeyCode.TAB);
         WaitForAsyncUtils.waitForFxEvents();
-        assertEquals(1200, vm.stage().require("R1").value("resistanceOhms"), 1e-9, "leaving the field keeps the steps");
+        assertEquals(1200, vm.stage().require("R1").value(ParamKeys.RESISTANCE_OHMS), 1e-9, "leaving the field keeps the steps");
         assertEquals("Undo R1 resistance 1 kΩ → 1.2 kΩ", vm.undoLabelProperty().get());
     }
 
@@ -68,7 +69,7 @@ class EditingDefectsWindowTest {
             f.setText("2k2");
             f.fireEvent(new ActionEvent());
         });
-        assertEquals(2200, vm.stage().require("R1").value("resistanceOhms"), 1e-9, "IEC 60062 letter code");
+        assertEquals(2200, vm.stage().require("R1").value(ParamKeys.RESISTANCE_OHMS), 1e-9, "IEC 60062 letter code");
         assertSame(f, robot.lookup("#param-resistanceOhms").queryAs(TextField.class), "the field was not rebuilt");
         robot.type(KeyCode.TAB);
         WaitForAsyncUtils.waitForFxEvents();
@@ -95,7 +96,7 @@ class EditingDefectsWindowTest {
         robot.interact(() -> vm.select(Selection.ofPart("Q1")));
         TextField ic = robot.lookup("#fit-hfe-ic").queryAs(TextField.class);
         robot.interact(() -> ic.setText("20 mA"));
-        robot.interact(() -> vm.setValue("Q1", "betaForward", 150));
+        robot.interact(() -> vm.setValue("Q1", ParamKeys.BETA_FORWARD, 150));
         assertEquals("20 mA", robot.lookup("#fit-hfe-ic").queryAs(TextField.class).getText());
     }
 
@@ -104,7 +105,7 @@ class EditingDefectsWindowTest {
     void staleMessageCleared(FxRobot robot) {
         robot.interact(() -> vm.saveAs(Path.of("memory", "a.stage.json")));
         assertEquals("Saved a.stage.json", vm.messageProperty().get());
-        robot.interact(() -> vm.setValue("R1", "resistanceOhms", 2200));
+        robot.interact(() -> vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 2200));
         assertEquals("", vm.messageProperty().get());
     }
 

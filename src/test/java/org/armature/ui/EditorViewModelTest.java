@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayDeque;
 import java.util.Deque;
 import java.util.List;
+import org.armature.model.ParamKeys;
 import org.armature.model.Templates;
 import org.armature.render.Annotations;
 import org.junit.jupiter.api.DisplayName;
@@ -16,7 +17,7 @@ class EditorViewModelTest {
 
     /** Readouts that tag the coil supply with the R1 value, so a result shows which stage it came from. */
     static final ReadoutSource MARKING = st -> new ReadoutSource.Readouts(
-            new Annotations(List.of(new Annotations.NodeVoltage("supply", st.require("R1").value("resistanceOhms"))),
+            new Annotations(List.of(new Annotations.NodeVoltage("supply", st.require("R1").value(ParamKeys.RESISTANCE_OHMS))),
                     List.of(), List.of(), List.of(), List.of()), "solved");
 
     @Test
@@ -43,7 +44,7 @@ class EditorViewModelTest {
         EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, MARKING, solves::add, fx::add);
         solves.poll().run();
         Runnable old = fx.poll();
-        vm.setValue("R1", "resistanceOhms", 2200);
+        vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 2200);
         old.run();
         assertTrue(vm.annotations().isEmpty(), "the 1 kΩ result came after the 2.2 kΩ edit: dropped");
         assertEquals(vm.stage(), vm.evaluation().stage(), "the evaluation shown is of the newest stage, pending");
@@ -59,12 +60,12 @@ class EditorViewModelTest {
         Deque<Runnable> fx = new ArrayDeque<>();
         java.util.List<Double> solved = new java.util.ArrayList<>();
         ReadoutSource counting = st -> {
-            solved.add(st.require("R1").value("resistanceOhms"));
+            solved.add(st.require("R1").value(ParamKeys.RESISTANCE_OHMS));
             return MARKING.compute(st);
         };
         EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, counting, solves::add, fx::add);
         for (int i = 1; i <= 50; i++) {
-            vm.setValue("R1", "resistanceOhms", 1000 + i);
+            vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 1000 + i);
         }
         assertEquals(1, solves.size(), "one drain task for the whole burst");
         solves.poll().run();

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.SplittableRandom;
 import org.armature.analysis.CheckReport;
+import org.armature.model.ParamKeys;
 import org.armature.model.Stage;
 import org.armature.model.Templates;
 import org.armature.render.Annotations;
@@ -27,7 +28,7 @@ class EvaluationsTest {
 
     /** The R1 value of a stage: each source stamps it into what it returns. */
     private static double r1(Stage s) {
-        return s.require("R1").value("resistanceOhms");
+        return s.require("R1").value(ParamKeys.RESISTANCE_OHMS);
     }
 
     @ParameterizedTest(name = "seed {0}")
@@ -51,7 +52,7 @@ class EvaluationsTest {
             if (what == 0 && published.size() < 300) {
                 // the publish thread is also where edits happen
                 double r = 1000 + rnd.nextInt(1000);
-                ev.submit(base.updatePart("R1", p -> p.with("resistanceOhms", r)));
+                ev.submit(base.updatePart("R1", p -> p.with(ParamKeys.RESISTANCE_OHMS, r)));
             } else {
                 Deque<Runnable> q = what == 1 ? solves : what == 2 ? slow : fx;
                 if (!q.isEmpty()) {

@@ -19,6 +19,7 @@ import org.armature.analysis.CheckResult;
 import org.armature.analysis.StageChecks;
 import org.armature.model.GridPoint;
 import org.armature.model.HighSideDrive;
+import org.armature.model.ParamKeys;
 import org.armature.model.PartKind;
 import org.armature.model.PinRef;
 import org.armature.model.Stage;
@@ -147,7 +148,7 @@ class LiveWindowTest {
     void undoRedoIdentical(FxRobot robot) {
         StageDocument original = vm.document();
         robot.interact(() -> {
-            vm.setValue("R1", "resistanceOhms", 4700);
+            vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 4700);
             vm.setPinHigh(false);
             vm.setAmbient(50);
         });
@@ -202,7 +203,7 @@ class LiveWindowTest {
         assertTrue(vm.evaluation().status().startsWith("Converged"), vm.evaluation().status());
         OperatingPoint op = new DcAnalysis().solve(vm.stage());
         double amps = op.requirePart(ref.get()).quantity("current");
-        double expected = 12 / vm.stage().require(ref.get()).value("resistanceOhms");
+        double expected = 12 / vm.stage().require(ref.get()).value(ParamKeys.RESISTANCE_OHMS);
         // derived: Ohm's law, a new supply at its default 12 V across the resistor's default value
         assertEquals(expected, Math.abs(amps), expected * 1e-6);
     }
@@ -211,7 +212,7 @@ class LiveWindowTest {
     @DisplayName("save and open round-trip the document and its readouts")
     void saveOpenRoundTrip(FxRobot robot) {
         Path p = Path.of("memory", "greenhouse-valve.stage.json");
-        robot.interact(() -> vm.setValue("R1", "resistanceOhms", 3300));
+        robot.interact(() -> vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 3300));
         StageDocument saved = vm.document();
         double control = voltage("control");
         robot.interact(() -> vm.saveAs(p));
@@ -278,11 +279,11 @@ class LiveWindowTest {
     void supplySlider(FxRobot robot) {
         javafx.scene.control.Slider s = robot.lookup("#supply-slider").queryAs(javafx.scene.control.Slider.class);
         robot.interact(() -> s.setValue(9));
-        assertEquals(9, vm.stage().require("V1").value("volts"), 1e-9);
+        assertEquals(9, vm.stage().require("V1").value(ParamKeys.VOLTS), 1e-9);
         assertEquals(9, voltage("supply"), 1e-6, "derived: the rail's test point reads the rail");
         robot.interact(() -> s.setValue(10));
         robot.interact(vm::undo);
-        assertEquals(12, vm.stage().require("V1").value("volts"), 1e-9, "one drag is one step");
+        assertEquals(12, vm.stage().require("V1").value(ParamKeys.VOLTS), 1e-9, "one drag is one step");
     }
 
     @Test

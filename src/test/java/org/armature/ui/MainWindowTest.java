@@ -18,6 +18,7 @@ import javafx.scene.image.WritableImage;
 import javafx.stage.WindowEvent;
 import org.armature.io.StageFileException;
 import org.armature.model.HighSideDrive;
+import org.armature.model.ParamKeys;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
 import org.armature.model.StageTemplate;
@@ -100,7 +101,7 @@ class MainWindowTest {
         robot.interact(() -> item.get().fire());
         assertEquals(Templates.build(StageTemplate.LOW_SIDE_NMOS, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT), vm.stage());
         assertTrue(drawnPartLabels().contains("Q1"));
-        assertEquals(100_000, vm.stage().require("R2").value("resistanceOhms"), 1e-9, "template: 100 kΩ gate pull-down");
+        assertEquals(100_000, vm.stage().require("R2").value(ParamKeys.RESISTANCE_OHMS), 1e-9, "template: 100 kΩ gate pull-down");
     }
 
     @Test
@@ -114,7 +115,7 @@ class MainWindowTest {
             f.setText("2k2");
             f.fireEvent(new ActionEvent());
         });
-        assertEquals(2200, vm.stage().require("R1").value("resistanceOhms"), 1e-9, "IEC 60062 letter code 2k2 = 2.2 kΩ");
+        assertEquals(2200, vm.stage().require("R1").value(ParamKeys.RESISTANCE_OHMS), 1e-9, "IEC 60062 letter code 2k2 = 2.2 kΩ");
         assertTrue(vm.dirtyProperty().get());
         robot.interact(vm::undo);
         assertEquals(before, vm.stage());
@@ -151,13 +152,13 @@ class MainWindowTest {
     @DisplayName("save marks the document clean and open brings it back")
     void saveAndOpen(FxRobot robot) {
         Path p = Path.of("memory", "bench.stage.json");
-        robot.interact(() -> vm.setValue("R1", "resistanceOhms", 4700));
+        robot.interact(() -> vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 4700));
         robot.interact(() -> vm.saveAs(p));
         assertFalse(vm.dirtyProperty().get());
         assertEquals("bench.stage.json", vm.fileName());
         robot.interact(() -> vm.newFromTemplate(StageTemplate.HIGH_SIDE_PNP, Suppressor.TVS, HighSideDrive.LEVEL_SHIFT));
         robot.interact(() -> vm.open(p));
-        assertEquals(4700, vm.stage().require("R1").value("resistanceOhms"), 1e-9);
+        assertEquals(4700, vm.stage().require("R1").value(ParamKeys.RESISTANCE_OHMS), 1e-9);
         java.util.concurrent.atomic.AtomicBoolean opened = new java.util.concurrent.atomic.AtomicBoolean(true);
         robot.interact(() -> opened.set(vm.open(Path.of("memory", "missing.stage.json"))));
         assertFalse(opened.get());
@@ -222,7 +223,7 @@ class MainWindowTest {
         });
         assertEquals(0, asked[0]);
         assertFalse(clean.get().isConsumed());
-        robot.interact(() -> vm.setValue("R1", "resistanceOhms", 2200));
+        robot.interact(() -> vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 2200));
         assertTrue(vm.dirtyProperty().get());
         // dirty and cancelled: the request is consumed, the window stays
         robot.interact(() -> fxStage.fireEvent(new WindowEvent(fxStage, WindowEvent.WINDOW_CLOSE_REQUEST)));
@@ -250,8 +251,8 @@ class MainWindowTest {
             + "derived from a typical 3.3 V microcontroller output table) as one step; bad input is marked")
     void datasheetSectionFitsPin(FxRobot robot) {
         robot.interact(() -> {
-            vm.setValue("U1", "highVolts", 5);
-            vm.setValue("U1", "outputResistanceOhms", 40);
+            vm.setValue("U1", ParamKeys.HIGH_VOLTS, 5);
+            vm.setValue("U1", ParamKeys.OUTPUT_RESISTANCE_OHMS, 40);
             vm.select(Selection.ofPart("U1"));
         });
         StageDocument before = vm.document();
@@ -272,8 +273,8 @@ class MainWindowTest {
         });
         assertFalse(i2.getStyleClass().contains(PartSheet.INVALID));
         robot.interact(() -> robot.lookup("#datasheet-apply").queryButton().fire());
-        assertEquals(75, vm.stage().require("U1").value("outputResistanceOhms"), 1e-9, "GP-7");
-        assertEquals(3.5, vm.stage().require("U1").value("highVolts"), 1e-9, "GP-7");
+        assertEquals(75, vm.stage().require("U1").value(ParamKeys.OUTPUT_RESISTANCE_OHMS), 1e-9, "GP-7");
+        assertEquals(3.5, vm.stage().require("U1").value(ParamKeys.HIGH_VOLTS), 1e-9, "GP-7");
         robot.interact(vm::undo);
         assertEquals(before, vm.document());
     }

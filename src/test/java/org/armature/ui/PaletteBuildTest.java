@@ -11,13 +11,13 @@ import javafx.event.ActionEvent;
 import javafx.geometry.Point2D;
 import javafx.scene.control.TextField;
 import javafx.scene.control.ToggleButton;
+import javafx.scene.input.MouseButton;
 import org.armature.model.HighSideDrive;
 import org.armature.model.Part;
 import org.armature.model.Stage;
 import org.armature.model.StageTemplate;
 import org.armature.model.Suppressor;
 import org.armature.model.Templates;
-import org.armature.model.Wire;
 import org.armature.render.Affine;
 import org.armature.render.Annotations;
 import org.armature.render.Selection;
@@ -37,10 +37,9 @@ import org.testfx.util.WaitForAsyncUtils;
  *
  * <p>What this side of the window controls is checked: every part placed from the palette at the
  * template's place, turned, valued and renamed through the part sheet, the wires drawn, and the
- * evaluation's operating point and coil gauge equal to the template's. The switch badge and the
- * voltage readouts at named nets need the stage roles found from connectivity (the other half of
- * issue 11): the engine finds the switch through the test point named "switch", which a drawn
- * stage does not have, so they are not compared here.
+ * evaluation's operating point, coil gauge, badges (the switch verdict among them) and the voltage
+ * readouts at the nets the stage's roles name equal to the template's: the roles are found from
+ * connectivity alone, so no test point named "switch" is needed.
  */
 @ExtendWith(ApplicationExtension.class)
 class PaletteBuildTest {
@@ -76,7 +75,10 @@ class PaletteBuildTest {
             double gx = t.placement().origin().gridX();
             double gy = t.placement().origin().gridY();
             Point2D screen = window.canvas().localToScreen(v.mapX(gx, gy), v.mapY(gx, gy));
-            robot.clickOn(screen);
+            // one jump of the pointer, then a real press and release there: clickOn(point) would
+            // glide there in up to 200 steps, each repainting the armed part's preview
+            robot.robotContext().getMouseRobot().move(screen);
+            robot.clickOn(MouseButton.PRIMARY);
             WaitForAsyncUtils.waitForFxEvents();
             Part placed = vm.stage().parts().get(vm.stage().parts().size() - 1);
             assertEquals(t.kind(), placed.kind());
@@ -103,9 +105,7 @@ class PaletteBuildTest {
             }
             built.put(t.ref(), ref);
         }
-        for (Wire w : template.wires()) {
-            robot.interact(() -> vm.drawWire(w.from(), w.to()));
-        }
+        robot.interact(() -> template.wires().forEach(w -> vm.drawWire(w.from(), w.to())));
         Stage drawn = vm.stage();
         assertTrue(drawn.testPoints().isEmpty());
         for (Part t : template.parts()) {
@@ -130,5 +130,32 @@ class PaletteBuildTest {
         assertEquals(tg.coilAmps(), g.coilAmps(), NM6_AMPS);
         assertEquals(tg.pickUpAmps(), g.pickUpAmps(), NM6_AMPS);
         assertEquals(tg.operated(), g.operated());
+        assertEquals(tg.dropOutAmps(), g.dropOutAmps(), NM6_AMPS);
+
+        // the switch badge and the readouts at named nets, found from connectivity alone
+        Annotations ta = new EngineReadouts().compute(template).annotations();
+        Annotations da = vm.annotations();
+        Map<String, String> back = new HashMap<>();
+        built.forEach((t, b) -> back.put(b, t));
+        Map<String, Annotations.PartBadge> templateBadges = new HashMap<>();
+        ta.badges().forEach(b -> templateBadges.put(b.ref(), b));
+        assertEquals(ta.badges().size(), da.badges().size(), "one badge per transistor and pin, as on the template");
+        for (Annotations.PartBadge b : da.badges()) {
+            Annotations.PartBadge t = templateBadges.get(back.get(b.ref()));
+            assertTrue(t != null, "the template has a badge for " + b.ref());
+            // derived: same circuit, same verdict words ("saturated, ×… margin") and state
+            assertEquals(t.text(), b.text(), b.ref());
+            assertEquals(t.state(), b.state(), b.ref());
+        }
+        Annotations.PartBadge sw = da.badges().stream().filter(b -> b.ref().equals("Q7")).findFirst().orElseThrow();
+        assertTrue(sw.text().startsWith("saturated"), "the switch badge gives the verdict: " + sw.text());
+        Map<String, Double> templateVolts = new HashMap<>();
+        ta.voltages().forEach(v -> templateVolts.put(v.net(), v.volts()));
+        Map<String, Double> drawnVolts = new HashMap<>();
+        da.voltages().forEach(v -> drawnVolts.put(v.net(), v.volts()));
+        assertEquals(templateVolts.keySet(), drawnVolts.keySet(),
+                "the drawn stage's nets are named as the template's test points (pin, control, switch, supply)");
+        // check-values.md NM-6 (common practice): two engines' answers agree within reltol·|v| + vntol
+        templateVolts.forEach((net, volts) -> assertEquals(volts, drawnVolts.get(net), 1e-3 * Math.abs(volts) + 1e-6, net));
     }
 }

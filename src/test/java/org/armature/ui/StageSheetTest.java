@@ -7,6 +7,7 @@ import java.util.OptionalDouble;
 import javafx.event.ActionEvent;
 import javafx.scene.control.TextField;
 import org.armature.analysis.CheckReport;
+import org.armature.model.ParamKeys;
 import org.armature.model.Stage;
 import org.armature.model.StageSettings;
 import org.armature.model.StageTemplate;
@@ -59,9 +60,9 @@ class StageSheetTest {
         assertEquals("Zone 4 valve", s.name());
         assertEquals(-25, s.conditions().ambientMinCelsius(), 0);
         assertEquals(70, s.conditions().ambientMaxCelsius(), 0);
-        assertEquals(10, vm.coilSupply().orElseThrow().value("tolerancePercent"), 0);
+        assertEquals(10, vm.coilSupply().orElseThrow().value(ParamKeys.TOLERANCE_PERCENT), 0);
         assertEquals(new StageSettings(OptionalDouble.of(0.008), 200, 7), s.settings());
-        assertEquals("Undo Monte Carlo seed 7", vm.undoLabelProperty().get());
+        assertEquals("Undo Monte Carlo seed 1 → 7", vm.undoLabelProperty().get());
         for (int i = 0; i < 7; i++) {
             robot.interact(vm::undo);
         }

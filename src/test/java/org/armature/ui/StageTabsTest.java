@@ -11,6 +11,7 @@ import javafx.scene.control.TabPane;
 import org.armature.io.StageFiles;
 import org.armature.io.StageJson;
 import org.armature.model.HighSideDrive;
+import org.armature.model.ParamKeys;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
 import org.armature.model.StageTemplate;
@@ -71,7 +72,7 @@ class StageTabsTest {
         assertEquals(before.stages().get(1), vm.stage(), "the tab opens its stage");
         String ref = vm.stage().parts().stream().filter(p -> p.kind() == org.armature.model.PartKind.RESISTOR)
                 .findFirst().orElseThrow().ref();
-        robot.interact(() -> vm.setValue(ref, "resistanceOhms", 4700));
+        robot.interact(() -> vm.setValue(ref, ParamKeys.RESISTANCE_OHMS, 4700));
         StageDocument after = vm.document();
         assertEquals(json(before.stages().get(0)), json(after.stages().get(0)));
         assertEquals(json(before.stages().get(2)), json(after.stages().get(2)));

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import java.util.ArrayDeque;
 import java.util.Deque;
 import javafx.scene.control.Label;
+import org.armature.model.ParamKeys;
 import org.armature.model.Templates;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
@@ -24,7 +25,7 @@ class StatusLineTest {
     @Start
     void start(javafx.stage.Stage stage) {
         ReadoutSource r = st -> new ReadoutSource.Readouts(EditorViewModelTest.MARKING.compute(st).annotations(),
-                "solved R1 = " + st.require("R1").value("resistanceOhms"));
+                "solved R1 = " + st.require("R1").value(ParamKeys.RESISTANCE_OHMS));
         vm = new EditorViewModel(Templates.defaultStage(), new MainWindowTest.MemoryStore(), r, solves::add, Runnable::run);
         window = new MainWindow(vm, new RecentFiles());
         stage.setScene(window.scene(1200, 800));
@@ -37,7 +38,7 @@ class StatusLineTest {
         Label status = robot.lookup("#status-solver").queryAs(Label.class);
         robot.interact(() -> solves.poll().run());
         assertEquals("solved R1 = 1000.0", status.getText());
-        robot.interact(() -> vm.setValue("R1", "resistanceOhms", 2200));
+        robot.interact(() -> vm.setValue("R1", ParamKeys.RESISTANCE_OHMS, 2200));
         assertEquals(Evaluation.SOLVING, vm.evaluation().status(), "the newest evaluation is pending");
         assertEquals("solved R1 = 1000.0", status.getText(), "the line stays with the drawing");
         assertEquals(1000, window.canvas().drawnEvaluation().annotations().voltages().get(0).volts(), 0);

@@ -237,9 +237,11 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
      * @param before the setting stored before; empty when the default applied
      * @param after the setting stored after; empty restores the default
      * @param subject designator and the option's label in lower case, for the Undo menu ("K1 coil supply")
+     * @param defaultValue the setting in effect when none is stored, so the menu names it ("dc")
+     *     rather than saying "default"
      */
-    record SetOption(String ref, String key, Optional<String> before, Optional<String> after, String subject)
-            implements EditCommand {
+    record SetOption(String ref, String key, Optional<String> before, Optional<String> after, String subject,
+                     String defaultValue) implements EditCommand {
         @Override
         public Stage apply(Stage s) {
             return s.updatePart(ref, p -> {
@@ -255,12 +257,12 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
 
         @Override
         public EditCommand inverse() {
-            return new SetOption(ref, key, after, before, subject);
+            return new SetOption(ref, key, after, before, subject, defaultValue);
         }
 
         @Override
         public String label() {
-            return subject + " " + before.orElse("default") + " → " + after.orElse("default");
+            return subject + " " + before.orElse(defaultValue) + " → " + after.orElse(defaultValue);
         }
     }
 

@@ -12,6 +12,7 @@ import java.util.Set;
 import java.util.TreeMap;
 import org.armature.model.Conditions;
 import org.armature.model.GridPoint;
+import org.armature.model.OptionSpec;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
 import org.armature.model.PinSpec;
@@ -21,6 +22,7 @@ import org.armature.model.StageSettings;
 import org.armature.model.TestPoint;
 import org.armature.model.Wire;
 import org.armature.render.Box;
+import org.armature.render.Notation;
 import org.armature.render.PartGeometry;
 import org.armature.render.Router;
 import org.armature.render.Selection;
@@ -366,9 +368,10 @@ public final class Editor {
         if (value.equals(old)) {
             return;
         }
-        String subject = ref + " " + p.kind().options().stream().filter(o -> o.key().equals(key)).findFirst()
-                .map(o -> o.label().toLowerCase(java.util.Locale.ROOT)).orElse(key);
-        execute(new EditCommand.SetOption(ref, key, Optional.ofNullable(old), Optional.of(value), subject));
+        Optional<OptionSpec> spec = p.kind().options().stream().filter(o -> o.key().equals(key)).findFirst();
+        String subject = ref + " " + spec.map(o -> o.label().toLowerCase(java.util.Locale.ROOT)).orElse(key);
+        execute(new EditCommand.SetOption(ref, key, Optional.ofNullable(old), Optional.of(value), subject,
+                spec.map(OptionSpec::defaultValue).orElse("none")));
     }
 
     /** Sets the drive pin state. */
@@ -445,13 +448,38 @@ public final class Editor {
         execute(new EditCommand.SetHeader(h, new EditCommand.Header(h.name(), d, h.settings()), "Change stage description"));
     }
 
-    /** Changes the stage's check settings. */
-    public void setSettings(StageSettings settings, String label) {
-        if (settings.equals(stage.settings())) {
+    /**
+     * Changes the stage's check settings; the Undo menu names what changed, from the old figure to
+     * the new ("Monte Carlo samples 0 → 500").
+     */
+    public void setSettings(StageSettings settings) {
+        StageSettings was = stage.settings();
+        if (settings.equals(was)) {
             return;
         }
         EditCommand.Header h = EditCommand.Header.of(stage);
-        execute(new EditCommand.SetHeader(h, new EditCommand.Header(h.name(), h.description(), settings), label));
+        execute(new EditCommand.SetHeader(h, new EditCommand.Header(h.name(), h.description(), settings),
+                settingsWords(was, settings)));
+    }
+
+    /** What changed between two settings, in the words of the stage sheet. */
+    static String settingsWords(StageSettings was, StageSettings now) {
+        List<String> parts = new ArrayList<>();
+        if (!was.releaseTimeRequirementSeconds().equals(now.releaseTimeRequirementSeconds())) {
+            parts.add("Release-time requirement " + seconds(was.releaseTimeRequirementSeconds()) + " → "
+                    + seconds(now.releaseTimeRequirementSeconds()));
+        }
+        if (was.monteCarloSamples() != now.monteCarloSamples()) {
+            parts.add("Monte Carlo samples " + was.monteCarloSamples() + " → " + now.monteCarloSamples());
+        }
+        if (was.monteCarloSeed() != now.monteCarloSeed()) {
+            parts.add("Monte Carlo seed " + was.monteCarloSeed() + " → " + now.monteCarloSeed());
+        }
+        return parts.isEmpty() ? "Change stage settings" : String.join(", ", parts);
+    }
+
+    private static String seconds(OptionalDouble s) {
+        return s.isPresent() ? Notation.format(s.getAsDouble(), "s") : "none";
     }
 
     /**

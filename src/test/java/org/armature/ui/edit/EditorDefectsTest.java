@@ -10,6 +10,7 @@ import java.util.List;
 import java.util.OptionalDouble;
 import java.util.Set;
 import org.armature.model.GridPoint;
+import org.armature.model.ParamKeys;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
 import org.armature.model.PinSpec;
@@ -35,7 +36,7 @@ class EditorDefectsTest {
     @DisplayName("undo names a value change in the user's words: R1 resistance 1 kΩ → 1.5 kΩ")
     void undoLabelInUsersWords() {
         Editor e = new Editor(Templates.defaultStage());
-        e.setValue("R1", "resistanceOhms", 1500);
+        e.setValue("R1", ParamKeys.RESISTANCE_OHMS, 1500);
         assertEquals("R1 resistance 1 kΩ → 1.5 kΩ", e.history().undoLabel().orElseThrow());
         e.undo();
         assertEquals("R1 resistance 1 kΩ → 1.5 kΩ", e.history().redoLabel().orElseThrow(), "redo repeats the same words");
@@ -46,9 +47,9 @@ class EditorDefectsTest {
             + "(IEC 60063 E24: 1.0, 1.1, 1.2)")
     void steppedLabelRunsFirstToLast() {
         Editor e = new Editor(Templates.defaultStage());
-        e.stepPreferred("R1", "resistanceOhms", 1);
-        e.stepPreferred("R1", "resistanceOhms", 1);
-        assertEquals(1200, e.stage().require("R1").value("resistanceOhms"), 1e-9, "IEC 60063 E24");
+        e.stepPreferred("R1", ParamKeys.RESISTANCE_OHMS, 1);
+        e.stepPreferred("R1", ParamKeys.RESISTANCE_OHMS, 1);
+        assertEquals(1200, e.stage().require("R1").value(ParamKeys.RESISTANCE_OHMS), 1e-9, "IEC 60063 E24");
         assertEquals(1, e.history().depth());
         assertEquals("R1 resistance 1 kΩ → 1.2 kΩ", e.history().undoLabel().orElseThrow());
     }
@@ -131,7 +132,7 @@ class EditorDefectsTest {
         Editor e = new Editor(s);
         e.rename("Zone 2 valve");
         e.describe("Second zone.");
-        e.setSettings(new StageSettings(OptionalDouble.of(0.01), 100, 3), "Change Monte Carlo run");
+        e.setSettings(new StageSettings(OptionalDouble.of(0.01), 100, 3));
         e.setAmbientRange(0, 40);
         assertEquals("Zone 2 valve", e.stage().name());
         assertEquals("Second zone.", e.stage().description());

@@ -11,6 +11,7 @@ import java.util.Random;
 import java.util.Set;
 import java.util.stream.Stream;
 import org.armature.model.GridPoint;
+import org.armature.model.ParamKeys;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
 import org.armature.model.PinSpec;
@@ -49,7 +50,7 @@ class EditorTest {
     void dirtyFlag() {
         Editor e = new Editor(start);
         assertFalse(e.history().isDirty());
-        e.setValue("R1", "resistanceOhms", 2200);
+        e.setValue("R1", ParamKeys.RESISTANCE_OHMS, 2200);
         assertTrue(e.history().isDirty());
         e.history().markSaved();
         assertFalse(e.history().isDirty());
@@ -171,9 +172,9 @@ class EditorTest {
     @DisplayName("arrow-key stepping of R1 merges into one step; undo restores the default-valued document")
     void steppingMerges() {
         Editor e = new Editor(start);
-        e.stepPreferred("R1", "resistanceOhms", 1);
-        e.stepPreferred("R1", "resistanceOhms", 1);
-        assertEquals(1200, e.stage().require("R1").value("resistanceOhms"), 1e-9, "E24: 1k -> 1k1 -> 1k2");
+        e.stepPreferred("R1", ParamKeys.RESISTANCE_OHMS, 1);
+        e.stepPreferred("R1", ParamKeys.RESISTANCE_OHMS, 1);
+        assertEquals(1200, e.stage().require("R1").value(ParamKeys.RESISTANCE_OHMS), 1e-9, "E24: 1k -> 1k1 -> 1k2");
         assertEquals(1, e.history().depth());
         e.undo();
         assertEquals(start, e.stage());

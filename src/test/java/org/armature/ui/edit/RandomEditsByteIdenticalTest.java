@@ -9,6 +9,7 @@ import java.util.stream.LongStream;
 import java.util.stream.Stream;
 import org.armature.io.StageJson;
 import org.armature.model.GridPoint;
+import org.armature.model.ParamKeys;
 import org.armature.model.Part;
 import org.armature.model.PartKind;
 import org.armature.model.Placement;
@@ -40,7 +41,7 @@ class RandomEditsByteIdenticalTest {
         Stage s = Templates.defaultStage();
         List<Part> parts = new ArrayList<>(s.parts());
         parts.add(s.require("R1").withPlacement(Placement.at(40, 30)));
-        parts.add(s.require("Q1").withPlacement(Placement.at(44, 30)).with("hfeMin", 50));
+        parts.add(s.require("Q1").withPlacement(Placement.at(44, 30)).with(ParamKeys.HFE_MIN, 50));
         return new Stage(s.name(), s.description(), parts, s.wires(), s.testPoints(), s.conditions());
     }
 
