@@ -24,8 +24,6 @@ import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.stage.FileChooser;
 import javafx.stage.Window;
-import org.armature.io.StageFileException;
-import org.armature.io.StageFiles;
 import org.armature.model.Stage;
 import org.armature.render.Annotations;
 import org.armature.render.ExportFiles;
@@ -164,15 +162,6 @@ public final class ExportDialog {
         }
         return c.format() == Format.SVG ? SvgExport.toSvg(sheet).getBytes(StandardCharsets.UTF_8)
                 : PngExport.png(sheet, c.pngScale(), c.transparent());
-    }
-
-    /** The title of the stage file, or empty for an unsaved or unreadable one. */
-    static String documentTitle(Optional<Path> stageFile) {
-        try {
-            return stageFile.map(p -> StageFiles.open(p).title()).orElse("");
-        } catch (StageFileException e) {
-            return "";
-        }
     }
 
     /**

@@ -147,4 +147,28 @@ class DesignReportTest {
         assertTrue(holds(t, "operate", "time", Notation.format(lowVoltage.turnOn().orElseThrow().metrics().operateTimeSeconds(), "s")));
         assertTrue(t.contains("coil current"), "plot strip titles are text");
     }
+
+    @Test
+    @DisplayName("a stage of the document's line-up gets the line-up table, with the figures compare computes; one outside it does not")
+    void lineUpTable() throws IOException {
+        org.armature.model.Stage npn = Templates.build(org.armature.model.StageTemplate.LOW_SIDE_NPN);
+        org.armature.model.Stage nmos = Templates.build(org.armature.model.StageTemplate.LOW_SIDE_NMOS);
+        org.armature.model.Stage alone = Templates.build(org.armature.model.StageTemplate.DARLINGTON_CHANNEL);
+        StageDocument doc = new StageDocument("Bench", java.util.List.of(npn, nmos, alone), java.util.Optional.of(
+                new org.armature.model.LineUp(java.util.List.of(0, 1), org.armature.model.LineUpContext.of(npn))));
+        java.util.Optional<DesignReport.LineUpSection> section = DesignReport.lineUpOf(doc, npn);
+        assertTrue(section.isPresent());
+        assertEquals(java.util.List.of(npn.name(), nmos.name()), section.get().names());
+        assertTrue(DesignReport.lineUpOf(doc, alone).isEmpty(), "a stage outside the line-up gets no table");
+        // the table's coil current is the one the line-up metrics compute for the NPN column (the same code as compare)
+        double coil = section.get().columns().get(0).value("coilCurrent");
+        assertTrue(coil > 1e-3, "the template coil conducts with the pin high (derived: supply over coil resistance)");
+        StageSnapshot snap = StageSnapshot.evaluate("Bench", npn, true, StageSnapshot.Depth.REPORT, DAY);
+        String t = text(DesignReport.pdf(snap, section));
+        assertTrue(t.contains("Line-up"), t);
+        assertTrue(holds(t, "coil", "current", "(nominal)"), "the metric rows are printed");
+        assertTrue(t.contains(org.armature.analysis.LineUpMetrics.format(org.armature.analysis.LineUpMetrics.METRICS.get(0), coil)),
+                "the NPN column's coil current as the table formats it");
+        assertFalse(text(lowVoltagePdf).contains("Line-up"), "no line-up, no section");
+    }
 }
