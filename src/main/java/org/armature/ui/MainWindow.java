@@ -278,7 +278,7 @@ public final class MainWindow {
         refreshRecent();
         MenuItem svg = item("Export…", "Shortcut+Shift+E", e -> export());
         MenuItem png = item("Copy Drawing as Image", null, e -> vm.say(ImageExport.copyToClipboard(
-                ExportDialog.documentTitle(vm.fileProperty().get()), vm.stage())));
+                vm.document().title(), vm.stage())));
         MenuItem quit = item("Quit", "Shortcut+Q", e -> confirmDiscard(Platform::exit));
         file.getItems().addAll(fromTemplate, open, save, saveAs, recentMenu, new SeparatorMenuItem(), svg, png,
                 new SeparatorMenuItem(), quit);
