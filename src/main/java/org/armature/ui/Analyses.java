@@ -7,10 +7,7 @@ import org.armature.analysis.CheckReport;
 import org.armature.analysis.StageChecks;
 import org.armature.model.Stage;
 import org.armature.solver.DcAnalysis;
-import org.armature.solver.SolverException;
-import org.armature.solver.timedomain.TransientAnalysis;
-import org.armature.solver.timedomain.TransientFailureException;
-import org.armature.solver.timedomain.TransientOptions;
+import org.armature.solver.timedomain.EdgeRuns;
 import org.armature.solver.timedomain.TransientResult;
 
 /**
@@ -98,21 +95,8 @@ public record Analyses(VerdictSource verdicts, EdgeSource edges, Executor execut
     /** Turn-on and turn-off runs of the transient engine with its default window. */
     public static EdgeSource engineEdges() {
         return stage -> {
-            Optional<TransientResult> on = Optional.empty();
-            Optional<TransientResult> off = Optional.empty();
-            StringBuilder why = new StringBuilder();
-            try {
-                on = Optional.of(TransientAnalysis.run(stage, TransientOptions.turnOn()));
-            } catch (SolverException | TransientFailureException e) {
-                why.append("Turn-on not run: ").append(e.getMessage()).append(". ");
-            }
-            try {
-                off = Optional.of(TransientAnalysis.run(stage, TransientOptions.turnOff()));
-            } catch (SolverException | TransientFailureException e) {
-                why.append("Turn-off not run: ").append(e.getMessage()).append(". ");
-            }
-            String status = why.length() == 0 ? "Turn-on and turn-off run" : why.toString().trim();
-            return new Edges(on, off, status);
+            EdgeRuns runs = EdgeRuns.of(stage);
+            return new Edges(runs.on(), runs.off(), runs.status());
         };
     }
 }

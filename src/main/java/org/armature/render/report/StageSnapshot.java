@@ -26,9 +26,8 @@ import org.armature.solver.DcAnalysis;
 import org.armature.solver.OperatingPoint;
 import org.armature.solver.SolveOptions;
 import org.armature.solver.SolverException;
+import org.armature.solver.timedomain.EdgeRuns;
 import org.armature.solver.timedomain.TransientAnalysis;
-import org.armature.solver.timedomain.TransientFailureException;
-import org.armature.solver.timedomain.TransientOptions;
 import org.armature.solver.timedomain.TransientResult;
 
 /**
@@ -132,22 +131,10 @@ public record StageSnapshot(String documentTitle, Stage stage, LocalDate date, b
         }
         CheckReport report = StageChecks.run(stage, CheckOptions.DEFAULT, dc);
         SizingResult sizing = BaseNetworkSizing.size(stage);
-        Optional<TransientResult> on = Optional.empty();
-        Optional<TransientResult> off = Optional.empty();
-        StringBuilder why = new StringBuilder();
-        try {
-            on = Optional.of(TransientAnalysis.run(stage, TransientOptions.turnOn()));
-        } catch (SolverException | TransientFailureException e) {
-            why.append("Turn-on not run: ").append(e.getMessage()).append(". ");
-        }
-        try {
-            off = Optional.of(TransientAnalysis.run(stage, TransientOptions.turnOff()));
-        } catch (SolverException | TransientFailureException e) {
-            why.append("Turn-off not run: ").append(e.getMessage()).append(". ");
-        }
-        String edges = why.length() == 0 ? "Turn-on and turn-off run." : why.toString().strip();
+        EdgeRuns runs = EdgeRuns.of(stage);
+        String edges = runs.status().endsWith(".") ? runs.status() : runs.status() + ".";
         return new StageSnapshot(documentTitle, stage, date, pinHigh, high, low, findings, status, Optional.of(report),
-                Optional.of(sizing), on, off, edges);
+                Optional.of(sizing), runs.on(), runs.off(), edges);
     }
 
     /** The operating point of the pin state shown, when solved. */
