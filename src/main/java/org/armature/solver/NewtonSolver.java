@@ -438,16 +438,13 @@ public final class NewtonSolver {
      * @param ctx analysis context
      * @return true only if both tests pass, no element limits at {@code x} and everything is finite
      */
-    public boolean verify(double[] x, double[] states, StampContext ctx) {
-        maxResidualAmps = 0.0;
-        worstResidualNode = 0;
-        if (n == 0) {
-            return true;
-        }
-        if (!allFinite(x)) {
-            maxResidualAmps = Double.MAX_VALUE;
-            return false;
-        }
+    /**
+     * Stamps every element at an answer for the convergence test, with the current scale of each
+     * node collected on the way.
+     *
+     * @return true if any element limited its junction at {@code x}
+     */
+    private boolean stampForTest(double[] x, double[] states, StampContext ctx) {
         view.bind(x, states);
         for (Element e : elements) {
             e.begin(view);
@@ -459,6 +456,20 @@ public final class NewtonSolver {
             limited |= e.stamp(tee, view, ctx);
             currentScale.endElement();
         }
+        return limited;
+    }
+
+    public boolean verify(double[] x, double[] states, StampContext ctx) {
+        maxResidualAmps = 0.0;
+        worstResidualNode = 0;
+        if (n == 0) {
+            return true;
+        }
+        if (!allFinite(x)) {
+            maxResidualAmps = Double.MAX_VALUE;
+            return false;
+        }
+        boolean limited = stampForTest(x, states, ctx);
         ConvergenceTolerances tol = options.tolerances();
         boolean residualOk = residual(x, mna.matrix(), mna.rhs(), tol, currentScale.scale());
         if (!Double.isFinite(maxResidualAmps)) {
@@ -503,17 +514,7 @@ public final class NewtonSolver {
             maxResidualAmps = Double.MAX_VALUE;
             return false;
         }
-        view.bind(x, states);
-        for (Element e : elements) {
-            e.begin(view);
-        }
-        mna.clear();
-        boolean limited = false;
-        currentScale.begin(x);
-        for (Element e : elements) {
-            limited |= e.stamp(tee, view, ctx);
-            currentScale.endElement();
-        }
+        boolean limited = stampForTest(x, states, ctx);
         if (nodeShuntSiemens > 0) {
             mna.addNodeShunt(nodeShuntSiemens);
         }
