@@ -17,10 +17,20 @@ import org.armature.solver.timedomain.TransientResult;
  *
  * @param verdicts where verdicts come from; {@link #NO_VERDICTS} for none
  * @param edges where edges come from; {@link #NO_EDGES} for none
- * @param executor the background executor for both (low priority in the application)
- * @param settleMillis quiet time after the last edit before a run starts, ms
+ * @param executor the background executor of the verdicts (low priority in the application)
+ * @param settleMillis quiet time after the last edit before a verdict run starts, ms
+ * @param edgeExecutor the background executor of the edges: a thread of their own in the
+ *     application, so the turn-on and turn-off runs (milliseconds) never wait behind the corner
+ *     checks (up to a few hundred) and follow a drag
+ * @param edgeSettleMillis quiet time after the last edit before an edge run starts, ms
  */
-public record Analyses(VerdictSource verdicts, EdgeSource edges, Executor executor, long settleMillis) {
+public record Analyses(VerdictSource verdicts, EdgeSource edges, Executor executor, long settleMillis,
+                       Executor edgeExecutor, long edgeSettleMillis) {
+
+    /** Verdicts and edges on one executor with one settle time (tests, and the window without threads). */
+    public Analyses(VerdictSource verdicts, EdgeSource edges, Executor executor, long settleMillis) {
+        this(verdicts, edges, executor, settleMillis, executor, settleMillis);
+    }
 
     /** Computes the verdicts of a stage (may take seconds; never on the FX thread). */
     @FunctionalInterface
@@ -73,8 +83,9 @@ public record Analyses(VerdictSource verdicts, EdgeSource edges, Executor execut
     public static final Analyses NONE = new Analyses(NO_VERDICTS, NO_EDGES, Runnable::run, 0);
 
     public Analyses {
-        if (verdicts == null || edges == null || executor == null || settleMillis < 0) {
-            throw new IllegalArgumentException("analyses need sources, an executor and settleMillis ≥ 0");
+        if (verdicts == null || edges == null || executor == null || settleMillis < 0 || edgeExecutor == null
+                || edgeSettleMillis < 0) {
+            throw new IllegalArgumentException("analyses need sources, executors and settle times ≥ 0");
         }
     }
 

@@ -24,6 +24,11 @@ public final class ArmatureApp extends Application {
 
     /** Quiet time after the last edit before the checks and edges run again, ms. */
     public static final long ANALYSIS_SETTLE_MILLIS = 350;
+    /**
+     * Quiet time before the turn-on and turn-off runs start, ms: short, so the edges follow a drag
+     * (the two runs take a few milliseconds each on their own thread).
+     */
+    public static final long EDGE_SETTLE_MILLIS = 40;
 
     /** System property choosing the theme at start-up: {@code dark} or anything else for light. */
     public static final String THEME_PROPERTY = "armature.theme";
@@ -32,6 +37,7 @@ public final class ArmatureApp extends Application {
 
     private ExecutorService solver;
     private ExecutorService analyses;
+    private ExecutorService edgeRunner;
     private Stage primary;
     private MainWindow window;
     private AutosaveController autosave;
@@ -55,8 +61,14 @@ public final class ArmatureApp extends Application {
             t.setPriority(Thread.MIN_PRIORITY);
             return t;
         });
+        edgeRunner = Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, "armature-edges");
+            t.setDaemon(true);
+            t.setPriority(Thread.MIN_PRIORITY);
+            return t;
+        });
         Analyses slow = new Analyses(Analyses.engineVerdicts(), Analyses.engineEdges(), analyses,
-                ANALYSIS_SETTLE_MILLIS);
+                ANALYSIS_SETTLE_MILLIS, edgeRunner, EDGE_SETTLE_MILLIS);
         EditorViewModel vm = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, new EngineReadouts(),
                 solver, Platform::runLater, slow);
         MainWindow w = new MainWindow(vm, new RecentFiles());
@@ -132,6 +144,9 @@ public final class ArmatureApp extends Application {
         }
         if (solver != null) {
             solver.shutdownNow();
+        }
+        if (edgeRunner != null) {
+            edgeRunner.shutdownNow();
         }
         if (analyses != null) {
             analyses.shutdownNow();

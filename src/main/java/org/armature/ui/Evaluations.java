@@ -51,7 +51,7 @@ public final class Evaluations {
         this.sink = sink;
         this.solves = new LatestWins(solveExecutor);
         this.verdictRuns = new LatestWins(analyses.executor(), analyses.settleMillis());
-        this.edgeRuns = new LatestWins(analyses.executor(), analyses.settleMillis());
+        this.edgeRuns = new LatestWins(analyses.edgeExecutor(), analyses.edgeSettleMillis());
     }
 
     /** The last evaluation published; empty before the first submit. */

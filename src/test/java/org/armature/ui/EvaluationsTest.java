@@ -82,4 +82,29 @@ class EvaluationsTest {
         assertTrue(last.readoutsReady() && last.verdicts().isPresent() && last.edges().isPresent(),
                 "once the queues are empty the newest evaluation is whole");
     }
+
+    @org.junit.jupiter.api.Test
+    @DisplayName("the edges run on their own executor: published while the verdicts of the same generation still wait")
+    void edgesDoNotWaitForVerdicts() {
+        Deque<Runnable> verdictQueue = new ArrayDeque<>();
+        Deque<Runnable> edgeQueue = new ArrayDeque<>();
+        ReadoutSource readouts = st -> new ReadoutSource.Readouts(new Annotations(
+                List.of(), List.of(), List.of(), List.of(), List.of()), "R1 " + r1(st));
+        Analyses analyses = new Analyses(st -> new Analyses.Verdicts(Optional.<CheckReport>empty(), "R1 " + r1(st)),
+                st -> new Analyses.Edges(Optional.empty(), Optional.empty(), "R1 " + r1(st)), verdictQueue::add, 350,
+                edgeQueue::add, 0);
+        List<Evaluation> published = new ArrayList<>();
+        Evaluations ev = new Evaluations(readouts, analyses, Runnable::run, Runnable::run, published::add);
+        ev.submit(Templates.defaultStage());
+        assertEquals(1, verdictQueue.size(), "the verdict run waits on its own executor");
+        assertEquals(1, edgeQueue.size(), "the edge run is queued on the edges' executor, not behind the verdicts");
+        edgeQueue.poll().run();
+        Evaluation last = published.get(published.size() - 1);
+        assertTrue(last.edges().isPresent(), "the edges are published");
+        assertTrue(last.verdicts().isEmpty(), "while the verdicts are still pending");
+        // the one-executor form keeps both on the same executor and settle time
+        Analyses shared = new Analyses(Analyses.NO_VERDICTS, Analyses.NO_EDGES, Runnable::run, 7);
+        assertEquals(shared.executor(), shared.edgeExecutor());
+        assertEquals(7, shared.edgeSettleMillis());
+    }
 }
