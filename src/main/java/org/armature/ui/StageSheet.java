@@ -64,11 +64,11 @@ final class StageSheet extends VBox {
         getChildren().addAll(g, new Label("Description"), description);
         commitOn(name, t -> vm.renameStage(t));
         commitOn(description, t -> vm.describeStage(t));
-        commitOn(ambientMin, t -> number(ambientMin, t, Unit.CELSIUS).ifPresent(v -> {
+        commitOn(ambientMin, t -> ambient(ambientMin, t).ifPresent(v -> {
             Conditions c = vm.stage().conditions();
             vm.setAmbientRange(v, Math.max(v, c.ambientMaxCelsius()));
         }));
-        commitOn(ambientMax, t -> number(ambientMax, t, Unit.CELSIUS).ifPresent(v -> {
+        commitOn(ambientMax, t -> ambient(ambientMax, t).ifPresent(v -> {
             Conditions c = vm.stage().conditions();
             vm.setAmbientRange(Math.min(v, c.ambientMinCelsius()), v);
         }));
@@ -142,6 +142,20 @@ final class StageSheet extends VBox {
                 run.run();
             }
         });
+    }
+
+    /** An ambient temperature inside the range the models hold over; anything else is refused where it is typed. */
+    private Optional<Double> ambient(TextInputControl f, String text) {
+        Optional<Double> v = number(f, text, Unit.CELSIUS);
+        if (v.isPresent() && !org.armature.model.ModelRange.ambientInRange(v.get())) {
+            String why = "An ambient of " + text.strip() + " is not taken: expected a value "
+                    + org.armature.model.ModelRange.ambientRangeText()
+                    + ", the range the copper and junction models hold over.";
+            mark(f, why);
+            vm.say(why);
+            return Optional.empty();
+        }
+        return v;
     }
 
     private static Optional<Double> number(TextInputControl f, String text, Unit unit) {

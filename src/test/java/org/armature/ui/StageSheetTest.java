@@ -44,6 +44,17 @@ class StageSheetTest {
     }
 
     @Test
+    @DisplayName("an ambient outside the models' range (-300 °C, below the copper law's intercept) is refused in the field, with the range, and changes nothing")
+    void ambientOutsideModelsRefused(FxRobot robot) {
+        Stage before = vm.stage();
+        robot.interact(() -> vm.select(Selection.EMPTY));
+        type(robot, "stage-ambient-min", "-300");
+        assertEquals(before, vm.stage(), "nothing is applied");
+        String said = vm.messageProperty().get();
+        assertTrue(said.contains("-300") && said.contains("from -60 °C to 200 °C"), said);
+    }
+
+    @Test
     @DisplayName("with nothing selected the sheet edits the stage's name, ambient range, tolerance, release time and "
             + "Monte Carlo run, each undoable")
     void editsSettings(FxRobot robot) {
