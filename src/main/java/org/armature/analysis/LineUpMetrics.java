@@ -97,9 +97,11 @@ public final class LineUpMetrics {
      * @param report the checks, exactly as {@code check} reports them
      * @param differences where the stage's own parts differed from the shared context
      * @param notes runs that failed, in words
+     * @param turnOff the turn-off run's waveform (the one {@code simulate} makes), if it ran
      */
     public record Column(Stage stage, Map<String, Double> values, Optional<Boolean> switchFullyOn,
-                         CheckReport report, List<LineUpContext.Difference> differences, List<String> notes) {
+                         CheckReport report, List<LineUpContext.Difference> differences, List<String> notes,
+                         Optional<org.armature.solver.timedomain.Waveform> turnOff) {
 
         public Column {
             values = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(values));
@@ -150,6 +152,7 @@ public final class LineUpMetrics {
         List<String> notes = new ArrayList<>();
         Optional<StageRoles> roles = StageRecognition.of(stage).roles();
         Optional<Boolean> fullyOn = Optional.empty();
+        Optional<org.armature.solver.timedomain.Waveform> wave = Optional.empty();
         try {
             OperatingPoint op = new DcAnalysis().solve(stage, SolveOptions.DEFAULT);
             Optional<SwitchVerdict> verdict = op.switchVerdict();
@@ -166,7 +169,9 @@ public final class LineUpMetrics {
             notes.add("no operating point: " + e.getMessage());
         }
         try {
-            TransientMetrics off = TransientAnalysis.run(stage, turnOffOptions()).metrics();
+            TransientResult offRun = TransientAnalysis.run(stage, turnOffOptions());
+            wave = Optional.of(offRun.waveform());
+            TransientMetrics off = offRun.metrics();
             v.put("peakSwitchVoltage", off.peakSwitchVolts());
             v.put("decayToDropOutCurrent", off.decayToReleaseCurrentSeconds());
             v.put("releaseTime", off.releaseTimeSeconds());
@@ -186,7 +191,7 @@ public final class LineUpMetrics {
         report.check("thermal.switch-junction").ifPresent(c -> v.put("junctionTemperature", c.value()));
         report.yield().ifPresent(y -> v.put("yield", y.yield()));
         v.put("partsCount", (double) stage.parts().stream().filter(p -> p.kind() != PartKind.GROUND).count());
-        return new Column(stage, v, fullyOn, report, applied.differences(), notes);
+        return new Column(stage, v, fullyOn, report, applied.differences(), notes, wave);
     }
 
     /**

@@ -319,13 +319,21 @@ public final class EditorViewModel {
 
     /**
      * Computes the line-up's figures on the solve executor ({@link org.armature.analysis.LineUpMetrics})
-     * and hands them to {@code done} on the FX executor.
+     * and hands them to {@code done} on the FX executor; a failure is said in {@link #messageProperty()}.
+     * Four stages take a few seconds (two transient runs and the corner checks each), during which the
+     * solve executor's readouts wait.
      */
     public void evaluateLineUp(List<org.armature.model.LineUpContext.Applied> stages,
                                java.util.function.Consumer<List<org.armature.analysis.LineUpMetrics.Column>> done) {
         solveExecutor.execute(() -> {
-            List<org.armature.analysis.LineUpMetrics.Column> columns =
-                    stages.stream().map(org.armature.analysis.LineUpMetrics::evaluate).toList();
+            List<org.armature.analysis.LineUpMetrics.Column> columns;
+            try {
+                columns = stages.stream().map(org.armature.analysis.LineUpMetrics::evaluate).toList();
+            } catch (RuntimeException e) {
+                // an engine failure the metrics do not turn into a note: said in the status line, not lost
+                fxExecutor.execute(() -> message.set("The line-up could not be evaluated: " + e.getMessage()));
+                return;
+            }
             fxExecutor.execute(() -> done.accept(columns));
         });
     }

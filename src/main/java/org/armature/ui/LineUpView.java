@@ -92,11 +92,24 @@ public final class LineUpView {
         Label note = new Label();
         note.setId("line-up-note");
         HBox shared = new HBox(8, new Label("Shared coil supply"), supply, applySupply, undo, note);
-        content.getChildren().addAll(schematics, shared, pending, table, copy);
+        javafx.scene.canvas.Canvas waves = new javafx.scene.canvas.Canvas(Math.max(720, stages.size() * 360), 300);
+        waves.setId("line-up-waves");
+        content.getChildren().addAll(schematics, shared, pending, table, copy, waves);
         Runnable refresh = () -> {
             List<LineUpContext.Applied> now = vm.lineUpStages();
             vm.evaluateLineUp(now, columns -> {
                 fill(table, columns);
+                List<org.armature.render.EdgePlot.Plot> plots = new ArrayList<>();
+                List<String> legend = new ArrayList<>();
+                for (int i = 0; i < columns.size(); i++) {
+                    Column c = columns.get(i);
+                    if (c.turnOff().isPresent()) {
+                        plots.add(org.armature.render.EdgePlot.of(c.stage(), c.turnOff().get()));
+                        legend.add("[" + (i + 1) + "] " + names.get(i));
+                    }
+                }
+                org.armature.render.OverlayPlot.draw(new FxPen(waves.getGraphicsContext2D(),
+                        org.armature.render.Affine.IDENTITY), plots, legend, waves.getWidth(), waves.getHeight(), palette);
                 content.getChildren().remove(pending);
                 copy.setDisable(false);
                 copy.setOnAction(e -> {

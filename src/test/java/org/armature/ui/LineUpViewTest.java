@@ -98,6 +98,7 @@ class LineUpViewTest {
         assertTrue(texts.contains("peak switch voltage"), texts.toString());
         assertTrue(texts.contains("armature speed at contact break"), texts.toString());
         assertTrue(texts.stream().anyMatch(t -> t.endsWith(" ★")), "best values are marked");
+        assertTrue(robot.lookup("#line-up-waves").tryQuery().isPresent(), "the overlaid turn-off edges");
         Button copy = robot.lookup("#line-up-copy").queryButton();
         assertFalse(copy.isDisabled());
         AtomicReference<String> copied = new AtomicReference<>();
