@@ -20,8 +20,6 @@ import org.armature.model.LineUp;
 import org.armature.model.LineUpContext;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
-import org.armature.units.EngineeringNotation;
-import org.armature.units.Unit;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -191,7 +189,7 @@ final class CompareCommand implements Callable<Integer> {
             List<Integer> best = LineUpMetrics.best(m, columns);
             StringBuilder row = new StringBuilder(pad(m.label(), LABEL_WIDTH));
             for (int i = 0; i < columns.size(); i++) {
-                row.append(padLeft(format(m, columns.get(i).value(m.key())) + (best.contains(i) ? " *" : "  "),
+                row.append(padLeft(LineUpMetrics.format(m, columns.get(i).value(m.key())) + (best.contains(i) ? " *" : "  "),
                         COLUMN_WIDTH));
             }
             b.append(row.toString().stripTrailing()).append(nl);
@@ -225,22 +223,6 @@ final class CompareCommand implements Callable<Integer> {
         }
         b.append("These are the checks that ran; they do not show that any design is safe.").append(nl);
         return b.toString();
-    }
-
-    private static String format(Metric m, double v) {
-        if (!Double.isFinite(v)) {
-            return "—";
-        }
-        if (m.key().equals("partsCount")) {
-            return Long.toString(Math.round(v));
-        }
-        if (m.key().equals("yield")) {
-            return EngineeringNotation.format(100 * v, Unit.PERCENT);
-        }
-        if (m.unitSymbol().equals("m/s")) {
-            return EngineeringNotation.format(v, Unit.METRE) + "/s";
-        }
-        return EngineeringNotation.format(v, m.unit());
     }
 
     private static String pad(String s, int width) {

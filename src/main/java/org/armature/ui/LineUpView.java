@@ -155,8 +155,7 @@ public final class LineUpView {
             table.add(new Label(m.label()), 0, row);
             for (int i = 0; i < columns.size(); i++) {
                 double v = columns.get(i).value(m.key());
-                String text = !Double.isFinite(v) ? "—" : m.key().equals("partsCount") ? Long.toString(Math.round(v))
-                        : m.unitSymbol().equals("m/s") ? Notation.format(v, "m") + "/s" : Notation.format(v, m.unitSymbol());
+                String text = LineUpMetrics.format(m, v);
                 table.add(cell(text, best.contains(i)), i + 1, row);
             }
             row++;
