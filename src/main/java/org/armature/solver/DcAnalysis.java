@@ -53,6 +53,10 @@ import org.armature.netlist.SwitchedResistor;
  */
 public final class DcAnalysis {
 
+    /** Independent checks of every returned answer: none in the application, the honest-residual audit in tests. */
+    private static final List<AnswerAudit> AUDITS = java.util.ServiceLoader.load(AnswerAudit.class).stream()
+            .map(java.util.ServiceLoader.Provider::get).toList();
+
     private final DcOptions options;
     /** The compiled stage of each drive pin state: index 1 pin high, 0 pin low. */
     private final Compiled[] byPin = new Compiled[2];
@@ -98,7 +102,11 @@ public final class DcAnalysis {
         double ambient = solveOptions.ambientCelsius().orElse(stage.conditions().ambientCelsius());
         requireModelRange(stage, ambient);
         Compiled c = compile(stage, options.flattenOptions(pinHigh, ambient));
-        return c.solve(solveOptions, pinHigh, ambient);
+        OperatingPoint answer = c.solve(solveOptions, pinHigh, ambient);
+        for (AnswerAudit audit : AUDITS) {
+            audit.check(stage, answer);
+        }
+        return answer;
     }
 
     /**
