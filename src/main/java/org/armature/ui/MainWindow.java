@@ -576,6 +576,12 @@ public final class MainWindow {
         // last status instead of flickering to "Solving…" on every slider step
         solver.setText(canvas.drawnEvaluation().status());
         vm.evaluationProperty().addListener((o, a, b) -> solver.setText(canvas.drawnEvaluation().status()));
+        Label faults = new Label();
+        faults.setId("status-faults");
+        faults.getStyleClass().add("status-message");
+        Runnable faultText = () -> faults.setText(vm.faultStatus());
+        vm.faultsProperty().addListener((o, a, b) -> faultText.run());
+        vm.evaluationProperty().addListener((o, a, b) -> faultText.run());
         Label message = new Label();
         message.getStyleClass().add("status-message");
         message.textProperty().bind(vm.messageProperty());
@@ -587,7 +593,7 @@ public final class MainWindow {
         vm.dirtyProperty().addListener((o, a, b) -> sync.run());
         Region spacer = new Region();
         HBox.setHgrow(spacer, Priority.ALWAYS);
-        HBox bar = new HBox(16, solver, message, spacer, name);
+        HBox bar = new HBox(16, solver, faults, message, spacer, name);
         bar.getStyleClass().add("status-bar");
         bar.setPadding(new Insets(3, 10, 3, 10));
         return bar;
