@@ -550,9 +550,15 @@ public final class MainWindow {
         verdicts.setPadding(new Insets(6));
         TitledPane verdictPane = new TitledPane("Verdicts", verdicts);
         verdictPane.setId("verdicts-pane");
-        VBox box = new VBox(sheetPane, verdictPane);
+        DiagnosisPanel diagnosis = new DiagnosisPanel(vm);
+        ScrollPane diagScroll = new ScrollPane(diagnosis);
+        diagScroll.setFitToWidth(true);
+        TitledPane diagPane = new TitledPane("Fault diagnosis", diagScroll);
+        diagPane.setId("diagnosis-pane");
+        diagPane.setExpanded(false);
+        VBox box = new VBox(sheetPane, verdictPane, diagPane);
         Runnable share = () -> {
-            for (TitledPane t : List.of(sheetPane, verdictPane)) {
+            for (TitledPane t : List.of(sheetPane, verdictPane, diagPane)) {
                 boolean open = t.isExpanded();
                 VBox.setVgrow(t, open ? Priority.ALWAYS : Priority.NEVER);
                 t.setMaxHeight(open ? Double.MAX_VALUE : Region.USE_PREF_SIZE);
@@ -563,6 +569,10 @@ public final class MainWindow {
         share.run();
         sheetPane.expandedProperty().addListener((o, a, b) -> share.run());
         verdictPane.expandedProperty().addListener((o, a, b) -> share.run());
+        diagPane.expandedProperty().addListener((o, a, b) -> {
+            share.run();
+            diagnosis.setActive(b);
+        });
         box.setPrefWidth(330);
         box.setMinWidth(260);
         box.getStyleClass().add("right-side");

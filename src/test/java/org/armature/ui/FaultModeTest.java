@@ -85,4 +85,34 @@ class FaultModeTest {
         assertTrue(drawn().badges().stream().noneMatch(b -> b.text().startsWith(FaultMarks.PREFIX)));
         assertEquals("", status.getText());
     }
+
+    @Test
+    void twoReadingsRankTheCandidatesAndNameTheNextMeasurement(FxRobot robot) {
+        robot.interact(() -> robot.lookup("#diagnosis-pane").queryAs(javafx.scene.control.TitledPane.class).setExpanded(true));
+        Label ranking = robot.lookup("#diag-ranking").queryAs(Label.class);
+        Label next = robot.lookup("#diag-next").queryAs(Label.class);
+        // no readings: the healthy stage leads on its prior
+        assertTrue(ranking.getText().startsWith("1. none"), ranking.getText());
+        javafx.scene.control.TextField entry = robot.lookup("#diag-reading").queryAs(javafx.scene.control.TextField.class);
+        javafx.scene.control.Button add = robot.lookup("#diag-add").queryAs(javafx.scene.control.Button.class);
+        // derived for R1 open, pin high: Q1 off, so the switch node sits at the 12 V supply and the
+        // base (control) is held at 0 V by the 10 kΩ pull-down
+        robot.interact(() -> {
+            entry.setText("switch@high=12");
+            add.fire();
+            entry.setText("control@high=0");
+            add.fire();
+        });
+        assertEquals("", robot.lookup("#diag-error").queryAs(Label.class).getText());
+        assertFalse(ranking.getText().startsWith("1. none"), ranking.getText());
+        assertTrue(ranking.getText().contains("R1:open"), ranking.getText());
+        assertTrue(ranking.getText().contains("switch@high expected"), ranking.getText());
+        assertTrue(next.getText().startsWith("Next: measure "), next.getText());
+        // a net the stage does not have is one sentence naming the valid ones
+        robot.interact(() -> {
+            entry.setText("nowhere@high=1");
+            add.fire();
+        });
+        assertTrue(robot.lookup("#diag-error").queryAs(Label.class).getText().contains("valid: "));
+    }
 }
