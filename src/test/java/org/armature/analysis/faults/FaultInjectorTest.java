@@ -297,4 +297,17 @@ class FaultInjectorTest {
         assertTrue(FaultCatalog.parse(NPN, "Q1:track-open").error().contains("PART.PIN:track-open"));
         assertTrue(FaultCatalog.parse(NPN, "Q1.b:open").error().contains("only have the fault track-open"));
     }
+
+    @Test
+    void clampOpenLetsTheTurnOffSpikeRiseAboveTheClamp() {
+        var healthy = org.armature.solver.timedomain.TransientAnalysis.run(DARLINGTON,
+                org.armature.solver.timedomain.TransientOptions.turnOff()).metrics();
+        var open = org.armature.solver.timedomain.TransientAnalysis.run(fault(DARLINGTON, "U2", FaultKind.CLAMP_OPEN),
+                org.armature.solver.timedomain.TransientOptions.turnOff()).metrics();
+        // derived: clamped, the switch peaks near the 12 V supply plus one diode drop (under 14 V);
+        // unclamped, the coil's current has no path but the channel, so the switch rises to the
+        // channel's breakdown near its 50 V output rating (measured 12.6 V and 51.6 V)
+        assertTrue(healthy.peakSwitchVolts() < 14, "healthy peak " + healthy.peakSwitchVolts());
+        assertTrue(open.peakSwitchVolts() > 40, "clamp-open peak " + open.peakSwitchVolts());
+    }
 }
