@@ -123,7 +123,13 @@ public final class SchematicCanvas extends Region {
         addEventHandler(MouseEvent.MOUSE_MOVED, this::moved);
         addEventHandler(ScrollEvent.SCROLL, this::scrolled);
         addEventHandler(KeyEvent.KEY_PRESSED, this::key);
-        setOnContextMenuRequested(e -> {
+        // a right click without a drag (a right drag pans) on a part opens its fault menu; on the
+        // click rather than the platform's context-menu request, which comes at press on some systems
+        // and not at all on others
+        addEventHandler(MouseEvent.MOUSE_CLICKED, e -> {
+            if (e.getButton() != MouseButton.SECONDARY || !e.isStillSincePress()) {
+                return;
+            }
             HitTester.Hit hit = HitTester.at(vm.stage(), gridX(e.getX()), gridY(e.getY()), HIT_PIXELS / scale());
             if (hit instanceof HitTester.PartHit part) {
                 faultMenu(part.ref()).show(this, e.getScreenX(), e.getScreenY());

@@ -115,4 +115,19 @@ class FaultModeTest {
         });
         assertTrue(robot.lookup("#diag-error").queryAs(Label.class).getText().contains("valid: "));
     }
+
+    @Test
+    void aRightClickOnThePartOpensItsFaultMenu(FxRobot robot) {
+        var r1 = org.armature.render.PartGeometry.bodyBounds(vm.stage().require("R1"));
+        SchematicCanvas c = window.canvas();
+        var v = c.view();
+        var screen = c.localToScreen(v.mapX(r1.centreX(), r1.centreY()), v.mapY(r1.centreX(), r1.centreY()));
+        robot.rightClickOn(screen);
+        org.testfx.util.WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn("Fault R1:open");
+        org.testfx.util.WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(java.util.List.of(new org.armature.analysis.faults.Fault("R1",
+                org.armature.analysis.faults.FaultKind.OPEN)), vm.faultsProperty().get());
+        assertTrue(Math.abs(coilAmps()) < 1e-6, "faulted coil current " + coilAmps());
+    }
 }
