@@ -180,6 +180,30 @@ public final class EditorViewModel {
         return org.armature.analysis.faults.FaultCatalog.of(stage()).stream().filter(f -> f.ref().equals(ref)).toList();
     }
 
+    /**
+     * The track opens a part's pins can have: one per pin joined to something by a single wire
+     * ending at it ({@link org.armature.analysis.faults.FaultInjector#cutPin}); a pin joined otherwise
+     * has none.
+     */
+    public List<org.armature.analysis.faults.Fault> trackFaultsOf(String ref) {
+        Stage now = stage();
+        List<org.armature.analysis.faults.Fault> out = new ArrayList<>();
+        now.part(ref).ifPresent(p -> {
+            for (org.armature.model.PinSpec pin : p.kind().pins()) {
+                org.armature.analysis.faults.Fault f = new org.armature.analysis.faults.Fault(ref + "." + pin.name(),
+                        org.armature.analysis.faults.FaultKind.TRACK_OPEN);
+                try {
+                    if (org.armature.analysis.faults.FaultInjector.apply(now, f) != now) {
+                        out.add(f);
+                    }
+                } catch (IllegalArgumentException | IllegalStateException e) {
+                    // joined in a way one cut cannot separate: no track open offered at this pin
+                }
+            }
+        });
+        return out;
+    }
+
     /** Injects a fault (several may be injected at once); one already injected is taken out again. */
     public void toggleFault(org.armature.analysis.faults.Fault f) {
         List<org.armature.analysis.faults.Fault> now = new ArrayList<>(faults.get());

@@ -156,6 +156,18 @@ public final class SchematicCanvas extends Region {
             item.setOnAction(a -> vm.toggleFault(f));
             menu.getItems().add(item);
         }
+        List<org.armature.analysis.faults.Fault> tracks = vm.trackFaultsOf(ref);
+        if (!tracks.isEmpty()) {
+            javafx.scene.control.Menu sub = new javafx.scene.control.Menu("Track open at a pin");
+            for (org.armature.analysis.faults.Fault f : tracks) {
+                javafx.scene.control.CheckMenuItem item = new javafx.scene.control.CheckMenuItem(f.id());
+                item.setId("fault-" + f.id());
+                item.setSelected(vm.faultsProperty().get().contains(f));
+                item.setOnAction(a -> vm.toggleFault(f));
+                sub.getItems().add(item);
+            }
+            menu.getItems().add(sub);
+        }
         if (menu.getItems().isEmpty()) {
             javafx.scene.control.MenuItem none = new javafx.scene.control.MenuItem(ref + " has no fault to inject");
             none.setDisable(true);

@@ -130,4 +130,17 @@ class FaultModeTest {
                 org.armature.analysis.faults.FaultKind.OPEN)), vm.faultsProperty().get());
         assertTrue(Math.abs(coilAmps()) < 1e-6, "faulted coil current " + coilAmps());
     }
+
+    @Test
+    void aTrackOpenAtTheBaseFromTheTransistorsMenu(FxRobot robot) {
+        robot.interact(() -> {
+            ContextMenu menu = window.canvas().faultMenu("Q1");
+            javafx.scene.control.Menu sub = (javafx.scene.control.Menu) menu.getItems().stream()
+                    .filter(i -> i instanceof javafx.scene.control.Menu).findFirst().orElseThrow();
+            sub.getItems().stream().filter(i -> "fault-Q1.b:track-open".equals(i.getId())).findFirst().orElseThrow().fire();
+        });
+        // derived: the base cut off, Q1 carries no collector current: under 1 µA in the coil
+        assertTrue(Math.abs(coilAmps()) < 1e-6, "faulted coil current " + coilAmps());
+        assertTrue(drawn().badges().stream().anyMatch(b -> b.ref().equals("Q1") && b.text().equals("fault: track-open at b")));
+    }
 }
