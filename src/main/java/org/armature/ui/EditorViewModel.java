@@ -87,6 +87,14 @@ public final class EditorViewModel {
     private final ReadOnlyStringWrapper undoLabel = new ReadOnlyStringWrapper(this, "undoLabel", "Undo");
     private final ReadOnlyStringWrapper redoLabel = new ReadOnlyStringWrapper(this, "redoLabel", "Redo");
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "");
+    private final ReadOnlyObjectWrapper<List<org.armature.analysis.faults.Fault>> faults =
+            new ReadOnlyObjectWrapper<>(this, "faults", List.of());
+    /** The editor the injected faults belong to; another stage made active clears them. */
+    private Editor faultsFor;
+    /** The document stage and the faults last submitted, and the faulted stage made of them. */
+    private Stage submittedFor;
+    private List<org.armature.analysis.faults.Fault> submittedFaults = List.of();
+    private Stage faultedStage;
     private Editor.Clip clipboard = new Editor.Clip(List.of(), List.of());
     private Stage coilSupplyOf;
     private Optional<String> coilSupplyRef = Optional.empty();
@@ -143,9 +151,97 @@ public final class EditorViewModel {
         return annotations(evaluation.get());
     }
 
-    /** The annotations of an evaluation, filtered by the View toggles. */
+    /**
+     * The annotations of an evaluation, filtered by the View toggles; an evaluation of the faulted
+     * stage carries the faults' marks ({@link org.armature.render.FaultMarks}) whatever the toggles.
+     */
     public Annotations annotations(Evaluation e) {
-        return filter(e.annotations(), shownReadouts.get());
+        Annotations a = filter(e.annotations(), shownReadouts.get());
+        if (faultedStage != null && e.stage() == faultedStage) {
+            a = org.armature.render.FaultMarks.marked(a,
+                    submittedFaults.stream().map(org.armature.analysis.faults.Fault::id).toList());
+        }
+        return a;
+    }
+
+    // ------------------------------------------------------------------ fault mode
+
+    /**
+     * The faults injected into the active stage: the canvas, readouts, verdicts and edges show the
+     * stage with them ({@link org.armature.analysis.faults.FaultInjector}); the document and its undo
+     * history are not changed. Another stage made active clears them.
+     */
+    public ReadOnlyObjectProperty<List<org.armature.analysis.faults.Fault>> faultsProperty() {
+        return faults.getReadOnlyProperty();
+    }
+
+    /** The single faults a part of the active stage can have (its entries of the stage's fault set). */
+    public List<org.armature.analysis.faults.Fault> faultsOf(String ref) {
+        return org.armature.analysis.faults.FaultCatalog.of(stage()).stream().filter(f -> f.ref().equals(ref)).toList();
+    }
+
+    /**
+     * The track opens a part's pins can have: one per pin joined to something by a single wire
+     * ending at it ({@link org.armature.analysis.faults.FaultInjector#cutPin}); a pin joined otherwise
+     * has none.
+     */
+    public List<org.armature.analysis.faults.Fault> trackFaultsOf(String ref) {
+        Stage now = stage();
+        List<org.armature.analysis.faults.Fault> out = new ArrayList<>();
+        now.part(ref).ifPresent(p -> {
+            for (org.armature.model.PinSpec pin : p.kind().pins()) {
+                org.armature.analysis.faults.Fault f = new org.armature.analysis.faults.Fault(ref + "." + pin.name(),
+                        org.armature.analysis.faults.FaultKind.TRACK_OPEN);
+                try {
+                    if (org.armature.analysis.faults.FaultInjector.apply(now, f) != now) {
+                        out.add(f);
+                    }
+                } catch (IllegalArgumentException | IllegalStateException e) {
+                    // joined in a way one cut cannot separate: no track open offered at this pin
+                }
+            }
+        });
+        return out;
+    }
+
+    /** Injects a fault (several may be injected at once); one already injected is taken out again. */
+    public void toggleFault(org.armature.analysis.faults.Fault f) {
+        List<org.armature.analysis.faults.Fault> now = new ArrayList<>(faults.get());
+        if (!now.remove(f)) {
+            now.add(f);
+        }
+        faultsFor = editor;
+        faults.set(List.copyOf(now));
+        publishDocument();
+    }
+
+    /** Takes every injected fault out: the drawing shows the healthy stage again. */
+    public void clearFaults() {
+        faults.set(List.of());
+        publishDocument();
+    }
+
+    /** "Faults injected: R1:open" for the status line; empty with none. */
+    public String faultStatus() {
+        return faults.get().isEmpty() ? "" : "Faults injected: " + faults.get().stream()
+                .map(org.armature.analysis.faults.Fault::id).collect(java.util.stream.Collectors.joining(", "))
+                + " (the drawing shows the faulted stage; the document is unchanged)";
+    }
+
+    /** The faults still valid for the stage as it stands (a deleted part takes its faults with it). */
+    private List<org.armature.analysis.faults.Fault> validFaults(Stage now) {
+        if (faultsFor != editor && !faults.get().isEmpty()) {
+            faults.set(List.of());
+        }
+        List<org.armature.analysis.faults.Fault> set = org.armature.analysis.faults.FaultCatalog.of(now);
+        List<org.armature.analysis.faults.Fault> valid = faults.get().stream()
+                .filter(f -> set.contains(f) || f.kind() == org.armature.analysis.faults.FaultKind.TRACK_OPEN
+                        && org.armature.analysis.faults.FaultInjector.trackPin(now, f.ref()).isPresent())
+                .toList();
+        if (!valid.equals(faults.get())) {
+            faults.set(valid);
+        }
+        return valid;
     }
 
     /** The stage being edited (document state: changes with each action, before it is solved). */
@@ -804,8 +900,24 @@ public final class EditorViewModel {
         undoLabel.set(editor.history().undoLabel().map(l -> "Undo " + l).orElse("Undo"));
         redoLabel.set(editor.history().redoLabel().map(l -> "Redo " + l).orElse("Redo"));
         Evaluation shown = evaluation.get();
-        if (was != now || shown == null || shown.stage() != now) {
-            evaluations.submit(now);
+        List<org.armature.analysis.faults.Fault> valid = validFaults(now);
+        if (was != now || shown == null || submittedFor != now || !valid.equals(submittedFaults)
+                || valid.isEmpty() && shown.stage() != now) {
+            Stage evaluated = now;
+            faultedStage = null;
+            if (!valid.isEmpty()) {
+                try {
+                    evaluated = org.armature.analysis.faults.FaultInjector.apply(now, valid);
+                    faultedStage = evaluated;
+                } catch (IllegalArgumentException | IllegalStateException ex) {
+                    message.set("The faults could not be injected: " + ex.getMessage());
+                    valid = List.of();
+                    faults.set(valid);
+                }
+            }
+            submittedFor = now;
+            submittedFaults = valid;
+            evaluations.submit(evaluated);
         }
     }
 

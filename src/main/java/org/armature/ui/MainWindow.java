@@ -550,9 +550,15 @@ public final class MainWindow {
         verdicts.setPadding(new Insets(6));
         TitledPane verdictPane = new TitledPane("Verdicts", verdicts);
         verdictPane.setId("verdicts-pane");
-        VBox box = new VBox(sheetPane, verdictPane);
+        DiagnosisPanel diagnosis = new DiagnosisPanel(vm);
+        ScrollPane diagScroll = new ScrollPane(diagnosis);
+        diagScroll.setFitToWidth(true);
+        TitledPane diagPane = new TitledPane("Fault diagnosis", diagScroll);
+        diagPane.setId("diagnosis-pane");
+        diagPane.setExpanded(false);
+        VBox box = new VBox(sheetPane, verdictPane, diagPane);
         Runnable share = () -> {
-            for (TitledPane t : List.of(sheetPane, verdictPane)) {
+            for (TitledPane t : List.of(sheetPane, verdictPane, diagPane)) {
                 boolean open = t.isExpanded();
                 VBox.setVgrow(t, open ? Priority.ALWAYS : Priority.NEVER);
                 t.setMaxHeight(open ? Double.MAX_VALUE : Region.USE_PREF_SIZE);
@@ -563,6 +569,10 @@ public final class MainWindow {
         share.run();
         sheetPane.expandedProperty().addListener((o, a, b) -> share.run());
         verdictPane.expandedProperty().addListener((o, a, b) -> share.run());
+        diagPane.expandedProperty().addListener((o, a, b) -> {
+            share.run();
+            diagnosis.setActive(b);
+        });
         box.setPrefWidth(330);
         box.setMinWidth(260);
         box.getStyleClass().add("right-side");
@@ -576,6 +586,12 @@ public final class MainWindow {
         // last status instead of flickering to "Solving…" on every slider step
         solver.setText(canvas.drawnEvaluation().status());
         vm.evaluationProperty().addListener((o, a, b) -> solver.setText(canvas.drawnEvaluation().status()));
+        Label faults = new Label();
+        faults.setId("status-faults");
+        faults.getStyleClass().add("status-message");
+        Runnable faultText = () -> faults.setText(vm.faultStatus());
+        vm.faultsProperty().addListener((o, a, b) -> faultText.run());
+        vm.evaluationProperty().addListener((o, a, b) -> faultText.run());
         Label message = new Label();
         message.getStyleClass().add("status-message");
         message.textProperty().bind(vm.messageProperty());
@@ -587,7 +603,7 @@ public final class MainWindow {
         vm.dirtyProperty().addListener((o, a, b) -> sync.run());
         Region spacer = new Region();
         HBox.setHgrow(spacer, Priority.ALWAYS);
-        HBox bar = new HBox(16, solver, message, spacer, name);
+        HBox bar = new HBox(16, solver, faults, message, spacer, name);
         bar.getStyleClass().add("status-bar");
         bar.setPadding(new Insets(3, 10, 3, 10));
         return bar;

@@ -123,6 +123,62 @@ public final class SchematicCanvas extends Region {
         addEventHandler(MouseEvent.MOUSE_MOVED, this::moved);
         addEventHandler(ScrollEvent.SCROLL, this::scrolled);
         addEventHandler(KeyEvent.KEY_PRESSED, this::key);
+        // a right click without a drag (a right drag pans) on a part opens its fault menu; on the
+        // click rather than the platform's context-menu request, which comes at press on some systems
+        // and not at all on others
+        addEventHandler(MouseEvent.MOUSE_CLICKED, e -> {
+            if (e.getButton() != MouseButton.SECONDARY || !e.isStillSincePress()) {
+                return;
+            }
+            HitTester.Hit hit = HitTester.at(vm.stage(), gridX(e.getX()), gridY(e.getY()), HIT_PIXELS / scale());
+            if (hit instanceof HitTester.PartHit part) {
+                faultMenu(part.ref()).show(this, e.getScreenX(), e.getScreenY());
+                e.consume();
+            }
+        });
+    }
+
+    /**
+     * The fault-mode menu of a part: each single fault it can have (ticked when injected; choosing
+     * one injects it or takes it out, several may be in at once) and "Clear faults". The drawing then
+     * shows the faulted stage's readouts; the document is not changed.
+     *
+     * @param ref the part's designator
+     * @return the menu
+     */
+    public javafx.scene.control.ContextMenu faultMenu(String ref) {
+        javafx.scene.control.ContextMenu menu = new javafx.scene.control.ContextMenu();
+        menu.setId("fault-menu");
+        for (org.armature.analysis.faults.Fault f : vm.faultsOf(ref)) {
+            javafx.scene.control.CheckMenuItem item = new javafx.scene.control.CheckMenuItem("Fault " + f.id());
+            item.setId("fault-" + f.id());
+            item.setSelected(vm.faultsProperty().get().contains(f));
+            item.setOnAction(a -> vm.toggleFault(f));
+            menu.getItems().add(item);
+        }
+        List<org.armature.analysis.faults.Fault> tracks = vm.trackFaultsOf(ref);
+        if (!tracks.isEmpty()) {
+            javafx.scene.control.Menu sub = new javafx.scene.control.Menu("Track open at a pin");
+            for (org.armature.analysis.faults.Fault f : tracks) {
+                javafx.scene.control.CheckMenuItem item = new javafx.scene.control.CheckMenuItem(f.id());
+                item.setId("fault-" + f.id());
+                item.setSelected(vm.faultsProperty().get().contains(f));
+                item.setOnAction(a -> vm.toggleFault(f));
+                sub.getItems().add(item);
+            }
+            menu.getItems().add(sub);
+        }
+        if (menu.getItems().isEmpty()) {
+            javafx.scene.control.MenuItem none = new javafx.scene.control.MenuItem(ref + " has no fault to inject");
+            none.setDisable(true);
+            menu.getItems().add(none);
+        }
+        javafx.scene.control.MenuItem clear = new javafx.scene.control.MenuItem("Clear faults");
+        clear.setId("fault-clear");
+        clear.setDisable(vm.faultsProperty().get().isEmpty());
+        clear.setOnAction(a -> vm.clearFaults());
+        menu.getItems().addAll(new javafx.scene.control.SeparatorMenuItem(), clear);
+        return menu;
     }
 
     /**

@@ -51,6 +51,17 @@ class FaultCommandsTest {
     }
 
     @Test
+    void solveAcceptsATrackOpenAtAPin() throws Exception {
+        JsonNode j = json("solve", file.toString(), "--json", "--pin-state", "high", "--fault", "Q1.b:track-open");
+        // derived: with its base cut off Q1 carries no collector current, so the switch node sits
+        // at the 12 V supply with the pin high (healthy: near 0 V, saturated)
+        assertEquals(12, j.get("nodes").get("switch").asDouble(), 0.01);
+        CliRun bad = CliRun.of("solve", file.toString(), "--fault", "Q1.z:track-open");
+        assertEquals(1, bad.status());
+        assertTrue(bad.err().contains("PART.PIN:track-open") && bad.noStackTrace(), bad.err());
+    }
+
+    @Test
     void simulateAcceptsAFault() {
         CliRun r = CliRun.of("simulate", file.toString(), "--json", "--fault", "D1:open", "--fault", "R2:drift-x10");
         assertEquals(0, r.status(), r.err());

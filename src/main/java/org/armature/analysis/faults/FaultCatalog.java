@@ -56,6 +56,16 @@ public final class FaultCatalog {
         }
         String ref = text.substring(0, colon);
         String kind = text.substring(colon + 1);
+        if (kind.equals(FaultKind.TRACK_OPEN.id()) || ref.contains(".")) {
+            if (!kind.equals(FaultKind.TRACK_OPEN.id())) {
+                return Parsed.error("A pin (" + ref + ") can only have the fault track-open, written PART.PIN:track-open.");
+            }
+            if (FaultInjector.trackPin(stage, ref).isEmpty()) {
+                return Parsed.error("A track open is written PART.PIN:track-open with a part of stage \"" + stage.name()
+                        + "\" and one of its pins (for example R1.b); " + ref + " is not one.");
+            }
+            return new Parsed(Optional.of(new Fault(ref, FaultKind.TRACK_OPEN)), "");
+        }
         Optional<Part> part = stage.part(ref);
         if (part.isEmpty() || FaultKind.of(part.get().kind()).isEmpty()) {
             return Parsed.error("Stage \"" + stage.name() + "\" has no part " + ref

@@ -83,6 +83,11 @@ public final class FaultInjector {
 
     /** The stage with one fault applied. */
     public static Stage apply(Stage stage, Fault fault) {
+        if (fault.kind() == FaultKind.TRACK_OPEN) {
+            PinRef pin = trackPin(stage, fault.ref()).orElseThrow(() -> new IllegalArgumentException(
+                    "a track open is written PART.PIN:track-open with a pin of the stage, not " + fault.ref()));
+            return cutPin(stage, pin);
+        }
         Part p = stage.part(fault.ref()).orElseThrow(() -> new IllegalArgumentException(
                 "stage \"" + stage.name() + "\" has no part " + fault.ref()));
         if (!FaultKind.of(p.kind()).contains(fault.kind())) {
@@ -108,6 +113,8 @@ public final class FaultInjector {
             case CE_SHORT -> p.kind() == PartKind.DARLINGTON
                     ? bridge(stage, new PinRef(p.ref(), "out"), new PinRef(p.ref(), "e"), SHORT_OHMS)
                     : bridge(stage, new PinRef(p.ref(), "c"), new PinRef(p.ref(), "e"), SHORT_OHMS);
+            case CLAMP_OPEN -> cutPin(stage, new PinRef(p.ref(), "com"));
+            case TRACK_OPEN -> throw new IllegalStateException("handled above");
             case BE_SHORT -> bridge(stage, new PinRef(p.ref(), "b"), new PinRef(p.ref(), "e"), SHORT_OHMS);
             case DS_SHORT -> bridge(stage, new PinRef(p.ref(), "d"), new PinRef(p.ref(), "s"), SHORT_OHMS);
             case GS_SHORT -> bridge(stage, new PinRef(p.ref(), "g"), new PinRef(p.ref(), "s"), SHORT_OHMS);
@@ -175,6 +182,95 @@ public final class FaultInjector {
             return stage;
         }
         return bridgeNets(moved, c, net, Connectivity.GROUND, OPEN_OHMS);
+    }
+
+    /**
+     * The pin a track open names ({@code PART.PIN}), if the stage has it.
+     *
+     * @param stage the stage
+     * @param address {@code PART.PIN}
+     * @return the pin
+     */
+    public static Optional<PinRef> trackPin(Stage stage, String address) {
+        int dot = address.lastIndexOf('.');
+        if (dot <= 0 || dot == address.length() - 1) {
+            return Optional.empty();
+        }
+        String ref = address.substring(0, dot);
+        String pin = address.substring(dot + 1);
+        return stage.part(ref).filter(p -> p.kind().pins().stream().anyMatch(ps -> ps.name().equals(pin)))
+                .map(p -> new PinRef(ref, pin));
+    }
+
+    /**
+     * A pin cut from its net: the one wire ending at the pin is cut back to a one-step stub at its far end, so the
+     * pin stands alone and the rest of the net stays joined, then the pin is joined back to the rest
+     * through {@value #OPEN_OHMS} Ω (an open, and no node left floating). A pin on no other pin or
+     * wire changes nothing.
+     *
+     * @param stage the stage
+     * @param pin the pin to cut
+     * @return the stage with the pin cut
+     * @throws IllegalArgumentException when the pin is joined in a way one cut cannot separate
+     *     (another pin on the same point, several wires meeting there, a wire passing through it)
+     */
+    public static Stage cutPin(Stage stage, PinRef pin) {
+        Connectivity c = Connectivity.of(stage);
+        String net = c.net(pin.ref(), pin.pin());
+        if (c.pinsOn(net).size() <= 1) {
+            return stage;
+        }
+        GridPoint at = stage.require(pin.ref()).pinPoint(pin.pin());
+        String where = pin.ref() + "." + pin.pin();
+        for (Part q : stage.parts()) {
+            for (PinSpec ps : q.kind().pins()) {
+                if (!(q.ref().equals(pin.ref()) && ps.name().equals(pin.pin())) && q.pinPoint(ps.name()).equals(at)) {
+                    throw new IllegalArgumentException(where + " sits on " + q.ref() + "." + ps.name()
+                            + " with no track between them to open.");
+                }
+            }
+        }
+        List<Wire> wires = new ArrayList<>(stage.wires());
+        int hit = -1;
+        for (int i = 0; i < wires.size(); i++) {
+            Wire w = wires.get(i);
+            if (!w.contains(at)) {
+                continue;
+            }
+            if (!w.from().equals(at) && !w.to().equals(at) || hit >= 0) {
+                throw new IllegalArgumentException("the track at " + where
+                        + " is not one wire ending at the pin; draw it so, or open a track of another pin.");
+            }
+            hit = i;
+        }
+        if (hit < 0) {
+            return stage;
+        }
+        Wire w = wires.get(hit);
+        GridPoint other = w.from().equals(at) ? w.to() : w.from();
+        int dx = Integer.signum(other.gridX() - at.gridX());
+        int dy = Integer.signum(other.gridY() - at.gridY());
+        // the break is put next to the far end, leaving a one-step stub there: the span between is
+        // left free, as it was, for the meter's and the fault's own added wires to cross
+        GridPoint stub = new GridPoint(other.gridX() - dx, other.gridY() - dy);
+        if (stub.equals(at)) {
+            wires.remove(hit);
+        } else {
+            wires.set(hit, new Wire(stub, other));
+        }
+        Stage cut = stage.withWires(wires);
+        Connectivity cc = Connectivity.of(cut);
+        String alone = cc.net(pin.ref(), pin.pin());
+        String rest = null;
+        for (PinRef q : c.pinsOn(net)) {
+            if (!q.equals(pin)) {
+                rest = cc.net(q.ref(), q.pin());
+                if (rest.equals(alone)) {
+                    throw new IllegalArgumentException("the net of " + where + " stays joined after its track is opened.");
+                }
+            }
+        }
+        return bridgeNets(cut, cc, alone, rest, OPEN_OHMS);
     }
 
     /** A two-pin part replaced by a resistor of the same designator on the same pin positions. */

@@ -45,6 +45,21 @@ public enum FaultKind {
     DS_SHORT("ds-short", 2.0),
     /** MOSFET gate–source short (0.1 Ω, a punctured gate oxide). */
     GS_SHORT("gs-short", 1.5),
+    /**
+     * Darlington channel's clamp diode open (its common pin's bond or the diode itself): the
+     * channel's {@code com} pin is cut from its net and joined back through 1 TΩ. At DC the clamp
+     * never conducts (the output stays at or below the coil supply), so the readings equal the
+     * healthy stage's and the dictionary puts it in the healthy stage's ambiguity group; at
+     * turn-off the coil's flyback is then unclamped ({@code simulate --fault}).
+     */
+    CLAMP_OPEN("clamp-open", 0.5),
+    /**
+     * A track open, written {@code PART.PIN:track-open}: the track that joins that pin to the rest
+     * of its net is broken, so the net splits in two, the pin's side and the rest, joined through
+     * 1 TΩ. Addressed by a pin rather than a part, it is not in any part's list ({@link #of}) and
+     * not in the single-fault set; it is accepted wherever a fault is written.
+     */
+    TRACK_OPEN("track-open", 0.5),
     /** Relay coil open (1 TΩ). */
     COIL_OPEN("coil-open", 2.0),
     /** Relay coil with half its turns shorted: half the resistance at the same must-operate voltage. */
@@ -100,7 +115,7 @@ public enum FaultKind {
             case CAPACITOR -> List.of(SHORT);
             case NPN, PNP -> List.of(CE_SHORT, BE_OPEN, BC_OPEN, BE_SHORT, GAIN_LOW);
             case NMOS -> List.of(DS_SHORT, GS_SHORT, OPEN);
-            case DARLINGTON -> List.of(CE_SHORT, OPEN);
+            case DARLINGTON -> List.of(CE_SHORT, OPEN, CLAMP_OPEN);
             case RELAY -> List.of(COIL_OPEN, SHORTED_TURNS, WELDED, STUCK_OPEN);
             case DRIVE_PIN -> List.of(STUCK_LOW, STUCK_HIGH, WEAK);
             case SUPPLY -> List.of(MISSING, SAG);
