@@ -6,6 +6,7 @@ import javafx.scene.control.Button;
 import javafx.scene.control.ButtonType;
 import javafx.scene.control.Dialog;
 import javafx.scene.control.Label;
+import javafx.scene.control.ListView;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextField;
 import javafx.scene.image.ImageView;
@@ -94,11 +95,62 @@ public final class LineUpView {
         HBox shared = new HBox(8, new Label("Shared coil supply"), supply, applySupply, undo, note);
         javafx.scene.canvas.Canvas waves = new javafx.scene.canvas.Canvas(Math.max(720, stages.size() * 360), 300);
         waves.setId("line-up-waves");
-        content.getChildren().addAll(schematics, shared, pending, table, copy, waves);
+        LineUpRows rows = new LineUpRows();
+        java.util.concurrent.atomic.AtomicReference<List<Column>> last = new java.util.concurrent.atomic.AtomicReference<>(List.of());
+        ListView<LineUpRows.Row> rowList = new ListView<>();
+        rowList.setId("line-up-rows");
+        rowList.setPrefHeight(160);
+        rowList.setCellFactory(v -> new javafx.scene.control.ListCell<>() {
+            @Override
+            protected void updateItem(LineUpRows.Row r, boolean empty) {
+                super.updateItem(r, empty);
+                setText(empty || r == null ? null : (r.shown() ? "\u2611 " : "\u2610 ") + r.label());
+            }
+        });
+        rowList.getItems().setAll(rows.rows());
+        Runnable redraw = () -> {
+            int at = rowList.getSelectionModel().getSelectedIndex();
+            rowList.getItems().setAll(rows.rows());
+            rowList.getSelectionModel().select(at);
+            fill(table, last.get(), rows);
+        };
+        Button toggle = new Button("Show / hide row");
+        toggle.setId("line-up-row-toggle");
+        toggle.setOnAction(e -> {
+            int i = rowList.getSelectionModel().getSelectedIndex();
+            if (i >= 0) {
+                rows.toggle(i);
+                redraw.run();
+            }
+        });
+        Button up = new Button("Up");
+        up.setId("line-up-row-up");
+        Button down = new Button("Down");
+        down.setId("line-up-row-down");
+        for (Button b : List.of(up, down)) {
+            int delta = b == up ? -1 : 1;
+            b.setOnAction(e -> {
+                int i = rowList.getSelectionModel().getSelectedIndex();
+                if (i >= 0) {
+                    int j = rows.move(i, delta);
+                    redraw.run();
+                    rowList.getSelectionModel().select(j);
+                }
+            });
+        }
+        HBox rowChoice = new HBox(8, rowList, new VBox(6, new Label("Rows of the table"), toggle, up, down));
+        content.getChildren().addAll(schematics, shared, pending, table, copy, rowChoice, waves);
+        copy.setOnAction(e -> {
+            ClipboardContent c = new ClipboardContent();
+            c.putString(rows.tabSeparated(names, last.get()));
+            Clipboard.getSystemClipboard().setContent(c);
+        });
         Runnable refresh = () -> {
             List<LineUpContext.Applied> now = vm.lineUpStages();
             vm.evaluateLineUp(now, columns -> {
-                fill(table, columns);
+                last.set(columns);
+                rows.merge(columns);
+                redraw.run();
                 List<org.armature.render.EdgePlot.Plot> plots = new ArrayList<>();
                 List<String> legend = new ArrayList<>();
                 for (int i = 0; i < columns.size(); i++) {
@@ -112,11 +164,6 @@ public final class LineUpView {
                         org.armature.render.Affine.IDENTITY), plots, legend, waves.getWidth(), waves.getHeight(), palette);
                 content.getChildren().remove(pending);
                 copy.setDisable(false);
-                copy.setOnAction(e -> {
-                    ClipboardContent c = new ClipboardContent();
-                    c.putString(LineUpMetrics.tabSeparated(names, columns));
-                    Clipboard.getSystemClipboard().setContent(c);
-                });
             });
         };
         applySupply.setOnAction(e -> {
@@ -146,26 +193,31 @@ public final class LineUpView {
         return d;
     }
 
-    /** Fills the table: one row per figure and per check, best values bold with a star. */
-    static void fill(GridPane table, List<Column> columns) {
+    /**
+     * Fills the table with the shown rows in their order: a figure or a check per row, best values
+     * bold with a star.
+     */
+    static void fill(GridPane table, List<Column> columns, LineUpRows rows) {
         table.getChildren().clear();
-        int row = 0;
-        for (Metric m : LineUpMetrics.METRICS) {
-            List<Integer> best = LineUpMetrics.best(m, columns);
-            table.add(new Label(m.label()), 0, row);
-            for (int i = 0; i < columns.size(); i++) {
-                double v = columns.get(i).value(m.key());
-                String text = LineUpMetrics.format(m, v);
-                table.add(cell(text, best.contains(i)), i + 1, row);
-            }
-            row++;
+        if (columns.isEmpty()) {
+            return;
         }
-        for (String id : LineUpMetrics.checkIds(columns)) {
-            List<Integer> best = LineUpMetrics.bestCheck(id, columns);
-            table.add(new Label("check " + id), 0, row);
-            for (int i = 0; i < columns.size(); i++) {
-                String word = columns.get(i).report().check(id).map(r -> r.status().word()).orElse("—");
-                table.add(cell(word, best.contains(i)), i + 1, row);
+        int row = 0;
+        for (LineUpRows.Row r : rows.shown()) {
+            table.add(new Label(r.label()), 0, row);
+            if (r.id().startsWith(LineUpRows.CHECK)) {
+                String id = r.id().substring(LineUpRows.CHECK.length());
+                List<Integer> best = LineUpMetrics.bestCheck(id, columns);
+                for (int i = 0; i < columns.size(); i++) {
+                    String word = columns.get(i).report().check(id).map(c -> c.status().word()).orElse("\u2014");
+                    table.add(cell(word, best.contains(i)), i + 1, row);
+                }
+            } else {
+                Metric m = LineUpMetrics.METRICS.stream().filter(x -> x.key().equals(r.id())).findFirst().orElseThrow();
+                List<Integer> best = LineUpMetrics.best(m, columns);
+                for (int i = 0; i < columns.size(); i++) {
+                    table.add(cell(LineUpMetrics.format(m, columns.get(i).value(m.key())), best.contains(i)), i + 1, row);
+                }
             }
             row++;
         }

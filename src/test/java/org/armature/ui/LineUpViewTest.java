@@ -114,6 +114,58 @@ class LineUpViewTest {
     }
 
     @Test
+    @DisplayName("rows chosen and reordered in the view: the table and its copy show those rows in that order")
+    void rowsChosenAndReordered(FxRobot robot) {
+        robot.interact(() -> assertTrue(vm.open(GREENHOUSE)));
+        AtomicReference<Dialog<ButtonType>> dialog = new AtomicReference<>();
+        robot.interact(() -> {
+            dialog.set(LineUpView.dialog(vm, Palette.LIGHT));
+            dialog.get().show();
+        });
+        @SuppressWarnings("unchecked")
+        javafx.scene.control.ListView<LineUpRows.Row> rows = robot.lookup("#line-up-rows")
+                .queryAs(javafx.scene.control.ListView.class);
+        int peak = indexOf(rows, "peakSwitchVoltage");
+        assertTrue(peak > 0, "the peak switch voltage is not the first figure by default");
+        robot.interact(() -> rows.getSelectionModel().select(peak));
+        for (int i = 0; i < peak; i++) {
+            robot.interact(() -> robot.lookup("#line-up-row-up").queryButton().fire());
+        }
+        assertEquals("peakSwitchVoltage", rows.getItems().get(0).id(), "moved to the top");
+        int parts = indexOf(rows, "partsCount");
+        robot.interact(() -> {
+            rows.getSelectionModel().select(parts);
+            robot.lookup("#line-up-row-toggle").queryButton().fire();
+        });
+        GridPane table = robot.lookup("#line-up-table").queryAs(GridPane.class);
+        List<String> firstColumn = table.getChildren().stream().filter(n -> GridPane.getColumnIndex(n) == 0)
+                .sorted(java.util.Comparator.comparing(GridPane::getRowIndex)).map(n -> ((Label) n).getText()).toList();
+        assertEquals("peak switch voltage", firstColumn.get(0));
+        assertFalse(firstColumn.contains("parts (ground symbols not counted)"), "a hidden row is not in the table");
+        AtomicReference<String> copied = new AtomicReference<>();
+        robot.interact(() -> {
+            robot.lookup("#line-up-copy").queryButton().fire();
+            copied.set(Clipboard.getSystemClipboard().getString());
+        });
+        List<String> lines = copied.get().lines().toList();
+        assertTrue(lines.get(1).startsWith("peak switch voltage\tV\t"), lines.get(1));
+        assertTrue(lines.stream().noneMatch(l -> l.startsWith("parts (ground")), "the hidden row is not copied");
+        assertEquals(firstColumn.size() + 1, lines.size(), "the header and every shown row, nothing else");
+        assertEquals(firstColumn, lines.subList(1, lines.size()).stream().map(l -> l.split("\t")[0]).toList(),
+                "copied in the order shown");
+        robot.interact(() -> dialog.get().close());
+    }
+
+    private static int indexOf(javafx.scene.control.ListView<LineUpRows.Row> rows, String id) {
+        for (int i = 0; i < rows.getItems().size(); i++) {
+            if (rows.getItems().get(i).id().equals(id)) {
+                return i;
+            }
+        }
+        throw new AssertionError("no row " + id);
+    }
+
+    @Test
     @DisplayName("changing the shared supply in the view re-solves every stage; undo restores all of them")
     void sharedSupplyInTheView(FxRobot robot) {
         StageDocument doc = StageFiles.open(GREENHOUSE);
