@@ -424,7 +424,31 @@ public final class EditorViewModel {
                 role.equals("contactSupply") ? Optional.of(changed) : c.contactSupply(),
                 role.equals("load") ? Optional.of(changed) : c.load(),
                 c.ambientCelsius(), c.ambientMinCelsius(), c.ambientMaxCelsius());
-        sharedUndo.push(c);
+        return setSharedContext(next);
+    }
+
+    /** The line-up's shared context, if the document has a line-up. */
+    public Optional<org.armature.model.LineUpContext> sharedContext() {
+        return lineUpContext;
+    }
+
+    /**
+     * Replaces the line-up's whole shared context in one step (several shared values changed at
+     * once: the relay's coil figures, the supply and its tolerance, the pin, the ambient range);
+     * every stage is judged with it from now on. One {@link #undoSharedValue()} restores the previous
+     * context.
+     *
+     * @return false (with a message) when there is no line-up; true also when nothing changed
+     */
+    public boolean setSharedContext(org.armature.model.LineUpContext next) {
+        if (lineUpContext.isEmpty()) {
+            message.set("The document has no line-up; line stages up first (Tools ▸ Line up against…).");
+            return false;
+        }
+        if (next.equals(lineUpContext.get())) {
+            return true;
+        }
+        sharedUndo.push(lineUpContext.get());
         lineUpContext = Optional.of(next);
         stagesChanged = true;
         publishDocument();

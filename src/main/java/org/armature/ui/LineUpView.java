@@ -80,19 +80,24 @@ public final class LineUpView {
         Button copy = new Button("Copy table");
         copy.setId("line-up-copy");
         copy.setDisable(true);
-        org.armature.model.Stage first = stages.get(0).stage();
-        TextField supply = new TextField(org.armature.model.StageRecognition.of(first).roles()
-                .flatMap(r -> r.coilSupplyRef()).flatMap(first::part)
-                .map(p -> Notation.format(p.value("volts"), "V")).orElse(""));
-        supply.setId("line-up-supply");
-        supply.setPrefColumnCount(8);
+        LineUpContext start = vm.sharedContext().orElseGet(() -> LineUpContext.of(stages.get(0).stage()));
+        List<SharedField> fields = sharedFields(start);
+        GridPane sharedGrid = new GridPane();
+        sharedGrid.setId("line-up-shared");
+        sharedGrid.setHgap(8);
+        sharedGrid.setVgap(4);
+        for (int i = 0; i < fields.size(); i++) {
+            SharedField f = fields.get(i);
+            sharedGrid.add(new Label(f.label()), (i % 3) * 2, i / 3);
+            sharedGrid.add(f.field(), (i % 3) * 2 + 1, i / 3);
+        }
         Button applySupply = new Button("Apply to every stage");
         applySupply.setId("line-up-apply-supply");
         Button undo = new Button("Undo");
         undo.setId("line-up-undo");
         Label note = new Label();
         note.setId("line-up-note");
-        HBox shared = new HBox(8, new Label("Shared coil supply"), supply, applySupply, undo, note);
+        VBox shared = new VBox(6, new Label("Shared by every stage"), sharedGrid, new HBox(8, applySupply, undo, note));
         javafx.scene.canvas.Canvas waves = new javafx.scene.canvas.Canvas(Math.max(720, stages.size() * 360), 300);
         waves.setId("line-up-waves");
         LineUpRows rows = new LineUpRows();
@@ -168,8 +173,9 @@ public final class LineUpView {
         };
         applySupply.setOnAction(e -> {
             try {
-                double volts = EngineeringNotation.parse(supply.getText(), Unit.VOLT);
-                if (vm.setSharedValue("coilSupply", "volts", volts)) {
+                LineUpContext next = withFields(vm.sharedContext().orElse(start), fields);
+                if (vm.setSharedContext(next)) {
+                    show(next, fields);
                     note.setText("");
                     refresh.run();
                 } else {
@@ -181,6 +187,8 @@ public final class LineUpView {
         });
         undo.setOnAction(e -> {
             if (vm.undoSharedValue()) {
+                vm.sharedContext().ifPresent(c -> show(c, fields));
+                note.setText("");
                 refresh.run();
             }
         });
@@ -221,6 +229,120 @@ public final class LineUpView {
             }
             row++;
         }
+    }
+
+    /**
+     * One shared value the view edits.
+     *
+     * @param role {@code relay}, {@code coilSupply}, {@code drivePin} or {@code ambient}
+     * @param key the parameter key ({@code min}/{@code max} for the ambient range)
+     */
+    record SharedField(String role, String key, String label, Unit unit, TextField field) {
+    }
+
+    /** The relay's coil figures, the coil supply and its tolerance, the pin, the ambient range. */
+    static List<SharedField> sharedFields(LineUpContext c) {
+        String[][] spec = {
+            {"relay", org.armature.model.ParamKeys.RATED_VOLTS, "Rated coil voltage"},
+            {"relay", org.armature.model.ParamKeys.COIL_RESISTANCE_OHMS, "Coil resistance"},
+            {"relay", org.armature.model.ParamKeys.MUST_OPERATE_VOLTS, "Must-operate voltage"},
+            {"relay", org.armature.model.ParamKeys.MUST_RELEASE_VOLTS, "Must-release voltage"},
+            {"coilSupply", org.armature.model.ParamKeys.VOLTS, "Coil supply"},
+            {"coilSupply", org.armature.model.ParamKeys.TOLERANCE_PERCENT, "Supply tolerance"},
+            {"drivePin", org.armature.model.ParamKeys.HIGH_VOLTS, "Pin high level"},
+            {"drivePin", org.armature.model.ParamKeys.OUTPUT_RESISTANCE_OHMS, "Pin output resistance"},
+            {"ambient", "min", "Coldest ambient"},
+            {"ambient", "max", "Hottest ambient"},
+        };
+        List<SharedField> out = new ArrayList<>();
+        for (String[] s : spec) {
+            Unit unit = s[0].equals("ambient") ? Unit.CELSIUS
+                    : part(c, s[0]).flatMap(p -> p.kind().param(s[1])).map(org.armature.model.ParamSpec::unit).orElse(Unit.RATIO);
+            TextField f = new TextField();
+            f.setId(s[0].equals("coilSupply") && s[1].equals(org.armature.model.ParamKeys.VOLTS) ? "line-up-supply"
+                    : "line-up-shared-" + s[0] + "-" + s[1]);
+            f.setPrefColumnCount(8);
+            out.add(new SharedField(s[0], s[1], s[2], unit, f));
+        }
+        show(c, out);
+        return out;
+    }
+
+    /** Puts the context's values into the fields; a role the line-up does not share leaves its field disabled. */
+    static void show(LineUpContext c, List<SharedField> fields) {
+        for (SharedField f : fields) {
+            if (f.role().equals("ambient")) {
+                f.field().setText(Notation.format(f.key().equals("min") ? c.ambientMinCelsius() : c.ambientMaxCelsius(), "°C"));
+                f.field().setUserData(f.field().getText());
+                continue;
+            }
+            java.util.Optional<org.armature.model.SharedPart> p = part(c, f.role());
+            f.field().setDisable(p.isEmpty() || p.get().kind().param(f.key()).isEmpty());
+            f.field().setText(p.flatMap(sp -> sp.kind().param(f.key()).map(spec -> Notation.format(
+                    sp.values().getOrDefault(f.key(), spec.defaultValue()), spec.unitSymbol()))).orElse(""));
+            f.field().setUserData(f.field().getText());
+        }
+    }
+
+    /**
+     * The context with every field's value in it; one sentence saying what was expected when a field
+     * does not parse or is out of its parameter's range.
+     */
+    static LineUpContext withFields(LineUpContext c, List<SharedField> fields) {
+        LineUpContext next = c;
+        double min = c.ambientMinCelsius();
+        double max = c.ambientMaxCelsius();
+        for (SharedField f : fields) {
+            if (f.field().isDisabled() || f.field().getText().equals(f.field().getUserData())) {
+                continue; // unchanged: the shown text is rounded, so it is not read back
+            }
+            double v;
+            try {
+                v = EngineeringNotation.parse(f.field().getText(), f.unit());
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException(f.label() + ": " + e.getMessage(), e);
+            }
+            if (f.role().equals("ambient")) {
+                if (f.key().equals("min")) {
+                    min = v;
+                } else {
+                    max = v;
+                }
+                continue;
+            }
+            org.armature.model.ParamSpec spec = part(next, f.role()).orElseThrow().kind().param(f.key()).orElseThrow();
+            if (!spec.accepts(v)) {
+                throw new IllegalArgumentException(f.label() + " must be between " + Notation.format(spec.min(), spec.unitSymbol())
+                        + " and " + Notation.format(spec.max(), spec.unitSymbol()) + ".");
+            }
+            org.armature.model.SharedPart changed = part(next, f.role()).orElseThrow().with(f.key(), v);
+            next = switch (f.role()) {
+                case "relay" -> next.withRelay(changed);
+                case "coilSupply" -> next.withCoilSupply(changed);
+                default -> new LineUpContext(next.relay(), next.coilSupply(), java.util.Optional.of(changed),
+                        next.contactSupply(), next.load(), next.ambientCelsius(), next.ambientMinCelsius(),
+                        next.ambientMaxCelsius());
+            };
+        }
+        if (!(min <= max)) {
+            throw new IllegalArgumentException("The coldest ambient must not be above the hottest.");
+        }
+        if (min < -273.15) {
+            throw new IllegalArgumentException("The coldest ambient must be above absolute zero (-273.15 °C).");
+        }
+        if (min != c.ambientMinCelsius() || max != c.ambientMaxCelsius()) {
+            next = next.withAmbient(Math.max(min, Math.min(max, c.ambientCelsius())), min, max);
+        }
+        return next;
+    }
+
+    private static java.util.Optional<org.armature.model.SharedPart> part(LineUpContext c, String role) {
+        return switch (role) {
+            case "relay" -> c.relay();
+            case "coilSupply" -> c.coilSupply();
+            case "drivePin" -> c.drivePin();
+            default -> java.util.Optional.empty();
+        };
     }
 
     private static Label cell(String text, boolean best) {

@@ -194,6 +194,63 @@ class LineUpViewTest {
         robot.interact(() -> dialog.get().close());
     }
 
+    @Test
+    @DisplayName("a shared relay change typed in the view reaches every stage; one undo restores all of them")
+    void sharedRelayInTheView(FxRobot robot) {
+        StageDocument doc = StageFiles.open(GREENHOUSE);
+        Path file = dir.resolve("lined-up-relay.stage.json");
+        StageFiles.save(doc.withLineUp(Optional.of(new LineUp(List.of(0, 1, 2), LineUpContext.of(doc.stages().get(0))))),
+                file);
+        robot.interact(() -> assertTrue(vm.open(file)));
+        List<Double> ohmsBefore = coilOhms(vm.lineUpStages());
+        AtomicReference<Dialog<ButtonType>> dialog = new AtomicReference<>();
+        robot.interact(() -> {
+            dialog.set(LineUpView.dialog(vm, Palette.LIGHT));
+            dialog.get().show();
+        });
+        List<String> before = row(robot, "coil current (nominal)");
+        javafx.scene.control.TextField coil = robot.lookup("#line-up-shared-relay-coilResistanceOhms")
+                .queryAs(javafx.scene.control.TextField.class);
+        javafx.scene.control.TextField hot = robot.lookup("#line-up-shared-ambient-max")
+                .queryAs(javafx.scene.control.TextField.class);
+        robot.interact(() -> {
+            coil.setText("2k");
+            hot.setText("60");
+            robot.lookup("#line-up-apply-supply").queryButton().fire();
+        });
+        assertEquals("", robot.lookup("#line-up-note").queryAs(Label.class).getText());
+        // every stage is judged with the shared 2 kΩ coil and the 60 °C hottest ambient
+        for (LineUpContext.Applied a : vm.lineUpStages()) {
+            assertEquals(2000, relay(a).value(org.armature.model.ParamKeys.COIL_RESISTANCE_OHMS), a.stage().name());
+            assertEquals(60, a.stage().conditions().ambientMaxCelsius(), a.stage().name());
+        }
+        List<String> after = row(robot, "coil current (nominal)");
+        assertEquals(3, after.size());
+        for (int i = 0; i < before.size(); i++) {
+            assertFalse(before.get(i).equals(after.get(i)), "stage " + i + " re-solved: " + before + " " + after);
+        }
+        robot.interact(() -> robot.lookup("#line-up-undo").queryButton().fire());
+        assertEquals(ohmsBefore, coilOhms(vm.lineUpStages()), "one undo restores the relay of every stage");
+        assertEquals(before, row(robot, "coil current (nominal)"), "and their figures");
+        robot.interact(() -> {
+            coil.setText("lots");
+            robot.lookup("#line-up-apply-supply").queryButton().fire();
+        });
+        assertTrue(robot.lookup("#line-up-note").queryAs(Label.class).getText().startsWith("Coil resistance"),
+                "a value that does not parse is said, nothing applied");
+        assertEquals(ohmsBefore, coilOhms(vm.lineUpStages()));
+        robot.interact(() -> dialog.get().close());
+    }
+
+    private static org.armature.model.Part relay(LineUpContext.Applied a) {
+        return a.stage().parts().stream().filter(p -> p.kind() == org.armature.model.PartKind.RELAY).findFirst()
+                .orElseThrow();
+    }
+
+    private static List<Double> coilOhms(List<LineUpContext.Applied> stages) {
+        return stages.stream().map(a -> relay(a).value(org.armature.model.ParamKeys.COIL_RESISTANCE_OHMS)).toList();
+    }
+
     /** The cells of a table row, by its label. */
     private static List<String> row(FxRobot robot, String label) {
         GridPane table = robot.lookup("#line-up-table").queryAs(GridPane.class);
