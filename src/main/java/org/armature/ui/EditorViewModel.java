@@ -391,6 +391,38 @@ public final class EditorViewModel {
     }
 
     /**
+     * What-if in one action: the active stage's topology rebuilt with another suppressor, keeping the
+     * stage's own values (and conditions) wherever the rebuilt stage has the same part (designator
+     * and kind) outside the suppressors, put into the line-up as {@link #whatIfTopology} does. The
+     * topology is recognised from the wiring; an unrecognised stage is said in the message.
+     *
+     * @return false (with a message) when the stage's topology could not be recognised
+     */
+    public boolean whatIfSuppressor(Suppressor suppressor) {
+        Stage base = editor.stage();
+        Optional<StageRoles> roles = org.armature.model.StageRecognition.of(base).roles();
+        if (roles.isEmpty()) {
+            message.set("Another suppressor needs a stage whose switch, relay and supply are recognised from its wiring.");
+            return false;
+        }
+        StageTemplate t = StageTemplate.valueOf(roles.get().topology().name());
+        Stage built = Templates.build(t, suppressor, roles.get().highSideDrive().orElse(HighSideDrive.LEVEL_SHIFT));
+        java.util.Set<String> suppressors = new java.util.HashSet<>(roles.get().suppressorRefs());
+        org.armature.model.StageRecognition.of(built).roles().ifPresent(r -> suppressors.addAll(r.suppressorRefs()));
+        Stage st = built.withConditions(base.conditions());
+        for (Part p : built.parts()) {
+            Optional<Part> own = base.part(p.ref());
+            if (own.isPresent() && own.get().kind() == p.kind() && !suppressors.contains(p.ref())) {
+                st = st.withPart(new Part(p.ref(), p.kind(), own.get().values(), own.get().options(), p.placement()));
+            }
+        }
+        String label = base.name() + " (" + suppressor.id() + ")";
+        Stage changed = st;
+        whatIf(context -> changed.withName(freeName(label)));
+        return true;
+    }
+
+    /**
      * Changes one shared value of the document's line-up (for example the coil supply's volts): every
      * stage of the line-up is judged with it from now on; the stored stages stay as drawn. Undone by
      * {@link #undoSharedValue()}.

@@ -85,6 +85,51 @@ class LineUpViewTest {
     }
 
     @Test
+    @DisplayName("what-if from the menu: another suppressor keeps the stage's own values; another resistor value from its dialog")
+    void whatIfSuppressorAndValue(FxRobot robot) {
+        // the default stage with its input resistor changed by hand: the what-if must keep that value
+        String input = org.armature.model.StageRecognition.of(vm.stage()).roles().orElseThrow().inputResistorRef()
+                .orElseThrow();
+        robot.interact(() -> vm.setValue(input, org.armature.model.ParamKeys.RESISTANCE_OHMS, 3300));
+        org.armature.model.Stage own = vm.stage();
+        robot.interact(() -> assertTrue(vm.whatIfSuppressor(org.armature.model.Suppressor.DIODE_ZENER)));
+        org.armature.model.Stage changed = vm.stage();
+        var roles = org.armature.model.StageRecognition.of(changed).roles().orElseThrow();
+        assertEquals(org.armature.model.SuppressorKind.DIODE_ZENER, roles.suppressorKind(), "the other suppressor");
+        assertEquals(3300, changed.require(input).value(org.armature.model.ParamKeys.RESISTANCE_OHMS),
+                "the stage's own input resistor value is kept");
+        assertEquals(own.conditions(), changed.conditions());
+        assertEquals(List.of(0, 1), vm.document().lineUp().orElseThrow().stageIndices());
+        // another resistor value, through the dialog the menu opens
+        robot.interact(() -> vm.selectStage(0));
+        AtomicReference<Dialog<ButtonType>> dialog = new AtomicReference<>();
+        robot.interact(() -> {
+            dialog.set(WhatIfValueDialog.dialog(vm));
+            dialog.get().show();
+        });
+        @SuppressWarnings("unchecked")
+        javafx.scene.control.ChoiceBox<String> ref = robot.lookup("#what-if-value-ref")
+                .queryAs(javafx.scene.control.ChoiceBox.class);
+        javafx.scene.control.TextField value = robot.lookup("#what-if-value-ohms")
+                .queryAs(javafx.scene.control.TextField.class);
+        Button ok = (Button) dialog.get().getDialogPane().lookupButton(ButtonType.OK);
+        robot.interact(() -> {
+            ref.setValue(input);
+            value.setText("not a value");
+            ok.fire();
+        });
+        assertEquals(2, vm.document().stages().size(), "a value that does not parse adds nothing");
+        assertFalse(robot.lookup("#what-if-value-note").queryAs(Label.class).getText().isEmpty());
+        robot.interact(() -> {
+            value.setText("10k");
+            ok.fire();
+        });
+        assertEquals(3, vm.document().stages().size());
+        assertEquals(10_000, vm.stage().require(input).value(org.armature.model.ParamKeys.RESISTANCE_OHMS));
+        assertEquals(3, vm.document().lineUp().orElseThrow().stageIndices().size(), "in the same line-up");
+    }
+
+    @Test
     @DisplayName("open the example's stages side by side, read the table, copy it as tab-separated text")
     void tableAndCopy(FxRobot robot) {
         robot.interact(() -> assertTrue(vm.open(GREENHOUSE)));
