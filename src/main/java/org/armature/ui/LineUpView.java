@@ -56,11 +56,16 @@ public final class LineUpView {
         d.setHeaderText("Stages side by side on one relay, supply and pin");
         HBox schematics = new HBox(12);
         List<String> names = new ArrayList<>();
+        List<ImageView> images = new ArrayList<>();
+        // one warm DC engine per stage (compile once, re-solve on every shared change), solve executor only
+        List<ReadoutSource> engines = stages.stream().map(a -> (ReadoutSource) new EngineReadouts()).toList();
         for (int i = 0; i < stages.size(); i++) {
             LineUpContext.Applied a = stages.get(i);
             String name = "[" + (i + 1) + "] " + a.stage().name();
             names.add(a.stage().name());
             ImageView image = new ImageView(ImageExport.render(a.stage(), Annotations.NONE, palette, 1));
+            image.setId("line-up-schematic-" + i);
+            images.add(image);
             image.setPreserveRatio(true);
             image.setFitWidth(Math.min(SCHEMATIC_WIDTH, image.getImage().getWidth()));
             VBox box = new VBox(4, new Label(name), image);
@@ -152,6 +157,16 @@ public final class LineUpView {
         });
         Runnable refresh = () -> {
             List<LineUpContext.Applied> now = vm.lineUpStages();
+            if (now.size() == engines.size()) {
+                // first the DC readouts on every schematic (milliseconds), then the figures and waveforms
+                vm.lineUpReadouts(now, engines, readouts -> {
+                    for (int i = 0; i < readouts.size(); i++) {
+                        ImageView image = images.get(i);
+                        image.setImage(ImageExport.render(now.get(i).stage(), readouts.get(i).annotations(), palette, 1));
+                        image.setUserData(readouts.get(i));
+                    }
+                });
+            }
             vm.evaluateLineUp(now, columns -> {
                 last.set(columns);
                 rows.merge(columns);
