@@ -434,6 +434,27 @@ public final class EditorViewModel {
         });
     }
 
+    /**
+     * The DC readouts of the line-up's stages on the solve executor, one warm engine per stage
+     * ({@code sources}, same order and size as {@code stages}, used from that executor only), handed
+     * to {@code done} on the FX executor. This is the fast path after a shared value changes: a few
+     * milliseconds for four stages ({@code LineUpSharedValueBench}); the figures and waveforms of
+     * {@link #evaluateLineUp} follow separately.
+     */
+    public void lineUpReadouts(List<org.armature.model.LineUpContext.Applied> stages, List<ReadoutSource> sources,
+                               java.util.function.Consumer<List<ReadoutSource.Readouts>> done) {
+        if (stages.size() != sources.size()) {
+            throw new IllegalArgumentException("one readout source per stage is needed");
+        }
+        solveExecutor.execute(() -> {
+            List<ReadoutSource.Readouts> out = new ArrayList<>();
+            for (int i = 0; i < stages.size(); i++) {
+                out.add(sources.get(i).compute(stages.get(i).stage()));
+            }
+            fxExecutor.execute(() -> done.accept(out));
+        });
+    }
+
     /** The document as it would be saved now: every stage as it stands, in tab order. */
     public StageDocument document() {
         List<Integer> indices = lineUpEditors.stream().map(editors::indexOf).filter(i -> i >= 0).toList();
@@ -487,6 +508,38 @@ public final class EditorViewModel {
     }
 
     /**
+     * What-if in one action: the active stage's topology rebuilt with another suppressor, keeping the
+     * stage's own values (and conditions) wherever the rebuilt stage has the same part (designator
+     * and kind) outside the suppressors, put into the line-up as {@link #whatIfTopology} does. The
+     * topology is recognised from the wiring; an unrecognised stage is said in the message.
+     *
+     * @return false (with a message) when the stage's topology could not be recognised
+     */
+    public boolean whatIfSuppressor(Suppressor suppressor) {
+        Stage base = editor.stage();
+        Optional<StageRoles> roles = org.armature.model.StageRecognition.of(base).roles();
+        if (roles.isEmpty()) {
+            message.set("Another suppressor needs a stage whose switch, relay and supply are recognised from its wiring.");
+            return false;
+        }
+        StageTemplate t = StageTemplate.valueOf(roles.get().topology().name());
+        Stage built = Templates.build(t, suppressor, roles.get().highSideDrive().orElse(HighSideDrive.LEVEL_SHIFT));
+        java.util.Set<String> suppressors = new java.util.HashSet<>(roles.get().suppressorRefs());
+        org.armature.model.StageRecognition.of(built).roles().ifPresent(r -> suppressors.addAll(r.suppressorRefs()));
+        Stage st = built.withConditions(base.conditions());
+        for (Part p : built.parts()) {
+            Optional<Part> own = base.part(p.ref());
+            if (own.isPresent() && own.get().kind() == p.kind() && !suppressors.contains(p.ref())) {
+                st = st.withPart(new Part(p.ref(), p.kind(), own.get().values(), own.get().options(), p.placement()));
+            }
+        }
+        String label = base.name() + " (" + suppressor.id() + ")";
+        Stage changed = st;
+        whatIf(context -> changed.withName(freeName(label)));
+        return true;
+    }
+
+    /**
      * Changes one shared value of the document's line-up (for example the coil supply's volts): every
      * stage of the line-up is judged with it from now on; the stored stages stay as drawn. Undone by
      * {@link #undoSharedValue()}.
@@ -520,7 +573,31 @@ public final class EditorViewModel {
                 role.equals("contactSupply") ? Optional.of(changed) : c.contactSupply(),
                 role.equals("load") ? Optional.of(changed) : c.load(),
                 c.ambientCelsius(), c.ambientMinCelsius(), c.ambientMaxCelsius());
-        sharedUndo.push(c);
+        return setSharedContext(next);
+    }
+
+    /** The line-up's shared context, if the document has a line-up. */
+    public Optional<org.armature.model.LineUpContext> sharedContext() {
+        return lineUpContext;
+    }
+
+    /**
+     * Replaces the line-up's whole shared context in one step (several shared values changed at
+     * once: the relay's coil figures, the supply and its tolerance, the pin, the ambient range);
+     * every stage is judged with it from now on. One {@link #undoSharedValue()} restores the previous
+     * context.
+     *
+     * @return false (with a message) when there is no line-up; true also when nothing changed
+     */
+    public boolean setSharedContext(org.armature.model.LineUpContext next) {
+        if (lineUpContext.isEmpty()) {
+            message.set("The document has no line-up; line stages up first (Tools ▸ Line up against…).");
+            return false;
+        }
+        if (next.equals(lineUpContext.get())) {
+            return true;
+        }
+        sharedUndo.push(lineUpContext.get());
         lineUpContext = Optional.of(next);
         stagesChanged = true;
         publishDocument();

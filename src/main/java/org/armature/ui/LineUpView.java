@@ -6,6 +6,7 @@ import javafx.scene.control.Button;
 import javafx.scene.control.ButtonType;
 import javafx.scene.control.Dialog;
 import javafx.scene.control.Label;
+import javafx.scene.control.ListView;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextField;
 import javafx.scene.image.ImageView;
@@ -55,11 +56,16 @@ public final class LineUpView {
         d.setHeaderText("Stages side by side on one relay, supply and pin");
         HBox schematics = new HBox(12);
         List<String> names = new ArrayList<>();
+        List<ImageView> images = new ArrayList<>();
+        // one warm DC engine per stage (compile once, re-solve on every shared change), solve executor only
+        List<ReadoutSource> engines = stages.stream().map(a -> (ReadoutSource) new EngineReadouts()).toList();
         for (int i = 0; i < stages.size(); i++) {
             LineUpContext.Applied a = stages.get(i);
             String name = "[" + (i + 1) + "] " + a.stage().name();
             names.add(a.stage().name());
             ImageView image = new ImageView(ImageExport.render(a.stage(), Annotations.NONE, palette, 1));
+            image.setId("line-up-schematic-" + i);
+            images.add(image);
             image.setPreserveRatio(true);
             image.setFitWidth(Math.min(SCHEMATIC_WIDTH, image.getImage().getWidth()));
             VBox box = new VBox(4, new Label(name), image);
@@ -79,26 +85,92 @@ public final class LineUpView {
         Button copy = new Button("Copy table");
         copy.setId("line-up-copy");
         copy.setDisable(true);
-        org.armature.model.Stage first = stages.get(0).stage();
-        TextField supply = new TextField(org.armature.model.StageRecognition.of(first).roles()
-                .flatMap(r -> r.coilSupplyRef()).flatMap(first::part)
-                .map(p -> Notation.format(p.value("volts"), "V")).orElse(""));
-        supply.setId("line-up-supply");
-        supply.setPrefColumnCount(8);
+        LineUpContext start = vm.sharedContext().orElseGet(() -> LineUpContext.of(stages.get(0).stage()));
+        List<SharedField> fields = sharedFields(start);
+        GridPane sharedGrid = new GridPane();
+        sharedGrid.setId("line-up-shared");
+        sharedGrid.setHgap(8);
+        sharedGrid.setVgap(4);
+        for (int i = 0; i < fields.size(); i++) {
+            SharedField f = fields.get(i);
+            sharedGrid.add(new Label(f.label()), (i % 3) * 2, i / 3);
+            sharedGrid.add(f.field(), (i % 3) * 2 + 1, i / 3);
+        }
         Button applySupply = new Button("Apply to every stage");
         applySupply.setId("line-up-apply-supply");
         Button undo = new Button("Undo");
         undo.setId("line-up-undo");
         Label note = new Label();
         note.setId("line-up-note");
-        HBox shared = new HBox(8, new Label("Shared coil supply"), supply, applySupply, undo, note);
+        VBox shared = new VBox(6, new Label("Shared by every stage"), sharedGrid, new HBox(8, applySupply, undo, note));
         javafx.scene.canvas.Canvas waves = new javafx.scene.canvas.Canvas(Math.max(720, stages.size() * 360), 300);
         waves.setId("line-up-waves");
-        content.getChildren().addAll(schematics, shared, pending, table, copy, waves);
+        LineUpRows rows = new LineUpRows();
+        java.util.concurrent.atomic.AtomicReference<List<Column>> last = new java.util.concurrent.atomic.AtomicReference<>(List.of());
+        ListView<LineUpRows.Row> rowList = new ListView<>();
+        rowList.setId("line-up-rows");
+        rowList.setPrefHeight(160);
+        rowList.setCellFactory(v -> new javafx.scene.control.ListCell<>() {
+            @Override
+            protected void updateItem(LineUpRows.Row r, boolean empty) {
+                super.updateItem(r, empty);
+                setText(empty || r == null ? null : (r.shown() ? "\u2611 " : "\u2610 ") + r.label());
+            }
+        });
+        rowList.getItems().setAll(rows.rows());
+        Runnable redraw = () -> {
+            int at = rowList.getSelectionModel().getSelectedIndex();
+            rowList.getItems().setAll(rows.rows());
+            rowList.getSelectionModel().select(at);
+            fill(table, last.get(), rows);
+        };
+        Button toggle = new Button("Show / hide row");
+        toggle.setId("line-up-row-toggle");
+        toggle.setOnAction(e -> {
+            int i = rowList.getSelectionModel().getSelectedIndex();
+            if (i >= 0) {
+                rows.toggle(i);
+                redraw.run();
+            }
+        });
+        Button up = new Button("Up");
+        up.setId("line-up-row-up");
+        Button down = new Button("Down");
+        down.setId("line-up-row-down");
+        for (Button b : List.of(up, down)) {
+            int delta = b == up ? -1 : 1;
+            b.setOnAction(e -> {
+                int i = rowList.getSelectionModel().getSelectedIndex();
+                if (i >= 0) {
+                    int j = rows.move(i, delta);
+                    redraw.run();
+                    rowList.getSelectionModel().select(j);
+                }
+            });
+        }
+        HBox rowChoice = new HBox(8, rowList, new VBox(6, new Label("Rows of the table"), toggle, up, down));
+        content.getChildren().addAll(schematics, shared, pending, table, copy, rowChoice, waves);
+        copy.setOnAction(e -> {
+            ClipboardContent c = new ClipboardContent();
+            c.putString(rows.tabSeparated(names, last.get()));
+            Clipboard.getSystemClipboard().setContent(c);
+        });
         Runnable refresh = () -> {
             List<LineUpContext.Applied> now = vm.lineUpStages();
+            if (now.size() == engines.size()) {
+                // first the DC readouts on every schematic (milliseconds), then the figures and waveforms
+                vm.lineUpReadouts(now, engines, readouts -> {
+                    for (int i = 0; i < readouts.size(); i++) {
+                        ImageView image = images.get(i);
+                        image.setImage(ImageExport.render(now.get(i).stage(), readouts.get(i).annotations(), palette, 1));
+                        image.setUserData(readouts.get(i));
+                    }
+                });
+            }
             vm.evaluateLineUp(now, columns -> {
-                fill(table, columns);
+                last.set(columns);
+                rows.merge(columns);
+                redraw.run();
                 List<org.armature.render.EdgePlot.Plot> plots = new ArrayList<>();
                 List<String> legend = new ArrayList<>();
                 for (int i = 0; i < columns.size(); i++) {
@@ -112,17 +184,13 @@ public final class LineUpView {
                         org.armature.render.Affine.IDENTITY), plots, legend, waves.getWidth(), waves.getHeight(), palette);
                 content.getChildren().remove(pending);
                 copy.setDisable(false);
-                copy.setOnAction(e -> {
-                    ClipboardContent c = new ClipboardContent();
-                    c.putString(LineUpMetrics.tabSeparated(names, columns));
-                    Clipboard.getSystemClipboard().setContent(c);
-                });
             });
         };
         applySupply.setOnAction(e -> {
             try {
-                double volts = EngineeringNotation.parse(supply.getText(), Unit.VOLT);
-                if (vm.setSharedValue("coilSupply", "volts", volts)) {
+                LineUpContext next = withFields(vm.sharedContext().orElse(start), fields);
+                if (vm.setSharedContext(next)) {
+                    show(next, fields);
                     note.setText("");
                     refresh.run();
                 } else {
@@ -134,6 +202,8 @@ public final class LineUpView {
         });
         undo.setOnAction(e -> {
             if (vm.undoSharedValue()) {
+                vm.sharedContext().ifPresent(c -> show(c, fields));
+                note.setText("");
                 refresh.run();
             }
         });
@@ -146,29 +216,148 @@ public final class LineUpView {
         return d;
     }
 
-    /** Fills the table: one row per figure and per check, best values bold with a star. */
-    static void fill(GridPane table, List<Column> columns) {
+    /**
+     * Fills the table with the shown rows in their order: a figure or a check per row, best values
+     * bold with a star.
+     */
+    static void fill(GridPane table, List<Column> columns, LineUpRows rows) {
         table.getChildren().clear();
+        if (columns.isEmpty()) {
+            return;
+        }
         int row = 0;
-        for (Metric m : LineUpMetrics.METRICS) {
-            List<Integer> best = LineUpMetrics.best(m, columns);
-            table.add(new Label(m.label()), 0, row);
-            for (int i = 0; i < columns.size(); i++) {
-                double v = columns.get(i).value(m.key());
-                String text = LineUpMetrics.format(m, v);
-                table.add(cell(text, best.contains(i)), i + 1, row);
+        for (LineUpRows.Row r : rows.shown()) {
+            table.add(new Label(r.label()), 0, row);
+            if (r.id().startsWith(LineUpRows.CHECK)) {
+                String id = r.id().substring(LineUpRows.CHECK.length());
+                List<Integer> best = LineUpMetrics.bestCheck(id, columns);
+                for (int i = 0; i < columns.size(); i++) {
+                    String word = columns.get(i).report().check(id).map(c -> c.status().word()).orElse("\u2014");
+                    table.add(cell(word, best.contains(i)), i + 1, row);
+                }
+            } else {
+                Metric m = LineUpMetrics.METRICS.stream().filter(x -> x.key().equals(r.id())).findFirst().orElseThrow();
+                List<Integer> best = LineUpMetrics.best(m, columns);
+                for (int i = 0; i < columns.size(); i++) {
+                    table.add(cell(LineUpMetrics.format(m, columns.get(i).value(m.key())), best.contains(i)), i + 1, row);
+                }
             }
             row++;
         }
-        for (String id : LineUpMetrics.checkIds(columns)) {
-            List<Integer> best = LineUpMetrics.bestCheck(id, columns);
-            table.add(new Label("check " + id), 0, row);
-            for (int i = 0; i < columns.size(); i++) {
-                String word = columns.get(i).report().check(id).map(r -> r.status().word()).orElse("—");
-                table.add(cell(word, best.contains(i)), i + 1, row);
-            }
-            row++;
+    }
+
+    /**
+     * One shared value the view edits.
+     *
+     * @param role {@code relay}, {@code coilSupply}, {@code drivePin} or {@code ambient}
+     * @param key the parameter key ({@code min}/{@code max} for the ambient range)
+     */
+    record SharedField(String role, String key, String label, Unit unit, TextField field) {
+    }
+
+    /** The relay's coil figures, the coil supply and its tolerance, the pin, the ambient range. */
+    static List<SharedField> sharedFields(LineUpContext c) {
+        String[][] spec = {
+            {"relay", org.armature.model.ParamKeys.RATED_VOLTS, "Rated coil voltage"},
+            {"relay", org.armature.model.ParamKeys.COIL_RESISTANCE_OHMS, "Coil resistance"},
+            {"relay", org.armature.model.ParamKeys.MUST_OPERATE_VOLTS, "Must-operate voltage"},
+            {"relay", org.armature.model.ParamKeys.MUST_RELEASE_VOLTS, "Must-release voltage"},
+            {"coilSupply", org.armature.model.ParamKeys.VOLTS, "Coil supply"},
+            {"coilSupply", org.armature.model.ParamKeys.TOLERANCE_PERCENT, "Supply tolerance"},
+            {"drivePin", org.armature.model.ParamKeys.HIGH_VOLTS, "Pin high level"},
+            {"drivePin", org.armature.model.ParamKeys.OUTPUT_RESISTANCE_OHMS, "Pin output resistance"},
+            {"ambient", "min", "Coldest ambient"},
+            {"ambient", "max", "Hottest ambient"},
+        };
+        List<SharedField> out = new ArrayList<>();
+        for (String[] s : spec) {
+            Unit unit = s[0].equals("ambient") ? Unit.CELSIUS
+                    : part(c, s[0]).flatMap(p -> p.kind().param(s[1])).map(org.armature.model.ParamSpec::unit).orElse(Unit.RATIO);
+            TextField f = new TextField();
+            f.setId(s[0].equals("coilSupply") && s[1].equals(org.armature.model.ParamKeys.VOLTS) ? "line-up-supply"
+                    : "line-up-shared-" + s[0] + "-" + s[1]);
+            f.setPrefColumnCount(8);
+            out.add(new SharedField(s[0], s[1], s[2], unit, f));
         }
+        show(c, out);
+        return out;
+    }
+
+    /** Puts the context's values into the fields; a role the line-up does not share leaves its field disabled. */
+    static void show(LineUpContext c, List<SharedField> fields) {
+        for (SharedField f : fields) {
+            if (f.role().equals("ambient")) {
+                f.field().setText(Notation.format(f.key().equals("min") ? c.ambientMinCelsius() : c.ambientMaxCelsius(), "°C"));
+                f.field().setUserData(f.field().getText());
+                continue;
+            }
+            java.util.Optional<org.armature.model.SharedPart> p = part(c, f.role());
+            f.field().setDisable(p.isEmpty() || p.get().kind().param(f.key()).isEmpty());
+            f.field().setText(p.flatMap(sp -> sp.kind().param(f.key()).map(spec -> Notation.format(
+                    sp.values().getOrDefault(f.key(), spec.defaultValue()), spec.unitSymbol()))).orElse(""));
+            f.field().setUserData(f.field().getText());
+        }
+    }
+
+    /**
+     * The context with every field's value in it; one sentence saying what was expected when a field
+     * does not parse or is out of its parameter's range.
+     */
+    static LineUpContext withFields(LineUpContext c, List<SharedField> fields) {
+        LineUpContext next = c;
+        double min = c.ambientMinCelsius();
+        double max = c.ambientMaxCelsius();
+        for (SharedField f : fields) {
+            if (f.field().isDisabled() || f.field().getText().equals(f.field().getUserData())) {
+                continue; // unchanged: the shown text is rounded, so it is not read back
+            }
+            double v;
+            try {
+                v = EngineeringNotation.parse(f.field().getText(), f.unit());
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException(f.label() + ": " + e.getMessage(), e);
+            }
+            if (f.role().equals("ambient")) {
+                if (f.key().equals("min")) {
+                    min = v;
+                } else {
+                    max = v;
+                }
+                continue;
+            }
+            org.armature.model.ParamSpec spec = part(next, f.role()).orElseThrow().kind().param(f.key()).orElseThrow();
+            if (!spec.accepts(v)) {
+                throw new IllegalArgumentException(f.label() + " must be between " + Notation.format(spec.min(), spec.unitSymbol())
+                        + " and " + Notation.format(spec.max(), spec.unitSymbol()) + ".");
+            }
+            org.armature.model.SharedPart changed = part(next, f.role()).orElseThrow().with(f.key(), v);
+            next = switch (f.role()) {
+                case "relay" -> next.withRelay(changed);
+                case "coilSupply" -> next.withCoilSupply(changed);
+                default -> new LineUpContext(next.relay(), next.coilSupply(), java.util.Optional.of(changed),
+                        next.contactSupply(), next.load(), next.ambientCelsius(), next.ambientMinCelsius(),
+                        next.ambientMaxCelsius());
+            };
+        }
+        if (!(min <= max)) {
+            throw new IllegalArgumentException("The coldest ambient must not be above the hottest.");
+        }
+        if (min < -273.15) {
+            throw new IllegalArgumentException("The coldest ambient must be above absolute zero (-273.15 °C).");
+        }
+        if (min != c.ambientMinCelsius() || max != c.ambientMaxCelsius()) {
+            next = next.withAmbient(Math.max(min, Math.min(max, c.ambientCelsius())), min, max);
+        }
+        return next;
+    }
+
+    private static java.util.Optional<org.armature.model.SharedPart> part(LineUpContext c, String role) {
+        return switch (role) {
+            case "relay" -> c.relay();
+            case "coilSupply" -> c.coilSupply();
+            case "drivePin" -> c.drivePin();
+            default -> java.util.Optional.empty();
+        };
     }
 
     private static Label cell(String text, boolean best) {

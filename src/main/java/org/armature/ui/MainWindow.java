@@ -338,7 +338,21 @@ public final class MainWindow {
             }
             whatIf.getItems().add(m);
         }
-        tools.getItems().addAll(size, showEdges, lineUp, whatIf);
+        Menu whatIfSuppressor = new Menu("What if: another suppressor");
+        for (Suppressor s : Suppressor.values()) {
+            MenuItem it = new MenuItem(suppressorTitle(s));
+            it.setId("what-if-suppressor-" + s.id());
+            it.setOnAction(e -> {
+                if (vm.whatIfSuppressor(s)) {
+                    showLineUp();
+                }
+            });
+            whatIfSuppressor.getItems().add(it);
+        }
+        MenuItem whatIfValue = item("What if: another resistor value…", null, e -> WhatIfValueDialog.show(vm, window(),
+                this::showLineUp));
+        whatIfValue.setId("menu-what-if-value");
+        tools.getItems().addAll(size, showEdges, lineUp, whatIf, whatIfSuppressor, whatIfValue);
 
         Menu stages = new Menu("Stage");
         stages.getItems().setAll(stageTabs.menuItems());

@@ -53,6 +53,7 @@ public class LineUpSharedValueBench {
 
     private StageDocument doc;
     private final List<DcAnalysis> engines = new ArrayList<>();
+    private final List<org.armature.ui.EngineReadouts> viewEngines = new ArrayList<>();
     private int step;
 
     /** The four templates in one line-up on the first one's relay, supply and pin; engines warmed. */
@@ -68,6 +69,9 @@ public class LineUpSharedValueBench {
             DcAnalysis dc = new DcAnalysis();
             dc.solve(a.stage());
             engines.add(dc);
+            org.armature.ui.EngineReadouts r = new org.armature.ui.EngineReadouts();
+            r.compute(a.stage());
+            viewEngines.add(r);
         }
     }
 
@@ -84,6 +88,27 @@ public class LineUpSharedValueBench {
             OperatingPoint op = engines.get(i).solve(s);
             List<Finding> findings = TopologyCheck.check(s);
             Annotations a = ReadoutBuilder.build(s, op, findings);
+            out.add(SchematicRenderer.draw(s, a, RenderOptions.all(), new RecordingPen()));
+        }
+        return out;
+    }
+
+    /**
+     * The line-up view's own DC path for the same change ({@code EditorViewModel.lineUpReadouts}):
+     * one warm {@link org.armature.ui.EngineReadouts} per stage, which also validates the stage and
+     * solves the other pin state; then each stage's readouts drawn onto a recording pen. The view's
+     * toolkit snapshot of the drawing is not included.
+     */
+    @Benchmark
+    public List<Layout> changeSharedSupplyViewReadouts() {
+        LineUp l = doc.lineUp().get();
+        SharedPart supply = l.context().coilSupply().get().with(ParamKeys.VOLTS, 12 + 0.1 * (step++ & 1));
+        StageDocument changed = doc.withLineUp(java.util.Optional.of(l.withContext(l.context().withCoilSupply(supply))));
+        List<Layout> out = new ArrayList<>(4);
+        List<LineUpContext.Applied> applied = changed.lineUp().get().applied(changed);
+        for (int i = 0; i < applied.size(); i++) {
+            Stage s = applied.get(i).stage();
+            Annotations a = viewEngines.get(i).compute(s).annotations();
             out.add(SchematicRenderer.draw(s, a, RenderOptions.all(), new RecordingPen()));
         }
         return out;
