@@ -130,6 +130,23 @@ class LineUpViewTest {
     }
 
     @Test
+    @DisplayName("Tools ▸ What if: another suppressor adds the stage to a line-up and opens the line-up view")
+    void whatIfSuppressorFromTheMenu(FxRobot robot) {
+        javafx.scene.control.MenuBar bar = robot.lookup(".menu-bar").queryAs(javafx.scene.control.MenuBar.class);
+        javafx.scene.control.MenuItem item = bar.getMenus().stream().flatMap(m -> m.getItems().stream())
+                .filter(i -> i instanceof javafx.scene.control.Menu).flatMap(i -> ((javafx.scene.control.Menu) i).getItems().stream())
+                .filter(i -> "what-if-suppressor-rc".equals(i.getId())).findFirst().orElseThrow();
+        assertTrue(bar.getMenus().stream().flatMap(m -> m.getItems().stream())
+                .anyMatch(i -> "menu-what-if-value".equals(i.getId())), "the resistor-value what-if is in the menu");
+        robot.interact(item::fire);
+        assertEquals(2, vm.document().lineUp().orElseThrow().stageIndices().size());
+        assertEquals(org.armature.model.SuppressorKind.RC,
+                org.armature.model.StageRecognition.of(vm.stage()).roles().orElseThrow().suppressorKind());
+        assertTrue(robot.lookup("#line-up").tryQuery().isPresent(), "the line-up view is open");
+        robot.interact(() -> robot.lookup("#line-up").query().getScene().getWindow().hide());
+    }
+
+    @Test
     @DisplayName("open the example's stages side by side, read the table, copy it as tab-separated text")
     void tableAndCopy(FxRobot robot) {
         robot.interact(() -> assertTrue(vm.open(GREENHOUSE)));
