@@ -53,9 +53,14 @@ import org.armature.netlist.SwitchedResistor;
  */
 public final class DcAnalysis {
 
-    /** Independent checks of every returned answer: none in the application, the honest-residual audit in tests. */
-    private static final List<AnswerAudit> AUDITS = java.util.ServiceLoader.load(AnswerAudit.class).stream()
-            .map(java.util.ServiceLoader.Provider::get).toList();
+    /**
+     * Independent checks of every returned answer, looked up only when the system property
+     * {@code armature.answerAudit} is {@code true} (surefire sets it): none in the application and in
+     * the benchmarks, the honest-residual audit in the unit tests.
+     */
+    private static final List<AnswerAudit> AUDITS = Boolean.getBoolean("armature.answerAudit")
+            ? java.util.ServiceLoader.load(AnswerAudit.class).stream().map(java.util.ServiceLoader.Provider::get).toList()
+            : List.of();
 
     private final DcOptions options;
     /** The compiled stage of each drive pin state: index 1 pin high, 0 pin low. */
