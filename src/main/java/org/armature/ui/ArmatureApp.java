@@ -28,7 +28,7 @@ public final class ArmatureApp extends Application {
      * Quiet time before the turn-on and turn-off runs start, ms: short, so the edges follow a drag
      * (the two runs take a few milliseconds each on their own thread).
      */
-    public static final long EDGE_SETTLE_MILLIS = 40;
+    public static final long EDGE_SETTLE_MILLIS = 16;
 
     /** System property choosing the theme at start-up: {@code dark} or anything else for light. */
     public static final String THEME_PROPERTY = "armature.theme";

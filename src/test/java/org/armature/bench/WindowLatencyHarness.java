@@ -16,6 +16,8 @@ import org.armature.model.HighSideDrive;
 import org.armature.model.StageTemplate;
 import org.armature.model.Suppressor;
 import org.armature.model.Templates;
+import org.armature.ui.Analyses;
+import org.armature.ui.ArmatureApp;
 import org.armature.ui.DocumentStore;
 import org.armature.ui.EditorViewModel;
 import org.armature.ui.EngineReadouts;
@@ -27,8 +29,10 @@ import org.armature.ui.RecentFiles;
  * for each template it moves the ambient slider and then the supply slider through 200 steps at
  * 60 steps per second, as a drag does, and times each input from the moment the slider's value
  * changes (the input event) to the end of the canvas repaint that shows readouts of that input or
- * a later one (coalesced inputs count until the newer readouts are painted). Prints the
- * percentiles per template and slider.
+ * a later one (coalesced inputs count until the newer readouts are painted), and to the
+ * publication of the edges (turn-on and turn-off runs, on their own thread as in the application) of
+ * that input or a later one. One untimed pass over every template comes first (JIT warm-up). Prints
+ * the percentiles per template and slider.
  *
  * <p>Run: {@code mvn -B -DskipTests package test-compile}, then
  * {@code xvfb-run -a -s "-screen 0 1600x1000x24" java -cp target/armature.jar:target/test-classes
@@ -42,6 +46,9 @@ public final class WindowLatencyHarness {
     static final long PACE_MILLIS = 16;
 
     private final Map<Long, Long> pending = new TreeMap<>();
+    /** Inputs waiting for the edges (turn-on and turn-off runs) of their generation or a later one. */
+    private final Map<Long, Long> pendingEdges = new TreeMap<>();
+    private final List<Double> edgeMillis = Collections.synchronizedList(new ArrayList<>());
     private final List<Double> latenciesMillis = Collections.synchronizedList(new ArrayList<>());
     private final List<Double> handlingMillis = Collections.synchronizedList(new ArrayList<>());
 
@@ -64,11 +71,26 @@ public final class WindowLatencyHarness {
             t.setDaemon(true);
             return t;
         });
+        // the edges as the application runs them: a low-priority thread of their own, its settle time
+        ExecutorService edgeRunner = Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, "armature-edges");
+            t.setDaemon(true);
+            t.setPriority(Thread.MIN_PRIORITY);
+            return t;
+        });
+        // no verdicts (they return at once, inline); the edges on their own thread as in the application
+        Analyses edgesOnly = new Analyses(Analyses.NO_VERDICTS, Analyses.engineEdges(), Runnable::run, 0,
+                edgeRunner, ArmatureApp.EDGE_SETTLE_MILLIS);
         EditorViewModel[] vm = new EditorViewModel[1];
         MainWindow[] w = new MainWindow[1];
         onFx(() -> {
             vm[0] = new EditorViewModel(Templates.defaultStage(), DocumentStore.FILES, new EngineReadouts(), solver,
-                    Platform::runLater);
+                    Platform::runLater, edgesOnly);
+            vm[0].evaluationProperty().addListener((o, a, b) -> {
+                if (b.edges().isPresent()) {
+                    edgesPublished(b.generation());
+                }
+            });
             w[0] = new MainWindow(vm[0], new RecentFiles());
             javafx.stage.Stage s = new javafx.stage.Stage();
             s.setScene(w[0].scene(1560, 960));
@@ -108,6 +130,7 @@ public final class WindowLatencyHarness {
 
     private void sweep(EditorViewModel vm, Slider slider, double start, double span) throws Exception {
         latenciesMillis.clear();
+        edgeMillis.clear();
         handlingMillis.clear();
         repaintMillis.clear();
         for (int i = 0; i < STEPS; i++) {
@@ -121,6 +144,7 @@ public final class WindowLatencyHarness {
                 if (gen != before) {
                     synchronized (pending) {
                         pending.put(gen, t0);
+                        pendingEdges.put(gen, t0);
                     }
                 }
             });
@@ -129,6 +153,22 @@ public final class WindowLatencyHarness {
         Thread.sleep(1000);
         synchronized (pending) {
             pending.clear();
+            pendingEdges.clear();
+        }
+    }
+
+    /** Edges of {@code generation} published: every input of that generation or before is followed. */
+    private void edgesPublished(long generation) {
+        long now = System.nanoTime();
+        synchronized (pending) {
+            var done = new ArrayList<Long>();
+            for (Map.Entry<Long, Long> e : pendingEdges.entrySet()) {
+                if (e.getKey() <= generation) {
+                    edgeMillis.add((now - e.getValue()) / 1e6);
+                    done.add(e.getKey());
+                }
+            }
+            done.forEach(pendingEdges::remove);
         }
     }
 
@@ -167,10 +207,14 @@ public final class WindowLatencyHarness {
         Collections.sort(h);
         List<Double> r = new ArrayList<>(repaintMillis);
         Collections.sort(r);
+        List<Double> e = new ArrayList<>(edgeMillis);
+        Collections.sort(e);
         System.out.println(String.format(Locale.ROOT, "%s, %s, %d, %.2f, %.2f, %.2f, %.2f, (input handling on the FX"
-                + " thread p50 %.2f ms, p99 %.2f ms; canvas repaint p50 %.2f ms, p99 %.2f ms)", template, slider, l.size(),
+                + " thread p50 %.2f ms, p99 %.2f ms; canvas repaint p50 %.2f ms, p99 %.2f ms; edges follow p50 %s ms,"
+                + " p99 %s ms)", template, slider, l.size(),
                 pct(l, 0.5), pct(l, 0.9), pct(l, 0.99), l.get(l.size() - 1), pct(h, 0.5), pct(h, 0.99),
-                pct(r, 0.5), pct(r, 0.99)));
+                pct(r, 0.5), pct(r, 0.99), e.isEmpty() ? "-" : String.format(Locale.ROOT, "%.1f", pct(e, 0.5)),
+                e.isEmpty() ? "-" : String.format(Locale.ROOT, "%.1f", pct(e, 0.99))));
     }
 
     private static double pct(List<Double> sorted, double p) {
