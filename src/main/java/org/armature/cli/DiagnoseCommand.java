@@ -12,7 +12,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
-import java.util.stream.Collectors;
 import org.armature.analysis.faults.Diagnosis;
 import org.armature.analysis.faults.FaultDictionary;
 import org.armature.analysis.faults.Meter;
@@ -103,26 +102,13 @@ final class DiagnoseCommand implements Callable<Integer> {
         return CommandLine.ExitCode.OK;
     }
 
-    /** Reads {@code NET@high=VOLTS}; an unknown net or state is one sentence naming the valid ones. */
+    /** Reads {@code NET@high=VOLTS} ({@link Reading#parse}); an unknown net or state is one sentence naming the valid ones. */
     static Reading parse(FaultDictionary d, String text) {
-        int at = text.indexOf('@');
-        int eq = text.indexOf('=', Math.max(at, 0));
-        String nets = d.probes().stream().map(Probe::name).collect(Collectors.joining(", "));
-        if (at <= 0 || eq < 0) {
-            throw new CommandFailedException("A reading is written NET@high=VOLTS or NET@low=VOLTS (for example "
-                    + "switch@high=11.9), not '" + text + "'.");
+        try {
+            return Reading.parse(d, text);
+        } catch (IllegalArgumentException e) {
+            throw new CommandFailedException(e.getMessage());
         }
-        String net = text.substring(0, at);
-        String state = text.substring(at + 1, eq);
-        if (d.probeIndex(net) < 0) {
-            throw new CommandFailedException("No probe point '" + net + "' in stage \"" + d.stage().name()
-                    + "\"; valid: " + nets + ".");
-        }
-        if (!state.equals("high") && !state.equals("low")) {
-            throw new CommandFailedException("The pin state of a reading is high or low, not '" + state + "'.");
-        }
-        double volts = EngineeringNotation.parse(text.substring(eq + 1), Unit.VOLT, true);
-        return new Reading(net, state.equals("high"), volts);
     }
 
     static String json(Diagnosis.Result r) {
