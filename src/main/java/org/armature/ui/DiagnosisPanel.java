@@ -4,6 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.concurrent.Executor;
+import java.util.concurrent.Executors;
+import javafx.application.Platform;
 import javafx.geometry.Insets;
 import javafx.scene.control.Button;
 import javafx.scene.control.ChoiceBox;
@@ -35,6 +38,8 @@ public final class DiagnosisPanel extends VBox {
 
     /** Candidates listed. */
     public static final int SHOWN = 5;
+    /** What the ranking says while the stage's dictionary is being built. */
+    public static final String BUILDING = "Building the fault dictionary of this stage…";
 
     private final EditorViewModel vm;
     private final TextField entry = new TextField();
@@ -47,11 +52,32 @@ public final class DiagnosisPanel extends VBox {
     private boolean active;
     private Stage dictionaryOf;
     private FaultDictionary dictionary;
+    /** The stage whose dictionary is being built in the background, if any. */
+    private Stage buildingFor;
+    private final Executor background;
 
-    /** A panel for the view model's active stage. */
+    /** The builds' own low-priority thread: a dictionary takes tens of milliseconds, never on the FX thread. */
+    public static final Executor BACKGROUND = Executors.newSingleThreadExecutor(r -> {
+        Thread t = new Thread(r, "armature-fault-dictionary");
+        t.setDaemon(true);
+        t.setPriority(Thread.MIN_PRIORITY);
+        return t;
+    });
+
+    /** A panel for the view model's active stage, building its dictionaries on {@link #BACKGROUND}. */
     public DiagnosisPanel(EditorViewModel vm) {
+        this(vm, BACKGROUND);
+    }
+
+    /**
+     * A panel for the view model's active stage.
+     *
+     * @param background where the fault dictionaries are built; results come back on the FX thread
+     */
+    public DiagnosisPanel(EditorViewModel vm, Executor background) {
         super(6);
         this.vm = vm;
+        this.background = background;
         setPadding(new Insets(6));
         entry.setId("diag-reading");
         entry.setPromptText("switch@high=11.9");
@@ -90,26 +116,62 @@ public final class DiagnosisPanel extends VBox {
 
     /**
      * Whether the panel is shown: only a shown panel builds dictionaries (one per stage version,
-     * tens of milliseconds), so a collapsed panel costs an edit nothing.
+     * tens of milliseconds, on the background executor), so a collapsed panel costs an edit nothing.
      */
     public void setActive(boolean shown) {
         active = shown;
         update();
     }
 
-    /** The dictionary of the stage as it stands. */
-    private FaultDictionary dictionary() {
+    /**
+     * The dictionary of the stage as it stands, or empty while it is being built (a build is asked
+     * for then; when it arrives the panel updates itself).
+     */
+    private Optional<FaultDictionary> dictionary() {
         Stage now = vm.stage();
-        if (now != dictionaryOf) {
-            dictionary = FaultDictionary.build(now, Meter.DEFAULT);
-            dictionaryOf = now;
+        if (now == dictionaryOf) {
+            return Optional.of(dictionary);
         }
-        return dictionary;
+        if (now != buildingFor) {
+            buildingFor = now;
+            background.execute(() -> {
+                FaultDictionary built;
+                String failure = null;
+                try {
+                    built = FaultDictionary.build(now, Meter.DEFAULT);
+                } catch (RuntimeException e) {
+                    built = null;
+                    failure = "No fault dictionary for this stage: " + e.getMessage();
+                }
+                FaultDictionary d = built;
+                String why = failure;
+                Platform.runLater(() -> arrived(now, d, why));
+            });
+        }
+        return Optional.empty();
+    }
+
+    private void arrived(Stage of, FaultDictionary d, String failure) {
+        if (buildingFor == of) {
+            buildingFor = null;
+        }
+        if (failure != null) {
+            error.setText(failure);
+            return;
+        }
+        dictionary = d;
+        dictionaryOf = of;
+        update();
     }
 
     private void addReading() {
+        Optional<FaultDictionary> d = dictionary();
+        if (d.isEmpty()) {
+            error.setText("The fault dictionary of this stage is still being built; add the reading again in a moment.");
+            return;
+        }
         try {
-            Reading r = Reading.parse(dictionary(), entry.getText());
+            Reading r = Reading.parse(d.get(), entry.getText());
             readings.removeIf(x -> x.probe().equals(r.probe()) && x.pinHigh() == r.pinHigh());
             readings.add(r);
             entry.clear();
@@ -124,7 +186,13 @@ public final class DiagnosisPanel extends VBox {
         if (!active) {
             return;
         }
-        FaultDictionary d = dictionary();
+        Optional<FaultDictionary> built = dictionary();
+        if (built.isEmpty()) {
+            ranking.setText(BUILDING);
+            next.setText("");
+            return;
+        }
+        FaultDictionary d = built.get();
         readings.removeIf(r -> d.probeIndex(r.probe()) < 0);
         readingsLabel.setText(readings.isEmpty() ? "No readings yet." : "Readings: " + String.join(", ",
                 readings.stream().map(r -> String.format(Locale.ROOT, "%s@%s=%.3g V", r.probe(),

@@ -91,6 +91,13 @@ class FaultModeTest {
         robot.interact(() -> robot.lookup("#diagnosis-pane").queryAs(javafx.scene.control.TitledPane.class).setExpanded(true));
         Label ranking = robot.lookup("#diag-ranking").queryAs(Label.class);
         Label next = robot.lookup("#diag-next").queryAs(Label.class);
+        // the dictionary is built off the FX thread; the panel says so until it arrives
+        try {
+            org.testfx.util.WaitForAsyncUtils.waitFor(20, java.util.concurrent.TimeUnit.SECONDS,
+                    () -> !ranking.getText().equals(DiagnosisPanel.BUILDING) && !ranking.getText().isEmpty());
+        } catch (java.util.concurrent.TimeoutException e) {
+            throw new AssertionError("no fault dictionary within 20 s: " + ranking.getText(), e);
+        }
         // no readings: the healthy stage leads on its prior
         assertTrue(ranking.getText().startsWith("1. none"), ranking.getText());
         javafx.scene.control.TextField entry = robot.lookup("#diag-reading").queryAs(javafx.scene.control.TextField.class);
