@@ -5,13 +5,16 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * A stage file's content: one or more stages, and optionally a line-up of some of them.
+ * A stage file's content: one or more stages, optionally a line-up of some of them, and optionally
+ * the fault hunt made on one of them.
  *
  * @param title document title
  * @param stages at least one stage
  * @param lineUp two to four of the stages side by side with what they share; every index names a stage
+ * @param faultHunt the fault hunt made on one stage (symptom, meter, readings, changed priors); its
+ *     index names a stage
  */
-public record StageDocument(String title, List<Stage> stages, Optional<LineUp> lineUp) {
+public record StageDocument(String title, List<Stage> stages, Optional<LineUp> lineUp, Optional<FaultHunt> faultHunt) {
 
     public StageDocument {
         title = title == null ? "" : title;
@@ -27,16 +30,31 @@ public record StageDocument(String title, List<Stage> stages, Optional<LineUp> l
                 }
             }
         }
+        faultHunt = faultHunt == null ? Optional.empty() : faultHunt;
+        if (faultHunt.isPresent() && faultHunt.get().stageIndex() >= stages.size()) {
+            throw new IllegalArgumentException("the fault hunt names stage " + faultHunt.get().stageIndex()
+                    + " of " + stages.size());
+        }
     }
 
-    /** A document without a line-up. */
+    /** A document without a fault hunt. */
+    public StageDocument(String title, List<Stage> stages, Optional<LineUp> lineUp) {
+        this(title, stages, lineUp, Optional.empty());
+    }
+
+    /** A document without a line-up or fault hunt. */
     public StageDocument(String title, List<Stage> stages) {
-        this(title, stages, Optional.empty());
+        this(title, stages, Optional.empty(), Optional.empty());
     }
 
     /** A copy with this line-up (or none). */
     public StageDocument withLineUp(Optional<LineUp> newLineUp) {
-        return new StageDocument(title, stages, newLineUp);
+        return new StageDocument(title, stages, newLineUp, faultHunt);
+    }
+
+    /** A copy with this fault hunt (or none). */
+    public StageDocument withFaultHunt(Optional<FaultHunt> newHunt) {
+        return new StageDocument(title, stages, lineUp, newHunt);
     }
 
     /** A document of one stage, titled after it. */
@@ -53,13 +71,13 @@ public record StageDocument(String title, List<Stage> stages, Optional<LineUp> l
     public StageDocument withStage(int index, Stage stage) {
         List<Stage> list = new ArrayList<>(stages);
         list.set(index, stage);
-        return new StageDocument(title, list, lineUp);
+        return new StageDocument(title, list, lineUp, faultHunt);
     }
 
     /** A copy with a stage appended. */
     public StageDocument plus(Stage stage) {
         List<Stage> list = new ArrayList<>(stages);
         list.add(stage);
-        return new StageDocument(title, list, lineUp);
+        return new StageDocument(title, list, lineUp, faultHunt);
     }
 }
