@@ -34,13 +34,18 @@ public final class StageJson {
 
     /**
      * The newest format version this program reads and writes. Version 2 added a stage's
-     * {@code settings}, version 3 the document's {@code lineUp}; a document is written with the
-     * lowest version that holds it ({@link #VERSION_WITHOUT_SETTINGS} without settings and line-up,
-     * {@link #VERSION_WITH_SETTINGS} with settings but no line-up), so that older programs open it.
+     * {@code settings}, version 3 the document's {@code lineUp}, version 4 the document's
+     * {@code faultHunt}; a document is written with the lowest version that holds it
+     * ({@link #VERSION_WITH_LINE_UP} with a line-up but no fault hunt, {@link #VERSION_WITH_SETTINGS}
+     * with settings but neither, {@link #VERSION_WITHOUT_SETTINGS} with none of them), so that older
+     * programs open it.
      */
-    public static final int VERSION = 3;
+    public static final int VERSION = 4;
 
-    /** The version written when a stage has settings but the document has no line-up. */
+    /** The version written when the document has a line-up but no fault hunt. */
+    public static final int VERSION_WITH_LINE_UP = 3;
+
+    /** The version written when a stage has settings but the document has no line-up or fault hunt. */
     public static final int VERSION_WITH_SETTINGS = 2;
 
     /** The version written when no stage has settings of its own (the first format version). */

@@ -2,13 +2,18 @@ package org.armature.io;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
+import java.util.stream.Collectors;
+import org.armature.analysis.faults.FaultKind;
+import org.armature.analysis.faults.Symptom;
 import org.armature.model.Conditions;
+import org.armature.model.FaultHunt;
 import org.armature.model.GridPoint;
 import org.armature.model.LineUp;
 import org.armature.model.LineUpContext;
@@ -28,7 +33,11 @@ import org.armature.model.Wire;
  */
 final class StageReader {
 
-    private static final Set<String> TOP_FIELDS = Set.of("format", "version", "title", "stages", "lineUp");
+    private static final Set<String> TOP_FIELDS =
+            Set.of("format", "version", "title", "stages", "lineUp", "faultHunt");
+    private static final Set<String> HUNT_FIELDS = Set.of("stage", "symptom", "meter", "readings", "priorWeights");
+    private static final Set<String> METER_FIELDS = Set.of("inputOhms", "counts", "percentOfReading", "digits");
+    private static final Set<String> READING_FIELDS = Set.of("net", "pinState", "volts");
     private static final Set<String> LINE_UP_FIELDS = Set.of("stages", "context");
     private static final Set<String> CONTEXT_FIELDS =
             Set.of("ambient", "relay", "coilSupply", "drivePin", "contactSupply", "load");
@@ -54,6 +63,8 @@ final class StageReader {
     private static final int QUARTER_TURN_DEGREES = 90;
     /** Absolute zero in degrees Celsius. */
     private static final double ABSOLUTE_ZERO_CELSIUS = -273.15;
+    /** Fewest display counts of a meter ({@link FaultHunt.MeterSetting}). */
+    private static final int MIN_METER_COUNTS = 10;
     /** Longest excerpt of a wrong value quoted in a message. */
     private static final int EXCERPT_CHARS = 40;
 
@@ -75,8 +86,13 @@ final class StageReader {
         }
         int version = readVersion(root.get("version"));
         checkFields(root, TOP_FIELDS, "The file");
-        if (root.has("lineUp") && version < StageJson.VERSION) {
+        if (root.has("lineUp") && version < StageJson.VERSION_WITH_LINE_UP) {
             throw new StageFileException(StageFileException.UNKNOWN_FIELD, "The file has a field \"lineUp\", which "
+                    + "stage files hold from version " + StageJson.VERSION_WITH_LINE_UP + "; this one says version "
+                    + version + ".");
+        }
+        if (root.has("faultHunt") && version < StageJson.VERSION) {
+            throw new StageFileException(StageFileException.UNKNOWN_FIELD, "The file has a field \"faultHunt\", which "
                     + "stage files hold from version " + StageJson.VERSION + "; this one says version " + version + ".");
         }
         String title = optionalText(root, "title", "title", "");
@@ -93,7 +109,138 @@ final class StageReader {
         Optional<LineUp> lineUp = root.has("lineUp")
                 ? Optional.of(readLineUp(root.get("lineUp"), "lineUp", stages.size()))
                 : Optional.empty();
-        return new StageDocument(title, stages, lineUp);
+        Optional<FaultHunt> hunt = root.has("faultHunt")
+                ? Optional.of(readFaultHunt(root.get("faultHunt"), "faultHunt", stages.size()))
+                : Optional.empty();
+        return new StageDocument(title, stages, lineUp, hunt);
+    }
+
+    /**
+     * The document's fault hunt (format version 4). Numbers and words are checked here, since the
+     * document cannot hold a meter of negative counts or a reading that is not a number; the names
+     * of the readings' nets are not, because they follow the drawing (a net renamed after the hunt
+     * is reported where the hunt is ranked).
+     */
+    private static FaultHunt readFaultHunt(JsonNode node, String path, int stageCount) {
+        expectObject(node, path);
+        checkFields(node, HUNT_FIELDS, path);
+        JsonNode stageNode = required(node, "stage", path);
+        if (!isInt(stageNode)) {
+            throw new StageFileException(StageFileException.WRONG_TYPE, path + ".stage must be a whole number "
+                    + "(the hunted stage's index from 0), not " + describe(stageNode) + ".");
+        }
+        int stage = stageNode.intValue();
+        if (stage < 0 || stage >= stageCount) {
+            throw new StageFileException(StageFileException.INVALID_VALUE, path + ".stage is " + stage
+                    + "; expected the index of one of the file's " + stageCount + " stages, from 0 to "
+                    + (stageCount - 1) + ".");
+        }
+        Optional<String> symptom = Optional.empty();
+        if (node.has("symptom")) {
+            String word = text(node.get("symptom"), path + ".symptom");
+            if (Symptom.byId(word).isEmpty()) {
+                throw new StageFileException(StageFileException.INVALID_VALUE, path + ".symptom is \""
+                        + StageJson.excerpt(word) + "\"; expected one of " + symptomWords() + ".");
+            }
+            symptom = Optional.of(word);
+        }
+        FaultHunt.MeterSetting meter = node.has("meter")
+                ? readMeter(node.get("meter"), path + ".meter")
+                : FaultHunt.MeterSetting.DEFAULT;
+        List<FaultHunt.HuntReading> readings = new ArrayList<>();
+        if (node.has("readings")) {
+            JsonNode list = node.get("readings");
+            expectArray(list, path + ".readings");
+            for (int i = 0; i < list.size(); i++) {
+                readings.add(readHuntReading(list.get(i), path + ".readings[" + i + "]"));
+            }
+        }
+        Map<String, Double> weights = new LinkedHashMap<>();
+        if (node.has("priorWeights")) {
+            JsonNode w = node.get("priorWeights");
+            String wpath = path + ".priorWeights";
+            expectObject(w, wpath);
+            for (Map.Entry<String, JsonNode> e : w.properties()) {
+                String kind = e.getKey();
+                if (!kind.equals(FaultHunt.NONE) && FaultKind.byId(kind).isEmpty()) {
+                    throw new StageFileException(StageFileException.INVALID_VALUE, wpath + " weighs \""
+                            + StageJson.excerpt(kind) + "\", which is not a fault kind; expected " + FaultHunt.NONE
+                            + " (the healthy stage) or one of " + kindWords() + ".");
+                }
+                String kpath = wpath + "." + kind;
+                double weight = number(e.getValue(), kpath);
+                if (!(weight >= 0) || Double.isInfinite(weight)) {
+                    throw new StageFileException(StageFileException.INVALID_VALUE, kpath
+                            + " must be a finite weight not below 0 (the default weights are about 0.1 to 10), not "
+                            + describe(e.getValue()) + ".");
+                }
+                weights.put(kind, weight);
+            }
+        }
+        return new FaultHunt(stage, symptom, meter, readings, weights);
+    }
+
+    private static FaultHunt.MeterSetting readMeter(JsonNode node, String path) {
+        expectObject(node, path);
+        checkFields(node, METER_FIELDS, path);
+        FaultHunt.MeterSetting d = FaultHunt.MeterSetting.DEFAULT;
+        double ohms = optionalNumber(node, "inputOhms", path, d.inputOhms());
+        if (!(ohms > 0) || Double.isInfinite(ohms)) {
+            throw new StageFileException(StageFileException.INVALID_VALUE, path + ".inputOhms must be a positive, "
+                    + "finite resistance in ohms (10000000 for a 10 MΩ meter), not " + describe(node.get("inputOhms"))
+                    + ".");
+        }
+        int counts = d.counts();
+        if (node.has("counts")) {
+            JsonNode c = node.get("counts");
+            if (!isInt(c) || c.intValue() < MIN_METER_COUNTS) {
+                throw new StageFileException(isInt(c) ? StageFileException.INVALID_VALUE : StageFileException.WRONG_TYPE,
+                        path + ".counts must be a whole number of display counts, at least " + MIN_METER_COUNTS
+                                + " (4000 for a 4,000-count meter), not " + describe(c) + ".");
+            }
+            counts = c.intValue();
+        }
+        double percent = optionalNumber(node, "percentOfReading", path, d.percentOfReading());
+        double digits = optionalNumber(node, "digits", path, d.digits());
+        for (String field : List.of("percentOfReading", "digits")) {
+            double v = field.equals("digits") ? digits : percent;
+            if (!(v >= 0) || Double.isInfinite(v)) {
+                throw new StageFileException(StageFileException.INVALID_VALUE, path + "." + field
+                        + " must be a finite number not below 0 (the accuracy ±(1 % + 2 digits) is 1 and 2), not "
+                        + describe(node.get(field)) + ".");
+            }
+        }
+        return new FaultHunt.MeterSetting(ohms, counts, percent, digits);
+    }
+
+    private static FaultHunt.HuntReading readHuntReading(JsonNode node, String path) {
+        expectObject(node, path);
+        checkFields(node, READING_FIELDS, path);
+        String net = requiredText(node, "net", path);
+        if (net.isBlank()) {
+            throw new StageFileException(StageFileException.INVALID_VALUE,
+                    path + ".net is blank; expected the probe point's net name as solve prints it, or coil.");
+        }
+        String state = requiredText(node, "pinState", path);
+        if (!state.equals("high") && !state.equals("low")) {
+            throw new StageFileException(StageFileException.INVALID_VALUE,
+                    path + ".pinState is \"" + StageJson.excerpt(state) + "\"; it must be \"high\" or \"low\".");
+        }
+        JsonNode v = required(node, "volts", path);
+        double volts = number(v, path + ".volts");
+        if (!Double.isFinite(volts)) {
+            throw new StageFileException(StageFileException.INVALID_VALUE,
+                    path + ".volts must be a finite number of volts as the meter showed it, not " + describe(v) + ".");
+        }
+        return new FaultHunt.HuntReading(net, state.equals("high"), volts);
+    }
+
+    private static String symptomWords() {
+        return Arrays.stream(Symptom.values()).map(Symptom::id).collect(Collectors.joining(", "));
+    }
+
+    private static String kindWords() {
+        return Arrays.stream(FaultKind.values()).map(FaultKind::id).collect(Collectors.joining(", "));
     }
 
     /** The document's line-up (format version 3). */

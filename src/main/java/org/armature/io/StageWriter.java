@@ -4,6 +4,7 @@ import com.fasterxml.jackson.core.io.JsonStringEncoder;
 import java.util.Iterator;
 import java.util.Map;
 import java.util.Optional;
+import org.armature.model.FaultHunt;
 import org.armature.model.LineUp;
 import org.armature.model.LineUpContext;
 import org.armature.model.SharedPart;
@@ -50,7 +51,8 @@ final class StageWriter {
         b.append("{\n");
         b.append(INDENT).append("\"format\": ").append(quote(StageJson.FORMAT)).append(",\n");
         boolean settings = doc.stages().stream().anyMatch(st -> !st.settings().isDefault());
-        int version = doc.lineUp().isPresent() ? StageJson.VERSION
+        int version = doc.faultHunt().isPresent() ? StageJson.VERSION
+                : doc.lineUp().isPresent() ? StageJson.VERSION_WITH_LINE_UP
                 : settings ? StageJson.VERSION_WITH_SETTINGS : StageJson.VERSION_WITHOUT_SETTINGS;
         b.append(INDENT).append("\"version\": ").append(version).append(",\n");
         b.append(INDENT).append("\"title\": ").append(quote(doc.title())).append(",\n");
@@ -59,14 +61,15 @@ final class StageWriter {
             stage(b, doc.stages().get(i), INDENT.repeat(2));
             b.append(i + 1 < doc.stages().size() ? ",\n" : "\n");
         }
-        b.append(INDENT).append(doc.lineUp().isPresent() ? "],\n" : "]\n");
-        doc.lineUp().ifPresent(l -> lineUp(b, l, INDENT));
+        b.append(INDENT).append(doc.lineUp().isPresent() || doc.faultHunt().isPresent() ? "],\n" : "]\n");
+        doc.lineUp().ifPresent(l -> lineUp(b, l, INDENT, doc.faultHunt().isPresent()));
+        doc.faultHunt().ifPresent(h -> faultHunt(b, h, INDENT));
         b.append("}\n");
         return b.toString();
     }
 
     /** The line-up (format version 3): stage indices, then the shared roles one per line group. */
-    private static void lineUp(StringBuilder b, LineUp l, String in) {
+    private static void lineUp(StringBuilder b, LineUp l, String in, boolean more) {
         String in1 = in + INDENT;
         String in2 = in1 + INDENT;
         b.append(in).append("\"lineUp\": {\n");
@@ -86,6 +89,37 @@ final class StageWriter {
         shared(b, "contactSupply", c.contactSupply(), in2);
         shared(b, "load", c.load(), in2);
         b.append('\n').append(in1).append("}\n");
+        b.append(in).append(more ? "},\n" : "}\n");
+    }
+
+    /**
+     * The fault hunt (format version 4): the stage, the symptom if entered, the meter on one line,
+     * one line per reading and per changed prior weight.
+     */
+    private static void faultHunt(StringBuilder b, FaultHunt h, String in) {
+        String in1 = in + INDENT;
+        String in2 = in1 + INDENT;
+        b.append(in).append("\"faultHunt\": {\n");
+        b.append(in1).append("\"stage\": ").append(h.stageIndex()).append(",\n");
+        h.symptom().ifPresent(s -> b.append(in1).append("\"symptom\": ").append(quote(s)).append(",\n"));
+        FaultHunt.MeterSetting m = h.meter();
+        b.append(in1).append("\"meter\": {\"inputOhms\": ").append(number(m.inputOhms()))
+                .append(", \"counts\": ").append(m.counts())
+                .append(", \"percentOfReading\": ").append(number(m.percentOfReading()))
+                .append(", \"digits\": ").append(number(m.digits())).append("},\n");
+        b.append(in1).append("\"readings\": [");
+        b.append(h.readings().isEmpty() ? "" : "\n");
+        for (int i = 0; i < h.readings().size(); i++) {
+            FaultHunt.HuntReading r = h.readings().get(i);
+            b.append(in2).append("{\"net\": ").append(quote(r.net()))
+                    .append(", \"pinState\": ").append(quote(r.pinHigh() ? "high" : "low"))
+                    .append(", \"volts\": ").append(number(r.volts())).append('}');
+            b.append(i + 1 < h.readings().size() ? ",\n" : "\n" + in1);
+        }
+        b.append("],\n");
+        b.append(in1).append("\"priorWeights\": {");
+        appendMap(b, h.priorWeights(), in1, true);
+        b.append("}\n");
         b.append(in).append("}\n");
     }
 

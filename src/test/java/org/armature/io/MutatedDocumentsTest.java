@@ -27,7 +27,8 @@ import org.junit.jupiter.api.Test;
 /**
  * 10,000 seeded mutations of valid stage files (issue 15): truncation, byte flips, wrong types,
  * huge and non-finite numbers, deep nesting, duplicate keys, unknown kinds, dangling wires,
- * duplicate designators, non-UTF-8 bytes and lone surrogates.
+ * duplicate designators, non-UTF-8 bytes and lone surrogates. The seeds are the templates, the
+ * examples (one of them holds a fault hunt) and a document with a fault hunt on its second stage.
  *
  * <p>Guarantees, for every mutated file: reading it either gives a document or a
  * {@link StageFileException} with a documented key and a one-line message of bounded length that
@@ -60,6 +61,8 @@ class MutatedDocumentsTest {
         for (StageDocument d : ExampleDocuments.all().values()) {
             out.add(StageJson.write(d));
         }
+        // fault hunts (format version 4): symptom, meter, readings in both pin states, changed priors
+        out.add(StageJson.write(FaultHuntJsonTest.huntDocument()));
         return out;
     }
 
@@ -69,6 +72,8 @@ class MutatedDocumentsTest {
         List<String> seeds = seeds();
         Random r = new Random(SEED);
         Map<String, Integer> outcomes = new TreeMap<>();
+        int huntRefusals = 0;
+        int huntsAccepted = 0;
         for (int i = 0; i < CASES; i++) {
             String base = seeds.get(r.nextInt(seeds.size()));
             int kind = r.nextInt(13);
@@ -80,12 +85,14 @@ class MutatedDocumentsTest {
             } catch (StageFileException e) {
                 checkRefusal(e, label);
                 outcomes.merge(e.key(), 1, Integer::sum);
+                huntRefusals += e.getMessage().startsWith("faultHunt") ? 1 : 0;
                 continue;
             } catch (RuntimeException | StackOverflowError e) {
                 fail(label + ": " + e + " escaped the reader");
                 return;
             }
             outcomes.merge("accepted", 1, Integer::sum);
+            huntsAccepted += doc.faultHunt().isPresent() ? 1 : 0;
             for (Stage s : doc.stages()) {
                 Validator.validate(s);
             }
@@ -98,6 +105,8 @@ class MutatedDocumentsTest {
         assertEquals(CASES, total);
         assertTrue(outcomes.getOrDefault("accepted", 0) > 500, "enough mutations are accepted: " + outcomes);
         assertTrue(outcomes.size() >= 7, "most refusal keys are reached: " + outcomes);
+        assertTrue(huntRefusals > 0 && huntsAccepted > 0, "the fault hunt block is reached: " + huntRefusals
+                + " refusals in it, " + huntsAccepted + " accepted documents with a hunt");
     }
 
     private static void checkRefusal(StageFileException e, String label) {
@@ -110,7 +119,7 @@ class MutatedDocumentsTest {
                 || m.matches("(?s).*`[A-Za-z]+\\.[A-Za-z].*") || m.contains("(code ") || m.contains("Feature")
                 || m.contains("START_"),
                 label + ": library internals in " + m);
-        boolean placed = m.contains("line ") || m.contains("stages") || m.startsWith("The file")
+        boolean placed = m.contains("line ") || m.contains("stages") || m.startsWith("faultHunt") || m.startsWith("The file")
                 || m.startsWith("This is not") || m.startsWith("A stage file");
         assertTrue(placed, label + ": no place in " + m);
     }
