@@ -31,7 +31,8 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "export", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Export a stage: the annotated schematic with a title block as SVG or PNG, and a one-file "
-                + "design report as PDF (schematic, operating point, verdicts, sizing, edges, safety cautions)."})
+                + "design report as PDF (schematic, operating point, verdicts, sizing, edges, safety cautions, and "
+                + "the line-up and fault hunt where the file holds them)."})
 final class ExportCommand implements Callable<Integer> {
 
     /** Largest PNG scale accepted: 8× (a 4,000-pixel-wide image of the largest template). */
@@ -115,9 +116,10 @@ final class ExportCommand implements Callable<Integer> {
                     + String.format(Locale.ROOT, "%.0f", k * PngExport.CSS_DPI) + " dpi).");
         }
         if (pdf != null) {
-            write(pdf, DesignReport.pdf(snap, DesignReport.lineUpOf(doc, stage)));
+            DesignReport.Sections sections = DesignReport.sectionsOf(doc, stage);
+            write(pdf, DesignReport.pdf(snap, sections));
             out.println("Wrote " + pdf + " (PDF design report" + (snap.cautions().isEmpty() ? "" : ", with safety cautions")
-                    + ").");
+                    + (sections.faultHunt().isPresent() ? ", with the fault hunt" : "") + ").");
         }
         out.flush();
         return CommandLine.ExitCode.OK;

@@ -2,6 +2,7 @@ package org.armature.cli;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.image.BufferedImage;
@@ -109,5 +110,41 @@ class ExportCommandTest {
         assertEquals(2, theme.status());
         assertTrue(theme.err().contains("light or dark"), theme.err());
         assertEquals(2, CliRun.of("export", PUMP, "--png", dir.resolve("a.png").toString(), "--scale", "0").status());
+    }
+
+    @Test
+    @DisplayName("export --pdf of a file with a fault hunt prints the hunt section with the ranking SavedHunt.rank computes")
+    void faultHuntInTheReport() throws Exception {
+        String file = "examples/solar-pump-repair.stage.json";
+        Path pdf = dir.resolve("repair.pdf");
+        CliRun r = CliRun.of("export", file, "--pdf", pdf.toString());
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().contains("with the fault hunt"), r.out());
+        org.armature.model.StageDocument doc = org.armature.io.StageFiles.open(Path.of(file));
+        org.armature.model.FaultHunt hunt = doc.faultHunt().orElseThrow();
+        org.armature.analysis.faults.SavedHunt.Ranked ranked =
+                org.armature.analysis.faults.SavedHunt.rank(doc.stages().get(hunt.stageIndex()), hunt);
+        org.armature.analysis.faults.Diagnosis.Candidate top = ranked.result().candidates().get(0);
+        org.armature.analysis.faults.Diagnosis.Next next = ranked.result().next().orElseThrow();
+        String t;
+        try (PDDocument d = Loader.loadPDF(pdf.toFile())) {
+            t = new PDFTextStripper().getText(d).replaceAll("\\s+", " ");
+        }
+        assertTrue(t.contains("Fault hunt"), t);
+        for (org.armature.model.FaultHunt.HuntReading rd : hunt.readings()) {
+            assertTrue(t.contains(org.armature.render.report.FaultHuntSection.volts(rd.volts())), rd + " in " + t);
+        }
+        assertTrue(t.contains("1 " + top.name() + " " + org.armature.render.report.FaultHuntSection.percent(top.probability())),
+                top + " in " + t);
+        assertTrue(t.contains("Measure " + next.probe() + " with the pin " + (next.pinHigh() ? "high" : "low")
+                + ", expected information gain " + org.armature.render.report.FaultHuntSection.bits(next.gainBits())), t);
+        // the same command on a file without a hunt has no such section
+        Path plain = dir.resolve("pump.pdf");
+        CliRun p = CliRun.of("export", PUMP, "--pdf", plain.toString());
+        assertEquals(0, p.status(), p.err());
+        assertFalse(p.out().contains("fault hunt"), p.out());
+        try (PDDocument d = Loader.loadPDF(plain.toFile())) {
+            assertFalse(new PDFTextStripper().getText(d).contains("Fault hunt"));
+        }
     }
 }

@@ -4,8 +4,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.function.UnaryOperator;
 import org.armature.model.Conditions;
+import org.armature.model.FaultHunt;
 import org.armature.model.HighSideDrive;
 import org.armature.model.Part;
 import org.armature.model.Stage;
@@ -38,7 +40,8 @@ final class ExampleDocuments {
         return Map.of(
                 "greenhouse-valves.stage.json", greenhouseValves(),
                 "dust-extractor-interlock.stage.json", dustExtractorInterlock(),
-                "pool-pump-timer.stage.json", poolPumpTimer());
+                "pool-pump-timer.stage.json", poolPumpTimer(),
+                "solar-pump-repair.stage.json", solarPumpRepair());
     }
 
     /** Six 24 V irrigation valve relays from a 3.3 V controller: three ways to build one channel. */
@@ -155,6 +158,41 @@ final class ExampleDocuments {
                         .withOption("loadKind", "resistive"))
                 .withConditions(new Conditions(true, 30, -5, 55));
         return new StageDocument("Pool pump timer", List.of(s));
+    }
+
+    /**
+     * A repair log: the circulation pump of a solar water heater runs day and night, and the
+     * technician's fault hunt on its relay channel. Demo data: the scenario is invented and the
+     * readings are made-up figures of the kind a 4,000-count meter shows on such a fault (rounded
+     * to its resolution), not measurements of a real board.
+     */
+    static StageDocument solarPumpRepair() {
+        Stage s = named(Templates.build(StageTemplate.LOW_SIDE_NPN, Suppressor.DIODE, HighSideDrive.LEVEL_SHIFT),
+                "Pump relay channel",
+                "Demo data, an invented repair: the 12 V circulation pump of a solar water heater runs day and "
+                        + "night. The controller's 3.3 V pin switches the 12 V pump relay through a small NPN.")
+                .updatePart("V1", v -> v.with("volts", 12).with("tolerancePercent", 5))
+                .updatePart("U1", u -> u.with("highVolts", 3.4).with("outputResistanceOhms", 65))
+                .updatePart("R1", r -> r.with("resistanceOhms", 1500))
+                .updatePart("R2", r -> r.with("resistanceOhms", 22_000))
+                .updatePart("Q1", q -> q.with("betaForward", 250).with("hfeMin", 110))
+                .updatePart("K1", k -> k.with("coilResistanceOhms", 320).with("mustOperateVolts", 8.4)
+                        .with("mustReleaseVolts", 1.2).with("inductanceReleasedHenries", 0.8)
+                        .with("inductanceAttractedHenries", 1.7))
+                .updatePart("V2", v -> v.with("volts", 12).with("tolerancePercent", 10))
+                .updatePart("E1", e -> e.with("resistanceOhms", 7.2).with("ratedWatts", 20)
+                        .withOption("loadKind", "motor"))
+                .withConditions(new Conditions(false, 35, 0, 60));
+        // what the technician entered so far: the relay stays operated with the pin low, and two
+        // readings with the pin low; they had seen this channel's transistor fail before, so they
+        // weighed a collector-emitter short higher than its default
+        FaultHunt hunt = FaultHunt.start(0)
+                .withSymptom(Optional.of("no-release"))
+                .withReadings(List.of(
+                        new FaultHunt.HuntReading("coil", false, 11.99),
+                        new FaultHunt.HuntReading("contact-no", false, 11.88)))
+                .withPriorWeights(Map.of("ce-short", 3.0));
+        return new StageDocument("Solar water heater pump: repair log", List.of(s)).withFaultHunt(Optional.of(hunt));
     }
 
     private static Stage named(Stage s, String name, String description) {

@@ -90,4 +90,18 @@ class ExamplesTest {
         Map<String, Double> relay = doc.first().require("K1").values();
         assertEquals(360.0, relay.get("coilResistanceOhms"), "example figure, our own");
     }
+
+    @Test
+    @DisplayName("the solar pump repair log holds a fault hunt that ranks, mid-way: a fault first and a next measurement left")
+    void solarPumpHuntRanks() {
+        StageDocument doc = StageFiles.open(EXAMPLES.resolve("solar-pump-repair.stage.json"));
+        org.armature.model.FaultHunt hunt = doc.faultHunt().orElseThrow();
+        org.armature.analysis.faults.SavedHunt.Ranked r =
+                org.armature.analysis.faults.SavedHunt.rank(doc.stages().get(hunt.stageIndex()), hunt);
+        // the demo readings were made up to fit a collector-emitter short (demo data, our own)
+        assertEquals("Q1:ce-short", r.result().candidates().get(0).name());
+        assertTrue(r.result().candidates().get(0).probability() < 0.99, "more than one candidate is left");
+        assertTrue(r.result().next().orElseThrow().gainBits() > 0.1, "a next measurement is worth taking");
+        assertTrue(doc.first().description().startsWith("Demo data"), "says it is demo data");
+    }
 }

@@ -49,9 +49,10 @@ import org.armature.units.Unit;
  * document title and date at the top and its number at the bottom. Fonts are embedded
  * ({@link PdfFonts}); all text is real text.
  *
- * <p>The report draws only what the {@link StageSnapshot} and the line-up section hold; it never
- * solves. The line-up table follows the edges when the stage belongs to the document's line-up; a
- * fault hunt is not saved in a stage file, so the report has no section for one yet.
+ * <p>The report draws only what the {@link StageSnapshot} and the document's sections
+ * ({@link Sections}) hold; it never solves. The line-up table follows the edges when the stage
+ * belongs to the document's line-up, and the fault hunt section follows that when the document holds
+ * a hunt on this stage ({@link FaultHuntSection}, ranked when the sections are made).
  */
 public final class DesignReport {
 
@@ -104,15 +105,54 @@ public final class DesignReport {
         return Optional.of(new LineUpSection(names, columns));
     }
 
+    /**
+     * What a stage's report shows of its document beyond the stage itself.
+     *
+     * @param lineUp the line-up table, when the stage belongs to the document's line-up
+     * @param faultHunt the fault hunt section, when the document holds a hunt on this stage
+     */
+    public record Sections(Optional<LineUpSection> lineUp, Optional<FaultHuntSection> faultHunt) {
+
+        /** Neither a line-up nor a fault hunt. */
+        public static final Sections NONE = new Sections(Optional.empty(), Optional.empty());
+
+        public Sections {
+            lineUp = lineUp == null ? Optional.empty() : lineUp;
+            faultHunt = faultHunt == null ? Optional.empty() : faultHunt;
+        }
+    }
+
+    /**
+     * The document's sections of a stage's report: its line-up ({@link #lineUpOf}) and its fault
+     * hunt ({@link FaultHuntSection#of}), each computed now. {@code stage} must be the document's own
+     * stage object (as {@code doc.stages().get(i)}).
+     */
+    public static Sections sectionsOf(org.armature.model.StageDocument doc, org.armature.model.Stage stage) {
+        return new Sections(lineUpOf(doc, stage), FaultHuntSection.of(doc, stage));
+    }
+
+    /**
+     * The report of a stage of a document, as PDF bytes: the snapshot and the document's sections
+     * ({@link #sectionsOf}). The one call for exports of a document's stage.
+     */
+    public static byte[] pdf(StageSnapshot s, org.armature.model.StageDocument doc) {
+        return pdf(s, sectionsOf(doc, s.stage()));
+    }
+
     /** The report of a snapshot evaluated with {@link StageSnapshot.Depth#REPORT}, as PDF bytes. */
     public static byte[] pdf(StageSnapshot s) {
-        return pdf(s, Optional.empty());
+        return pdf(s, Sections.NONE);
     }
 
     /** The report with the table of the line-up the stage belongs to, if any, as PDF bytes. */
     public static byte[] pdf(StageSnapshot s, Optional<LineUpSection> lineUp) {
+        return pdf(s, new Sections(lineUp, Optional.empty()));
+    }
+
+    /** The report with the document's sections, as PDF bytes. */
+    public static byte[] pdf(StageSnapshot s, Sections sections) {
         try (PDDocument doc = new PDDocument()) {
-            write(s, doc, lineUp);
+            write(s, doc, sections);
             ByteArrayOutputStream out = new ByteArrayOutputStream();
             doc.save(out);
             return out.toByteArray();
@@ -123,11 +163,16 @@ public final class DesignReport {
 
     /** Lays the report out into an empty document. */
     public static void write(StageSnapshot s, PDDocument doc) {
-        write(s, doc, Optional.empty());
+        write(s, doc, Sections.NONE);
     }
 
     /** Lays the report out into an empty document, with the line-up's table where one is given. */
     public static void write(StageSnapshot s, PDDocument doc, Optional<LineUpSection> lineUp) {
+        write(s, doc, new Sections(lineUp, Optional.empty()));
+    }
+
+    /** Lays the report out into an empty document, with the document's sections where given. */
+    public static void write(StageSnapshot s, PDDocument doc, Sections sections) {
         String title = s.documentTitle().isBlank() ? s.stage().name() : s.documentTitle();
         PDDocumentInformation info = doc.getDocumentInformation();
         info.setTitle(title + ": " + s.stage().name());
@@ -146,8 +191,8 @@ public final class DesignReport {
             verdicts(flow, s);
             sizing(flow, s);
             edges(flow, s);
-            lineUp.ifPresent(l -> lineUp(flow, l));
-            // a fault hunt goes here once a stage file can hold one
+            sections.lineUp().ifPresent(l -> lineUp(flow, l));
+            sections.faultHunt().ifPresent(h -> h.draw(flow));
             flow.heading("What this report is", 12);
             flow.paragraph(CLOSING, PdfFlow.BODY, false, PdfFlow.INK);
             flow.finish(title, s.date().toString(), "Design report · " + s.stage().name());
