@@ -7,6 +7,7 @@ import java.util.Arrays;
 import java.util.Locale;
 import java.util.function.Supplier;
 import org.armature.model.Stage;
+import org.armature.model.StageDocument;
 import org.armature.model.StageTemplate;
 import org.armature.model.Templates;
 import org.armature.render.ExportTheme;
@@ -32,18 +33,27 @@ public final class ExportCpuHarness {
     private ExportCpuHarness() {
     }
 
-    /** Prints one line per template and export. */
+    /**
+     * Prints one line per template and export. With the argument {@code reports}, only the report
+     * without and with a fault hunt in the document ({@link ExportBench#huntedDocument}).
+     */
     public static void main(String[] args) {
         ThreadMXBean mx = ManagementFactory.getThreadMXBean();
         LocalDate day = LocalDate.of(2026, 12, 5);
+        boolean reportsOnly = Arrays.asList(args).contains("reports");
         for (StageTemplate t : StageTemplate.values()) {
             Stage stage = Templates.build(t);
-            measure(mx, t + " svg", () -> SvgExport.toSvg(StageSnapshot.evaluate("Bench", stage, true,
-                    StageSnapshot.Depth.DRAWING, day).sheet(ExportTheme.LIGHT.palette())));
-            measure(mx, t + " png 2x", () -> PngExport.png(StageSnapshot.evaluate("Bench", stage, true,
-                    StageSnapshot.Depth.DRAWING, day).sheet(ExportTheme.LIGHT.palette()), 2, false));
+            if (!reportsOnly) {
+                measure(mx, t + " svg", () -> SvgExport.toSvg(StageSnapshot.evaluate("Bench", stage, true,
+                        StageSnapshot.Depth.DRAWING, day).sheet(ExportTheme.LIGHT.palette())));
+                measure(mx, t + " png 2x", () -> PngExport.png(StageSnapshot.evaluate("Bench", stage, true,
+                        StageSnapshot.Depth.DRAWING, day).sheet(ExportTheme.LIGHT.palette()), 2, false));
+            }
             measure(mx, t + " report", () -> DesignReport.pdf(StageSnapshot.evaluate("Bench", stage, true,
                     StageSnapshot.Depth.REPORT, day)));
+            StageDocument hunted = ExportBench.huntedDocument(stage);
+            measure(mx, t + " report+hunt", () -> DesignReport.pdf(StageSnapshot.evaluate("Bench", hunted.first(),
+                    true, StageSnapshot.Depth.REPORT, day), hunted));
         }
     }
 
