@@ -5,7 +5,9 @@
  * {@code FILE~}, atomic move, folder sync), and autosave and recovery in a per-user folder
  * ({@link Autosave}).
  *
- * <p>Mapping is explicit, field by field; no type information is read from files. Errors are one
+ * <p>Mapping is explicit, field by field; no type information is read from files. The document's
+ * fault hunt (format version 4) is stored as entered, never with a ranking; its symptom and fault kind
+ * words are checked against {@code analysis.faults} when read. Errors are one
  * plain sentence in a {@link StageFileException} with a stable key; values that are only out of
  * range are kept and left to {@link org.armature.model.Validator}.
  */

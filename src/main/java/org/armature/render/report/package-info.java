@@ -4,6 +4,8 @@
  * {@link org.armature.render.report.PdfPen} (the renderer's pen over a PDFBox page, with the
  * embedded fonts of {@link org.armature.render.report.PdfFonts}) and
  * {@link org.armature.render.report.DesignReport} (the PDF: cautions, schematic, operating point,
- * verdicts, sizing, edges). No JavaFX; runs headless.
+ * verdicts, sizing, edges, and the document's line-up and fault hunt where it holds them; the hunt is
+ * ranked at report time by {@link org.armature.render.report.FaultHuntSection}). No JavaFX; runs
+ * headless.
  */
 package org.armature.render.report;
