@@ -199,4 +199,39 @@ class FaultHuntReportTest {
         assertEquals("< 0.01 %", FaultHuntSection.percent(0), "an underflow of a tiny posterior");
         assertEquals("1.58 bits", FaultHuntSection.bits(Math.log(3) / Math.log(2)));  // derived: log2 3
     }
+
+    @Test
+    @DisplayName("every probe point measured in both pin states: the section says no measurement is left")
+    void noneLeft() throws IOException {
+        FaultDictionary d = FaultDictionary.build(npn, Meter.DEFAULT);
+        FaultDictionary.Entry healthy = d.entries().get(0);
+        List<FaultHunt.HuntReading> all = new java.util.ArrayList<>();
+        for (boolean high : new boolean[] {true, false}) {
+            for (int k = 0; k < d.probes().size(); k++) {
+                all.add(new FaultHunt.HuntReading(d.probes().get(k).name(), high, healthy.state(high).volts()[k]));
+            }
+        }
+        FaultHunt every = FaultHunt.start(0).withReadings(all);
+        assertTrue(SavedHunt.rank(npn, every).result().next().isEmpty(), "nothing left to measure (Diagnosis)");
+        StageDocument d2 = doc.withFaultHunt(Optional.of(every));
+        StageSnapshot snap = StageSnapshot.evaluate(doc.title(), npn, true, StageSnapshot.Depth.REPORT, DAY);
+        String t = text(DesignReport.pdf(snap, d2));
+        assertTrue(holds(t, "None", "left:", "every", "probe", "point", "has", "been", "measured"), t);
+        assertTrue(holds(t, "1", "none", "(healthy", "stage)"), "healthy readings rank none first (DiagnosisTest's property)");
+    }
+
+    @Test
+    @DisplayName("a hunt with nothing entered yet: no readings, no reasons, and the first measurement to take")
+    void emptyHunt() throws IOException {
+        StageDocument d2 = doc.withFaultHunt(Optional.of(FaultHunt.start(0)));
+        StageSnapshot snap = StageSnapshot.evaluate(doc.title(), npn, true, StageSnapshot.Depth.REPORT, DAY);
+        String t = text(DesignReport.pdf(snap, d2));
+        Diagnosis.Next next = SavedHunt.rank(npn, FaultHunt.start(0)).result().next().orElseThrow();
+        assertTrue(holds(t, "Symptom:", "none", "entered."), t);
+        assertTrue(holds(t, "No", "readings", "were", "entered."), t);
+        assertFalse(t.contains("reading by reading"), t);
+        assertTrue(holds(t, "Measure", next.probe(), "with", "the", "pin", FaultHuntSection.pinState(next.pinHigh())
+                + ",", "expected", "information", "gain", FaultHuntSection.bits(next.gainBits())), t);
+        assertTrue(holds(t, "The", "default", "prior", "weights", "were", "used"), t);
+    }
 }
