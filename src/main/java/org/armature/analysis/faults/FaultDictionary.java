@@ -282,10 +282,18 @@ public final class FaultDictionary {
     }
 
     boolean alike(Entry a, Entry b, Spread spread) {
+        return alike(a, b, spread, true);
+    }
+
+    /**
+     * True when no probe tells the two entries apart: every reading within twice their combined
+     * spread, and, if {@code relayState}, the same relay state in both pin states.
+     */
+    boolean alike(Entry a, Entry b, Spread spread, boolean relayState) {
         for (boolean high : new boolean[] {true, false}) {
             State sa = a.state(high);
             State sb = b.state(high);
-            if (sa.operated() != sb.operated()) {
+            if (relayState && sa.operated() != sb.operated()) {
                 return false;
             }
             for (int k = 0; k < probes.size(); k++) {

@@ -50,10 +50,12 @@ public enum FaultKind {
      */
     CLAMP_OPEN("clamp-open"),
     /**
-     * A track open, written {@code PART.PIN:track-open}: the track that joins that pin to the rest
-     * of its net is broken, so the net splits in two, the pin's side and the rest, joined through
-     * 1 TΩ. Addressed by a pin rather than a part, it is not in any part's list ({@link #of}) and
-     * not in the single-fault set; it is accepted wherever a fault is written.
+     * A track open between two named nets, written {@code NET~TOWARD:track-open}: on net NET, the
+     * track to the parts that lead to net TOWARD is broken ({@link FaultInjector#cutNet}); these are
+     * in every stage's single-fault set ({@link FaultCatalog#trackOpens}). The older spelling
+     * {@code PART.PIN:track-open} (the track joining that one pin to the rest of its net is broken,
+     * {@link FaultInjector#cutPin}) is still accepted wherever a fault is written. Not in any part's
+     * list ({@link #of}).
      */
     TRACK_OPEN("track-open"),
     /** Relay coil open (1 TΩ). */
