@@ -102,4 +102,15 @@ class PriorsTest {
         assertTrue(!p.isDefault());
         assertEquals(p, SavedHunt.priors(java.util.Map.of("none", 5.0, "ce-short", 2.5)));
     }
+
+    @Test
+    void theDocumentedTableIsTheOneInTheCode() throws java.io.IOException {
+        // docs/fault-priors.md prints PriorTable: every row's kind, basis and weight on one line
+        List<String> lines = java.nio.file.Files.readAllLines(java.nio.file.Path.of("docs", "fault-priors.md"));
+        for (PriorTable.Row row : PriorTable.rows()) {
+            String w = String.format(java.util.Locale.ROOT, "%.3g", row.weight()).replaceAll("\\.?0+$", "");
+            assertTrue(lines.stream().anyMatch(l -> l.contains("`" + row.kind().id() + "`") && l.contains(row.basis())
+                    && l.contains("| " + w + " |")), "not in docs/fault-priors.md: " + row);
+        }
+    }
 }
