@@ -1,7 +1,9 @@
 package org.armature.analysis.faults;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.stream.Collectors;
 import org.armature.model.Connectivity;
@@ -30,7 +32,8 @@ public final class FaultCatalog {
 
     /** Every single fault of the stage, in a fixed order. */
     public static List<Fault> of(Stage stage) {
-        Optional<StageRoles> roles = StageRecognition.of(stage).roles();
+        StageRecognition rec = StageRecognition.of(stage);
+        Optional<StageRoles> roles = rec.roles();
         List<Part> order = new ArrayList<>();
         roles.flatMap(r -> stage.part(r.relayRef())).ifPresent(order::add);
         roles.flatMap(r -> stage.part(r.switchRef())).filter(p -> !order.contains(p)).ifPresent(order::add);
@@ -44,16 +47,29 @@ public final class FaultCatalog {
                 faults.add(new Fault(p.ref(), k));
             }
         }
-        faults.addAll(trackOpens(stage));
+        faults.addAll(trackOpens(stage, rec.connectivity()));
         return faults;
     }
 
+    /**
+     * Nets drawn with more wires than this get no track opens in the set (the search for a cut is
+     * quadratic in the wires per stretch tried); such a track can still be opened by name.
+     */
+    public static final int MAX_TRACK_WIRES = 64;
+
     /** The track opens between two named nets that one cut of the drawing makes, one per split. */
     public static List<Fault> trackOpens(Stage stage) {
-        Connectivity c = Connectivity.of(stage);
+        return trackOpens(stage, Connectivity.of(stage));
+    }
+
+    /** The same, with the stage's nets already found. */
+    static List<Fault> trackOpens(Stage stage, Connectivity c) {
         List<Fault> out = new ArrayList<>();
+        Map<String, Integer> wiresOf = new HashMap<>();
+        c.netOfWire().forEach(n -> wiresOf.merge(n, 1, Integer::sum));
         for (String net : c.nets()) {
-            if (net.equals(Connectivity.GROUND) || c.pinsOn(net).size() < 2) {
+            if (net.equals(Connectivity.GROUND) || c.pinsOn(net).size() < 2
+                    || wiresOf.getOrDefault(net, 0) > MAX_TRACK_WIRES) {
                 continue;
             }
             java.util.Set<java.util.Set<PinRef>> seen = new java.util.HashSet<>();
@@ -72,9 +88,7 @@ public final class FaultCatalog {
                     continue;
                 }
                 seen.add(side);
-                try {
-                    FaultInjector.cutNet(stage, net, toward);
-                } catch (IllegalArgumentException e) {
+                if (FaultInjector.findCut(stage, c, net, cut).isEmpty()) {
                     // no single stretch of this drawing's track separates them: not a fault of this stage
                     continue;
                 }

@@ -359,25 +359,126 @@ public final class FaultInjector {
             throw new IllegalArgumentException("No track of net " + net + " leads to net " + toward
                     + " apart from the rest of it: a part must join the two nets and another pin must stay on " + net + ".");
         }
-        List<PinRef> rest = c.pinsOn(net).stream().filter(p -> !cut.contains(p)).toList();
+        Optional<Cut> where = findCut(stage, c, net, cut);
+        if (where.isEmpty()) {
+            throw new IllegalArgumentException("Opening one stretch of the track of net " + net + " does not cut "
+                    + cut.stream().map(p -> p.ref() + "." + p.pin()).collect(java.util.stream.Collectors.joining(", "))
+                    + " off from the rest in this drawing (pins on one point, or wires in a loop).");
+        }
+        Stage trial = stage.withWires(without(stage.wires(), where.get().wire(), where.get().stretch()));
+        Connectivity tc = Connectivity.of(trial);
+        PinRef rest = c.pinsOn(net).stream().filter(p -> !cut.contains(p)).findFirst().orElseThrow();
+        return bridgeNets(trial, tc, tc.net(cut.get(0).ref(), cut.get(0).pin()), tc.net(rest.ref(), rest.pin()), OPEN_OHMS);
+    }
+
+    /**
+     * Where one cut separates pins from the rest of their net.
+     *
+     * @param wire the index of the wire in {@link Stage#wires()}
+     * @param stretch the stretch of it to remove
+     */
+    public record Cut(int wire, Wire stretch) {
+    }
+
+    /**
+     * The first stretch of the net's wires whose removal leaves exactly {@code cut} on one side and
+     * the net's other pins on the other, each side still joined, found on the net alone (pins and
+     * wire pieces joined as {@link Connectivity} joins them: a pin or wire end joins every wire
+     * through its point and every pin on it).
+     *
+     * @param stage the stage
+     * @param c its nets
+     * @param net the net
+     * @param cut the pins to cut off (not all of the net's)
+     * @return the cut, empty if no single stretch makes it
+     */
+    public static Optional<Cut> findCut(Stage stage, Connectivity c, String net, List<PinRef> cut) {
+        List<PinRef> pins = c.pinsOn(net);
+        List<GridPoint> pinAt = pins.stream().map(p -> stage.require(p.ref()).pinPoint(p.pin())).toList();
+        List<Integer> netWires = new ArrayList<>();
         for (int i = 0; i < stage.wires().size(); i++) {
-            if (!c.netOfWire().get(i).equals(net)) {
-                continue;
+            if (c.netOfWire().get(i).equals(net)) {
+                netWires.add(i);
             }
+        }
+        for (int i : netWires) {
             for (Wire piece : stretches(stage, c, net, i)) {
-                Stage trial = stage.withWires(without(stage.wires(), i, piece));
-                Connectivity tc = Connectivity.of(trial);
-                String a = tc.net(cut.get(0).ref(), cut.get(0).pin());
-                String b = tc.net(rest.get(0).ref(), rest.get(0).pin());
-                if (!a.equals(b) && cut.stream().allMatch(p -> tc.net(p.ref(), p.pin()).equals(a))
-                        && rest.stream().allMatch(p -> tc.net(p.ref(), p.pin()).equals(b))) {
-                    return bridgeNets(trial, tc, a, b, OPEN_OHMS);
+                List<Wire> parts = new ArrayList<>();
+                for (int j : netWires) {
+                    if (j != i) {
+                        parts.add(stage.wires().get(j));
+                    }
+                }
+                List<Wire> left = without(List.of(stage.wires().get(i)), 0, piece);
+                parts.addAll(left);
+                int[] root = joined(pinAt, parts);
+                int a = root[pins.indexOf(cut.get(0))];
+                int b = -1;
+                boolean exact = true;
+                for (int k = 0; k < pins.size() && exact; k++) {
+                    boolean off = cut.contains(pins.get(k));
+                    if (off) {
+                        exact = root[k] == a;
+                    } else if (b < 0) {
+                        b = root[k];
+                        exact = b != a;
+                    } else {
+                        exact = root[k] == b;
+                    }
+                }
+                if (exact) {
+                    return Optional.of(new Cut(i, piece));
                 }
             }
         }
-        throw new IllegalArgumentException("Opening one stretch of the track of net " + net + " does not cut "
-                + cut.stream().map(p -> p.ref() + "." + p.pin()).collect(java.util.stream.Collectors.joining(", "))
-                + " off from the rest in this drawing (pins on one point, or wires in a loop).");
+        return Optional.empty();
+    }
+
+    /** Components of pins and wire pieces of one net: the root of each pin, by index. */
+    private static int[] joined(List<GridPoint> pinAt, List<Wire> pieces) {
+        int n = pinAt.size() + pieces.size();
+        int[] parent = new int[n];
+        for (int k = 0; k < n; k++) {
+            parent[k] = k;
+        }
+        for (int p = 0; p < pinAt.size(); p++) {
+            for (int q = p + 1; q < pinAt.size(); q++) {
+                if (pinAt.get(p).equals(pinAt.get(q))) {
+                    union(parent, p, q);
+                }
+            }
+            for (int w = 0; w < pieces.size(); w++) {
+                if (pieces.get(w).contains(pinAt.get(p))) {
+                    union(parent, p, pinAt.size() + w);
+                }
+            }
+        }
+        for (int v = 0; v < pieces.size(); v++) {
+            for (int w = v + 1; w < pieces.size(); w++) {
+                Wire x = pieces.get(v);
+                Wire y = pieces.get(w);
+                if (y.contains(x.from()) || y.contains(x.to()) || x.contains(y.from()) || x.contains(y.to())) {
+                    union(parent, pinAt.size() + v, pinAt.size() + w);
+                }
+            }
+        }
+        int[] roots = new int[pinAt.size()];
+        for (int p = 0; p < roots.length; p++) {
+            roots[p] = find(parent, p);
+        }
+        return roots;
+    }
+
+    private static int find(int[] parent, int k) {
+        while (parent[k] != k) {
+            parent[k] = parent[parent[k]];
+            k = parent[k];
+        }
+        return k;
+    }
+
+    private static void union(int[] parent, int a, int b) {
+        parent[find(parent, a)] = find(parent, b);
     }
 
     /** The stretches of wire {@code i}: between consecutive points of it where a pin or wire end of the net sits. */
