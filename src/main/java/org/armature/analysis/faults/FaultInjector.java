@@ -402,7 +402,7 @@ public final class FaultInjector {
             }
         }
         for (int i : netWires) {
-            for (Wire piece : stretches(stage, c, net, i)) {
+            for (Wire piece : stretches(stage, netWires, pinAt, i)) {
                 List<Wire> parts = new ArrayList<>();
                 for (int j : netWires) {
                     if (j != i) {
@@ -481,22 +481,24 @@ public final class FaultInjector {
         parent[find(parent, a)] = find(parent, b);
     }
 
-    /** The stretches of wire {@code i}: between consecutive points of it where a pin or wire end of the net sits. */
-    private static List<Wire> stretches(Stage stage, Connectivity c, String net, int i) {
+    /**
+     * The stretches of wire {@code i}: between consecutive points of it where a pin or wire end of
+     * the net sits ({@code netWires}: the net's wires by index; {@code pinAt}: its pins' points).
+     */
+    private static List<Wire> stretches(Stage stage, List<Integer> netWires, List<GridPoint> pinAt, int i) {
         Wire w = stage.wires().get(i);
         java.util.TreeSet<Integer> stops = new java.util.TreeSet<>();
         boolean vertical = w.from().gridX() == w.to().gridX();
         java.util.function.ToIntFunction<GridPoint> along = p -> vertical ? p.gridY() : p.gridX();
         stops.add(along.applyAsInt(w.from()));
         stops.add(along.applyAsInt(w.to()));
-        for (PinRef p : c.pinsOn(net)) {
-            GridPoint g = stage.require(p.ref()).pinPoint(p.pin());
+        for (GridPoint g : pinAt) {
             if (w.contains(g)) {
                 stops.add(along.applyAsInt(g));
             }
         }
-        for (int j = 0; j < stage.wires().size(); j++) {
-            if (j != i && c.netOfWire().get(j).equals(net)) {
+        for (int j : netWires) {
+            if (j != i) {
                 for (GridPoint e : List.of(stage.wires().get(j).from(), stage.wires().get(j).to())) {
                     if (w.contains(e)) {
                         stops.add(along.applyAsInt(e));
