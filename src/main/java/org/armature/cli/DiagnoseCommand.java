@@ -8,7 +8,9 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -148,10 +150,13 @@ final class DiagnoseCommand implements Callable<Integer> {
         Optional<FaultHunt> hunt = doc.faultHunt().filter(h -> h.stageIndex() == stageIndex);
         boolean useSaved = hunt.isPresent() && request.readings().isEmpty() && request.symptom().isEmpty();
         try {
-            Priors p = useSaved ? SavedHunt.priors(hunt.get().priorWeights()) : Priors.DEFAULT;
+            // the saved weights, then those given here over them, read by the one SavedHunt.priors
+            Map<String, Double> weights = new LinkedHashMap<>(useSaved ? hunt.get().priorWeights() : Map.of());
             for (String t : request.priors()) {
-                p = p.parse(t);
+                Map.Entry<String, Double> w = Priors.parseWeight(t);
+                weights.put(w.getKey(), w.getValue());
             }
+            Priors p = SavedHunt.priors(weights);
             Meter meter = request.meter().apply(useSaved ? SavedHunt.meter(hunt.get().meter()) : Meter.DEFAULT);
             Optional<Symptom> s = useSaved ? SavedHunt.symptom(hunt.get().symptom()) : Optional.empty();
             if (request.symptom().isPresent()) {

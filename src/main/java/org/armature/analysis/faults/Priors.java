@@ -121,6 +121,19 @@ public record Priors(Map<FaultKind, Double> kindWeights, double noneWeight) {
      * @throws IllegalArgumentException with one sentence listing the valid kinds
      */
     public Priors parse(String text) {
+        Map.Entry<String, Double> w = parseWeight(text);
+        return set(w.getKey(), w.getValue());
+    }
+
+    /**
+     * Reads one weight written {@code KIND=WEIGHT} into the word and the number, both checked; the
+     * form {@link SavedHunt#priors} and {@code model.FaultHunt} keep weights in.
+     *
+     * @param text the weight as written
+     * @return the kind's word ({@code none} for the healthy stage) and the weight
+     * @throws IllegalArgumentException with one sentence listing the valid kinds
+     */
+    public static Map.Entry<String, Double> parseWeight(String text) {
         String t = text.strip();
         int eq = t.indexOf('=');
         if (eq <= 0) {
@@ -139,7 +152,8 @@ public record Priors(Map<FaultKind, Double> kindWeights, double noneWeight) {
             throw new IllegalArgumentException("A prior weight is a number not below 0 (for example " + kind
                     + "=2), not '" + value + "'; kinds: " + validKinds() + ".");
         }
-        return set(kind, w);
+        DEFAULT.set(kind, w);
+        return Map.entry(kind, w);
     }
 
     /**
