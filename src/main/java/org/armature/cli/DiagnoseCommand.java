@@ -256,13 +256,22 @@ final class DiagnoseCommand implements Callable<Integer> {
                 .append(d.meter().accuracyText().replace("%+", " % + ")).append(" digits) on ")
                 .append(d.meter().counts()).append(" counts.").append(nl).append(nl);
         b.append("Candidates for \"").append(d.stage().name()).append("\" (posterior probability)").append(nl);
+        int width = 18;
+        int counted = 0;
+        for (Diagnosis.Candidate c : r.candidates()) {
+            if (counted >= 5 && c.probability() < 1e-3) {
+                break;
+            }
+            counted++;
+            width = Math.max(width, c.name().length());
+        }
         int shown = 0;
         for (Diagnosis.Candidate c : r.candidates()) {
             if (shown >= 5 && c.probability() < 1e-3) {
                 break;
             }
             shown++;
-            b.append(String.format(Locale.ROOT, "  %-18s %6.1f %%%s%n", c.name(), 100 * c.probability(),
+            b.append(String.format(Locale.ROOT, "  %-" + width + "s %6.1f %%%s%n", c.name(), 100 * c.probability(),
                     c.symptomExplained() ? "" : "  (does not show the symptom)"));
             for (Diagnosis.Explanation e : c.explains()) {
                 b.append(String.format(Locale.ROOT, "      %s, pin %s: expected %s, measured %s (%+.1f σ)%n",

@@ -121,13 +121,17 @@ final class FaultsCommand implements Callable<Integer> {
                 .append(" across each probe point (net to ground; coil: across the coil), accuracy ±(")
                 .append(d.meter().accuracyText().replace("%+", " % + ")).append(" digits) on ")
                 .append(d.meter().counts()).append(" counts.").append(nl);
+        int width = 18;
+        for (FaultDictionary.Entry e : d.entries()) {
+            width = Math.max(width, e.name().length());
+        }
         for (boolean high : new boolean[] {true, false}) {
             b.append(nl).append("Pin ").append(high ? "high" : "low").append(nl);
-            b.append(String.format(Locale.ROOT, "  %-18s %-9s %-5s", "fault", "relay", "load"));
+            b.append(String.format(Locale.ROOT, "  %-" + width + "s %-9s %-5s", "fault", "relay", "load"));
             d.probes().forEach(p -> b.append(String.format(Locale.ROOT, " %15s", p.name())));
             b.append(nl);
             for (FaultDictionary.Entry e : d.entries()) {
-                b.append(String.format(Locale.ROOT, "  %-18s ", e.name()));
+                b.append(String.format(Locale.ROOT, "  %-" + width + "s ", e.name()));
                 if (!e.solved()) {
                     b.append("no operating point: ").append(e.failure()).append(nl);
                     continue;
