@@ -8,25 +8,32 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.armature.analysis.faults.Diagnosis;
 import org.armature.analysis.faults.FaultDictionary;
+import org.armature.analysis.faults.FaultKind;
 import org.armature.analysis.faults.Meter;
+import org.armature.analysis.faults.PriorTable;
 import org.armature.analysis.faults.Priors;
 import org.armature.analysis.faults.Probe;
 import org.armature.analysis.faults.Reading;
+import org.armature.analysis.faults.SavedHunt;
 import org.armature.analysis.faults.Spread;
 import org.armature.analysis.faults.Symptom;
 import org.armature.io.StageFiles;
+import org.armature.model.FaultHunt;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
 import org.armature.units.EngineeringNotation;
 import org.armature.units.Unit;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -70,9 +77,13 @@ final class DiagnoseCommand implements Callable<Integer> {
                     + "the pin state high or low; the volts shown, for example switch@high=11.9.")
     List<String> readings;
 
-    @Option(names = "--meter-resistance", paramLabel = "OHMS", converter = QuantityConverter.Ohms.class,
-            description = "The meter's input resistance (default 10M).")
-    Double meterOhms;
+    @Mixin
+    FaultOptions.MeterOptions meterOptions = new FaultOptions.MeterOptions();
+
+    @Option(names = "--prior", paramLabel = "KIND=WEIGHT",
+            description = "Change the prior weight of a fault kind (repeatable), for example ce-short=2, or of the "
+                    + "healthy stage, none=5; the defaults come from published failure rates (docs/fault-priors.md).")
+    List<String> priors;
 
     @Option(names = "--json", description = "Print exactly one JSON object (SI units) instead of a table.")
     boolean json;
@@ -81,25 +92,90 @@ final class DiagnoseCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Optional<Symptom> s = Optional.empty();
-        if (symptom != null) {
-            s = Optional.of(Symptom.byId(symptom).orElseThrow(() -> new CommandFailedException(
-                    "Unknown symptom '" + symptom + "'; expected no-operate, no-release or chatter.")));
-        }
         StageDocument doc = StageFiles.open(file);
         Stage stage = StageSelection.select(doc, stageSelector, file, spec.commandLine());
-        StageSelection.requireValid(stage, "diagnosed");
-        Meter meter = meterOhms == null ? Meter.DEFAULT : Meter.DEFAULT.withInputOhms(meterOhms);
-        FaultDictionary d = FaultDictionary.build(stage, meter);
-        List<Reading> list = new ArrayList<>();
-        for (String r : readings == null ? List.<String>of() : readings) {
-            list.add(parse(d, r));
+        int index = 0;
+        while (doc.stages().get(index) != stage) {
+            index++;
         }
-        Diagnosis.Result result = Diagnosis.rank(d, Spread.DEFAULT, Priors.DEFAULT, s, list);
+        StageSelection.requireValid(stage, "diagnosed");
+        Diagnosed x = diagnose(doc, index, new Request(Optional.ofNullable(symptom),
+                readings == null ? List.of() : readings, priors == null ? List.of() : priors, meterOptions));
         PrintWriter out = spec.commandLine().getOut();
-        out.print(json ? json(result) : table(d, result));
+        out.print(json ? json(x) : table(x));
         out.flush();
         return CommandLine.ExitCode.OK;
+    }
+
+    /**
+     * What the command line asked for.
+     *
+     * @param symptom the symptom's word, if given
+     * @param readings the readings as written
+     * @param priors the prior weights as written ({@code KIND=WEIGHT})
+     * @param meter the meter options
+     */
+    record Request(Optional<String> symptom, List<String> readings, List<String> priors,
+                   FaultOptions.MeterOptions meter) {
+    }
+
+    /**
+     * A diagnosis with what it was computed from.
+     *
+     * @param dictionary the dictionary (with the meter used)
+     * @param result the ranking
+     * @param priors the priors used
+     * @param savedHunt true when the document's saved fault hunt gave the symptom and readings
+     * @param readingCount how many readings were ranked
+     */
+    record Diagnosed(FaultDictionary dictionary, Diagnosis.Result result, Priors priors, boolean savedHunt,
+                     int readingCount) {
+    }
+
+    /**
+     * Ranks the faults of one stage of a document. With no reading and no symptom on the command line
+     * and a fault hunt saved on this stage, the saved hunt is ranked ({@link SavedHunt}): its symptom,
+     * readings, meter and priors, with any meter or prior option given here put over them. Otherwise
+     * the command line's symptom and readings (and the default meter and priors, changed by the
+     * options) are ranked, and a saved hunt is not used.
+     *
+     * @param doc the document
+     * @param stageIndex the stage's index in the document, from 0
+     * @param request the options
+     * @return the ranking
+     * @throws CommandFailedException with one sentence naming what is valid, for a bad word
+     */
+    static Diagnosed diagnose(StageDocument doc, int stageIndex, Request request) {
+        Stage stage = doc.stages().get(stageIndex);
+        Optional<FaultHunt> hunt = doc.faultHunt().filter(h -> h.stageIndex() == stageIndex);
+        boolean useSaved = hunt.isPresent() && request.readings().isEmpty() && request.symptom().isEmpty();
+        try {
+            // the saved weights, then those given here over them, read by the one SavedHunt.priors
+            Map<String, Double> weights = new LinkedHashMap<>(useSaved ? hunt.get().priorWeights() : Map.of());
+            for (String t : request.priors()) {
+                Map.Entry<String, Double> w = Priors.parseWeight(t);
+                weights.put(w.getKey(), w.getValue());
+            }
+            Priors p = SavedHunt.priors(weights);
+            Meter meter = request.meter().apply(useSaved ? SavedHunt.meter(hunt.get().meter()) : Meter.DEFAULT);
+            Optional<Symptom> s = useSaved ? SavedHunt.symptom(hunt.get().symptom()) : Optional.empty();
+            if (request.symptom().isPresent()) {
+                String w = request.symptom().get();
+                s = Optional.of(Symptom.byId(w).orElseThrow(() -> new CommandFailedException(
+                        "Unknown symptom '" + w + "'; expected no-operate, no-release or chatter.")));
+            }
+            FaultDictionary d = FaultDictionary.build(stage, meter);
+            List<Reading> list = new ArrayList<>();
+            if (useSaved) {
+                list.addAll(SavedHunt.readings(d, hunt.get().readings()));
+            }
+            for (String r : request.readings()) {
+                list.add(Reading.parse(d, r));
+            }
+            return new Diagnosed(d, Diagnosis.rank(d, Spread.DEFAULT, p, s, list), p, useSaved, list.size());
+        } catch (IllegalArgumentException e) {
+            throw new CommandFailedException(e.getMessage());
+        }
     }
 
     /** Reads {@code NET@high=VOLTS} ({@link Reading#parse}); an unknown net or state is one sentence naming the valid ones. */
@@ -111,7 +187,8 @@ final class DiagnoseCommand implements Callable<Integer> {
         }
     }
 
-    static String json(Diagnosis.Result r) {
+    static String json(Diagnosed diagnosed) {
+        Diagnosis.Result r = diagnosed.result();
         ObjectNode root = JSON.createObjectNode();
         ArrayNode cands = root.putArray("candidates");
         for (Diagnosis.Candidate c : r.candidates()) {
@@ -139,6 +216,22 @@ final class DiagnoseCommand implements Callable<Integer> {
         }
         ArrayNode unsolved = root.putArray("unsolved");
         r.unsolved().forEach(unsolved::add);
+        root.put("savedHunt", diagnosed.savedHunt());
+        ObjectNode pr = root.putObject("priors");
+        pr.put("source", PriorTable.SOURCE);
+        ObjectNode changed = pr.putObject("changed");
+        if (diagnosed.priors().noneWeight() != Priors.DEFAULT_NONE_WEIGHT) {
+            changed.put(Priors.NONE, diagnosed.priors().noneWeight());
+        }
+        for (FaultKind k : FaultKind.values()) {
+            if (diagnosed.priors().kindWeights().containsKey(k)) {
+                changed.put(k.id(), diagnosed.priors().kindWeights().get(k));
+            }
+        }
+        ObjectNode m = root.putObject("meter");
+        m.put("inputOhms", diagnosed.dictionary().meter().inputOhms());
+        m.put("accuracy", diagnosed.dictionary().meter().accuracyText());
+        m.put("counts", diagnosed.dictionary().meter().counts());
         try {
             return JSON.writeValueAsString(root) + System.lineSeparator();
         } catch (JsonProcessingException e) {
@@ -147,17 +240,38 @@ final class DiagnoseCommand implements Callable<Integer> {
     }
 
     /** The ranking as text: candidates above 0.1 % (at least five), each with its readings. */
-    static String table(FaultDictionary d, Diagnosis.Result r) {
+    static String table(Diagnosed x) {
+        FaultDictionary d = x.dictionary();
+        Diagnosis.Result r = x.result();
         StringBuilder b = new StringBuilder();
         String nl = System.lineSeparator();
+        if (x.savedHunt()) {
+            b.append("Ranking the fault hunt saved in the file (").append(x.readingCount())
+                    .append(x.readingCount() == 1 ? " reading" : " readings")
+                    .append("); readings or a symptom given here would replace it.").append(nl);
+        }
+        b.append(x.priors().isDefault() ? "Priors: " : "Priors changed: " + x.priors().describeChanges() + "; the others: ")
+                .append(PriorTable.SOURCE).append('.').append(nl);
+        b.append("Meter: ").append(EngineeringNotation.format(d.meter().inputOhms(), Unit.OHM)).append(" input, ±(")
+                .append(d.meter().accuracyText().replace("%+", " % + ")).append(" digits) on ")
+                .append(d.meter().counts()).append(" counts.").append(nl).append(nl);
         b.append("Candidates for \"").append(d.stage().name()).append("\" (posterior probability)").append(nl);
+        int width = 18;
+        int counted = 0;
+        for (Diagnosis.Candidate c : r.candidates()) {
+            if (counted >= 5 && c.probability() < 1e-3) {
+                break;
+            }
+            counted++;
+            width = Math.max(width, c.name().length());
+        }
         int shown = 0;
         for (Diagnosis.Candidate c : r.candidates()) {
             if (shown >= 5 && c.probability() < 1e-3) {
                 break;
             }
             shown++;
-            b.append(String.format(Locale.ROOT, "  %-18s %6.1f %%%s%n", c.name(), 100 * c.probability(),
+            b.append(String.format(Locale.ROOT, "  %-" + width + "s %6.1f %%%s%n", c.name(), 100 * c.probability(),
                     c.symptomExplained() ? "" : "  (does not show the symptom)"));
             for (Diagnosis.Explanation e : c.explains()) {
                 b.append(String.format(Locale.ROOT, "      %s, pin %s: expected %s, measured %s (%+.1f σ)%n",

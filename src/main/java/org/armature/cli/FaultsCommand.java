@@ -20,6 +20,7 @@ import org.armature.units.EngineeringNotation;
 import org.armature.units.Unit;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -31,7 +32,7 @@ import picocli.CommandLine.Spec;
  * is on, and the meter reading at every probe point; then the ambiguity groups. With {@code --json}:
  *
  * <pre>{@code
- * {"stage": "...", "meterOhms": 1e7, "probes": ["contact-common", ..., "coil"],
+ * {"stage": "...", "meterOhms": 1e7, "meterAccuracy": "1%+2", "meterCounts": 4000, "probes": ["contact-common", ..., "coil"],
  *  "entries": [{"fault": "none", "high": {"operates": true, "loadOn": true, "readings": {"switch": 0.085, ...}},
  *               "low": {...}}, {"fault": "Q1:ce-short", ...}, ...],
  *  "ambiguityGroups": [["none", "D1:open", ...], ["Q1:ce-short"], ...]}
@@ -52,9 +53,8 @@ final class FaultsCommand implements Callable<Integer> {
             description = "Which stage of the file: its number from 1, or its name (default 1).")
     String stageSelector;
 
-    @Option(names = "--meter-resistance", paramLabel = "OHMS", converter = QuantityConverter.Ohms.class,
-            description = "The meter's input resistance (default 10M).")
-    Double meterOhms;
+    @Mixin
+    FaultOptions.MeterOptions meterOptions = new FaultOptions.MeterOptions();
 
     @Option(names = "--json", description = "Print exactly one JSON object (SI units) instead of a table.")
     boolean json;
@@ -65,8 +65,8 @@ final class FaultsCommand implements Callable<Integer> {
     public Integer call() {
         StageDocument doc = StageFiles.open(file);
         Stage stage = StageSelection.select(doc, stageSelector, file, spec.commandLine());
+        Meter meter = meterOptions.apply(Meter.DEFAULT);
         StageSelection.requireValid(stage, "examined");
-        Meter meter = meterOhms == null ? Meter.DEFAULT : Meter.DEFAULT.withInputOhms(meterOhms);
         FaultDictionary d = FaultDictionary.build(stage, meter);
         PrintWriter out = spec.commandLine().getOut();
         out.print(json ? json(d) : table(d));
@@ -78,6 +78,8 @@ final class FaultsCommand implements Callable<Integer> {
         ObjectNode root = JSON.createObjectNode();
         root.put("stage", d.stage().name());
         root.put("meterOhms", d.meter().inputOhms());
+        root.put("meterAccuracy", d.meter().accuracyText());
+        root.put("meterCounts", d.meter().counts());
         ArrayNode probes = root.putArray("probes");
         d.probes().forEach(p -> probes.add(p.name()));
         ArrayNode entries = root.putArray("entries");
@@ -116,14 +118,20 @@ final class FaultsCommand implements Callable<Integer> {
         String nl = System.lineSeparator();
         b.append("Fault dictionary of \"").append(d.stage().name()).append("\": ").append(d.entries().size() - 1)
                 .append(" single faults; meter input ").append(EngineeringNotation.format(d.meter().inputOhms(), Unit.OHM))
-                .append(" across each probe point (net to ground; coil: across the coil).").append(nl);
+                .append(" across each probe point (net to ground; coil: across the coil), accuracy ±(")
+                .append(d.meter().accuracyText().replace("%+", " % + ")).append(" digits) on ")
+                .append(d.meter().counts()).append(" counts.").append(nl);
+        int width = 18;
+        for (FaultDictionary.Entry e : d.entries()) {
+            width = Math.max(width, e.name().length());
+        }
         for (boolean high : new boolean[] {true, false}) {
             b.append(nl).append("Pin ").append(high ? "high" : "low").append(nl);
-            b.append(String.format(Locale.ROOT, "  %-18s %-9s %-5s", "fault", "relay", "load"));
+            b.append(String.format(Locale.ROOT, "  %-" + width + "s %-9s %-5s", "fault", "relay", "load"));
             d.probes().forEach(p -> b.append(String.format(Locale.ROOT, " %15s", p.name())));
             b.append(nl);
             for (FaultDictionary.Entry e : d.entries()) {
-                b.append(String.format(Locale.ROOT, "  %-18s ", e.name()));
+                b.append(String.format(Locale.ROOT, "  %-" + width + "s ", e.name()));
                 if (!e.solved()) {
                     b.append("no operating point: ").append(e.failure()).append(nl);
                     continue;

@@ -88,8 +88,9 @@ final class SimulateCommand implements Callable<Integer> {
     String stageSelector;
 
     @Option(names = "--fault", paramLabel = "PART:KIND",
-            description = "Inject a fault before solving (repeatable), for example Q1:ce-short or D1:reversed; "
-                    + "'faults FILE' lists every fault of the stage.")
+            description = "Inject a fault before solving (repeatable), for example Q1:ce-short, D1:reversed or "
+                    + "switch~supply:track-open (a track open between two nets); 'faults FILE' lists every fault "
+                    + "of the stage.")
     java.util.List<String> faults;
 
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);

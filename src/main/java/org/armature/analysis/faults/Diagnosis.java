@@ -117,7 +117,7 @@ public final class Diagnosis {
                 unsolved.add(e.name());
                 continue;
             }
-            double w = priors.weight(e.fault());
+            double w = priors.weight(dictionary.stage(), e.fault());
             if (!(w > 0)) {
                 continue;
             }

@@ -179,17 +179,26 @@ public final class FaultDictionary {
 
     private static Entry entry(DcAnalysis engine, Stage healthy, Metered healthyMetered, Optional<Fault> fault,
                                List<Probe> probes, Meter meter) {
-        Stage faulted = fault.map(f -> FaultInjector.apply(healthy, f)).orElse(healthy);
+        Stage faulted;
         Metered m;
-        if (fault.isEmpty()) {
-            m = healthyMetered;
-        } else if (sameDrawing(healthy, faulted)) {
-            // a change of values only: the same drawing with the meters, so the engine patches its
-            // compiled circuit instead of compiling a new one
-            m = new Metered(FaultInjector.apply(healthyMetered.stage(), fault.get()), healthyMetered.nets(),
-                    healthyMetered.meterRefs());
-        } else {
-            m = metered(faulted, probes);
+        try {
+            faulted = fault.map(f -> FaultInjector.apply(healthy, f)).orElse(healthy);
+            if (fault.isEmpty()) {
+                m = healthyMetered;
+            } else if (sameDrawing(healthy, faulted)) {
+                // a change of values only: the same drawing with the meters, so the engine patches its
+                // compiled circuit instead of compiling a new one
+                m = new Metered(FaultInjector.apply(healthyMetered.stage(), fault.get()), healthyMetered.nets(),
+                        healthyMetered.meterRefs());
+            } else {
+                m = metered(faulted, probes);
+            }
+        } catch (IllegalStateException | IllegalArgumentException e) {
+            if (fault.isEmpty()) {
+                throw e;
+            }
+            // a drawing with no free route for the fault's or the meters' added resistors
+            return new Entry(fault, null, null, "the fault could not be drawn into this stage: " + e.getMessage());
         }
         try {
             State high = state(engine, m.stage(), m.nets(), faulted, probes, m.meterRefs(), meter, true);
@@ -282,10 +291,18 @@ public final class FaultDictionary {
     }
 
     boolean alike(Entry a, Entry b, Spread spread) {
+        return alike(a, b, spread, true);
+    }
+
+    /**
+     * True when no probe tells the two entries apart: every reading within twice their combined
+     * spread, and, if {@code relayState}, the same relay state in both pin states.
+     */
+    boolean alike(Entry a, Entry b, Spread spread, boolean relayState) {
         for (boolean high : new boolean[] {true, false}) {
             State sa = a.state(high);
             State sb = b.state(high);
-            if (sa.operated() != sb.operated()) {
+            if (relayState && sa.operated() != sb.operated()) {
                 return false;
             }
             for (int k = 0; k < probes.size(); k++) {

@@ -83,6 +83,11 @@ public final class FaultInjector {
 
     /** The stage with one fault applied. */
     public static Stage apply(Stage stage, Fault fault) {
+        if (fault.kind() == FaultKind.TRACK_OPEN && fault.ref().contains(NET_JOIN)) {
+            TrackBetween t = trackBetween(fault.ref()).orElseThrow(() -> new IllegalArgumentException(
+                    "a track open between nets is written NET~TOWARD:track-open, not " + fault.ref()));
+            return cutNet(stage, t.net(), t.toward());
+        }
         if (fault.kind() == FaultKind.TRACK_OPEN) {
             PinRef pin = trackPin(stage, fault.ref()).orElseThrow(() -> new IllegalArgumentException(
                     "a track open is written PART.PIN:track-open with a pin of the stage, not " + fault.ref()));
@@ -273,6 +278,268 @@ public final class FaultInjector {
         return bridgeNets(cut, cc, alone, rest, OPEN_OHMS);
     }
 
+    /** The mark between the two nets of a track open, {@code NET~TOWARD:track-open}. */
+    public static final String NET_JOIN = "~";
+
+    /**
+     * The two nets of a track open written {@code NET~TOWARD}.
+     *
+     * @param net the net whose track is open
+     * @param toward the net that the cut-off pins' parts lead to
+     */
+    public record TrackBetween(String net, String toward) {
+        /** {@code NET~TOWARD}. */
+        public String address() {
+            return net + NET_JOIN + toward;
+        }
+    }
+
+    /** Splits {@code NET~TOWARD} into its two names (not checked against a stage). */
+    public static Optional<TrackBetween> trackBetween(String address) {
+        int at = address.indexOf(NET_JOIN);
+        if (at <= 0 || at == address.length() - 1 || address.indexOf(NET_JOIN, at + 1) >= 0) {
+            return Optional.empty();
+        }
+        return Optional.of(new TrackBetween(address.substring(0, at), address.substring(at + 1)));
+    }
+
+    /**
+     * The pins a track open {@code NET~TOWARD} cuts off: the pins on {@code net} of the parts that
+     * also have a pin on {@code toward}. Empty if none, or if they are all of the net's pins.
+     *
+     * @param c the stage's nets
+     * @param net the net whose track is open
+     * @param toward the other net
+     * @return the pins cut off, in designator order
+     */
+    public static List<PinRef> cutOffPins(Connectivity c, String net, String toward) {
+        List<PinRef> on = c.pinsOn(net);
+        java.util.Set<String> leading = new java.util.HashSet<>();
+        for (PinRef p : c.pinsOn(toward)) {
+            leading.add(p.ref());
+        }
+        List<PinRef> cut = on.stream().filter(p -> leading.contains(p.ref())).toList();
+        return cut.size() == on.size() ? List.of() : cut;
+    }
+
+    /**
+     * A track open between two named nets, {@code NET~TOWARD:track-open}: on net {@code net}, the
+     * copper that joins the pins of the parts leading to net {@code toward} ({@link #cutOffPins}) to
+     * the net's other pins is broken, so no current passes between the two nets through those parts,
+     * while the cut-off pins stay joined to each other. In the drawing: the one stretch of wire of
+     * the net (between two consecutive points where a pin or a wire end of the net sits) whose
+     * removal leaves exactly those two groups is removed, and the two groups are joined back through
+     * {@value #OPEN_OHMS} Ω (an open, and no node left floating). For example
+     * {@code switch~supply:track-open} in a low-side stage cuts the coil and its diode off the
+     * transistor's collector: neither the switch nor the coil carries current.
+     *
+     * @param stage the stage
+     * @param net the net whose track is open (a name as {@code solve} prints it), not ground
+     * @param toward the net the cut-off parts lead to
+     * @return the stage with the track open
+     * @throws IllegalArgumentException with one sentence: an unknown net (listing the valid ones), no
+     *     part leading from one to the other, or no single stretch of track that separates them
+     */
+    public static Stage cutNet(Stage stage, String net, String toward) {
+        Connectivity c = Connectivity.of(stage);
+        List<String> valid = c.nets().stream().filter(n -> !n.equals(Connectivity.GROUND)).toList();
+        for (String n : List.of(net, toward)) {
+            if (!c.nets().contains(n)) {
+                throw new IllegalArgumentException("Stage \"" + stage.name() + "\" has no net " + n
+                        + "; a track open is written NET~TOWARD:track-open with nets " + String.join(", ", valid)
+                        + " (TOWARD may also be " + Connectivity.GROUND + ").");
+            }
+        }
+        if (net.equals(Connectivity.GROUND)) {
+            throw new IllegalArgumentException("The ground net is joined by its symbols, not by one track; open a "
+                    + "ground symbol instead (GND1:open), or write NET~" + Connectivity.GROUND + ":track-open.");
+        }
+        List<PinRef> cut = cutOffPins(c, net, toward);
+        if (cut.isEmpty() || net.equals(toward)) {
+            throw new IllegalArgumentException("No track of net " + net + " leads to net " + toward
+                    + " apart from the rest of it: a part must join the two nets and another pin must stay on " + net + ".");
+        }
+        Optional<Cut> where = findCut(stage, c, net, cut);
+        if (where.isEmpty()) {
+            throw new IllegalArgumentException("Opening one stretch of the track of net " + net + " does not cut "
+                    + cut.stream().map(p -> p.ref() + "." + p.pin()).collect(java.util.stream.Collectors.joining(", "))
+                    + " off from the rest in this drawing (pins on one point, or wires in a loop).");
+        }
+        Stage trial = stage.withWires(without(stage.wires(), where.get().wire(), where.get().stretch()));
+        Connectivity tc = Connectivity.of(trial);
+        PinRef rest = c.pinsOn(net).stream().filter(p -> !cut.contains(p)).findFirst().orElseThrow();
+        return bridgeNets(trial, tc, tc.net(cut.get(0).ref(), cut.get(0).pin()), tc.net(rest.ref(), rest.pin()), OPEN_OHMS);
+    }
+
+    /**
+     * Where one cut separates pins from the rest of their net.
+     *
+     * @param wire the index of the wire in {@link Stage#wires()}
+     * @param stretch the stretch of it to remove
+     */
+    public record Cut(int wire, Wire stretch) {
+    }
+
+    /**
+     * The first stretch of the net's wires whose removal leaves exactly {@code cut} on one side and
+     * the net's other pins on the other, each side still joined, found on the net alone (pins and
+     * wire pieces joined as {@link Connectivity} joins them: a pin or wire end joins every wire
+     * through its point and every pin on it).
+     *
+     * @param stage the stage
+     * @param c its nets
+     * @param net the net
+     * @param cut the pins to cut off (not all of the net's)
+     * @return the cut, empty if no single stretch makes it
+     */
+    public static Optional<Cut> findCut(Stage stage, Connectivity c, String net, List<PinRef> cut) {
+        List<PinRef> pins = c.pinsOn(net);
+        List<GridPoint> pinAt = pins.stream().map(p -> stage.require(p.ref()).pinPoint(p.pin())).toList();
+        List<Integer> netWires = new ArrayList<>();
+        for (int i = 0; i < stage.wires().size(); i++) {
+            if (c.netOfWire().get(i).equals(net)) {
+                netWires.add(i);
+            }
+        }
+        for (int i : netWires) {
+            for (Wire piece : stretches(stage, netWires, pinAt, i)) {
+                List<Wire> parts = new ArrayList<>();
+                for (int j : netWires) {
+                    if (j != i) {
+                        parts.add(stage.wires().get(j));
+                    }
+                }
+                List<Wire> left = without(List.of(stage.wires().get(i)), 0, piece);
+                parts.addAll(left);
+                int[] root = joined(pinAt, parts);
+                int a = root[pins.indexOf(cut.get(0))];
+                int b = -1;
+                boolean exact = true;
+                for (int k = 0; k < pins.size() && exact; k++) {
+                    boolean off = cut.contains(pins.get(k));
+                    if (off) {
+                        exact = root[k] == a;
+                    } else if (b < 0) {
+                        b = root[k];
+                        exact = b != a;
+                    } else {
+                        exact = root[k] == b;
+                    }
+                }
+                if (exact) {
+                    return Optional.of(new Cut(i, piece));
+                }
+            }
+        }
+        return Optional.empty();
+    }
+
+    /** Components of pins and wire pieces of one net: the root of each pin, by index. */
+    private static int[] joined(List<GridPoint> pinAt, List<Wire> pieces) {
+        int n = pinAt.size() + pieces.size();
+        int[] parent = new int[n];
+        for (int k = 0; k < n; k++) {
+            parent[k] = k;
+        }
+        for (int p = 0; p < pinAt.size(); p++) {
+            for (int q = p + 1; q < pinAt.size(); q++) {
+                if (pinAt.get(p).equals(pinAt.get(q))) {
+                    union(parent, p, q);
+                }
+            }
+            for (int w = 0; w < pieces.size(); w++) {
+                if (pieces.get(w).contains(pinAt.get(p))) {
+                    union(parent, p, pinAt.size() + w);
+                }
+            }
+        }
+        for (int v = 0; v < pieces.size(); v++) {
+            for (int w = v + 1; w < pieces.size(); w++) {
+                Wire x = pieces.get(v);
+                Wire y = pieces.get(w);
+                if (y.contains(x.from()) || y.contains(x.to()) || x.contains(y.from()) || x.contains(y.to())) {
+                    union(parent, pinAt.size() + v, pinAt.size() + w);
+                }
+            }
+        }
+        int[] roots = new int[pinAt.size()];
+        for (int p = 0; p < roots.length; p++) {
+            roots[p] = find(parent, p);
+        }
+        return roots;
+    }
+
+    private static int find(int[] parent, int k) {
+        while (parent[k] != k) {
+            parent[k] = parent[parent[k]];
+            k = parent[k];
+        }
+        return k;
+    }
+
+    private static void union(int[] parent, int a, int b) {
+        parent[find(parent, a)] = find(parent, b);
+    }
+
+    /**
+     * The stretches of wire {@code i}: between consecutive points of it where a pin or wire end of
+     * the net sits ({@code netWires}: the net's wires by index; {@code pinAt}: its pins' points).
+     */
+    private static List<Wire> stretches(Stage stage, List<Integer> netWires, List<GridPoint> pinAt, int i) {
+        Wire w = stage.wires().get(i);
+        java.util.TreeSet<Integer> stops = new java.util.TreeSet<>();
+        boolean vertical = w.from().gridX() == w.to().gridX();
+        java.util.function.ToIntFunction<GridPoint> along = p -> vertical ? p.gridY() : p.gridX();
+        stops.add(along.applyAsInt(w.from()));
+        stops.add(along.applyAsInt(w.to()));
+        for (GridPoint g : pinAt) {
+            if (w.contains(g)) {
+                stops.add(along.applyAsInt(g));
+            }
+        }
+        for (int j : netWires) {
+            if (j != i) {
+                for (GridPoint e : List.of(stage.wires().get(j).from(), stage.wires().get(j).to())) {
+                    if (w.contains(e)) {
+                        stops.add(along.applyAsInt(e));
+                    }
+                }
+            }
+        }
+        List<Wire> out = new ArrayList<>();
+        Integer prev = null;
+        for (int k : stops) {
+            if (prev != null) {
+                out.add(vertical ? new Wire(new GridPoint(w.from().gridX(), prev), new GridPoint(w.from().gridX(), k))
+                        : new Wire(new GridPoint(prev, w.from().gridY()), new GridPoint(k, w.from().gridY())));
+            }
+            prev = k;
+        }
+        return out;
+    }
+
+    /** The wires with stretch {@code piece} taken out of wire {@code i} (what is left of it stays). */
+    private static List<Wire> without(List<Wire> wires, int i, Wire piece) {
+        Wire w = wires.get(i);
+        boolean vertical = w.from().gridX() == w.to().gridX();
+        int lo = vertical ? Math.min(w.from().gridY(), w.to().gridY()) : Math.min(w.from().gridX(), w.to().gridX());
+        int hi = vertical ? Math.max(w.from().gridY(), w.to().gridY()) : Math.max(w.from().gridX(), w.to().gridX());
+        int a = vertical ? Math.min(piece.from().gridY(), piece.to().gridY()) : Math.min(piece.from().gridX(), piece.to().gridX());
+        int b = vertical ? Math.max(piece.from().gridY(), piece.to().gridY()) : Math.max(piece.from().gridX(), piece.to().gridX());
+        int fixed = vertical ? w.from().gridX() : w.from().gridY();
+        List<Wire> out = new ArrayList<>(wires.subList(0, i));
+        if (a > lo) {
+            out.add(vertical ? new Wire(new GridPoint(fixed, lo), new GridPoint(fixed, a))
+                    : new Wire(new GridPoint(lo, fixed), new GridPoint(a, fixed)));
+        }
+        if (hi > b) {
+            out.add(vertical ? new Wire(new GridPoint(fixed, b), new GridPoint(fixed, hi))
+                    : new Wire(new GridPoint(b, fixed), new GridPoint(hi, fixed)));
+        }
+        out.addAll(wires.subList(i + 1, wires.size()));
+        return out;
+    }
+
     /** A two-pin part replaced by a resistor of the same designator on the same pin positions. */
     private static Part asResistor(Part p, double ohms) {
         // every two-pin kind that gets here has its pins at (0, −2) and (0, 2), as the resistor does
@@ -425,7 +692,49 @@ public final class FaultInjector {
                 }
             }
         }
+        // a point boxed in above and below by other nets (a pin cut off by a track open): a short
+        // step sideways first, to a column that is clear up or down
+        for (int y : new int[] {topY, bottomY}) {
+            for (GridPoint p : candidates) {
+                for (int step = 1; step <= SIDESTEP_LIMIT; step++) {
+                    for (int sign : new int[] {-1, 1}) {
+                        GridPoint side = new GridPoint(p.gridX() + sign * step, p.gridY());
+                        GridPoint corner = new GridPoint(side.gridX(), y);
+                        GridPoint end = new GridPoint(laneX, y);
+                        if (!taken.containsKey(side) && !onWire(stage, c, net, added, side)
+                                && clear(taken, net, p, side) && clear(taken, net, side, corner)
+                                && clear(taken, net, corner, end)) {
+                            added.add(new Wire(p, side));
+                            added.add(new Wire(side, corner));
+                            added.add(new Wire(corner, end));
+                            taken.put(side, net);
+                            taken.put(corner, net);
+                            taken.put(end, net);
+                            return Optional.of(y);
+                        }
+                    }
+                }
+            }
+        }
         return Optional.empty();
+    }
+
+    /** How far a route may step sideways before it turns up or down, grid steps. */
+    private static final int SIDESTEP_LIMIT = 3;
+
+    /** True when the point lies on a wire of another net, or on any wire added so far (an end there would join it). */
+    private static boolean onWire(Stage stage, Connectivity c, String net, List<Wire> added, GridPoint q) {
+        for (int i = 0; i < stage.wires().size(); i++) {
+            if (!c.netOfWire().get(i).equals(net) && stage.wires().get(i).contains(q)) {
+                return true;
+            }
+        }
+        for (Wire w : added) {
+            if (w.contains(q)) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** True when no taken point of another net lies on the segment from {@code p} to {@code q}, {@code p} excluded. */

@@ -10,41 +10,37 @@ import org.armature.model.PartKind;
  * ({@code D1:short}, {@code Q1:ce-short}). Which kinds a part can have follows from its
  * {@link PartKind}; {@link FaultInjector} says how each one changes the stage.
  *
- * <p>Each kind carries a prior weight: a relative likelihood of that failure before any reading,
- * used by {@link Diagnosis}. The weights are our own rough figures, from memory, after the shape of
- * published part failure-rate and failure-mode data (base rates per part class in MIL-HDBK-217F,
- * open/short shares per class in the failure-mode distribution handbook FMD-97): transistors and
- * relays fail more often than film resistors, semiconductors fail short more often than open. They
- * are not taken from those tables, and users may set their own ({@link Priors}).
+ * <p>The prior weight of each kind, per part class, is in {@link PriorTable} (published failure
+ * rates and failure-mode shares, as recalled from memory); users may set their own ({@link Priors}).
  */
 public enum FaultKind {
     /**
      * Open: a resistor or load 1 TΩ in place of its value; a diode a 1 TΩ resistor; a MOSFET channel
      * or Darlington output that carries no current; a ground symbol whose connection has opened.
      */
-    OPEN("open", 1.0),
+    OPEN("open"),
     /** Resistor, load, diode or capacitor shorted: 0.1 Ω. */
-    SHORT("short", 1.0),
+    SHORT("short"),
     /** Resistor drifted high, ×10. */
-    DRIFT_UP("drift-x10", 0.3),
+    DRIFT_UP("drift-x10"),
     /** Resistor drifted low, ×0.1. */
-    DRIFT_DOWN("drift-x0.1", 0.1),
+    DRIFT_DOWN("drift-x0.1"),
     /** Diode fitted the wrong way round (an assembly error). */
-    REVERSED("reversed", 0.3),
+    REVERSED("reversed"),
     /** Bipolar collector–emitter short (0.1 Ω). */
-    CE_SHORT("ce-short", 2.0),
+    CE_SHORT("ce-short"),
     /** Bipolar base lead or base–emitter junction open. */
-    BE_OPEN("be-open", 1.5),
+    BE_OPEN("be-open"),
     /** Bipolar base–collector junction open: the collector carries no current. */
-    BC_OPEN("bc-open", 1.0),
+    BC_OPEN("bc-open"),
     /** Bipolar base–emitter short (0.1 Ω). */
-    BE_SHORT("be-short", 1.0),
+    BE_SHORT("be-short"),
     /** Bipolar gain fallen to a tenth of its model βF (degraded junction). */
-    GAIN_LOW("gain-low", 0.5),
+    GAIN_LOW("gain-low"),
     /** MOSFET drain–source short (0.1 Ω). */
-    DS_SHORT("ds-short", 2.0),
+    DS_SHORT("ds-short"),
     /** MOSFET gate–source short (0.1 Ω, a punctured gate oxide). */
-    GS_SHORT("gs-short", 1.5),
+    GS_SHORT("gs-short"),
     /**
      * Darlington channel's clamp diode open (its common pin's bond or the diode itself): the
      * channel's {@code com} pin is cut from its net and joined back through 1 TΩ. At DC the clamp
@@ -52,49 +48,44 @@ public enum FaultKind {
      * healthy stage's and the dictionary puts it in the healthy stage's ambiguity group; at
      * turn-off the coil's flyback is then unclamped ({@code simulate --fault}).
      */
-    CLAMP_OPEN("clamp-open", 0.5),
+    CLAMP_OPEN("clamp-open"),
     /**
-     * A track open, written {@code PART.PIN:track-open}: the track that joins that pin to the rest
-     * of its net is broken, so the net splits in two, the pin's side and the rest, joined through
-     * 1 TΩ. Addressed by a pin rather than a part, it is not in any part's list ({@link #of}) and
-     * not in the single-fault set; it is accepted wherever a fault is written.
+     * A track open between two named nets, written {@code NET~TOWARD:track-open}: on net NET, the
+     * track to the parts that lead to net TOWARD is broken ({@link FaultInjector#cutNet}); these are
+     * in every stage's single-fault set ({@link FaultCatalog#trackOpens}). The older spelling
+     * {@code PART.PIN:track-open} (the track joining that one pin to the rest of its net is broken,
+     * {@link FaultInjector#cutPin}) is still accepted wherever a fault is written. Not in any part's
+     * list ({@link #of}).
      */
-    TRACK_OPEN("track-open", 0.5),
+    TRACK_OPEN("track-open"),
     /** Relay coil open (1 TΩ). */
-    COIL_OPEN("coil-open", 2.0),
+    COIL_OPEN("coil-open"),
     /** Relay coil with half its turns shorted: half the resistance at the same must-operate voltage. */
-    SHORTED_TURNS("shorted-turns", 0.5),
+    SHORTED_TURNS("shorted-turns"),
     /** Relay contacts welded: they stay closed at any coil current. */
-    WELDED("welded", 1.5),
+    WELDED("welded"),
     /** Relay contacts stuck open: they never close. */
-    STUCK_OPEN("stuck-open", 1.0),
+    STUCK_OPEN("stuck-open"),
     /** Drive pin stuck at its low level. */
-    STUCK_LOW("stuck-low", 1.0),
+    STUCK_LOW("stuck-low"),
     /** Drive pin stuck at its high level. */
-    STUCK_HIGH("stuck-high", 1.0),
+    STUCK_HIGH("stuck-high"),
     /** Drive pin weak: output resistance ×100 (a damaged output stage). */
-    WEAK("weak", 0.5),
+    WEAK("weak"),
     /** Supply rail missing (0 V). */
-    MISSING("missing", 1.0),
+    MISSING("missing"),
     /** Supply rail sagging to 75 % of nominal. */
-    SAG("sag", 1.0);
+    SAG("sag");
 
     private final String id;
-    private final double priorWeight;
 
-    FaultKind(String id, double priorWeight) {
+    FaultKind(String id) {
         this.id = id;
-        this.priorWeight = priorWeight;
     }
 
     /** The word written after {@code PART:}. */
     public String id() {
         return id;
-    }
-
-    /** Relative prior weight (dimensionless; see the class comment for its source). */
-    public double priorWeight() {
-        return priorWeight;
     }
 
     /** The kind with this word, if any. */

@@ -37,15 +37,7 @@ public final class SavedHunt {
     public static Priors priors(Map<String, Double> weights) {
         Priors p = Priors.DEFAULT;
         for (Map.Entry<String, Double> e : weights.entrySet()) {
-            if (e.getKey().equals(FaultHunt.NONE)) {
-                p = new Priors(p.kindWeights(), e.getValue());
-                continue;
-            }
-            FaultKind kind = FaultKind.byId(e.getKey()).orElseThrow(() -> new IllegalArgumentException(
-                    "No fault kind '" + e.getKey() + "' to weigh; valid: " + FaultHunt.NONE + ", "
-                            + Arrays.stream(FaultKind.values()).map(FaultKind::id).collect(Collectors.joining(", "))
-                            + "."));
-            p = p.with(kind, e.getValue());
+            p = p.set(e.getKey(), e.getValue());
         }
         return p;
     }
