@@ -11,6 +11,7 @@ import java.util.Optional;
 import org.armature.analysis.faults.Diagnosis;
 import org.armature.analysis.faults.Fault;
 import org.armature.analysis.faults.FaultKind;
+import org.armature.analysis.faults.PriorTable;
 import org.armature.analysis.faults.Priors;
 import org.armature.analysis.faults.Probe;
 import org.armature.analysis.faults.SavedHunt;
@@ -195,8 +196,8 @@ public record FaultHuntSection(FaultHunt hunt, Stage stage, Optional<SavedHunt.R
     private void priors(PdfFlow f) {
         subheading(f, "Priors");
         if (hunt.priorWeights().isEmpty()) {
-            f.paragraph("The default prior weights were used (our own relative figures per fault kind, from memory; "
-                    + "none changed).", PdfFlow.BODY, false, PdfFlow.MUTED);
+            f.paragraph("The default prior weights were used (none changed): per part class and fault kind from "
+                    + PriorTable.SOURCE + ".", PdfFlow.BODY, false, PdfFlow.MUTED);
             return;
         }
         f.paragraph("Prior weights changed from their defaults (relative, dimensionless); the other kinds keep theirs.",
@@ -204,7 +205,7 @@ public record FaultHuntSection(FaultHunt hunt, Stage stage, Optional<SavedHunt.R
         List<PdfFlow.Row> rows = new ArrayList<>();
         for (Map.Entry<String, Double> e : hunt.priorWeights().entrySet()) {
             String def = e.getKey().equals(FaultHunt.NONE) ? plain(Priors.DEFAULT_NONE_WEIGHT)
-                    : FaultKind.byId(e.getKey()).map(k -> plain(k.priorWeight())).orElse("not a fault kind");
+                    : FaultKind.byId(e.getKey()).map(k -> "per part class (table)").orElse("not a fault kind");
             rows.add(new PdfFlow.Row(List.of(e.getKey().equals(FaultHunt.NONE) ? "none (healthy stage)" : e.getKey(),
                     plain(e.getValue()), def)));
         }
