@@ -131,7 +131,7 @@ public final class DiagnosisPanel extends VBox {
         add.setId("diag-add");
         add.setOnAction(e -> addReading());
         entry.setOnAction(e -> addReading());
-        Button remove = new Button("Remove");
+        Button remove = new Button("Remove selected");
         remove.setId("diag-remove");
         remove.setTooltip(new Tooltip("Remove the reading selected in the table"));
         remove.setOnAction(e -> {
@@ -140,7 +140,7 @@ public final class DiagnosisPanel extends VBox {
                 vm.removeReading(r.net(), r.state().equals("high"));
             }
         });
-        Button clear = new Button("Clear");
+        Button clear = new Button("Clear readings");
         clear.setId("diag-clear");
         clear.setTooltip(new Tooltip("Remove every reading (undoable)"));
         clear.setOnAction(e -> vm.clearReadings());
@@ -159,7 +159,9 @@ public final class DiagnosisPanel extends VBox {
             }
         });
         table.setId("diag-readings");
-        table.setPlaceholder(new Label("No readings yet: type one above or click a net on the drawing."));
+        Label none = new Label("No readings yet: type one above or click a net on the drawing.");
+        none.setWrapText(true);
+        table.setPlaceholder(none);
         table.getColumns().add(column("Point", Row::net, 90));
         table.getColumns().add(column("Pin", Row::state, 44));
         table.getColumns().add(column("Reading", Row::volts, 70));
@@ -182,7 +184,16 @@ public final class DiagnosisPanel extends VBox {
         dictionaryStatus.setWrapText(true);
         HBox symptomRow = new HBox(6, new Label("Symptom"), symptom);
         symptomRow.setAlignment(Pos.CENTER_LEFT);
-        getChildren().addAll(elsewhere, symptomRow, new HBox(4, entry, add, remove, clear), table, error, ranking, next,
+        HBox entryRow = new HBox(4, entry, add);
+        HBox tableButtons = new HBox(4, remove, clear);
+        for (Label l : List.of(error, elsewhere, dictionaryStatus)) {
+            // an empty message takes no room
+            l.managedProperty().bind(l.textProperty().isNotEmpty());
+            l.visibleProperty().bind(l.textProperty().isNotEmpty());
+        }
+        Label readingsTitle = bold("Readings");
+        // what is found first, then what was entered, then the settings (collapsed)
+        getChildren().addAll(elsewhere, symptomRow, entryRow, error, ranking, next, readingsTitle, table, tableButtons,
                 meterPane(), priorsPane(), dictionaryStatus);
         vm.stageProperty().addListener((o, a, b) -> update());
         vm.faultHuntProperty().addListener((o, a, b) -> update());
@@ -527,7 +538,7 @@ public final class DiagnosisPanel extends VBox {
             }
             b.append(String.format(Locale.ROOT, "%d. %s  %.1f %%", n, c.name(), 100 * c.probability()));
             for (Diagnosis.Explanation e : c.explains()) {
-                b.append(String.format(Locale.ROOT, "%n     %s@%s expected %.3g V, measured %.3g V", e.probe(),
+                b.append(String.format(Locale.ROOT, "%n     %s@%s expected %.3g V, read %.3g V", e.probe(),
                         e.pinHigh() ? "high" : "low", e.expectedVolts(), e.measuredVolts()));
             }
             b.append('\n');
@@ -605,6 +616,8 @@ public final class DiagnosisPanel extends VBox {
         hint.getStyleClass().add("status-message");
         HBox row = new HBox(4, high, low, volts, new Label("V"));
         row.setAlignment(Pos.CENTER_LEFT);
+        problem.managedProperty().bind(problem.textProperty().isNotEmpty());
+        what.managedProperty().bind(what.textProperty().isNotEmpty());
         VBox box = new VBox(4, title, what, row, problem, hint);
         box.setId("net-reading-editor");
         box.setPadding(new Insets(6));

@@ -159,6 +159,14 @@ public final class ExportDialog {
         Sheet sheet = snap.sheet(c.theme().palette()).withTitle(c.titleBlock());
         if (!c.readouts()) {
             sheet = sheet.withAnnotations(Annotations.NONE);
+        } else {
+            // the document's fault hunt on this stage: its readings tagged at their nets, as on the canvas
+            int index = doc.stages().indexOf(stage);
+            Optional<org.armature.model.FaultHunt> hunt = doc.faultHunt().filter(h -> h.stageIndex() == index);
+            if (hunt.isPresent() && !hunt.get().readings().isEmpty()) {
+                sheet = sheet.withAnnotations(sheet.annotations().withReadings(hunt.get().readings().stream()
+                        .map(r -> new Annotations.MeterReading(r.net(), r.pinHigh(), r.volts())).toList()));
+            }
         }
         return c.format() == Format.SVG ? SvgExport.toSvg(sheet).getBytes(StandardCharsets.UTF_8)
                 : PngExport.png(sheet, c.pngScale(), c.transparent());
