@@ -124,4 +124,21 @@ class FaultHuntDocumentTest {
         assertTrue(vm.messageProperty().get().contains("fault hunt"), vm.messageProperty().get());
         assertEquals(Optional.empty(), vm.document().faultHunt());
     }
+
+    @Test
+    @DisplayName("an SVG export of the hunted stage tags the readings at their net; another stage's export does not")
+    void exportDrawsTheReadings() {
+        EditorViewModel vm = vm(new MainWindowTest.MemoryStore());
+        vm.addReading(new FaultHunt.HuntReading("switch", true, 11.9));
+        StageDocument doc = vm.document();
+        ExportDialog.Choice c = new ExportDialog.Choice(ExportDialog.Format.SVG, 1, false,
+                org.armature.render.ExportTheme.LIGHT, true, true, true, Path.of("x.svg"));
+        String svg = new String(ExportDialog.render(c, doc, doc.stages().get(0), java.time.LocalDate.of(2026, 12, 5)),
+                java.nio.charset.StandardCharsets.UTF_8);
+        assertTrue(svg.contains("11.9 V"), "the reading's value is drawn");
+        StageDocument without = doc.withFaultHunt(Optional.empty());
+        String plain = new String(ExportDialog.render(c, without, without.stages().get(0),
+                java.time.LocalDate.of(2026, 12, 5)), java.nio.charset.StandardCharsets.UTF_8);
+        assertFalse(plain.contains("11.9 V"), "no hunt, no reading tag");
+    }
 }
