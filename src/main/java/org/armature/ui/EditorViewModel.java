@@ -824,11 +824,43 @@ public final class EditorViewModel {
         int i = editors.indexOf(editor);
         String name = editor.stage().name();
         boolean hunted = editor.hunt().isPresent();
+        deleted.push(new DeletedStage(editor, i));
         editors.remove(i);
         editor = editors.get(Math.min(i, editors.size() - 1));
         stagesChanged = true;
         publishDocument();
-        message.set("Deleted stage " + name + (hunted ? " and the fault hunt made on it" : ""));
+        message.set("Deleted stage " + name + (hunted ? " and the fault hunt made on it" : "")
+                + " (Stage ▸ Restore deleted stage brings it back)");
+        return true;
+    }
+
+    /** A stage deleted from the document, with its editor (history, selection, fault hunt) and place. */
+    private record DeletedStage(Editor editor, int index) {
+    }
+
+    /** Stages deleted since the document was opened, the last on top. */
+    private final java.util.ArrayDeque<DeletedStage> deleted = new java.util.ArrayDeque<>();
+
+    /**
+     * Puts the stage deleted last back where it was, with its undo history, its place in the
+     * line-up and the fault hunt made on it, and opens it. Nothing (and the message says so) when no
+     * stage was deleted.
+     *
+     * @return true when a stage was restored
+     */
+    public boolean restoreDeletedStage() {
+        DeletedStage d = deleted.poll();
+        if (d == null) {
+            message.set("No stage was deleted since the document was opened.");
+            return false;
+        }
+        editors.add(Math.min(d.index(), editors.size()), d.editor());
+        editor = d.editor();
+        stagesChanged = true;
+        preview.set(Optional.empty());
+        publishDocument();
+        message.set("Restored stage " + editor.stage().name()
+                + (editor.hunt().isPresent() ? " and the fault hunt made on it" : ""));
         return true;
     }
 
@@ -1111,6 +1143,7 @@ public final class EditorViewModel {
         lineUpEditors = doc.lineUp().map(l -> l.stageIndices().stream().map(editors::get).toList()).orElse(List.of());
         lineUpContext = doc.lineUp().map(org.armature.model.LineUp::context);
         sharedUndo.clear();
+        deleted.clear();
         stagesChanged = false;
         preview.set(Optional.empty());
         publishDocument();

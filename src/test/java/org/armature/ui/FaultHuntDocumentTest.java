@@ -123,6 +123,14 @@ class FaultHuntDocumentTest {
         assertTrue(vm.deleteStage());
         assertTrue(vm.messageProperty().get().contains("fault hunt"), vm.messageProperty().get());
         assertEquals(Optional.empty(), vm.document().faultHunt());
+        // and brought back with its stage, at its place
+        assertTrue(vm.restoreDeletedStage());
+        assertEquals(0, vm.document().faultHunt().orElseThrow().stageIndex());
+        assertEquals("second", vm.document().stages().get(0).name());
+        assertEquals(saved.readings(), vm.document().faultHunt().orElseThrow().readings());
+        assertTrue(vm.restoreDeletedStage(), "the first deleted stage comes back too");
+        assertEquals(3, vm.document().stages().size());
+        assertFalse(vm.restoreDeletedStage());
     }
 
     @Test
