@@ -59,6 +59,9 @@ import org.armature.units.Unit;
  */
 public final class DiagnosisPanel extends VBox {
 
+    /** Width of the wrapped text lines of the editor at a net, pixels. */
+    private static final double EDITOR_TEXT_WIDTH = 290;
+
     /** Candidates listed. */
     public static final int SHOWN = 5;
     /** What the ranking says while the stage's dictionary is being built. */
@@ -594,7 +597,8 @@ public final class DiagnosisPanel extends VBox {
         title.setStyle("-fx-font-weight: bold");
         Label what = new Label(words);
         what.setWrapText(true);
-        what.setMaxWidth(260);
+        what.setPrefWidth(EDITOR_TEXT_WIDTH);
+        what.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
         ToggleGroup state = new ToggleGroup();
         ToggleButton high = new ToggleButton("pin high");
         high.setId("net-reading-high");
@@ -610,7 +614,10 @@ public final class DiagnosisPanel extends VBox {
         Label problem = new Label();
         problem.setId("net-reading-error");
         problem.setWrapText(true);
-        problem.setMaxWidth(260);
+        problem.setPrefWidth(EDITOR_TEXT_WIDTH);
+        problem.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+        // a message shown or changed resizes the editor to it
+        problem.textProperty().addListener((o, a, b) -> Platform.runLater(canvas::fitEditor));
         problem.getStyleClass().add("status-message");
         Label hint = new Label("Enter adds the reading · Esc closes");
         hint.getStyleClass().add("status-message");
@@ -645,6 +652,9 @@ public final class DiagnosisPanel extends VBox {
             }
         };
         volts.setOnAction(e -> commit.run());
+        builtDictionary().filter(d -> d.probeIndex(net) < 0).ifPresent(d -> problem.setText("The net " + net
+                + " is not a probe point of this stage (a net joining two or more pins); probe one of: "
+                + String.join(", ", d.probes().stream().map(p -> p.name()).toList()) + "."));
         box.addEventFilter(javafx.scene.input.KeyEvent.KEY_PRESSED, e -> {
             if (e.getCode() == KeyCode.ESCAPE) {
                 canvas.closeEditor();

@@ -213,15 +213,31 @@ public final class SchematicCanvas extends Region {
     public void showEditor(javafx.scene.Node node, double canvasX, double canvasY) {
         closeEditor();
         editorNode = node;
+        editorX = canvasX;
+        editorY = canvasY;
         node.setManaged(false);
         getChildren().add(node);
+        fitEditor();
+    }
+
+    private double editorX;
+    private double editorY;
+
+    /** Sizes the editor shown to its content again (its text changed) and keeps it inside the canvas. */
+    public void fitEditor() {
+        if (editorNode == null) {
+            return;
+        }
+        javafx.scene.Node node = editorNode;
         node.applyCss();
-        node.autosize();
         double w = node.prefWidth(-1);
         double h = node.prefHeight(w);
         node.resize(w, h);
-        double x = Math.max(2, Math.min(canvasX + 12, getWidth() - w - 2));
-        double y = Math.max(2, Math.min(canvasY + 12, getHeight() - h - 2));
+        if (node instanceof javafx.scene.Parent p) {
+            p.layout();
+        }
+        double x = Math.max(2, Math.min(editorX + 12, getWidth() - w - 2));
+        double y = Math.max(2, Math.min(editorY + 12, getHeight() - h - 2));
         node.relocate(x, y);
     }
 
