@@ -12,9 +12,10 @@ import org.armature.model.PinRef;
  * @param badges a short verdict beside a part ("saturated, ×6.1 margin")
  * @param gauges coil current gauges beside relays
  * @param markers finding markers on parts
+ * @param readings meter readings a technician entered in a fault hunt, each at its net
  */
 public record Annotations(List<NodeVoltage> voltages, List<BranchCurrent> currents, List<PartBadge> badges,
-                          List<RelayGauge> gauges, List<FindingMarker> markers) {
+                          List<RelayGauge> gauges, List<FindingMarker> markers, List<MeterReading> readings) {
 
     /** No readouts. */
     public static final Annotations NONE = new Annotations(List.of(), List.of(), List.of(), List.of(), List.of());
@@ -25,11 +26,46 @@ public record Annotations(List<NodeVoltage> voltages, List<BranchCurrent> curren
         badges = List.copyOf(badges);
         gauges = List.copyOf(gauges);
         markers = List.copyOf(markers);
+        readings = List.copyOf(readings);
+    }
+
+    /** Readouts without meter readings. */
+    public Annotations(List<NodeVoltage> voltages, List<BranchCurrent> currents, List<PartBadge> badges,
+                       List<RelayGauge> gauges, List<FindingMarker> markers) {
+        this(voltages, currents, badges, gauges, markers, List.of());
+    }
+
+    /** The same readouts with these meter readings in place of any before. */
+    public Annotations withReadings(List<MeterReading> newReadings) {
+        return new Annotations(voltages, currents, badges, gauges, markers, newReadings);
     }
 
     /** True when nothing would be drawn. */
     public boolean isEmpty() {
-        return voltages.isEmpty() && currents.isEmpty() && badges.isEmpty() && gauges.isEmpty() && markers.isEmpty();
+        return voltages.isEmpty() && currents.isEmpty() && badges.isEmpty() && gauges.isEmpty() && markers.isEmpty()
+                && readings.isEmpty();
+    }
+
+    /**
+     * A meter reading the technician took, drawn as a tag at its net ("high 11.9 V") in the ink of
+     * the drawing rather than a solve's accent: it is measured, not computed. A net the drawing does
+     * not have (the {@code coil} probe across the relay coil, say) is not drawn.
+     *
+     * @param net net name as {@link org.armature.model.Connectivity} names it
+     * @param pinHigh the drive pin's state during the reading
+     * @param volts the value read, volts
+     */
+    public record MeterReading(String net, boolean pinHigh, double volts) {
+        public MeterReading {
+            if (net == null || net.isBlank()) {
+                throw new IllegalArgumentException("net must not be blank");
+            }
+        }
+
+        /** "high" or "low". */
+        public String state() {
+            return pinHigh ? "high" : "low";
+        }
     }
 
     /** How a verdict reads. */

@@ -45,6 +45,6 @@ public final class FaultMarks {
         byRef.forEach((ref, kinds) -> badges.add(
                 new Annotations.PartBadge(ref, PREFIX + String.join(", ", kinds), Annotations.State.FAIL)));
         badges.addAll(a.badges());
-        return new Annotations(a.voltages(), a.currents(), badges, a.gauges(), a.markers());
+        return new Annotations(a.voltages(), a.currents(), badges, a.gauges(), a.markers(), a.readings());
     }
 }

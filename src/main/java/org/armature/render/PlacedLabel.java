@@ -22,7 +22,12 @@ public record PlacedLabel(Kind kind, String owner, List<String> lines, Box box, 
                           double anchorX, double anchorY, Annotations.State state, Box target) {
 
     /** What a label is. */
-    public enum Kind { PART, TEST_POINT, VOLTAGE, CURRENT, BADGE, GAUGE, MARKER }
+    public enum Kind { PART, TEST_POINT, VOLTAGE, CURRENT, BADGE, GAUGE, MARKER,
+        /**
+         * A net's tag with the meter readings of a fault hunt under it; its owner is the net, its lines
+         * the net's name, its solved voltage (empty if not shown), then a row per pin state read.
+         */
+        READING }
 
     public PlacedLabel {
         lines = List.copyOf(lines);

@@ -432,6 +432,7 @@ public final class SchematicRenderer {
         }
         Set<String> shown = new HashSet<>();
         Connectivity c = Connectivity.of(stage);
+        Map<String, List<String>> readings = readingRows(a);
         for (TestPoint tp : stage.testPoints()) {
             Optional<Part> part = stage.part(tp.ref());
             if (part.isEmpty() || part.get().kind().pin(tp.pin()).isEmpty()) {
@@ -439,7 +440,12 @@ public final class SchematicRenderer {
             }
             GridPoint g = part.get().pinPoint(tp.pin());
             List<double[]> anchors = netAnchors(stage, c, tp.net(), g.gridX(), g.gridY());
-            if (volts.containsKey(tp.net()) && shown.add(tp.net())) {
+            if (readings.containsKey(tp.net())) {
+                if (shown.add(tp.net())) {
+                    out.add(readingTag(tp.net(), Optional.ofNullable(volts.get(tp.net())), readings.get(tp.net()), anchors,
+                            placer, before));
+                }
+            } else if (volts.containsKey(tp.net()) && shown.add(tp.net())) {
                 out.add(tag(PlacedLabel.Kind.VOLTAGE, tp.net(), List.of(tp.net(), Notation.format(volts.get(tp.net()), "V")),
                         "V", anchors, placer, before));
             } else {
@@ -448,11 +454,112 @@ public final class SchematicRenderer {
         }
         for (Annotations.NodeVoltage nv : a.voltages()) {
             if (shown.add(nv.net())) {
-                netAnchor(stage, c, nv.net()).ifPresent(g -> out.add(tag(PlacedLabel.Kind.VOLTAGE, nv.net(),
+                netAnchor(stage, c, nv.net()).ifPresent(g -> out.add(readings.containsKey(nv.net())
+                        ? readingTag(nv.net(), Optional.of(nv.volts()), readings.get(nv.net()),
+                                netAnchors(stage, c, nv.net(), g[0], g[1]), placer, before)
+                        : tag(PlacedLabel.Kind.VOLTAGE, nv.net(),
                         List.of(Notation.format(nv.volts(), "V")), "V", netAnchors(stage, c, nv.net(), g[0], g[1]),
                         placer, before)));
             }
         }
+        // readings at nets with no tag of the solve (a net shown without its voltage)
+        readings.forEach((net, rows) -> {
+            if (shown.add(net)) {
+                netAnchor(stage, c, net).ifPresent(g -> out.add(readingTag(net, Optional.empty(), rows,
+                        netAnchors(stage, c, net, g[0], g[1]), placer, before)));
+            }
+        });
+    }
+
+    /** Space between the readings of both pin states on a reading tag, grid units. */
+    private static final double READING_GAP = 0.35;
+    /** Space for the bar between a reading tag's net and its readings, grid units. */
+    private static final double READING_BAR = 0.5;
+
+    /** The rows of the meter readings per net ("high 120 mV", then "low 11.9 V"), in the order first entered. */
+    private static Map<String, List<String>> readingRows(Annotations a) {
+        Map<String, String[]> byNet = new java.util.LinkedHashMap<>();
+        for (Annotations.MeterReading r : a.readings()) {
+            String[] rows = byNet.computeIfAbsent(r.net(), k -> new String[2]);
+            int row = r.pinHigh() ? 0 : 1;
+            if (rows[row] == null) {
+                rows[row] = r.state() + " " + Notation.format(r.volts(), "V");
+            }
+        }
+        Map<String, List<String>> out = new java.util.LinkedHashMap<>();
+        byNet.forEach((net, rows) -> out.put(net, java.util.Arrays.stream(rows).filter(java.util.Objects::nonNull).toList()));
+        return out;
+    }
+
+    /**
+     * A net's tag with the fault hunt's readings: the net's name and its solved voltage (if shown),
+     * then each pin state read ("high 120 mV"). One tag per net, so the readings take no place of
+     * their own beside it. It is set in the first of three shapes that fits nearest (ties to the
+     * first): one row ("switch 11.9 V | high 120 mV  low 11.9 V"), the readings on a second row, or a
+     * row per reading; the drawing tells the shape from the box's height.
+     *
+     * @param volts the solved voltage of the net, if it is shown
+     */
+    private static PlacedLabel readingTag(String net, Optional<Double> volts, List<String> rows, List<double[]> anchors,
+                                          LabelPlacer placer, Map<String, PlacedLabel> before) {
+        List<String> lines = new ArrayList<>();
+        lines.add(net);
+        lines.add(volts.map(v -> Notation.format(v, "V")).orElse(""));
+        lines.addAll(rows);
+        double head = headWidth(lines);
+        double widest = 0;
+        double all = 0;
+        for (String r : rows) {
+            widest = Math.max(widest, readingWidth(r));
+            all += readingWidth(r);
+        }
+        all += (rows.size() - 1) * READING_GAP;
+        double[][] shapes = {
+            {head + READING_BAR + all, 1},
+            {Math.max(head, all), 2},
+            {Math.max(head, widest), 1 + rows.size()},
+        };
+        Box target = new Box(anchors.get(0)[0], anchors.get(0)[1], anchors.get(0)[0], anchors.get(0)[1]);
+        PlacedLabel old = before.get(PlacedLabel.Kind.READING + "|" + net);
+        if (old != null && old.target().equals(target)) {
+            for (double[] shape : shapes) {
+                Box again = resized(old.box(), shape[0] + 2 * PAD + 0.24, readingHeight((int) shape[1]),
+                        old.anchorX(), old.anchorY());
+                if (Math.abs(old.box().height() - again.height()) < 1e-9
+                        && placer.tryAt(again, old.anchorX(), old.anchorY())) {
+                    return new PlacedLabel(PlacedLabel.Kind.READING, net, lines, again, TextStyle.HAnchor.START,
+                            old.anchorX(), old.anchorY(), Annotations.State.OK, target);
+                }
+            }
+        }
+        LabelPlacer.Spot best = null;
+        for (double[] shape : shapes) {
+            LabelPlacer.Spot spot = placer.find(anchors, shape[0] + 2 * PAD + 0.24, readingHeight((int) shape[1]));
+            if (best == null || best.relaxed() && !spot.relaxed()
+                    || best.relaxed() == spot.relaxed() && spot.cost() < best.cost() - 1e-9) {
+                best = spot;
+            }
+        }
+        placer.take(best);
+        return new PlacedLabel(PlacedLabel.Kind.READING, net, lines, best.box(), TextStyle.HAnchor.START,
+                best.anchorX(), best.anchorY(), Annotations.State.OK, target);
+    }
+
+    /** Height of a reading tag of so many rows, grid units. */
+    private static double readingHeight(int rows) {
+        return rows * TAG.height() + 2 * PAD + 0.1;
+    }
+
+    /** Width of a reading tag's first row: the net's name, then its solved voltage if shown. */
+    private static double headWidth(List<String> lines) {
+        return TAG.weight(false).width(lines.get(0) + " ")
+                + (lines.get(1).isEmpty() ? 0 : BADGE_STYLE.width(reserved(lines.get(1), "V")));
+    }
+
+    /** Width of one reading, "high 120 mV": the state in regular weight, the value in bold. */
+    private static double readingWidth(String row) {
+        int space = row.indexOf(' ');
+        return TAG.weight(false).width(row.substring(0, space + 1)) + BADGE_STYLE.width(reserved(row.substring(space + 1), "V"));
     }
 
     /**
@@ -878,6 +985,49 @@ public final class SchematicRenderer {
                 double top = b.centreY() - (l.lines().size() - 1) * TAG.height() / 2;
                 for (int i = 0; i < l.lines().size(); i++) {
                     pen.text(l.lines().get(i), b.centreX(), top + i * TAG.height(), BADGE_STYLE, accent);
+                }
+            }
+            case READING -> {
+                // the net's tag with the meter readings: measured, not computed, so the readings are in
+                // the drawing's own ink and a double border sets the tag apart
+                leader(pen, l, pal.voltage(), true);
+                Box inner = b.inflate(-0.04);
+                pen.fillRect(inner, pal.tagFill());
+                pen.strokeRect(inner, pal.labelInk(), Stroke.solid(0.045));
+                pen.strokeRect(inner.inflate(-0.07), pal.labelInk(), Stroke.solid(0.02));
+                int shapeRows = (int) Math.round((b.height() - 2 * PAD - 0.1) / TAG.height());
+                double x = b.minX() + PAD + 0.12;
+                double y = b.centreY() - (shapeRows - 1) * TAG.height() / 2;
+                String name = l.lines().get(0) + " ";
+                pen.text(l.lines().get(0), x, y, TAG.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.MIDDLE),
+                        pal.valueInk());
+                if (!l.lines().get(1).isEmpty()) {
+                    pen.text(l.lines().get(1), x + TAG.weight(false).width(name), y,
+                            BADGE_STYLE.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.MIDDLE), pal.voltage());
+                }
+                double at;
+                if (shapeRows == 1) {
+                    at = x + headWidth(l.lines());
+                    pen.line(at + READING_BAR / 2, b.minY() + 0.16, at + READING_BAR / 2, b.maxY() - 0.16, pal.labelInk(),
+                            Stroke.solid(0.03));
+                    at += READING_BAR;
+                } else {
+                    at = x;
+                    y += TAG.height();
+                }
+                for (int i = 2; i < l.lines().size(); i++) {
+                    String row = l.lines().get(i);
+                    int space = row.indexOf(' ');
+                    String state = row.substring(0, space + 1);
+                    pen.text(state.strip(), at, y, TAG.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.MIDDLE),
+                            pal.valueInk());
+                    pen.text(row.substring(space + 1), at + TAG.weight(false).width(state), y,
+                            BADGE_STYLE.anchored(TextStyle.HAnchor.START, TextStyle.VAnchor.MIDDLE), pal.labelInk());
+                    if (shapeRows > 2) {
+                        y += TAG.height();
+                    } else {
+                        at += readingWidth(row) + READING_GAP;
+                    }
                 }
             }
             case GAUGE -> gauge(pen, l, pal, a);

@@ -20,6 +20,7 @@ import org.armature.model.StageRoles;
 import org.armature.analysis.Suggestion;
 import org.armature.analysis.TopologyCheck;
 import org.armature.io.StageFileException;
+import org.armature.model.FaultHunt;
 import org.armature.model.GridPoint;
 import org.armature.model.HighSideDrive;
 import org.armature.model.Part;
@@ -95,6 +96,8 @@ public final class EditorViewModel {
     private Stage submittedFor;
     private List<org.armature.analysis.faults.Fault> submittedFaults = List.of();
     private Stage faultedStage;
+    private final ReadOnlyObjectWrapper<Optional<FaultHunt>> faultHunt =
+            new ReadOnlyObjectWrapper<>(this, "faultHunt", Optional.empty());
     private Editor.Clip clipboard = new Editor.Clip(List.of(), List.of());
     private Stage coilSupplyOf;
     private Optional<String> coilSupplyRef = Optional.empty();
@@ -157,6 +160,11 @@ public final class EditorViewModel {
      */
     public Annotations annotations(Evaluation e) {
         Annotations a = filter(e.annotations(), shownReadouts.get());
+        if (faultHunt.get().isPresent() && !faultHunt.get().get().readings().isEmpty()) {
+            // the hunt's readings at their nets, whatever the toggles: they are what was entered
+            a = a.withReadings(faultHunt.get().get().readings().stream()
+                    .map(r -> new Annotations.MeterReading(r.net(), r.pinHigh(), r.volts())).toList());
+        }
         if (faultedStage != null && e.stage() == faultedStage) {
             a = org.armature.render.FaultMarks.marked(a,
                     submittedFaults.stream().map(org.armature.analysis.faults.Fault::id).toList());
@@ -242,6 +250,158 @@ public final class EditorViewModel {
             faults.set(valid);
         }
         return valid;
+    }
+
+    // ------------------------------------------------------------------ fault hunt (document state)
+
+    /**
+     * The fault hunt of the active stage (symptom, meter, readings, changed prior weights), its stage
+     * index that of the active stage; empty when none was entered on it. It is document state: kept
+     * in the stage's undo history, saved with the document ({@link #document()}), restored on open.
+     */
+    public ReadOnlyObjectProperty<Optional<FaultHunt>> faultHuntProperty() {
+        return faultHunt.getReadOnlyProperty();
+    }
+
+    /** The active stage's hunt, or an empty one on it (no symptom, default meter, no readings). */
+    public FaultHunt huntOrStart() {
+        return faultHunt.get().orElse(FaultHunt.start(editors.indexOf(editor)));
+    }
+
+    /**
+     * The name of another stage of the document holding the fault hunt, if the hunt is not on the
+     * active stage (a document keeps one hunt).
+     */
+    public Optional<String> huntElsewhere() {
+        return editors.stream().filter(e -> e != editor && e.hunt().isPresent()).findFirst().map(e -> e.stage().name());
+    }
+
+    /**
+     * Changes the active stage's fault hunt as one undoable step of that stage, in the user's words.
+     * A hunt left with nothing entered is no hunt. While another stage holds the document's hunt
+     * nothing changes and the message says where it is.
+     *
+     * @param change the new hunt made from the present one (or an empty one on this stage)
+     * @param label the words for the Undo menu ("Add reading switch@high")
+     * @return true when the change was made (or changed nothing)
+     */
+    public boolean changeHunt(java.util.function.UnaryOperator<FaultHunt> change, String label) {
+        Optional<String> other = huntElsewhere();
+        if (other.isPresent()) {
+            message.set("This document's fault hunt is on stage \"" + other.get()
+                    + "\"; open that stage to go on with it, or clear its hunt there to hunt on this one.");
+            return false;
+        }
+        int index = editors.indexOf(editor);
+        FaultHunt after = change.apply(huntOrStart()).onStage(index);
+        Optional<FaultHunt> next = after.equals(FaultHunt.start(index)) ? Optional.empty() : Optional.of(after);
+        edit(() -> editor.setHunt(next, label));
+        return true;
+    }
+
+    /** Adds a reading (one taken before at the same point and pin state is replaced), undoably. */
+    public boolean addReading(FaultHunt.HuntReading r) {
+        String at = r.net() + "@" + (r.pinHigh() ? "high" : "low");
+        boolean again = huntOrStart().readings().stream()
+                .anyMatch(x -> x.net().equals(r.net()) && x.pinHigh() == r.pinHigh());
+        return changeHunt(h -> {
+            List<FaultHunt.HuntReading> list = new ArrayList<>(h.readings());
+            int i = indexOf(list, r.net(), r.pinHigh());
+            if (i >= 0) {
+                list.set(i, r);
+            } else {
+                list.add(r);
+            }
+            return h.withReadings(list);
+        }, (again ? "Change reading " : "Add reading ") + at);
+    }
+
+    /** Removes the reading at a point and pin state, undoably. */
+    public boolean removeReading(String net, boolean pinHigh) {
+        return changeHunt(h -> {
+            List<FaultHunt.HuntReading> list = new ArrayList<>(h.readings());
+            int i = indexOf(list, net, pinHigh);
+            if (i >= 0) {
+                list.remove(i);
+            }
+            return h.withReadings(list);
+        }, "Remove reading " + net + "@" + (pinHigh ? "high" : "low"));
+    }
+
+    /** Removes every reading, undoably. */
+    public boolean clearReadings() {
+        return changeHunt(h -> h.withReadings(List.of()), "Clear readings");
+    }
+
+    /** Sets the symptom seen (empty: none), undoably. */
+    public boolean setSymptom(Optional<String> symptom) {
+        String from = huntOrStart().symptom().orElse("no symptom");
+        return changeHunt(h -> h.withSymptom(symptom), "Symptom " + from + " → " + symptom.orElse("no symptom"));
+    }
+
+    /** Sets the meter the readings are taken with, undoably, named by what changed. */
+    public boolean setMeter(FaultHunt.MeterSetting meter) {
+        return changeHunt(h -> h.withMeter(meter), meterWords(huntOrStart().meter(), meter));
+    }
+
+    /**
+     * Sets one fault kind's prior weight ({@link FaultHunt#NONE} for the healthy stage), undoably;
+     * a weight equal to the default is no change kept.
+     *
+     * @param kind the fault kind's word
+     * @param defaultWeight its default weight
+     * @param weight the new weight, not negative
+     */
+    public boolean setPriorWeight(String kind, double defaultWeight, double weight) {
+        double from = huntOrStart().priorWeights().getOrDefault(kind, defaultWeight);
+        return changeHunt(h -> {
+            java.util.Map<String, Double> m = new java.util.LinkedHashMap<>(h.priorWeights());
+            if (weight == defaultWeight || Double.isNaN(weight)) {
+                m.remove(kind);
+            } else {
+                m.put(kind, weight);
+            }
+            return h.withPriorWeights(m);
+        }, "Prior weight " + kind + " " + weightText(from) + " → " + weightText(weight));
+    }
+
+    /** Puts every prior weight back to its default, undoably. */
+    public boolean resetPriorWeights() {
+        return changeHunt(h -> h.withPriorWeights(java.util.Map.of()), "Reset prior weights");
+    }
+
+    private static int indexOf(List<FaultHunt.HuntReading> list, String net, boolean pinHigh) {
+        for (int i = 0; i < list.size(); i++) {
+            if (list.get(i).net().equals(net) && list.get(i).pinHigh() == pinHigh) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    private static String weightText(double w) {
+        return DiagnosisPanel.weightText(w);
+    }
+
+    /** "Meter input 10 MΩ → 1 MΩ", "Meter 4000 → 6000 counts", "Meter accuracy ±(1 % + 2 digits) → ±(0.5 % + 2 digits)". */
+    static String meterWords(FaultHunt.MeterSetting a, FaultHunt.MeterSetting b) {
+        List<String> parts = new ArrayList<>();
+        if (a.inputOhms() != b.inputOhms()) {
+            parts.add("input " + org.armature.render.Notation.format(a.inputOhms(), "Ω") + " → "
+                    + org.armature.render.Notation.format(b.inputOhms(), "Ω"));
+        }
+        if (a.counts() != b.counts()) {
+            parts.add(a.counts() + " → " + b.counts() + " counts");
+        }
+        if (a.percentOfReading() != b.percentOfReading() || a.digits() != b.digits()) {
+            parts.add("accuracy " + accuracyText(a) + " → " + accuracyText(b));
+        }
+        return "Meter " + (parts.isEmpty() ? "unchanged" : String.join(", ", parts));
+    }
+
+    /** "±(1 % + 2 digits)". */
+    public static String accuracyText(FaultHunt.MeterSetting m) {
+        return "±(" + weightText(m.percentOfReading()) + " % + " + weightText(m.digits()) + " digits)";
     }
 
     /** The stage being edited (document state: changes with each action, before it is solved). */
@@ -461,7 +621,11 @@ public final class EditorViewModel {
         Optional<org.armature.model.LineUp> lineUp = lineUpContext.isPresent()
                 && indices.size() >= org.armature.model.LineUp.MIN_STAGES
                 ? Optional.of(new org.armature.model.LineUp(indices, lineUpContext.get())) : Optional.empty();
-        return new StageDocument(title, editors.stream().map(Editor::stage).toList(), lineUp);
+        // one hunt per document: the active stage's if it has one, else the first stage's that has
+        Optional<FaultHunt> hunt = (editor.hunt().isPresent() ? Optional.of(editor)
+                : editors.stream().filter(e -> e.hunt().isPresent()).findFirst())
+                .map(e -> e.hunt().get().onStage(editors.indexOf(e)));
+        return new StageDocument(title, editors.stream().map(Editor::stage).toList(), lineUp, hunt);
     }
 
     // ------------------------------------------------------------------ stages of the document
@@ -659,11 +823,44 @@ public final class EditorViewModel {
         }
         int i = editors.indexOf(editor);
         String name = editor.stage().name();
+        boolean hunted = editor.hunt().isPresent();
+        deleted.push(new DeletedStage(editor, i));
         editors.remove(i);
         editor = editors.get(Math.min(i, editors.size() - 1));
         stagesChanged = true;
         publishDocument();
-        message.set("Deleted stage " + name);
+        message.set("Deleted stage " + name + (hunted ? " and the fault hunt made on it" : "")
+                + " (Stage ▸ Restore deleted stage brings it back)");
+        return true;
+    }
+
+    /** A stage deleted from the document, with its editor (history, selection, fault hunt) and place. */
+    private record DeletedStage(Editor editor, int index) {
+    }
+
+    /** Stages deleted since the document was opened, the last on top. */
+    private final java.util.ArrayDeque<DeletedStage> deleted = new java.util.ArrayDeque<>();
+
+    /**
+     * Puts the stage deleted last back where it was, with its undo history, its place in the
+     * line-up and the fault hunt made on it, and opens it. Nothing (and the message says so) when no
+     * stage was deleted.
+     *
+     * @return true when a stage was restored
+     */
+    public boolean restoreDeletedStage() {
+        DeletedStage d = deleted.poll();
+        if (d == null) {
+            message.set("No stage was deleted since the document was opened.");
+            return false;
+        }
+        editors.add(Math.min(d.index(), editors.size()), d.editor());
+        editor = d.editor();
+        stagesChanged = true;
+        preview.set(Optional.empty());
+        publishDocument();
+        message.set("Restored stage " + editor.stage().name()
+                + (editor.hunt().isPresent() ? " and the fault hunt made on it" : ""));
         return true;
     }
 
@@ -937,12 +1134,16 @@ public final class EditorViewModel {
 
     private void load(StageDocument doc) {
         editors.clear();
-        doc.stages().forEach(s -> editors.add(new Editor(s)));
+        for (int i = 0; i < doc.stages().size(); i++) {
+            int index = i;
+            editors.add(new Editor(doc.stages().get(i), doc.faultHunt().filter(h -> h.stageIndex() == index)));
+        }
         editor = editors.get(0);
         title = doc.title();
         lineUpEditors = doc.lineUp().map(l -> l.stageIndices().stream().map(editors::get).toList()).orElse(List.of());
         lineUpContext = doc.lineUp().map(org.armature.model.LineUp::context);
         sharedUndo.clear();
+        deleted.clear();
         stagesChanged = false;
         preview.set(Optional.empty());
         publishDocument();
@@ -968,6 +1169,10 @@ public final class EditorViewModel {
             stageNames.set(names);
         }
         activeStage.set(editors.indexOf(editor));
+        Optional<FaultHunt> h = editor.hunt().map(x -> x.onStage(editors.indexOf(editor)));
+        if (!h.equals(faultHunt.get())) {
+            faultHunt.set(h);
+        }
         Stage was = stage.get();
         stage.set(now);
         selection.set(editor.selection());
@@ -1007,6 +1212,6 @@ public final class EditorViewModel {
                 shown.contains(ReadoutKind.CURRENTS) ? a.currents() : List.of(),
                 shown.contains(ReadoutKind.BADGES) ? a.badges() : List.of(),
                 shown.contains(ReadoutKind.GAUGES) ? a.gauges() : List.of(),
-                shown.contains(ReadoutKind.MARKERS) ? a.markers() : List.of());
+                shown.contains(ReadoutKind.MARKERS) ? a.markers() : List.of(), a.readings());
     }
 }

@@ -148,17 +148,25 @@ public final class ExportDialog {
 
     /**
      * Renders a choice for a stage of a document: the document gives the title and, for the report,
-     * the line-up the stage belongs to.
+     * the line-up the stage belongs to and the fault hunt made on it.
      */
     public static byte[] render(Choice c, org.armature.model.StageDocument doc, Stage stage, LocalDate date) {
         StageSnapshot snap = StageSnapshot.evaluate(doc.title(), stage, c.pinHigh(),
                 c.format() == Format.PDF ? StageSnapshot.Depth.REPORT : StageSnapshot.Depth.DRAWING, date);
         if (c.format() == Format.PDF) {
-            return DesignReport.pdf(snap, DesignReport.lineUpOf(doc, stage));
+            return DesignReport.pdf(snap, DesignReport.sectionsOf(doc, stage));
         }
         Sheet sheet = snap.sheet(c.theme().palette()).withTitle(c.titleBlock());
         if (!c.readouts()) {
             sheet = sheet.withAnnotations(Annotations.NONE);
+        } else {
+            // the document's fault hunt on this stage: its readings tagged at their nets, as on the canvas
+            int index = doc.stages().indexOf(stage);
+            Optional<org.armature.model.FaultHunt> hunt = doc.faultHunt().filter(h -> h.stageIndex() == index);
+            if (hunt.isPresent() && !hunt.get().readings().isEmpty()) {
+                sheet = sheet.withAnnotations(sheet.annotations().withReadings(hunt.get().readings().stream()
+                        .map(r -> new Annotations.MeterReading(r.net(), r.pinHigh(), r.volts())).toList()));
+            }
         }
         return c.format() == Format.SVG ? SvgExport.toSvg(sheet).getBytes(StandardCharsets.UTF_8)
                 : PngExport.png(sheet, c.pngScale(), c.transparent());

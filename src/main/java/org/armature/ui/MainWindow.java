@@ -565,6 +565,8 @@ public final class MainWindow {
         TitledPane verdictPane = new TitledPane("Verdicts", verdicts);
         verdictPane.setId("verdicts-pane");
         DiagnosisPanel diagnosis = new DiagnosisPanel(vm);
+        // with the fault hunt open, a click on a net of the drawing offers to enter a reading there
+        canvas.setOnNetClicked((net, x, y) -> diagnosis.offerReading(net, canvas, x, y));
         ScrollPane diagScroll = new ScrollPane(diagnosis);
         diagScroll.setFitToWidth(true);
         TitledPane diagPane = new TitledPane("Fault diagnosis", diagScroll);

@@ -117,6 +117,8 @@ public final class SchematicCanvas extends Region {
         vm.previewProperty().addListener((o, a, b) -> redrawDrawing());
         vm.shownReadoutsProperty().addListener((o, a, b) -> redrawDrawing());
         vm.selectionProperty().addListener((o, a, b) -> redrawOverlay());
+        // a fault hunt's readings are drawn at their nets
+        vm.faultHuntProperty().addListener((o, a, b) -> redrawDrawing());
         addEventHandler(MouseEvent.MOUSE_PRESSED, this::pressed);
         addEventHandler(MouseEvent.MOUSE_DRAGGED, this::dragged);
         addEventHandler(MouseEvent.MOUSE_RELEASED, this::released);
@@ -127,7 +129,7 @@ public final class SchematicCanvas extends Region {
         // click rather than the platform's context-menu request, which comes at press on some systems
         // and not at all on others
         addEventHandler(MouseEvent.MOUSE_CLICKED, e -> {
-            if (e.getButton() != MouseButton.SECONDARY || !e.isStillSincePress()) {
+            if (e.getButton() != MouseButton.SECONDARY || !e.isStillSincePress() || fromEditor(e)) {
                 return;
             }
             HitTester.Hit hit = HitTester.at(vm.stage(), gridX(e.getX()), gridY(e.getY()), HIT_PIXELS / scale());
@@ -136,6 +138,121 @@ public final class SchematicCanvas extends Region {
                 e.consume();
             }
         });
+        // a left click without a drag on a net (a wire, a junction, a pin or the net's tag) while the
+        // fault hunt is open offers to enter a meter reading there
+        addEventHandler(MouseEvent.MOUSE_CLICKED, e -> {
+            if (e.getButton() != MouseButton.PRIMARY || !e.isStillSincePress() || e.getClickCount() != 1
+                    || vm.armedKindProperty().get().isPresent() || fromEditor(e)) {
+                return;
+            }
+            netAt(e.getX(), e.getY()).ifPresent(net -> {
+                if (netClicked.clicked(net, e.getX(), e.getY())) {
+                    e.consume();
+                }
+            });
+        });
+    }
+
+    /** What happens when a net is clicked: shown an editor (true) or nothing (false). */
+    @FunctionalInterface
+    public interface NetClick {
+        /**
+         * @param net the net's name, as {@link org.armature.model.Connectivity} names it
+         * @param canvasX where, in the canvas's coordinates
+         * @param canvasY where, in the canvas's coordinates
+         * @return true when the click was taken
+         */
+        boolean clicked(String net, double canvasX, double canvasY);
+    }
+
+    private NetClick netClicked = (net, x, y) -> false;
+    private javafx.scene.Node editorNode;
+
+    /** Sets what a click on a net does (the fault hunt offers a reading there); null: nothing. */
+    public void setOnNetClicked(NetClick handler) {
+        netClicked = handler == null ? (net, x, y) -> false : handler;
+    }
+
+    /**
+     * The net under a point of the canvas: a net's tag (voltage, test point, reading), else a pin, a
+     * wire or a junction of wires; empty over a part body or paper.
+     */
+    public Optional<String> netAt(double canvasX, double canvasY) {
+        double gx = gridX(canvasX);
+        double gy = gridY(canvasY);
+        if (lastLayout != null) {
+            for (org.armature.render.PlacedLabel l : lastLayout.labels()) {
+                if (l.box().contains(gx, gy)) {
+                    switch (l.kind()) {
+                        case VOLTAGE, TEST_POINT, READING -> {
+                            return Optional.of(l.owner());
+                        }
+                        default -> {
+                            return Optional.empty();
+                        }
+                    }
+                }
+            }
+        }
+        Stage st = vm.stage();
+        HitTester.Hit hit = HitTester.at(st, gx, gy, HIT_PIXELS / scale());
+        org.armature.model.Connectivity c = org.armature.model.Connectivity.of(st);
+        if (hit instanceof HitTester.WireHit w && w.index() < c.netOfWire().size()) {
+            return Optional.of(c.netOfWire().get(w.index()));
+        }
+        if (hit instanceof HitTester.PinHit p) {
+            return Optional.ofNullable(c.net(p.pin().ref(), p.pin().pin()));
+        }
+        return Optional.empty();
+    }
+
+    /**
+     * Shows a small editor on the canvas near a point (kept inside the canvas), replacing any shown;
+     * it stays until {@link #closeEditor()}.
+     */
+    public void showEditor(javafx.scene.Node node, double canvasX, double canvasY) {
+        closeEditor();
+        editorNode = node;
+        editorX = canvasX;
+        editorY = canvasY;
+        node.setManaged(false);
+        getChildren().add(node);
+        fitEditor();
+    }
+
+    private double editorX;
+    private double editorY;
+
+    /** Sizes the editor shown to its content again (its text changed) and keeps it inside the canvas. */
+    public void fitEditor() {
+        if (editorNode == null) {
+            return;
+        }
+        javafx.scene.Node node = editorNode;
+        node.applyCss();
+        double w = node.prefWidth(-1);
+        double h = node.prefHeight(w);
+        node.resize(w, h);
+        if (node instanceof javafx.scene.Parent p) {
+            p.layout();
+        }
+        double x = Math.max(2, Math.min(editorX + 12, getWidth() - w - 2));
+        double y = Math.max(2, Math.min(editorY + 12, getHeight() - h - 2));
+        node.relocate(x, y);
+    }
+
+    /** Closes the editor shown on the canvas, if any. */
+    public void closeEditor() {
+        if (editorNode != null) {
+            getChildren().remove(editorNode);
+            editorNode = null;
+            requestFocus();
+        }
+    }
+
+    /** The editor shown on the canvas, if any (tests). */
+    public Optional<javafx.scene.Node> editor() {
+        return Optional.ofNullable(editorNode);
     }
 
     /**
@@ -533,6 +650,10 @@ public final class SchematicCanvas extends Region {
     // ------------------------------------------------------------------ input
 
     private void pressed(MouseEvent e) {
+        if (fromEditor(e)) {
+            return;
+        }
+        closeEditor();
         requestFocus();
         pressScreenX = e.getX();
         pressScreenY = e.getY();
@@ -587,7 +708,24 @@ public final class SchematicCanvas extends Region {
         }
     }
 
+    /** True when an event comes from the editor shown on the canvas (its keys and clicks are its own). */
+    private boolean fromEditor(javafx.event.Event e) {
+        return editorNode != null && e.getTarget() instanceof javafx.scene.Node n && isInside(n, editorNode);
+    }
+
+    private static boolean isInside(javafx.scene.Node n, javafx.scene.Node root) {
+        for (javafx.scene.Node x = n; x != null; x = x.getParent()) {
+            if (x == root) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     private void dragged(MouseEvent e) {
+        if (fromEditor(e)) {
+            return;
+        }
         double gx = gridX(e.getX());
         double gy = gridY(e.getY());
         switch (gesture) {
@@ -630,6 +768,9 @@ public final class SchematicCanvas extends Region {
     }
 
     private void released(MouseEvent e) {
+        if (fromEditor(e)) {
+            return;
+        }
         double gx = gridX(e.getX());
         double gy = gridY(e.getY());
         switch (gesture) {
@@ -675,7 +816,7 @@ public final class SchematicCanvas extends Region {
     }
 
     private void scrolled(ScrollEvent e) {
-        if (e.getDeltaY() == 0) {
+        if (fromEditor(e) || e.getDeltaY() == 0) {
             return;
         }
         Optional<String[]> v = steppableValueAt(e.getX(), e.getY());
@@ -689,6 +830,9 @@ public final class SchematicCanvas extends Region {
     }
 
     private void key(KeyEvent e) {
+        if (fromEditor(e)) {
+            return;
+        }
         KeyCode k = e.getCode();
         boolean nudge = !vm.selectionProperty().get().refs().isEmpty() && !e.isShortcutDown();
         switch (k) {

@@ -95,7 +95,8 @@ public final class StageTabs extends HBox {
                 item("Move left", "stage-move-left", () -> vm.moveStage(-1)),
                 item("Move right", "stage-move-right", () -> vm.moveStage(1)),
                 new SeparatorMenuItem(),
-                item("Delete stage", "stage-delete", vm::deleteStage));
+                item("Delete stage", "stage-delete", vm::deleteStage),
+                item("Restore deleted stage", "stage-restore", vm::restoreDeletedStage));
     }
 
     private void askRename() {
@@ -132,6 +133,7 @@ public final class StageTabs extends HBox {
                 item("Rename stage…", "menu-stage-rename", this::askRename),
                 item("Move stage left", "menu-stage-move-left", () -> vm.moveStage(-1)),
                 item("Move stage right", "menu-stage-move-right", () -> vm.moveStage(1)),
-                new SeparatorMenuItem(), item("Delete stage", "menu-stage-delete", vm::deleteStage));
+                new SeparatorMenuItem(), item("Delete stage", "menu-stage-delete", vm::deleteStage),
+                item("Restore deleted stage", "menu-stage-restore", vm::restoreDeletedStage));
     }
 }

@@ -41,6 +41,14 @@ class LabelGeometryTest {
 
     /** Largest distance from a label to what it describes, grid units: "next to it" (our own bound: a little more than the pitch of the parts in the templates, 4 grid units). */
     static final double NEAR = 5.0;
+    /**
+     * Largest distance from a fault hunt's reading tag to its net, grid units: a net's tag with both
+     * pin states read is two to three times as wide as the net's plain voltage tag, and in the most
+     * crowded corner of the templates (the high-side PNP's switch net, walled in by the relay's
+     * contact wiring) the nearest place that keeps every rule is 5.2 units away (our own bound, with
+     * room to spare; every other rule holds for it as for any label).
+     */
+    static final double NEAR_READING = 7.5;
     /** Slack for comparisons of positions computed in floating point, grid units. */
     static final double EPS = 1e-6;
 
@@ -81,7 +89,18 @@ class LabelGeometryTest {
     static Annotations readouts(Stage st) {
         List<Finding> findings = TopologyCheck.check(st);
         OperatingPoint op = new DcAnalysis().solve(st);
-        return ReadoutBuilder.build(st, op, findings);
+        Annotations a = ReadoutBuilder.build(st, op, findings);
+        // a fault hunt's meter readings at the nets of the switch and the base or gate, both pin
+        // states, drawn with the solve's own tags (the window draws them so once readings are in)
+        Connectivity c = Connectivity.of(st);
+        List<Annotations.MeterReading> readings = new ArrayList<>();
+        for (String net : List.of("switch", "control")) {
+            if (!c.pinsOn(net).isEmpty()) {
+                readings.add(new Annotations.MeterReading(net, true, 0.12));
+                readings.add(new Annotations.MeterReading(net, false, 11.9));
+            }
+        }
+        return a.withReadings(readings);
     }
 
     @ParameterizedTest(name = "{0}")
@@ -143,7 +162,7 @@ class LabelGeometryTest {
         if (!targetHolds(st, c, l)) {
             problems.add("the leader of " + describe(l) + " ends at (" + ax + ", " + ay + "), off its target");
         }
-        if (l.box().distanceTo(ax, ay) > NEAR) {
+        if (l.box().distanceTo(ax, ay) > (l.kind() == PlacedLabel.Kind.READING ? NEAR_READING : NEAR)) {
             problems.add(describe(l) + " sits " + l.box().distanceTo(ax, ay) + " grid units from its target");
         }
         double[] q = LabelPlacer.nearestOnBox(l.box(), ax, ay);
@@ -167,6 +186,7 @@ class LabelGeometryTest {
         double ay = l.anchorY();
         return switch (l.kind()) {
             case VOLTAGE, TEST_POINT -> onNet(st, c, l.owner(), ax, ay);
+            case READING -> onNet(st, c, readingNet(l), ax, ay);
             case CURRENT -> {
                 String[] pr = l.owner().split("\\.");
                 String net = c.net(pr[0], pr[1]);
@@ -212,12 +232,18 @@ class LabelGeometryTest {
         String net = c.netOfWire().get(wire);
         return switch (l.kind()) {
             case VOLTAGE, TEST_POINT -> net.equals(l.owner());
+            case READING -> net.equals(readingNet(l));
             case CURRENT -> {
                 String[] pr = l.owner().split("\\.");
                 yield net.equals(c.net(pr[0], pr[1]));
             }
             default -> false;
         };
+    }
+
+    /** The net of a reading tag (its owner). */
+    private static String readingNet(PlacedLabel l) {
+        return l.owner();
     }
 
     private static String describe(PlacedLabel l) {

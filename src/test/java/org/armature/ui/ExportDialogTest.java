@@ -82,6 +82,26 @@ class ExportDialogTest {
         assertTrue(bare.contains(">K1</text>"), "the drawing itself stays");
     }
 
+    @Test
+    @DisplayName("the window's PDF of a document with a fault hunt prints the hunt, as export --pdf does "
+            + "(before the merge fix the dialog passed only the line-up and the section was missing)")
+    void reportHoldsTheFaultHunt() throws Exception {
+        org.armature.model.StageDocument doc = org.armature.io.StageFiles.open(
+                Path.of("examples/solar-pump-repair.stage.json"));
+        org.armature.model.FaultHunt hunt = doc.faultHunt().orElseThrow();
+        Stage hunted = doc.stages().get(hunt.stageIndex());
+        ExportDialog.Choice c = new ExportDialog.Choice(ExportDialog.Format.PDF, 1, false, ExportTheme.LIGHT,
+                true, true, true, Path.of("x.pdf"));
+        byte[] pdf = ExportDialog.render(c, doc, hunted, LocalDate.of(2026, 12, 5));
+        String text;
+        try (org.apache.pdfbox.pdmodel.PDDocument d = org.apache.pdfbox.Loader.loadPDF(pdf)) {
+            text = new org.apache.pdfbox.text.PDFTextStripper().getText(d).replaceAll("\\s+", " ");
+        }
+        assertTrue(text.contains("Fault hunt"), text);
+        String top = org.armature.analysis.faults.SavedHunt.rank(hunted, hunt).result().candidates().get(0).name();
+        assertTrue(text.contains(top), "the top candidate " + top + " in " + text);
+    }
+
     private static String svg(ExportDialog.Choice c) {
         return new String(ExportDialog.render(c, "Bench", Templates.defaultStage(), LocalDate.of(2026, 12, 5)),
                 StandardCharsets.UTF_8);

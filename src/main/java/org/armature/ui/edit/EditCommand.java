@@ -6,6 +6,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.TreeMap;
 import org.armature.model.Conditions;
+import org.armature.model.FaultHunt;
 import org.armature.model.Part;
 import org.armature.model.Placement;
 import org.armature.model.Stage;
@@ -24,7 +25,7 @@ import org.armature.render.Notation;
  */
 public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.RemovePart, EditCommand.MovePart,
         EditCommand.SetValue, EditCommand.SetOption, EditCommand.AddWire, EditCommand.RemoveWire,
-        EditCommand.SetConditions, EditCommand.SetHeader, EditCommand.SetTestPoints, EditCommand.RenamePart, EditCommand.Compound {
+        EditCommand.SetConditions, EditCommand.SetHeader, EditCommand.SetTestPoints, EditCommand.RenamePart, EditCommand.SetHunt, EditCommand.Compound {
 
     /** The stage after this edit. */
     Stage apply(Stage stage);
@@ -38,6 +39,15 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
     /** Commands with equal keys that follow each other merge into one undo step; empty: never merge. */
     default Optional<String> mergeKey() {
         return Optional.empty();
+    }
+
+    /**
+     * The stage's fault hunt after this edit, given the hunt before it: unchanged by every command
+     * but {@link SetHunt} (and a {@link Compound} holding one). The hunt's stage index is not read
+     * here; the view model sets it from the stage's place in the document.
+     */
+    default Optional<FaultHunt> huntAfter(Optional<FaultHunt> before) {
+        return before;
     }
 
     /**
@@ -460,6 +470,37 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
     }
 
     /**
+     * Changes the stage's fault hunt (symptom, meter, readings, prior weights); the stage itself is
+     * untouched. Kept in the stage's history so that a reading entered is undone like any edit.
+     *
+     * @param before the hunt before (empty: none)
+     * @param after the hunt after (empty: none)
+     * @param label the user's words ("Add reading switch@high")
+     */
+    record SetHunt(Optional<FaultHunt> before, Optional<FaultHunt> after, String label) implements EditCommand {
+        public SetHunt {
+            if (before == null || after == null || label == null) {
+                throw new IllegalArgumentException("a hunt edit needs its hunt before, after and its words");
+            }
+        }
+
+        @Override
+        public Stage apply(Stage s) {
+            return s;
+        }
+
+        @Override
+        public Optional<FaultHunt> huntAfter(Optional<FaultHunt> was) {
+            return after;
+        }
+
+        @Override
+        public EditCommand inverse() {
+            return new SetHunt(after, before, label);
+        }
+    }
+
+    /**
      * Several commands applied in order as one step (cascades: a delete with its wires, a move with
      * the wires that follow it, a paste).
      *
@@ -482,6 +523,15 @@ public sealed interface EditCommand permits EditCommand.AddPart, EditCommand.Rem
             Stage out = s;
             for (EditCommand c : steps) {
                 out = c.apply(out);
+            }
+            return out;
+        }
+
+        @Override
+        public Optional<FaultHunt> huntAfter(Optional<FaultHunt> before) {
+            Optional<FaultHunt> out = before;
+            for (EditCommand c : steps) {
+                out = c.huntAfter(out);
             }
             return out;
         }

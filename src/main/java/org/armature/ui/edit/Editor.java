@@ -42,10 +42,35 @@ public final class Editor {
     private Stage stage;
     private Selection selection = Selection.EMPTY;
     private final History history = new History();
+    /** The fault hunt made on this stage, changed only through {@link EditCommand.SetHunt} after the start. */
+    private Optional<org.armature.model.FaultHunt> hunt = Optional.empty();
 
     /** A session on a stage, clean. */
     public Editor(Stage stage) {
         this.stage = stage;
+    }
+
+    /** A session on a stage with the fault hunt it was opened with, clean. */
+    public Editor(Stage stage, Optional<org.armature.model.FaultHunt> hunt) {
+        this.stage = stage;
+        this.hunt = hunt;
+    }
+
+    /** The fault hunt made on this stage, if any (its stage index is whatever it was last given). */
+    public Optional<org.armature.model.FaultHunt> hunt() {
+        return hunt;
+    }
+
+    /**
+     * Changes the fault hunt as one undoable step in the user's words; nothing when it is unchanged.
+     *
+     * @param after the hunt after (empty: none)
+     * @param label the words of the step ("Add reading switch@high")
+     */
+    public void setHunt(Optional<org.armature.model.FaultHunt> after, String label) {
+        if (!after.equals(hunt)) {
+            execute(new EditCommand.SetHunt(hunt, after, label));
+        }
     }
 
     /** The stage as it stands. */
@@ -66,6 +91,7 @@ public final class Editor {
     /** Replaces the stage (new from template, file opened): history cleared, selection emptied, clean. */
     public void load(Stage newStage) {
         stage = newStage;
+        hunt = Optional.empty();
         selection = Selection.EMPTY;
         history.clear();
     }
@@ -90,11 +116,14 @@ public final class Editor {
     /** Executes a command and records it. */
     public void execute(EditCommand c) {
         stage = history.execute(stage, c);
+        hunt = c.huntAfter(hunt);
         select(selection);
     }
 
     /** Undoes the last step; false when there was none. */
     public boolean undo() {
+        Optional<EditCommand> c = history.nextUndo();
+        c.ifPresent(x -> hunt = x.inverse().huntAfter(hunt));
         Optional<Stage> s = history.undo(stage);
         s.ifPresent(v -> stage = v);
         select(selection);
@@ -103,6 +132,8 @@ public final class Editor {
 
     /** Redoes the last undone step; false when there was none. */
     public boolean redo() {
+        Optional<EditCommand> c = history.nextRedo();
+        c.ifPresent(x -> hunt = x.huntAfter(hunt));
         Optional<Stage> s = history.redo(stage);
         s.ifPresent(v -> stage = v);
         select(selection);

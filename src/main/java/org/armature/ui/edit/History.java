@@ -62,6 +62,16 @@ public final class History {
         return Optional.of(s.command.apply(stage));
     }
 
+    /** The command Undo would take back (not taken back here). */
+    public Optional<EditCommand> nextUndo() {
+        return Optional.ofNullable(undo.peek()).map(Step::command);
+    }
+
+    /** The command Redo would repeat (not repeated here). */
+    public Optional<EditCommand> nextRedo() {
+        return Optional.ofNullable(redo.peek()).map(Step::command);
+    }
+
     /** True when there is a step to undo. */
     public boolean canUndo() {
         return !undo.isEmpty();
