@@ -161,8 +161,49 @@ public class LineUpWaveformsBench {
         return pen;
     }
 
+    /**
+     * The window's situation right after a second change: the first change's corner checks still run
+     * on the other thread (the analyses' executor) while the new change's DC figures and turn-off
+     * runs go on the solve thread. Here a thread runs the high-side stage's checks over and over
+     * (the slowest, most of a second each) for the whole trial.
+     */
+    @State(Scope.Benchmark)
+    public static class ChecksBeside {
+        private Thread busy;
+        private volatile boolean running;
+
+        /** Starts the checks thread. */
+        @Setup(Level.Trial)
+        public void start() {
+            Stage pnp = changed(fourTemplates(), 0).get(StageTemplate.HIGH_SIDE_PNP.ordinal()).stage();
+            running = true;
+            busy = new Thread(() -> {
+                while (running) {
+                    LineUpMetrics.checks(pnp);
+                }
+            }, "checks-beside");
+            busy.setDaemon(true);
+            busy.start();
+        }
+
+        /** Stops it after the check under way. */
+        @TearDown(Level.Trial)
+        public void stop() throws InterruptedException {
+            running = false;
+            busy.join();
+        }
+    }
+
+    /** {@link #toWaveforms} while another thread runs corner checks (the previous change's). */
+    @Benchmark
+    public RecordingPen toWaveformsWhileChecksRun(ChecksBeside beside) {
+        return toWaveforms();
+    }
+
     /** One phase of one template's stage in the line-up, the shared supply alternating as above. */
     @State(Scope.Benchmark)
+    @BenchmarkMode(Mode.SampleTime)
+    @OutputTimeUnit(TimeUnit.MILLISECONDS)
     public static class Phases {
 
         @Param({"LOW_SIDE_NPN", "LOW_SIDE_NMOS", "DARLINGTON_CHANNEL", "HIGH_SIDE_PNP"})
