@@ -36,6 +36,11 @@ import org.armature.units.Unit;
  * settings and the transient engine). Nothing here computes a figure a second way: a row is a number
  * one of those runs reports.
  *
+ * <p>A column is made of four {@link Phase}s, each its own method ({@link #dc}, {@link #turnOff},
+ * {@link #turnOn(Stage, PhaseResult)}, {@link #checks}) and put together by {@link #column};
+ * {@link #evaluate} runs the four in order, and the window runs the same methods one by one to show
+ * each as it finishes, so there is one code path for the numbers.
+ *
  * <p>A figure that a run did not give (no drive pin, contacts never opened, no Monte Carlo samples
  * asked for, a run that failed) is NaN and is left out of the best-value marking.
  */
@@ -192,11 +197,6 @@ public final class LineUpMetrics {
         /** True when the phase that gives this metric has not arrived yet. */
         public boolean pending(Metric metric) {
             return !phases.contains(phaseOf(metric));
-        }
-
-        /** True when every phase is done. */
-        public boolean complete() {
-            return phases.size() == Phase.values().length;
         }
     }
 
