@@ -422,7 +422,7 @@ public final class EditorViewModel {
      * {@code progress} on the FX executor: at once the pending progress (nothing arrived), then the DC
      * figures of every stage, the turn-off runs with their waveforms (a few milliseconds each,
      * {@code LineUpWaveformsBench}), the turn-on runs, all on the solve executor; then each stage's
-     * corner checks and yield on the analyses' executor (most of a second per stage). A newer call
+     * corner checks and yield on the analyses' executor (tens of milliseconds per stage, the bulk of the work). A newer call
      * makes the older one's results drop, so the view never shows a figure from before the change it
      * shows. A failure is said in {@link #messageProperty()}.
      *

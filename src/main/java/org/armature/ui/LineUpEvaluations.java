@@ -14,7 +14,7 @@ import org.armature.model.Stage;
  * published at once with nothing arrived ({@link LineUpProgress#pending}); then on the fast executor,
  * stage by stage, the {@link LineUpMetrics.Phase#DC} figures of all stages, the turn-off runs (the
  * overlaid waveforms and their figures), the turn-on runs; then each stage's corner checks and yield
- * on the slow executor, so the checks of one change (most of a second per stage) never hold up the
+ * on the slow executor, so the checks of one change (the bulk of the work) never hold up the
  * DC readouts and waveforms of the next. Each finished phase goes to the publish executor, where it
  * is added to the current progress and the whole progress handed to the sink.
  *

@@ -165,7 +165,7 @@ public class LineUpWaveformsBench {
      * The window's situation right after a second change: the first change's corner checks still run
      * on the other thread (the analyses' executor) while the new change's DC figures and turn-off
      * runs go on the solve thread. Here a thread runs the high-side stage's checks over and over
-     * (the slowest, most of a second each) for the whole trial.
+     * (the slowest, about 80 ms each) for the whole trial.
      */
     @State(Scope.Benchmark)
     public static class ChecksBeside {
