@@ -36,6 +36,11 @@ import org.armature.units.Unit;
  * settings and the transient engine). Nothing here computes a figure a second way: a row is a number
  * one of those runs reports.
  *
+ * <p>A column is made of four {@link Phase}s, each its own method ({@link #dc}, {@link #turnOff},
+ * {@link #turnOn(Stage, PhaseResult)}, {@link #checks}) and put together by {@link #column};
+ * {@link #evaluate} runs the four in order, and the window runs the same methods one by one to show
+ * each as it finishes, so there is one code path for the numbers.
+ *
  * <p>A figure that a run did not give (no drive pin, contacts never opened, no Monte Carlo samples
  * asked for, a run that failed) is NaN and is left out of the best-value marking.
  */
@@ -88,30 +93,110 @@ public final class LineUpMetrics {
             new Metric("yield", "Monte Carlo yield (stage's own samples)", Unit.RATIO, "", Better.HIGHER, "check"));
 
     /**
+     * The runs a column is made of, in the order the window publishes them after a change: the
+     * operating point (milliseconds), the turn-off run with its waveform, the turn-on run, then the
+     * corner checks and the yield (the slow part: 14 to 82 ms per template stage at the median, LineUpWaveformsBench).
+     */
+    public enum Phase {
+        /** {@code solve}: coil current, switch verdict and margin, pin current, switch dissipation; parts count. */
+        DC,
+        /** {@code simulate}: the turn-off waveform, peak switch voltage, decay, release, suppressor energy, armature speed. */
+        TURN_OFF,
+        /** {@code simulate --edge on}: the operate time. */
+        TURN_ON,
+        /** {@code check}: worst-corner coil voltage and margin, junction temperature, yield, every check. */
+        CHECKS
+    }
+
+    /** Which phase gives each metric, by key. */
+    private static final Map<String, Phase> PHASE_OF = Map.ofEntries(
+            Map.entry("coilCurrent", Phase.DC), Map.entry("switchMargin", Phase.DC), Map.entry("pinCurrent", Phase.DC),
+            Map.entry("switchPower", Phase.DC), Map.entry("partsCount", Phase.DC),
+            Map.entry("peakSwitchVoltage", Phase.TURN_OFF), Map.entry("decayToDropOutCurrent", Phase.TURN_OFF),
+            Map.entry("releaseTime", Phase.TURN_OFF), Map.entry("suppressorEnergy", Phase.TURN_OFF),
+            Map.entry("armatureSpeedAtBreak", Phase.TURN_OFF), Map.entry("operateTime", Phase.TURN_ON),
+            Map.entry("coilVoltageWorstCorner", Phase.CHECKS), Map.entry("operateMargin", Phase.CHECKS),
+            Map.entry("junctionTemperature", Phase.CHECKS), Map.entry("yield", Phase.CHECKS));
+
+    /** The phase whose run gives a metric. */
+    public static Phase phaseOf(Metric metric) {
+        Phase p = PHASE_OF.get(metric.key());
+        if (p == null) {
+            throw new IllegalArgumentException("no phase gives the metric " + metric.key());
+        }
+        return p;
+    }
+
+    /**
+     * What one phase gave for one stage: its own metrics only (a metric of another phase is absent),
+     * and whatever else that run reports.
+     *
+     * @param phase which run
+     * @param values the metrics of this phase by key, NaN where the run did not give one
+     * @param switchFullyOn solve's switch verdict ({@link Phase#DC} only)
+     * @param turnOff the turn-off waveform ({@link Phase#TURN_OFF} only, when it ran)
+     * @param report the checks ({@link Phase#CHECKS} only)
+     * @param notes the run's failure, in words, if it failed
+     */
+    public record PhaseResult(Phase phase, Map<String, Double> values, Optional<Boolean> switchFullyOn,
+                              Optional<org.armature.solver.timedomain.Waveform> turnOff,
+                              Optional<CheckReport> report, List<String> notes) {
+
+        public PhaseResult {
+            values = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(values));
+            notes = List.copyOf(notes);
+        }
+
+        /** True when the run itself failed (a note says why). */
+        public boolean failed() {
+            return !notes.isEmpty();
+        }
+    }
+
+    /**
      * One stage's column.
      *
      * @param stage the stage as judged (shared context applied, if any)
-     * @param values every metric of {@link #METRICS} by key, NaN where not available
+     * @param values every metric of {@link #METRICS} by key, NaN where not available (or its phase is
+     *     not done yet)
      * @param switchFullyOn solve's switch verdict; empty when no part switches a relay coil or the
      *     stage has no operating point
-     * @param report the checks, exactly as {@code check} reports them
+     * @param report the checks, exactly as {@code check} reports them (empty until {@link Phase#CHECKS}
+     *     is done)
      * @param differences where the stage's own parts differed from the shared context
      * @param notes runs that failed, in words
      * @param turnOff the turn-off run's waveform (the one {@code simulate} makes), if it ran
+     * @param phases the phases done; {@link #evaluate} gives all of them, the window's evaluation
+     *     ({@link #column}) those that have arrived
      */
     public record Column(Stage stage, Map<String, Double> values, Optional<Boolean> switchFullyOn,
                          CheckReport report, List<LineUpContext.Difference> differences, List<String> notes,
-                         Optional<org.armature.solver.timedomain.Waveform> turnOff) {
+                         Optional<org.armature.solver.timedomain.Waveform> turnOff, java.util.Set<Phase> phases) {
 
         public Column {
             values = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(values));
             differences = List.copyOf(differences);
             notes = List.copyOf(notes);
+            phases = phases.isEmpty() ? java.util.Collections.unmodifiableSet(java.util.EnumSet.noneOf(Phase.class))
+                    : java.util.Collections.unmodifiableSet(java.util.EnumSet.copyOf(phases));
+        }
+
+        /** A finished column: every phase done. */
+        public Column(Stage stage, Map<String, Double> values, Optional<Boolean> switchFullyOn, CheckReport report,
+                      List<LineUpContext.Difference> differences, List<String> notes,
+                      Optional<org.armature.solver.timedomain.Waveform> turnOff) {
+            this(stage, values, switchFullyOn, report, differences, notes, turnOff,
+                    java.util.EnumSet.allOf(Phase.class));
         }
 
         /** The value of a metric, NaN when not available. */
         public double value(String key) {
             return values.getOrDefault(key, Double.NaN);
+        }
+
+        /** True when the phase that gives this metric has not arrived yet. */
+        public boolean pending(Metric metric) {
+            return !phases.contains(phaseOf(metric));
         }
     }
 
@@ -140,19 +225,40 @@ public final class LineUpMetrics {
     }
 
     /**
-     * The column of a stage with a shared context applied ({@link LineUpContext#applyTo(Stage)}).
-     * Like the commands, the solve and the checks each start a fresh {@link DcAnalysis}: an engine
-     * that has solved another stage starts its Newton iterations elsewhere and may land a few units in
-     * the last place away, and the line-up must give the commands' numbers exactly.
+     * The column of a stage with a shared context applied ({@link LineUpContext#applyTo(Stage)}): the
+     * four phases in order ({@link #dc}, {@link #turnOff}, {@link #turnOn}, {@link #checks}) put
+     * together by {@link #column}, the same methods the window runs one by one. Like the commands,
+     * the solve and the checks each start a fresh {@link DcAnalysis}: an engine that has solved
+     * another stage starts its Newton iterations elsewhere and may land a few units in the last place
+     * away, and the line-up must give the commands' numbers exactly.
      */
     public static Column evaluate(LineUpContext.Applied applied) {
         Stage stage = applied.stage();
-        Map<String, Double> v = new LinkedHashMap<>();
-        METRICS.forEach(m -> v.put(m.key(), Double.NaN));
+        PhaseResult dc = dc(stage);
+        PhaseResult off = turnOff(stage);
+        PhaseResult on = turnOn(stage, off);
+        return column(applied, List.of(dc, off, on, checks(stage)));
+    }
+
+    /**
+     * Runs one phase of a stage; {@link Phase#TURN_ON} runs regardless of the turn-off (use
+     * {@link #turnOn(Stage, PhaseResult)} to skip it after a failed turn-off, as {@link #evaluate} does).
+     */
+    public static PhaseResult run(Phase phase, Stage stage) {
+        return switch (phase) {
+            case DC -> dc(stage);
+            case TURN_OFF -> turnOff(stage);
+            case TURN_ON -> turnOn(stage);
+            case CHECKS -> checks(stage);
+        };
+    }
+
+    /** {@link Phase#DC}: {@code solve} on a fresh engine with the default options, and the parts count. */
+    public static PhaseResult dc(Stage stage) {
+        Map<String, Double> v = nanValues(Phase.DC);
         List<String> notes = new ArrayList<>();
-        Optional<StageRoles> roles = StageRecognition.of(stage).roles();
         Optional<Boolean> fullyOn = Optional.empty();
-        Optional<org.armature.solver.timedomain.Waveform> wave = Optional.empty();
+        Optional<StageRoles> roles = StageRecognition.of(stage).roles();
         try {
             OperatingPoint op = new DcAnalysis().solve(stage, SolveOptions.DEFAULT);
             Optional<SwitchVerdict> verdict = op.switchVerdict();
@@ -168,20 +274,58 @@ public final class LineUpMetrics {
         } catch (SolverException e) {
             notes.add("no operating point: " + e.getMessage());
         }
+        v.put("partsCount", (double) stage.parts().stream().filter(p -> p.kind() != PartKind.GROUND).count());
+        return new PhaseResult(Phase.DC, v, fullyOn, Optional.empty(), Optional.empty(), notes);
+    }
+
+    /** {@link Phase#TURN_OFF}: the default turn-off run of {@code simulate}, with its waveform. */
+    public static PhaseResult turnOff(Stage stage) {
+        Map<String, Double> v = nanValues(Phase.TURN_OFF);
         try {
             TransientResult offRun = TransientAnalysis.run(stage, turnOffOptions());
-            wave = Optional.of(offRun.waveform());
             TransientMetrics off = offRun.metrics();
             v.put("peakSwitchVoltage", off.peakSwitchVolts());
             v.put("decayToDropOutCurrent", off.decayToReleaseCurrentSeconds());
             v.put("releaseTime", off.releaseTimeSeconds());
             v.put("suppressorEnergy", off.suppressorEnergyJoules());
             v.put("armatureSpeedAtBreak", off.armatureSpeedAtBreakMetresPerSecond());
-            TransientResult on = TransientAnalysis.run(stage, turnOnOptions());
-            v.put("operateTime", on.metrics().operateTimeSeconds());
+            return new PhaseResult(Phase.TURN_OFF, v, Optional.empty(), Optional.of(offRun.waveform()),
+                    Optional.empty(), List.of());
         } catch (SolverException | TransientFailureException e) {
-            notes.add("could not be simulated: " + e.getMessage());
+            return new PhaseResult(Phase.TURN_OFF, v, Optional.empty(), Optional.empty(), Optional.empty(),
+                    List.of("could not be simulated: " + e.getMessage()));
         }
+    }
+
+    /** {@link Phase#TURN_ON}: the turn-on run of {@code simulate --edge on}, for the operate time. */
+    public static PhaseResult turnOn(Stage stage) {
+        Map<String, Double> v = nanValues(Phase.TURN_ON);
+        try {
+            v.put("operateTime", TransientAnalysis.run(stage, turnOnOptions()).metrics().operateTimeSeconds());
+            return new PhaseResult(Phase.TURN_ON, v, Optional.empty(), Optional.empty(), Optional.empty(), List.of());
+        } catch (SolverException | TransientFailureException e) {
+            return new PhaseResult(Phase.TURN_ON, v, Optional.empty(), Optional.empty(), Optional.empty(),
+                    List.of("could not be simulated: " + e.getMessage()));
+        }
+    }
+
+    /**
+     * {@link Phase#TURN_ON} after the turn-off: not run when the turn-off could not be simulated (both
+     * start from the same stage and fail the same way; one note says so), otherwise {@link #turnOn(Stage)}.
+     */
+    public static PhaseResult turnOn(Stage stage, PhaseResult turnOff) {
+        if (turnOff.phase() != Phase.TURN_OFF) {
+            throw new IllegalArgumentException("expected the turn-off phase, was " + turnOff.phase());
+        }
+        return turnOff.failed()
+                ? new PhaseResult(Phase.TURN_ON, nanValues(Phase.TURN_ON), Optional.empty(), Optional.empty(),
+                        Optional.empty(), List.of())
+                : turnOn(stage);
+    }
+
+    /** {@link Phase#CHECKS}: {@code check} with the stage's own settings on a fresh engine. */
+    public static PhaseResult checks(Stage stage) {
+        Map<String, Double> v = nanValues(Phase.CHECKS);
         CheckReport report = StageChecks.run(stage, CheckOptions.DEFAULT.withSettings(stage.settings()),
                 new DcAnalysis());
         report.check("relay.operates").ifPresent(c -> {
@@ -190,8 +334,52 @@ public final class LineUpMetrics {
         });
         report.check("thermal.switch-junction").ifPresent(c -> v.put("junctionTemperature", c.value()));
         report.yield().ifPresent(y -> v.put("yield", y.yield()));
-        v.put("partsCount", (double) stage.parts().stream().filter(p -> p.kind() != PartKind.GROUND).count());
-        return new Column(stage, v, fullyOn, report, applied.differences(), notes, wave);
+        return new PhaseResult(Phase.CHECKS, v, Optional.empty(), Optional.empty(), Optional.of(report), List.of());
+    }
+
+    /**
+     * A column from the phases done so far (any order, each at most once): their metrics, NaN for the
+     * rest; an empty check report until {@link Phase#CHECKS} is in; notes in phase order.
+     *
+     * @throws IllegalArgumentException if a phase is given twice
+     */
+    public static Column column(LineUpContext.Applied applied, List<PhaseResult> done) {
+        Map<String, Double> v = new LinkedHashMap<>();
+        METRICS.forEach(m -> v.put(m.key(), Double.NaN));
+        java.util.EnumMap<Phase, PhaseResult> by = new java.util.EnumMap<>(Phase.class);
+        for (PhaseResult r : done) {
+            if (by.put(r.phase(), r) != null) {
+                throw new IllegalArgumentException("the phase " + r.phase() + " is given twice");
+            }
+        }
+        List<String> notes = new ArrayList<>();
+        Optional<Boolean> fullyOn = Optional.empty();
+        Optional<org.armature.solver.timedomain.Waveform> wave = Optional.empty();
+        CheckReport report = new CheckReport(List.of(), Optional.empty(), List.of(), 0);
+        for (PhaseResult r : by.values()) {
+            v.putAll(r.values());
+            notes.addAll(r.notes());
+            if (r.switchFullyOn().isPresent()) {
+                fullyOn = r.switchFullyOn();
+            }
+            if (r.turnOff().isPresent()) {
+                wave = r.turnOff();
+            }
+            if (r.report().isPresent()) {
+                report = r.report().get();
+            }
+        }
+        return new Column(applied.stage(), v, fullyOn, report, applied.differences(), notes, wave, by.keySet());
+    }
+
+    private static Map<String, Double> nanValues(Phase phase) {
+        Map<String, Double> v = new LinkedHashMap<>();
+        for (Metric m : METRICS) {
+            if (phaseOf(m) == phase) {
+                v.put(m.key(), Double.NaN);
+            }
+        }
+        return v;
     }
 
     /**

@@ -64,6 +64,8 @@ public final class EditorViewModel {
     /** Where line-up figures are computed, and where they are published. */
     private final Executor solveExecutor;
     private final Executor fxExecutor;
+    /** The line-up's figures in phases: DC, turn-off and turn-on on the solve executor, checks on the analyses'. */
+    private final LineUpEvaluations lineUpEvaluations;
     /** The opened document's line-up, by the editors of its stages (so tab moves keep it), and its context. */
     private List<Editor> lineUpEditors = List.of();
     private Optional<org.armature.model.LineUpContext> lineUpContext = Optional.empty();
@@ -128,6 +130,8 @@ public final class EditorViewModel {
         this.solveExecutor = solveExecutor;
         this.fxExecutor = fxExecutor;
         this.evaluations = new Evaluations(readouts, analyses, solveExecutor, fxExecutor, evaluation::set);
+        this.lineUpEvaluations = new LineUpEvaluations(LineUpEvaluations.ENGINE, solveExecutor, analyses.executor(),
+                fxExecutor);
         load(StageDocument.of(initial));
     }
 
@@ -574,24 +578,24 @@ public final class EditorViewModel {
     }
 
     /**
-     * Computes the line-up's figures on the solve executor ({@link org.armature.analysis.LineUpMetrics})
-     * and hands them to {@code done} on the FX executor; a failure is said in {@link #messageProperty()}.
-     * Four stages take a few seconds (two transient runs and the corner checks each), during which the
-     * solve executor's readouts wait.
+     * Computes the line-up's figures in phases ({@link LineUpEvaluations}) and hands every step to
+     * {@code progress} on the FX executor: at once the pending progress (nothing arrived), then the DC
+     * figures of every stage, the turn-off runs with their waveforms (a few milliseconds each,
+     * {@code LineUpWaveformsBench}), the turn-on runs, all on the solve executor; then each stage's
+     * corner checks and yield on the analyses' executor (tens of milliseconds per stage, the bulk of the work). A newer call
+     * makes the older one's results drop, so the view never shows a figure from before the change it
+     * shows. A failure is said in {@link #messageProperty()}.
+     *
+     * @return the new evaluation's generation ({@link LineUpProgress#generation()})
      */
-    public void evaluateLineUp(List<org.armature.model.LineUpContext.Applied> stages,
-                               java.util.function.Consumer<List<org.armature.analysis.LineUpMetrics.Column>> done) {
-        solveExecutor.execute(() -> {
-            List<org.armature.analysis.LineUpMetrics.Column> columns;
-            try {
-                columns = stages.stream().map(org.armature.analysis.LineUpMetrics::evaluate).toList();
-            } catch (RuntimeException e) {
-                // an engine failure the metrics do not turn into a note: said in the status line, not lost
-                fxExecutor.execute(() -> message.set("The line-up could not be evaluated: " + e.getMessage()));
-                return;
-            }
-            fxExecutor.execute(() -> done.accept(columns));
-        });
+    public long evaluateLineUp(List<org.armature.model.LineUpContext.Applied> stages,
+                               java.util.function.Consumer<LineUpProgress> progress) {
+        return lineUpEvaluations.submit(stages, progress, message::set);
+    }
+
+    /** Drops the line-up evaluation under way (the view closed): its remaining phases do not run. */
+    public void stopLineUpEvaluation() {
+        lineUpEvaluations.cancel();
     }
 
     /**

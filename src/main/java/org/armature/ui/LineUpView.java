@@ -30,12 +30,17 @@ import org.armature.units.Unit;
  * and pin. Each schematic is drawn by the one renderer ({@link ImageExport#render}); below, the
  * figures of {@link LineUpMetrics}, one column per stage, the best value of each row in bold with a
  * star; "Copy table" puts the table on the clipboard as tab-separated text. The figures are computed
- * on the view model's solve executor ({@link EditorViewModel#evaluateLineUp}), never on the FX thread.
+ * in phases off the FX thread ({@link EditorViewModel#evaluateLineUp}) and shown as they arrive: the
+ * overlaid turn-off waveforms once every stage's turn-off run is in, each cell once its phase is in;
+ * a cell whose phase has not arrived shows {@link #PENDING}, never a figure from before the change.
  */
 public final class LineUpView {
 
     /** Widest a schematic is shown, pixels. */
     private static final double SCHEMATIC_WIDTH = 360;
+
+    /** What a cell shows while its phase is still running. */
+    static final String PENDING = "\u2026";
 
     private LineUpView() {
     }
@@ -80,7 +85,7 @@ public final class LineUpView {
         table.setId("line-up-table");
         table.setHgap(16);
         table.setVgap(2);
-        Label pending = new Label("Solving, simulating and checking every stage…");
+        Label pending = new Label(state(null));
         pending.setId("line-up-pending");
         Button copy = new Button("Copy table");
         copy.setId("line-up-copy");
@@ -105,8 +110,11 @@ public final class LineUpView {
         VBox shared = new VBox(6, new Label("Shared by every stage"), sharedGrid, new HBox(8, applySupply, undo, note));
         javafx.scene.canvas.Canvas waves = new javafx.scene.canvas.Canvas(Math.max(720, stages.size() * 360), 300);
         waves.setId("line-up-waves");
+        Label wavesState = new Label("Turn-off waveforms: running\u2026");
+        wavesState.setId("line-up-waves-state");
         LineUpRows rows = new LineUpRows();
-        java.util.concurrent.atomic.AtomicReference<List<Column>> last = new java.util.concurrent.atomic.AtomicReference<>(List.of());
+        java.util.concurrent.atomic.AtomicReference<LineUpProgress> last = new java.util.concurrent.atomic.AtomicReference<>(
+                LineUpProgress.pending(0, stages));
         ListView<LineUpRows.Row> rowList = new ListView<>();
         rowList.setId("line-up-rows");
         rowList.setPrefHeight(160);
@@ -149,10 +157,10 @@ public final class LineUpView {
             });
         }
         HBox rowChoice = new HBox(8, rowList, new VBox(6, new Label("Rows of the table"), toggle, up, down));
-        content.getChildren().addAll(schematics, shared, pending, table, copy, rowChoice, waves);
+        content.getChildren().addAll(schematics, shared, pending, table, copy, rowChoice, wavesState, waves);
         copy.setOnAction(e -> {
             ClipboardContent c = new ClipboardContent();
-            c.putString(rows.tabSeparated(names, last.get()));
+            c.putString(rows.tabSeparated(names, last.get().columns()));
             Clipboard.getSystemClipboard().setContent(c);
         });
         Runnable refresh = () -> {
@@ -167,23 +175,34 @@ public final class LineUpView {
                     }
                 });
             }
-            vm.evaluateLineUp(now, columns -> {
-                last.set(columns);
+            vm.evaluateLineUp(now, progress -> {
+                last.set(progress);
+                List<Column> columns = progress.columns();
                 rows.merge(columns);
                 redraw.run();
-                List<org.armature.render.EdgePlot.Plot> plots = new ArrayList<>();
-                List<String> legend = new ArrayList<>();
-                for (int i = 0; i < columns.size(); i++) {
-                    Column c = columns.get(i);
-                    if (c.turnOff().isPresent()) {
-                        plots.add(org.armature.render.EdgePlot.of(c.stage(), c.turnOff().get()));
-                        legend.add("[" + (i + 1) + "] " + names.get(i));
+                pending.setText(state(progress));
+                pending.setVisible(!progress.complete());
+                pending.setManaged(!progress.complete());
+                copy.setDisable(!progress.complete());
+                if (!progress.hasAll(LineUpMetrics.Phase.TURN_OFF)) {
+                    wavesState.setText("Turn-off waveforms: running\u2026");
+                } else if (!Long.valueOf(progress.generation()).equals(waves.getUserData())) {
+                    // every stage's turn-off run is in: repaint the overlay once for this change
+                    List<org.armature.render.EdgePlot.Plot> plots = new ArrayList<>();
+                    List<String> legend = new ArrayList<>();
+                    for (int i = 0; i < columns.size(); i++) {
+                        Column c = columns.get(i);
+                        if (c.turnOff().isPresent()) {
+                            plots.add(org.armature.render.EdgePlot.of(c.stage(), c.turnOff().get()));
+                            legend.add("[" + (i + 1) + "] " + names.get(i));
+                        }
                     }
+                    waves.getGraphicsContext2D().clearRect(0, 0, waves.getWidth(), waves.getHeight());
+                    org.armature.render.OverlayPlot.draw(new FxPen(waves.getGraphicsContext2D(),
+                            org.armature.render.Affine.IDENTITY), plots, legend, waves.getWidth(), waves.getHeight(), palette);
+                    waves.setUserData(progress.generation());
+                    wavesState.setText("Turn-off waveforms, " + plots.size() + " of " + columns.size() + " stages");
                 }
-                org.armature.render.OverlayPlot.draw(new FxPen(waves.getGraphicsContext2D(),
-                        org.armature.render.Affine.IDENTITY), plots, legend, waves.getWidth(), waves.getHeight(), palette);
-                content.getChildren().remove(pending);
-                copy.setDisable(false);
             });
         };
         applySupply.setOnAction(e -> {
@@ -208,6 +227,7 @@ public final class LineUpView {
             }
         });
         refresh.run();
+        d.setOnHidden(e -> vm.stopLineUpEvaluation());
         ScrollPane scroll = new ScrollPane(content);
         scroll.setPrefViewportWidth(Math.min(1500, stages.size() * (SCHEMATIC_WIDTH + 12) + 40));
         scroll.setPrefViewportHeight(760);
@@ -218,10 +238,12 @@ public final class LineUpView {
 
     /**
      * Fills the table with the shown rows in their order: a figure or a check per row, best values
-     * bold with a star.
+     * bold with a star. A cell whose phase has not arrived shows {@link #PENDING}; a row is marked
+     * best only once every column's value is in.
      */
-    static void fill(GridPane table, List<Column> columns, LineUpRows rows) {
+    static void fill(GridPane table, LineUpProgress progress, LineUpRows rows) {
         table.getChildren().clear();
+        List<Column> columns = progress.columns();
         if (columns.isEmpty()) {
             return;
         }
@@ -230,20 +252,42 @@ public final class LineUpView {
             table.add(new Label(r.label()), 0, row);
             if (r.id().startsWith(LineUpRows.CHECK)) {
                 String id = r.id().substring(LineUpRows.CHECK.length());
-                List<Integer> best = LineUpMetrics.bestCheck(id, columns);
+                List<Integer> best = progress.hasAll(LineUpMetrics.Phase.CHECKS) ? LineUpMetrics.bestCheck(id, columns)
+                        : List.of();
                 for (int i = 0; i < columns.size(); i++) {
-                    String word = columns.get(i).report().check(id).map(c -> c.status().word()).orElse("\u2014");
+                    String word = !progress.has(i, LineUpMetrics.Phase.CHECKS) ? PENDING
+                            : columns.get(i).report().check(id).map(c -> c.status().word()).orElse("\u2014");
                     table.add(cell(word, best.contains(i)), i + 1, row);
                 }
             } else {
                 Metric m = LineUpMetrics.METRICS.stream().filter(x -> x.key().equals(r.id())).findFirst().orElseThrow();
-                List<Integer> best = LineUpMetrics.best(m, columns);
+                List<Integer> best = progress.hasAll(LineUpMetrics.phaseOf(m)) ? LineUpMetrics.best(m, columns)
+                        : List.of();
                 for (int i = 0; i < columns.size(); i++) {
-                    table.add(cell(LineUpMetrics.format(m, columns.get(i).value(m.key())), best.contains(i)), i + 1, row);
+                    Column c = columns.get(i);
+                    String text = c.pending(m) ? PENDING : LineUpMetrics.format(m, c.value(m.key()));
+                    table.add(cell(text, best.contains(i)), i + 1, row);
                 }
             }
             row++;
         }
+    }
+
+    /** The status line above the table: which phase the figures are at. */
+    static String state(LineUpProgress p) {
+        if (p == null || !p.hasAll(LineUpMetrics.Phase.DC)) {
+            return "Solving every stage\u2026";
+        }
+        if (!p.hasAll(LineUpMetrics.Phase.TURN_OFF)) {
+            return "Simulating the turn-off of every stage\u2026";
+        }
+        if (!p.hasAll(LineUpMetrics.Phase.TURN_ON)) {
+            return "Simulating the turn-on of every stage\u2026";
+        }
+        if (!p.complete()) {
+            return "Checking the corners and the yield of every stage\u2026";
+        }
+        return "";
     }
 
     /**
