@@ -89,7 +89,10 @@ final class ExampleDocuments {
                 .updatePart("R1", r -> r.with("resistanceOhms", 47))
                 .updatePart("U2", u -> u.with("betaForward", 110).with("hfeMin", 800).with("channelCount", 6));
 
-        return new StageDocument("Greenhouse irrigation valves", List.of(npn, nmos, array));
+        // the three channels side by side on the same valve relay, supply and controller pin
+        return new StageDocument("Greenhouse irrigation valves", List.of(npn, nmos, array),
+                java.util.Optional.of(new org.armature.model.LineUp(List.of(0, 1, 2),
+                        org.armature.model.LineUpContext.of(npn))));
     }
 
     /** A workshop dust extractor's interlock relay, sourced from the high side so a broken wire drops it. */
