@@ -48,12 +48,17 @@ class LineUpJsonTest {
     }
 
     @Test
-    void olderFilesStillOpen() {
-        // the examples were written as versions 1 and 2, before line-ups
-        for (String name : List.of("greenhouse-valves", "pool-pump-timer", "dust-extractor-interlock")) {
-            StageDocument doc = StageFiles.open(java.nio.file.Path.of("examples", name + ".stage.json"));
+    void olderFilesStillOpen() throws java.io.IOException {
+        // these examples are written as version 1, before line-ups
+        for (String name : List.of("pool-pump-timer", "dust-extractor-interlock")) {
+            java.nio.file.Path file = java.nio.file.Path.of("examples", name + ".stage.json");
+            assertTrue(java.nio.file.Files.readString(file).contains("\"version\": 1,"), name);
+            StageDocument doc = StageFiles.open(file);
             assertEquals(Optional.empty(), doc.lineUp(), name);
         }
+        // and the greenhouse example holds its three channels' line-up (version 3)
+        StageDocument greenhouse = StageFiles.open(java.nio.file.Path.of("examples", "greenhouse-valves.stage.json"));
+        assertEquals(List.of(0, 1, 2), greenhouse.lineUp().orElseThrow().stageIndices());
     }
 
     @Test
