@@ -40,6 +40,7 @@ import org.armature.analysis.faults.Symptom;
 import org.armature.model.FaultHunt;
 import org.armature.model.Stage;
 import org.armature.model.StageRecognition;
+import org.armature.render.Notation;
 import org.armature.units.EngineeringNotation;
 import org.armature.units.Unit;
 
@@ -574,8 +575,10 @@ public final class DiagnosisPanel extends VBox {
             }
             b.append(String.format(Locale.ROOT, "%d. %s  %.1f %%", n, c.name(), 100 * c.probability()));
             for (Diagnosis.Explanation e : c.explains()) {
-                b.append(String.format(Locale.ROOT, "%n     %s@%s expected %.3g V, read %.3g V", e.probe(),
-                        e.pinHigh() ? "high" : "low", e.expectedVolts(), e.measuredVolts()));
+                // engineering notation like the drawing and diagnose ("4.08 nV", not "4.08e-09 V")
+                b.append(String.format(Locale.ROOT, "%n     %s@%s expected %s, read %s", e.probe(),
+                        e.pinHigh() ? "high" : "low", Notation.format(e.expectedVolts(), Unit.VOLT),
+                        Notation.format(e.measuredVolts(), Unit.VOLT)));
             }
             b.append('\n');
         }

@@ -124,6 +124,9 @@ class FaultHuntWindowTest {
         assertEquals(List.of(new DiagnosisPanel.Row("switch", "high", "12 V", "")), table.getItems());
         assertFalse(ranking.getText().startsWith("1. none"), ranking.getText());
         assertTrue(ranking.getText().contains("switch@high expected"), ranking.getText());
+        // volts in engineering notation, as on the drawing (it printed "4.08e-09 V" before)
+        assertFalse(ranking.getText().matches("(?s).*\\de-\\d.*"), ranking.getText());
+        assertTrue(ranking.getText().contains("read 12 V") || ranking.getText().contains("read 12.0 V"), ranking.getText());
         // the reading is tagged on the drawing at its net, by the renderer
         assertTrue(window.canvas().lastLayout().labels().stream().anyMatch(l -> l.kind() == PlacedLabel.Kind.READING
                 && l.owner().equals("switch") && l.lines().subList(2, l.lines().size()).equals(List.of("high 12 V"))),
