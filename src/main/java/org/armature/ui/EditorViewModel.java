@@ -193,6 +193,18 @@ public final class EditorViewModel {
     }
 
     /**
+     * The track opens of the stage's fault set that split a net ({@code NET~TOWARD:track-open}).
+     *
+     * @param net the net's name as the drawing and {@code solve} write it
+     */
+    public List<org.armature.analysis.faults.Fault> trackFaultsOfNet(String net) {
+        return org.armature.analysis.faults.FaultCatalog.of(stage()).stream()
+                .filter(f -> f.kind() == org.armature.analysis.faults.FaultKind.TRACK_OPEN
+                        && f.ref().startsWith(net + "~"))
+                .toList();
+    }
+
+    /**
      * The track opens a part's pins can have: one per pin joined to something by a single wire
      * ending at it ({@link org.armature.analysis.faults.FaultInjector#cutPin}); a pin joined otherwise
      * has none.

@@ -136,7 +136,13 @@ public final class SchematicCanvas extends Region {
             if (hit instanceof HitTester.PartHit part) {
                 faultMenu(part.ref()).show(this, e.getScreenX(), e.getScreenY());
                 e.consume();
+                return;
             }
+            // on a net: the track opens that split it (NET~TOWARD:track-open)
+            netAt(e.getX(), e.getY()).ifPresent(net -> {
+                netFaultMenu(net).show(this, e.getScreenX(), e.getScreenY());
+                e.consume();
+            });
         });
         // a left click without a drag on a net (a wire, a junction, a pin or the net's tag) while the
         // fault hunt is open offers to enter a meter reading there
@@ -253,6 +259,37 @@ public final class SchematicCanvas extends Region {
     /** The editor shown on the canvas, if any (tests). */
     public Optional<javafx.scene.Node> editor() {
         return Optional.ofNullable(editorNode);
+    }
+
+    /**
+     * The fault menu of a net: one entry per track open of the stage's fault set that splits this
+     * net ({@code NET~TOWARD:track-open}: the track toward the parts that also reach net TOWARD), each
+     * ticked when injected, and "Clear faults".
+     */
+    public javafx.scene.control.ContextMenu netFaultMenu(String net) {
+        javafx.scene.control.ContextMenu menu = new javafx.scene.control.ContextMenu();
+        menu.setId("net-fault-menu");
+        for (org.armature.analysis.faults.Fault f : vm.trackFaultsOfNet(net)) {
+            String toward = f.ref().substring(f.ref().indexOf('~') + 1);
+            javafx.scene.control.CheckMenuItem item = new javafx.scene.control.CheckMenuItem(
+                    "Track open on " + net + " toward " + toward);
+            item.setId("fault-" + f.id());
+            item.setSelected(vm.faultsProperty().get().contains(f));
+            item.setOnAction(a -> vm.toggleFault(f));
+            menu.getItems().add(item);
+        }
+        if (menu.getItems().isEmpty()) {
+            javafx.scene.control.MenuItem none = new javafx.scene.control.MenuItem(
+                    "No track on " + net + " splits it in two");
+            none.setDisable(true);
+            menu.getItems().add(none);
+        }
+        javafx.scene.control.MenuItem clear = new javafx.scene.control.MenuItem("Clear faults");
+        clear.setId("net-fault-clear");
+        clear.setDisable(vm.faultsProperty().get().isEmpty());
+        clear.setOnAction(a -> vm.clearFaults());
+        menu.getItems().addAll(new javafx.scene.control.SeparatorMenuItem(), clear);
+        return menu;
     }
 
     /**

@@ -124,6 +124,35 @@ class FaultModeTest {
     }
 
     @Test
+    void aRightClickOnANetOffersTheTrackOpensThatSplitIt(FxRobot robot) {
+        // the NPN template's switch net joins the coil, the diode and Q1's collector; the cut toward
+        // the parts that also reach `control` (Q1) leaves the coil without a return path (derived)
+        org.armature.analysis.faults.Fault cut = new org.armature.analysis.faults.Fault("switch~control",
+                org.armature.analysis.faults.FaultKind.TRACK_OPEN);
+        assertTrue(vm.trackFaultsOfNet("switch").contains(cut), vm.trackFaultsOfNet("switch").toString());
+        org.armature.model.Connectivity c = org.armature.model.Connectivity.of(vm.stage());
+        org.armature.model.Wire best = null;
+        for (int i = 0; i < vm.stage().wires().size(); i++) {
+            org.armature.model.Wire w = vm.stage().wires().get(i);
+            if (c.netOfWire().get(i).equals("switch")
+                    && (best == null || w.from().manhattan(w.to()) > best.from().manhattan(best.to()))) {
+                best = w;
+            }
+        }
+        assertTrue(best != null, "a wire on the switch net");
+        SchematicCanvas canvas = window.canvas();
+        double gx = (best.from().gridX() + best.to().gridX()) / 2.0;
+        double gy = (best.from().gridY() + best.to().gridY()) / 2.0;
+        var v = canvas.view();
+        robot.rightClickOn(canvas.localToScreen(v.mapX(gx, gy), v.mapY(gx, gy)));
+        org.testfx.util.WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn("Track open on switch toward control");
+        org.testfx.util.WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(java.util.List.of(cut), vm.faultsProperty().get());
+        assertTrue(Math.abs(coilAmps()) < 1e-6, "coil current with its return cut " + coilAmps());
+    }
+
+    @Test
     void aRightClickOnThePartOpensItsFaultMenu(FxRobot robot) {
         var r1 = org.armature.render.PartGeometry.bodyBounds(vm.stage().require("R1"));
         SchematicCanvas c = window.canvas();
