@@ -88,6 +88,11 @@ final class DiagnoseCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print exactly one JSON object (SI units) instead of a table.")
     boolean json;
 
+    @Option(names = "--record", description = "Keep what was ranked (symptom, readings, meter, changed priors) as the "
+            + "file's fault hunt, saved in the file (it replaces a hunt kept before), so the window and the report "
+            + "(export --pdf) show it.")
+    boolean record;
+
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
     @Override
@@ -104,6 +109,16 @@ final class DiagnoseCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         out.print(json ? json(x) : table(x));
         out.flush();
+        if (record) {
+            Optional<FaultHunt> before = doc.faultHunt();
+            StageFiles.save(doc.withFaultHunt(Optional.of(x.hunt())), file);
+            PrintWriter err = spec.commandLine().getErr();
+            err.println("Recorded the fault hunt on stage \"" + stage.name() + "\" in " + file.getFileName()
+                    + (before.isPresent() && before.get().stageIndex() != index
+                    ? " (it replaces the hunt kept on stage \"" + doc.stages().get(before.get().stageIndex()).name()
+                    + "\")." : "."));
+            err.flush();
+        }
         return CommandLine.ExitCode.OK;
     }
 
@@ -127,9 +142,10 @@ final class DiagnoseCommand implements Callable<Integer> {
      * @param priors the priors used
      * @param savedHunt true when the document's saved fault hunt gave the symptom and readings
      * @param readingCount how many readings were ranked
+     * @param hunt what was ranked, as a fault hunt the document can keep ({@code --record})
      */
     record Diagnosed(FaultDictionary dictionary, Diagnosis.Result result, Priors priors, boolean savedHunt,
-                     int readingCount) {
+                     int readingCount, FaultHunt hunt) {
     }
 
     /**
@@ -172,7 +188,10 @@ final class DiagnoseCommand implements Callable<Integer> {
             for (String r : request.readings()) {
                 list.add(Reading.parse(d, r));
             }
-            return new Diagnosed(d, Diagnosis.rank(d, Spread.DEFAULT, p, s, list), p, useSaved, list.size());
+            FaultHunt ranked = new FaultHunt(stageIndex, s.map(Symptom::id), SavedHunt.setting(meter),
+                    list.stream().map(r -> new FaultHunt.HuntReading(r.probe(), r.pinHigh(), r.volts())).toList(),
+                    weights);
+            return new Diagnosed(d, Diagnosis.rank(d, Spread.DEFAULT, p, s, list), p, useSaved, list.size(), ranked);
         } catch (IllegalArgumentException e) {
             throw new CommandFailedException(e.getMessage());
         }

@@ -162,4 +162,41 @@ class FaultHuntOptionsTest {
                 new DiagnoseCommand.Request(Optional.empty(), List.of(), List.of(), new FaultOptions.MeterOptions())));
         assertTrue(e.getMessage().contains("ce-short"), e.getMessage());
     }
+
+    @Test
+    void recordKeepsWhatWasRankedAsTheFilesHuntAndTheSavedHuntRanksTheSame() throws Exception {
+        CliRun r = CliRun.of("diagnose", file.toString(), "--json", "--symptom", "no-operate",
+                "--reading", "switch@high=12", "--prior", "none=5", "--meter-resistance", "1M", "--record");
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.err().startsWith("Recorded the fault hunt on stage"), r.err());
+        JsonNode first = JSON.readTree(r.out());
+        FaultHunt kept = StageFiles.open(file).faultHunt().orElseThrow();
+        assertEquals(0, kept.stageIndex());
+        assertEquals(Optional.of("no-operate"), kept.symptom());
+        assertEquals(List.of(new FaultHunt.HuntReading("switch", true, 12)), kept.readings());
+        assertEquals(Map.of("none", 5.0), kept.priorWeights());
+        assertEquals(1e6, kept.meter().inputOhms());
+        // ranked again from the file alone: the same candidates with the same probabilities
+        JsonNode again = json("diagnose", file.toString(), "--json");
+        assertTrue(again.get("savedHunt").asBoolean(), again.toString());
+        assertEquals(first.get("candidates").size(), again.get("candidates").size());
+        for (int i = 0; i < first.get("candidates").size(); i++) {
+            assertEquals(first.get("candidates").get(i).get("fault").asText(),
+                    again.get("candidates").get(i).get("fault").asText());
+            assertEquals(first.get("candidates").get(i).get("probability").asDouble(),
+                    again.get("candidates").get(i).get("probability").asDouble(), 1e-12);
+        }
+        // and the report prints it
+        Path pdf = dir.resolve("repair.pdf");
+        CliRun export = CliRun.of("export", file.toString(), "--pdf", pdf.toString());
+        assertEquals(0, export.status(), export.err());
+        assertTrue(export.out().contains("with the fault hunt"), export.out());
+    }
+
+    @Test
+    void withoutRecordTheFileIsNotWritten() throws Exception {
+        byte[] before = java.nio.file.Files.readAllBytes(file);
+        json("diagnose", file.toString(), "--json", "--reading", "switch@high=12");
+        assertTrue(java.util.Arrays.equals(before, java.nio.file.Files.readAllBytes(file)));
+    }
 }
