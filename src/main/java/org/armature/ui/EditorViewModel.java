@@ -98,6 +98,8 @@ public final class EditorViewModel {
     private Stage submittedFor;
     private List<org.armature.analysis.faults.Fault> submittedFaults = List.of();
     private Stage faultedStage;
+    /** The faults as the marks name them: a track open between nets on the resistor that stands for the cut. */
+    private List<String> faultMarks = List.of();
     private final ReadOnlyObjectWrapper<Optional<FaultHunt>> faultHunt =
             new ReadOnlyObjectWrapper<>(this, "faultHunt", Optional.empty());
     private Editor.Clip clipboard = new Editor.Clip(List.of(), List.of());
@@ -170,13 +172,36 @@ public final class EditorViewModel {
                     .map(r -> new Annotations.MeterReading(r.net(), r.pinHigh(), r.volts())).toList());
         }
         if (faultedStage != null && e.stage() == faultedStage) {
-            a = org.armature.render.FaultMarks.marked(a,
-                    submittedFaults.stream().map(org.armature.analysis.faults.Fault::id).toList());
+            a = org.armature.render.FaultMarks.marked(a, faultMarks);
         }
         return a;
     }
 
     // ------------------------------------------------------------------ fault mode
+
+    /**
+     * The faults as their marks name them: {@code PART:KIND} as written, and a track open between
+     * nets ({@code switch~control:track-open}, no part of its own) on the resistor the injector put in
+     * for the cut, as {@code XF1:track-open switch~control}, so the drawing marks where the cut is.
+     */
+    static List<String> marksOf(Stage healthy, List<org.armature.analysis.faults.Fault> faults) {
+        List<String> out = new ArrayList<>();
+        Stage s = healthy;
+        for (org.armature.analysis.faults.Fault f : faults) {
+            Stage next = org.armature.analysis.faults.FaultInjector.apply(s, f);
+            if (f.ref().contains("~")) {
+                java.util.Set<String> before = new java.util.HashSet<>();
+                s.parts().forEach(p -> before.add(p.ref()));
+                Optional<String> added = next.parts().stream().map(org.armature.model.Part::ref)
+                        .filter(r -> !before.contains(r)).findFirst();
+                out.add(added.map(r -> r + ":" + f.kind().id() + " " + f.ref()).orElse(f.id()));
+            } else {
+                out.add(f.id());
+            }
+            s = next;
+        }
+        return out;
+    }
 
     /**
      * The faults injected into the active stage: the canvas, readouts, verdicts and edges show the
@@ -1207,6 +1232,7 @@ public final class EditorViewModel {
                 try {
                     evaluated = org.armature.analysis.faults.FaultInjector.apply(now, valid);
                     faultedStage = evaluated;
+                    faultMarks = marksOf(now, valid);
                 } catch (IllegalArgumentException | IllegalStateException ex) {
                     message.set("The faults could not be injected: " + ex.getMessage());
                     valid = List.of();

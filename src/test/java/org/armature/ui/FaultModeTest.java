@@ -150,6 +150,9 @@ class FaultModeTest {
         org.testfx.util.WaitForAsyncUtils.waitForFxEvents();
         assertEquals(java.util.List.of(cut), vm.faultsProperty().get());
         assertTrue(Math.abs(coilAmps()) < 1e-6, "coil current with its return cut " + coilAmps());
+        // the cut is marked on the resistor that stands for it (before: a badge on no part, so no mark)
+        assertTrue(drawn().badges().stream().anyMatch(b -> b.ref().startsWith("XF")
+                && b.text().equals(FaultMarks.PREFIX + "track-open switch~control")), drawn().badges().toString());
     }
 
     @Test
