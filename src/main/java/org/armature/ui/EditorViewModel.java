@@ -180,11 +180,18 @@ public final class EditorViewModel {
     // ------------------------------------------------------------------ fault mode
 
     /**
-     * The faults as their marks name them: {@code PART:KIND} as written, and a track open between
-     * nets ({@code switch~control:track-open}, no part of its own) on the resistor the injector put in
-     * for the cut, as {@code XF1:track-open switch~control}, so the drawing marks where the cut is.
+     * A stage with faults injected, and the faults as their marks name them.
+     *
+     * @param stage the faulted stage ({@link org.armature.analysis.faults.FaultInjector#apply(Stage, List)})
+     * @param marks {@code PART:KIND} as written, and a track open between nets
+     *     ({@code switch~control:track-open}, no part of its own) on the resistor the injector put in
+     *     for the cut, as {@code XF1:track-open switch~control}, so the drawing marks where the cut is
      */
-    static List<String> marksOf(Stage healthy, List<org.armature.analysis.faults.Fault> faults) {
+    record Faulted(Stage stage, List<String> marks) {
+    }
+
+    /** Injects the faults in order, as {@code FaultInjector.apply} does, noting each one's mark. */
+    static Faulted inject(Stage healthy, List<org.armature.analysis.faults.Fault> faults) {
         List<String> out = new ArrayList<>();
         Stage s = healthy;
         for (org.armature.analysis.faults.Fault f : faults) {
@@ -200,7 +207,7 @@ public final class EditorViewModel {
             }
             s = next;
         }
-        return out;
+        return new Faulted(s, out);
     }
 
     /**
@@ -1230,9 +1237,10 @@ public final class EditorViewModel {
             faultedStage = null;
             if (!valid.isEmpty()) {
                 try {
-                    evaluated = org.armature.analysis.faults.FaultInjector.apply(now, valid);
+                    Faulted f = inject(now, valid);
+                    evaluated = f.stage();
                     faultedStage = evaluated;
-                    faultMarks = marksOf(now, valid);
+                    faultMarks = f.marks();
                 } catch (IllegalArgumentException | IllegalStateException ex) {
                     message.set("The faults could not be injected: " + ex.getMessage());
                     valid = List.of();
