@@ -23,8 +23,6 @@ import org.armature.analysis.faults.Priors;
 import org.armature.analysis.faults.Probe;
 import org.armature.analysis.faults.Reading;
 import org.armature.analysis.faults.SavedHunt;
-import org.armature.analysis.faults.Spread;
-import org.armature.analysis.faults.Symptom;
 import org.armature.io.StageFiles;
 import org.armature.model.FaultHunt;
 import org.armature.model.Stage;
@@ -174,24 +172,20 @@ final class DiagnoseCommand implements Callable<Integer> {
             }
             Priors p = SavedHunt.priors(weights);
             Meter meter = request.meter().apply(useSaved ? SavedHunt.meter(hunt.get().meter()) : Meter.DEFAULT);
-            Optional<Symptom> s = useSaved ? SavedHunt.symptom(hunt.get().symptom()) : Optional.empty();
-            if (request.symptom().isPresent()) {
-                String w = request.symptom().get();
-                s = Optional.of(Symptom.byId(w).orElseThrow(() -> new CommandFailedException(
-                        "Unknown symptom '" + w + "'; expected no-operate, no-release or chatter.")));
-            }
+            Optional<String> s = request.symptom().isPresent() ? request.symptom()
+                    : useSaved ? hunt.get().symptom() : Optional.empty();
             FaultDictionary d = FaultDictionary.build(stage, meter);
-            List<Reading> list = new ArrayList<>();
+            List<FaultHunt.HuntReading> list = new ArrayList<>();
             if (useSaved) {
-                list.addAll(SavedHunt.readings(d, hunt.get().readings()));
+                list.addAll(hunt.get().readings());
             }
             for (String r : request.readings()) {
-                list.add(Reading.parse(d, r));
+                Reading read = Reading.parse(d, r);
+                list.add(new FaultHunt.HuntReading(read.probe(), read.pinHigh(), read.volts()));
             }
-            FaultHunt ranked = new FaultHunt(stageIndex, s.map(Symptom::id), SavedHunt.setting(meter),
-                    list.stream().map(r -> new FaultHunt.HuntReading(r.probe(), r.pinHigh(), r.volts())).toList(),
-                    weights);
-            return new Diagnosed(d, Diagnosis.rank(d, Spread.DEFAULT, p, s, list), p, useSaved, list.size(), ranked);
+            // what is ranked is a hunt, ranked the one way a saved hunt is (and what --record keeps)
+            FaultHunt ranked = new FaultHunt(stageIndex, s, SavedHunt.setting(meter), list, weights);
+            return new Diagnosed(d, SavedHunt.rank(d, ranked).result(), p, useSaved, list.size(), ranked);
         } catch (IllegalArgumentException e) {
             throw new CommandFailedException(e.getMessage());
         }

@@ -35,7 +35,6 @@ import org.armature.analysis.faults.Meter;
 import org.armature.analysis.faults.Priors;
 import org.armature.analysis.faults.Reading;
 import org.armature.analysis.faults.SavedHunt;
-import org.armature.analysis.faults.Spread;
 import org.armature.analysis.faults.Symptom;
 import org.armature.model.FaultHunt;
 import org.armature.model.Stage;
@@ -558,8 +557,7 @@ public final class DiagnosisPanel extends VBox {
         Diagnosis.Result r;
         try {
             List<FaultHunt.HuntReading> usable = h.readings().stream().filter(x -> d.probeIndex(x.net()) >= 0).toList();
-            r = Diagnosis.rank(d, Spread.DEFAULT, SavedHunt.priors(h.priorWeights()), SavedHunt.symptom(h.symptom()),
-                    SavedHunt.readings(d, usable));
+            r = SavedHunt.rank(d, h.withReadings(usable)).result();
         } catch (IllegalArgumentException e) {
             ranking.setText("");
             next.setText("");

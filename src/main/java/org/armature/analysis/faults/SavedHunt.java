@@ -79,8 +79,9 @@ public final class SavedHunt {
      *
      * @param dictionary the dictionary built with the hunt's meter
      * @param result the ranking and the next measurement
+     * @param spread the spread of each reading the ranking used (and its ambiguity groups use)
      */
-    public record Ranked(FaultDictionary dictionary, Diagnosis.Result result) {
+    public record Ranked(FaultDictionary dictionary, Diagnosis.Result result, Spread spread) {
     }
 
     /**
@@ -92,9 +93,22 @@ public final class SavedHunt {
      * @throws IllegalArgumentException for a bad word in the hunt, one sentence naming what is valid
      */
     public static Ranked rank(Stage stage, FaultHunt hunt) {
-        Priors priors = priors(hunt.priorWeights());
-        Optional<Symptom> symptom = symptom(hunt.symptom());
-        FaultDictionary d = FaultDictionary.build(stage, meter(hunt.meter()));
-        return new Ranked(d, Diagnosis.rank(d, Spread.DEFAULT, priors, symptom, readings(d, hunt.readings())));
+        // the words first, so a bad one is said before the dictionary is built
+        priors(hunt.priorWeights());
+        symptom(hunt.symptom());
+        return rank(FaultDictionary.build(stage, meter(hunt.meter())), hunt);
+    }
+
+    /**
+     * Ranks a hunt on a dictionary already built with its meter (the window keeps one per stage and
+     * meter; {@code diagnose} builds one for its options): the one place a hunt's words become a
+     * {@link Diagnosis}.
+     *
+     * @throws IllegalArgumentException for a bad word in the hunt, one sentence naming what is valid
+     */
+    public static Ranked rank(FaultDictionary d, FaultHunt hunt) {
+        Spread spread = Spread.DEFAULT;
+        return new Ranked(d, Diagnosis.rank(d, spread, priors(hunt.priorWeights()), symptom(hunt.symptom()),
+                readings(d, hunt.readings())), spread);
     }
 }

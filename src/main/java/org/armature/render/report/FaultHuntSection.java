@@ -15,7 +15,6 @@ import org.armature.analysis.faults.PriorTable;
 import org.armature.analysis.faults.Priors;
 import org.armature.analysis.faults.Probe;
 import org.armature.analysis.faults.SavedHunt;
-import org.armature.analysis.faults.Spread;
 import org.armature.model.FaultHunt;
 import org.armature.model.Stage;
 import org.armature.model.StageDocument;
@@ -132,7 +131,7 @@ public record FaultHuntSection(FaultHunt hunt, Stage stage, Optional<SavedHunt.R
                 + "candidate shows the symptom entered.", PdfFlow.BODY, false,
                 PdfFlow.MUTED);
         Map<String, List<String>> groupOf = new HashMap<>();
-        for (List<String> g : r.dictionary().ambiguityGroups(Spread.DEFAULT)) {
+        for (List<String> g : r.dictionary().ambiguityGroups(r.spread())) {
             for (String name : g) {
                 groupOf.put(name, g);
             }
